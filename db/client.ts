@@ -1,0 +1,11 @@
+// Database connection: one pg pool wrapped by Drizzle.
+import { drizzle, type NodePgDatabase } from 'drizzle-orm/node-postgres';
+import pg from 'pg';
+import * as schema from './schema';
+
+export type Db = NodePgDatabase<typeof schema>;
+
+export function createDb(url: string, options: { max?: number } = {}): { db: Db; pool: pg.Pool } {
+  const pool = new pg.Pool({ connectionString: url, max: options.max ?? 10 });
+  return { db: drizzle(pool, { schema }), pool };
+}

@@ -1,0 +1,55 @@
+// Users, credentials, sessions and role grants.
+import { pgTable, text, timestamp, primaryKey, uniqueIndex, index } from 'drizzle-orm/pg-core';
+import { tenants } from './network';
+
+export const ROLES = ['admin', 'engineer', 'planner', 'approver', 'tenant'] as const;
+export type Role = (typeof ROLES)[number];
+
+export const users = pgTable(
+  'users',
+  {
+    id: text('id').primaryKey(),
+    email: text('email').notNull(),
+    name: text('name').notNull(),
+    /** set for users holding the `tenant` role: the one tenant they belong to */
+    tenantId: text('tenant_id').references(() => tenants.id, { onDelete: 'restrict' }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('users_email_key').on(t.email)],
+);
+
+export const passwordCredentials = pgTable('password_credentials', {
+  userId: text('user_id')
+    .primaryKey()
+    .references(() => users.id, { onDelete: 'cascade' }),
+  /** argon2id PHC string */
+  passwordHash: text('password_hash').notNull(),
+  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+});
+
+export const sessions = pgTable(
+  'sessions',
+  {
+    id: text('id').primaryKey(),
+    /** SHA-256 of the token's secret part; the secret itself is never stored */
+    secretHash: text('secret_hash').notNull(),
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    lastActiveAt: timestamp('last_active_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('sessions_user_idx').on(t.userId)],
+);
+
+export const roleGrants = pgTable(
+  'role_grants',
+  {
+    userId: text('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    role: text('role', { enum: ROLES }).notNull(),
+    grantedAt: timestamp('granted_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.userId, t.role] })],
+);

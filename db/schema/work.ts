@@ -1,0 +1,66 @@
+// Maintenance windows, their elements, freezes, and the audit log.
+import { pgTable, text, integer, doublePrecision, jsonb, timestamp, bigserial, index } from 'drizzle-orm/pg-core';
+import { users } from './auth';
+
+export const WINDOW_STATES = [
+  'draft', 'assessed', 'planned', 'in-review', 'cleared', 'returned',
+  'notified', 'underway', 'done', 'rolled-back', 'withdrawn',
+] as const;
+export type WindowState = (typeof WINDOW_STATES)[number];
+
+export const windows = pgTable(
+  'windows',
+  {
+    id: text('id').primaryKey(),
+    title: text('title').notNull(),
+    startsAt: timestamp('starts_at', { withTimezone: true }).notNull(),
+    endsAt: timestamp('ends_at', { withTimezone: true }).notNull(),
+    workType: text('work_type'),
+    notes: text('notes'),
+    status: text('status', { enum: WINDOW_STATES }).notNull().default('draft'),
+    ownerId: text('owner_id').references(() => users.id, { onDelete: 'set null' }),
+    /** optimistic locking: every update bumps it; a stale edit is refused */
+    version: integer('version').notNull().default(1),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('windows_time_idx').on(t.startsAt, t.endsAt)],
+);
+
+/** The sites and spans a window takes out: `down`, or `reduced` to a fraction of capacity. */
+export const windowElements = pgTable(
+  'window_elements',
+  {
+    windowId: text('window_id').notNull().references(() => windows.id, { onDelete: 'cascade' }),
+    elementKind: text('element_kind', { enum: ['site', 'span'] }).notNull(),
+    elementId: text('element_id').notNull(),
+    effect: text('effect', { enum: ['down', 'reduced'] }).notNull(),
+    fraction: doublePrecision('fraction'),
+  },
+  (t) => [index('window_elements_window_idx').on(t.windowId), index('window_elements_element_idx').on(t.elementId)],
+);
+
+export const freezes = pgTable('freezes', {
+  id: text('id').primaryKey(),
+  title: text('title').notNull(),
+  startsAt: timestamp('starts_at', { withTimezone: true }).notNull(),
+  endsAt: timestamp('ends_at', { withTimezone: true }).notNull(),
+  reason: text('reason'),
+  createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+});
+
+export const auditLog = pgTable(
+  'audit_log',
+  {
+    id: bigserial('id', { mode: 'number' }).primaryKey(),
+    at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
+    actorId: text('actor_id'),
+    action: text('action').notNull(),
+    entity: text('entity').notNull(),
+    entityId: text('entity_id'),
+    before: jsonb('before'),
+    after: jsonb('after'),
+  },
+  (t) => [index('audit_log_entity_idx').on(t.entity, t.entityId)],
+);

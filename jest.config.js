@@ -1,0 +1,34 @@
+// Three jest projects: pure planner/shared code, server + db against PostgreSQL, and the app under jest-expo.
+// The end-to-end suite (tests/e2e) runs separately from scripts/test.sh once the server is up.
+const tsJest = {
+  '^.+\\.tsx?$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.jest.json', diagnostics: false }],
+};
+const moduleNameMapper = { '^@/(.*)$': '<rootDir>/$1', '^(\\.{1,2}/.*)\\.js$': '$1' };
+
+module.exports = {
+  projects: [
+    {
+      displayName: 'planner',
+      testEnvironment: 'node',
+      transform: tsJest,
+      moduleNameMapper,
+      testMatch: ['<rootDir>/tests/planner/**/*.test.ts', '<rootDir>/tests/shared/**/*.test.ts', '<rootDir>/tests/architecture/**/*.test.ts'],
+    },
+    {
+      displayName: 'server',
+      testEnvironment: 'node',
+      transform: tsJest,
+      moduleNameMapper,
+      testMatch: ['<rootDir>/tests/server/**/*.test.ts', '<rootDir>/tests/db/**/*.test.ts'],
+    },
+    {
+      displayName: 'app',
+      preset: 'jest-expo/web',
+      moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
+      testMatch: ['<rootDir>/tests/app/**/*.test.tsx'],
+      transformIgnorePatterns: [
+        'node_modules/(?!((jest-)?react-native|@react-native(-community)?)|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|react-native-svg|@tanstack/.*)',
+      ],
+    },
+  ],
+};
