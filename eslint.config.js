@@ -1,0 +1,61 @@
+// ESLint: TypeScript rules plus the folder import rules from DEVELOPERS.md ("Architecture").
+const tseslint = require('typescript-eslint');
+const globals = require('globals');
+
+const nodeBuiltins = ['node:*', 'fs', 'path', 'os', 'child_process', 'worker_threads', 'http', 'net', 'crypto'];
+const pattern = (group, message) => ({ group, message });
+
+/** Folder → what it must not import. */
+const rules = {
+  'shared/**': [
+    { regex: '^(?!zod$|\\./)', message: 'shared/ imports only zod and its own files.' },
+  ],
+  'planner/**': [
+    pattern(['../../server/*', '../server/*', '../../db/*', '../db/*', '../../app/*', '../../components/*', '../../hooks/*', '@/*'],
+      'planner/ is pure: it must not import server, db or app code.'),
+    pattern(['pg', 'drizzle-orm', 'drizzle-orm/*', 'express', 'react', 'react-native', ...nodeBuiltins],
+      'planner/ is pure computation: no I/O, database, server or node built-ins (only planner/workers and planner/cli may).'),
+  ],
+  'db/**': [
+    pattern(['../server/*', '../../server/*', '../planner/*', '../../planner/*', '../app/*', 'express', 'react', 'react-native'],
+      'db/ imports drizzle, pg and shared only.'),
+  ],
+  'server/**': [
+    pattern(['../app/*', '../../app/*', '../components/*', '../../components/*', '../hooks/*', '../../hooks/*', 'react', 'react-native', 'expo*'],
+      'server/ must not import app code.'),
+  ],
+  'app/**': [
+    pattern(['@/server/*', '@/db/*', '@/planner/*', '../server/*', '../db/*', '../planner/*', 'pg', 'drizzle-orm', 'express', ...nodeBuiltins],
+      'app/ holds routes only; it imports components, hooks, constants and shared.'),
+  ],
+  'components/**': [
+    pattern(['@/server/*', '@/db/*', '@/planner/*', '../server/*', '../db/*', '../planner/*', 'pg', 'drizzle-orm', 'express', ...nodeBuiltins],
+      'components/ must not import server, db or planner code.'),
+  ],
+  'hooks/**': [
+    pattern(['@/server/*', '@/db/*', '@/planner/*', '../server/*', '../db/*', '../planner/*', 'pg', 'drizzle-orm', 'express', ...nodeBuiltins],
+      'hooks/ must not import server, db or planner code.'),
+  ],
+};
+
+module.exports = tseslint.config(
+  { ignores: ['node_modules/', 'dist/', '.data/', '.expo/', 'web-build/', 'coverage/', 'test-results/', '**/*.js', '!eslint.config.js'] },
+  ...tseslint.configs.recommended,
+  {
+    languageOptions: { globals: { ...globals.node, ...globals.browser, ...globals.jest } },
+    rules: {
+      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
+      '@typescript-eslint/no-require-imports': 'off',
+    },
+  },
+  ...Object.entries(rules).map(([files, patterns]) => ({
+    files: [files.replace('/**', '/**/*.{ts,tsx}')],
+    ignores: files === 'planner/**' ? ['planner/workers/**', 'planner/cli/**'] : [],
+    rules: { 'no-restricted-imports': ['error', { patterns: patterns }] },
+  })),
+  {
+    // The worker wrapper and the command line are planner's only doors to the outside world.
+    files: ['planner/workers/**/*.ts', 'planner/cli/**/*.ts'],
+    rules: { 'no-restricted-imports': ['error', { patterns: [rules['planner/**'][0]] }] },
+  },
+);

@@ -1,0 +1,56 @@
+// The folder import rules (DEVELOPERS.md "Architecture") are live: ESLint rejects a wrong arrow.
+import { execFileSync } from 'node:child_process';
+import path from 'node:path';
+
+const root = path.resolve(__dirname, '../..');
+
+// ESLint loads its flat config through dynamic import(), which jest's VM does not allow, so the
+// cases are linted in one plain node process.
+const LINT_SCRIPT = `
+const { ESLint } = require('eslint');
+const path = require('node:path');
+(async () => {
+  const cases = JSON.parse(require('node:fs').readFileSync(0, 'utf8'));
+  const eslint = new ESLint({ cwd: process.cwd() });
+  const out = [];
+  for (const [file, code] of cases) {
+    const [r] = await eslint.lintText(code, { filePath: path.join(process.cwd(), file) });
+    out.push(r.messages.filter((m) => m.ruleId === 'no-restricted-imports').map((m) => m.message));
+  }
+  process.stdout.write(JSON.stringify(out));
+})();`;
+
+function lintAll(cases: [string, string][]): string[][] {
+  const out = execFileSync(process.execPath, ['-e', LINT_SCRIPT], { cwd: root, input: JSON.stringify(cases) });
+  return JSON.parse(out.toString()) as string[][];
+}
+
+const FORBIDDEN: [string, string][] = [
+  ['planner/model/x.ts', "import pg from 'pg';\nexport const a = pg;\n"],
+  ['planner/model/x.ts', "import fs from 'node:fs';\nexport const a = fs;\n"],
+  ['planner/model/x.ts', "import { createDb } from '../../db/client';\nexport const a = createDb;\n"],
+  ['shared/x.ts', "import express from 'express';\nexport const a = express;\n"],
+  ['db/x.ts', "import { planWindow } from '../planner/remap/plan-window';\nexport const a = planWindow;\n"],
+  ['app/x.tsx', "import { createDb } from '@/db/client';\nexport const a = createDb;\n"],
+  ['components/x.tsx', "import { createApp } from '@/server/app';\nexport const a = createApp;\n"],
+];
+const ALLOWED: [string, string][] = [
+  ['planner/model/x.ts', "import Graph from 'graphology';\nimport type { Scenario } from '../../shared/scenario';\nexport type S = Scenario;\nexport const g = Graph;\n"],
+  ['planner/workers/x.ts', "import { Worker } from 'node:worker_threads';\nexport const w = Worker;\n"],
+  ['shared/x.ts', "import { z } from 'zod';\nimport { scenarioSchema } from './scenario';\nexport const a = [z, scenarioSchema];\n"],
+  ['server/x.ts', "import { createDb } from '../db/client';\nexport const a = createDb;\n"],
+];
+
+describe('folder import rules', () => {
+  let results: string[][];
+  beforeAll(() => {
+    results = lintAll([...FORBIDDEN, ...ALLOWED]);
+  }, 60000);
+
+  test.each(FORBIDDEN.map((c, i) => [c[0], c[1].split('\n')[0], i] as const))('%s rejects: %s', (_f, _c, i) => {
+    expect(results[i]).not.toHaveLength(0);
+  });
+  test.each(ALLOWED.map((c, i) => [c[0], c[1].split('\n')[0], FORBIDDEN.length + i] as const))('%s allows: %s', (_f, _c, i) => {
+    expect(results[i]).toEqual([]);
+  });
+});
