@@ -17,7 +17,9 @@ module.exports = {
     {
       displayName: 'server',
       testEnvironment: 'node',
-      transform: tsJest,
+      // @oslojs/* ship only ES modules; ts-jest (allowJs) turns them into CommonJS for jest.
+      transform: { ...tsJest, '^.+/node_modules/@oslojs/.+\\.js$': ['ts-jest', { tsconfig: { allowJs: true }, diagnostics: false }] },
+      transformIgnorePatterns: ['/node_modules/(?!@oslojs/)'],
       moduleNameMapper,
       testMatch: ['<rootDir>/tests/server/**/*.test.ts', '<rootDir>/tests/db/**/*.test.ts'],
     },
