@@ -42,3 +42,18 @@ export const overviewSchema = z.object({
   ),
 });
 export type Overview = z.infer<typeof overviewSchema>;
+
+/** GET /api/users (admin): every user with its roles. */
+export const userListSchema = z.object({ users: z.array(meSchema) });
+export type UserList = z.infer<typeof userListSchema>;
+
+/** One problem found in a scenario, located by a JSON path such as `$.slices[3].ties[0].to`. */
+export const scenarioIssueSchema = z.object({ path: z.string(), message: z.string() });
+
+/** POST /api/scenarios/validate (admin, planner): always 200; `ok` is false when there are errors. */
+export const scenarioValidationSchema = z.object({
+  ok: z.boolean(),
+  errors: z.array(scenarioIssueSchema),
+  warnings: z.array(scenarioIssueSchema),
+});
+export type ScenarioValidation = z.infer<typeof scenarioValidationSchema>;

@@ -1,0 +1,68 @@
+// createApp(): the Express application, without a port, so tests drive it directly.
+import cookieParser from 'cookie-parser';
+import express from 'express';
+import type pg from 'pg';
+import type { Db } from '../db/client';
+import './auth/request-auth';
+import { sessionMiddleware } from './auth/session-middleware';
+import type { SignInLimit } from './auth/sign-in-limit';
+import type { ServerConfig } from './env';
+import { RouteNotFoundError } from './errors';
+import { errorHandler } from './http/error-handler';
+import { originCheck } from './http/origin-check';
+import { securityHeaders } from './http/security-headers';
+import { webApp } from './http/web-app';
+import { authRouter } from './routes/auth';
+import { healthRouter } from './routes/health';
+import { meRouter } from './routes/me';
+import { overviewRouter } from './routes/overview';
+import { scenariosRouter } from './routes/scenarios';
+import { usersRouter } from './routes/users';
+
+export type AppDeps = {
+  db: Db;
+  /** Owned by the caller (server/index.ts closes it); accepted here so callers pass one bundle. */
+  pool?: pg.Pool;
+  config: ServerConfig;
+  now?: () => Date;
+  signInLimit?: SignInLimit;
+  log?: (message: string, err: unknown) => void;
+};
+
+// API answers depend on who asks and when; no shared cache may keep them.
+const noStore: express.RequestHandler = (_req, res, next) => {
+  res.setHeader('Cache-Control', 'no-store');
+  next();
+};
+
+function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signInLimit'>>): express.Router {
+  const api = express.Router();
+  api.use(noStore);
+  api.use('/auth', authRouter(deps));
+  api.use('/me', meRouter());
+  api.use('/overview', overviewRouter(deps));
+  api.use('/users', usersRouter(deps));
+  api.use('/scenarios', scenariosRouter());
+  api.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.originalUrl.split('?')[0])));
+  return api;
+}
+
+export function createApp(deps: AppDeps): express.Application {
+  const { db, config } = deps;
+  const now = deps.now ?? (() => new Date());
+  const signInLimit = deps.signInLimit ?? config.signInLimit;
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(securityHeaders());
+  // Before sessions and body parsing: a health probe must not depend on a cookie's database look-up.
+  app.use('/api/health', noStore, healthRouter({ db, config, now }));
+  app.use(express.json({ limit: config.jsonBodyLimit }));
+  app.use(cookieParser());
+  app.use(originCheck({ allowedOrigins: config.allowedOrigins }));
+  app.use(sessionMiddleware({ db, config, now }));
+  app.use('/api', apiRouter({ db, config, now, signInLimit }));
+  app.use(webApp({ webDist: config.webDist }));
+  app.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.path)));
+  app.use(errorHandler({ log: deps.log ?? ((message, err) => console.error(`[server] ${message}`, err)) }));
+  return app;
+}

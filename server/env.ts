@@ -1,0 +1,58 @@
+// Server configuration, parsed from the environment with zod once at boot.
+import { z } from 'zod';
+
+const DAY_SECONDS = 24 * 60 * 60;
+
+const envSchema = z.object({
+  PORT: z.coerce.number().int().min(1).max(65535).default(8080),
+  HOST: z.string().min(1).default('127.0.0.1'),
+  DATABASE_URL: z.string({ error: 'DATABASE_URL is required (postgres://user@host:port/database)' })
+    .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must start with postgres:// or postgresql://'),
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  SESSION_INACTIVITY_SECONDS: z.coerce.number().int().min(60).default(7 * DAY_SECONDS),
+  WEB_DIST: z.string().min(1).default('dist'),
+  /** `auto`: Secure cookies except when the request's host is loopback (local http use). */
+  COOKIE_SECURE: z.enum(['auto', 'always', 'never']).default('auto'),
+  /** Extra origins allowed to make state-changing requests (comma-separated), e.g. the Metro dev server. */
+  ALLOWED_ORIGINS: z.string().default(''),
+  JSON_BODY_LIMIT: z.string().regex(/^\d+(b|kb|mb)$/i, 'JSON_BODY_LIMIT looks like 2mb or 500kb').default('2mb'),
+  SIGN_IN_LIMIT_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60 * 1000),
+  SIGN_IN_LIMIT_MAX: z.coerce.number().int().min(1).default(10),
+});
+
+export type ServerConfig = {
+  port: number;
+  host: string;
+  databaseUrl: string;
+  nodeEnv: 'development' | 'production' | 'test';
+  sessionInactivitySeconds: number;
+  webDist: string;
+  cookieSecure: 'auto' | 'always' | 'never';
+  allowedOrigins: string[];
+  jsonBodyLimit: string;
+  signInLimit: { windowMs: number; max: number };
+};
+
+export class ConfigError extends Error {}
+
+/** Parses `source` (default `process.env`); throws a ConfigError naming every bad variable. */
+export function parseEnv(source: Record<string, string | undefined> = process.env): ServerConfig {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((issue) => `  ${issue.path.join('.') || '(env)'}: ${issue.message}`);
+    throw new ConfigError(`Invalid server configuration:\n${lines.join('\n')}`);
+  }
+  const env = parsed.data;
+  return {
+    port: env.PORT,
+    host: env.HOST,
+    databaseUrl: env.DATABASE_URL,
+    nodeEnv: env.NODE_ENV,
+    sessionInactivitySeconds: env.SESSION_INACTIVITY_SECONDS,
+    webDist: env.WEB_DIST,
+    cookieSecure: env.COOKIE_SECURE,
+    allowedOrigins: env.ALLOWED_ORIGINS.split(',').map((o) => o.trim()).filter(Boolean),
+    jsonBodyLimit: env.JSON_BODY_LIMIT,
+    signInLimit: { windowMs: env.SIGN_IN_LIMIT_WINDOW_MS, max: env.SIGN_IN_LIMIT_MAX },
+  };
+}

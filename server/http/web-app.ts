@@ -1,0 +1,33 @@
+// Serves the exported web app (WEB_DIST) with an SPA fallback, after the API routes.
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { type Router } from 'express';
+
+/** Expo puts content-hashed bundles here: safe to cache for a year. */
+const HASHED_ASSETS = `${path.sep}_expo${path.sep}static${path.sep}`;
+
+export function webApp({ webDist }: { webDist: string }): Router {
+  const root = path.resolve(webDist);
+  const indexFile = path.join(root, 'index.html');
+  const router = express.Router();
+  router.use(
+    express.static(root, {
+      index: false,
+      setHeaders: (res, filePath) => {
+        if (filePath.includes(HASHED_ASSETS)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+      },
+    }),
+  );
+  router.get('/{*splat}', (_req, res) => {
+    if (!fs.existsSync(indexFile)) {
+      res.status(404).json({
+        error: { code: 'WEB_APP_MISSING', message: `The web app is not built: ${indexFile} is missing (run npm run export:web).` },
+      });
+      return;
+    }
+    // index.html names the current bundles, so it must never be served stale.
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(indexFile);
+  });
+  return router;
+}

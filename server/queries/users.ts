@@ -1,0 +1,48 @@
+// User look-ups for sign-in, the session and the admin user list.
+import { asc, eq, inArray, sql } from 'drizzle-orm';
+import type { Db } from '../../db/client';
+import { passwordCredentials, roleGrants, users } from '../../db/schema';
+import { ROLE_NAMES, type Me, type RoleName } from '../../shared/api';
+
+/** The user's id and password hash, matched case-insensitively on e-mail; null when unknown. */
+export async function getUserCredentialsByEmail(
+  db: Db,
+  { email }: { email: string },
+): Promise<{ id: string; passwordHash: string } | null> {
+  const rows = await db
+    .select({ id: users.id, passwordHash: passwordCredentials.passwordHash })
+    .from(users)
+    .innerJoin(passwordCredentials, eq(passwordCredentials.userId, users.id))
+    .where(sql`lower(${users.email}) = ${email.trim().toLowerCase()}`)
+    .limit(1);
+  return rows[0] ?? null;
+}
+
+const byRoleOrder = (a: RoleName, b: RoleName) => ROLE_NAMES.indexOf(a) - ROLE_NAMES.indexOf(b);
+
+async function getRolesByUserIds(db: Db, userIds: string[]): Promise<Map<string, RoleName[]>> {
+  const roles = new Map<string, RoleName[]>();
+  if (userIds.length === 0) return roles;
+  const rows = await db
+    .select({ userId: roleGrants.userId, role: roleGrants.role })
+    .from(roleGrants)
+    .where(inArray(roleGrants.userId, userIds));
+  for (const row of rows) roles.set(row.userId, [...(roles.get(row.userId) ?? []), row.role]);
+  for (const list of roles.values()) list.sort(byRoleOrder);
+  return roles;
+}
+
+const userColumns = { id: users.id, email: users.email, name: users.name, tenantId: users.tenantId };
+
+export async function getUserById(db: Db, { id }: { id: string }): Promise<Me | null> {
+  const rows = await db.select(userColumns).from(users).where(eq(users.id, id)).limit(1);
+  if (!rows[0]) return null;
+  const roles = await getRolesByUserIds(db, [id]);
+  return { ...rows[0], roles: roles.get(id) ?? [] };
+}
+
+export async function listUsersWithRoles(db: Db): Promise<Me[]> {
+  const rows = await db.select(userColumns).from(users).orderBy(asc(users.email));
+  const roles = await getRolesByUserIds(db, rows.map((row) => row.id));
+  return rows.map((row) => ({ ...row, roles: roles.get(row.id) ?? [] }));
+}

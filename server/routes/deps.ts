@@ -1,0 +1,5 @@
+// What every router receives from createApp().
+import type { Db } from '../../db/client';
+import type { ServerConfig } from '../env';
+
+export type RouteDeps = { db: Db; config: ServerConfig; now: () => Date };
