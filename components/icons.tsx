@@ -1,0 +1,48 @@
+// Slackwater's own line icons and logo mark, drawn on a 24-unit grid with react-native-svg.
+import Svg, { Circle, Path, Rect } from 'react-native-svg';
+import { colors } from '@/constants/theme';
+
+type IconProps = { size?: number; color?: string };
+
+/** Logo: a still tide line under a single slow swell, inside a rounded square. */
+export function LogoMark({ size = 32 }: { size?: number }) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 32 32" accessibilityElementsHidden importantForAccessibility="no">
+      <Rect x={0} y={0} width={32} height={32} rx={8} fill={colors.primary} />
+      <Path d="M6 14 C10 9, 14 9, 16 13 S22 17, 26 12" stroke={colors.onPrimary} strokeWidth={2.4} fill="none" strokeLinecap="round" />
+      <Path d="M6 21 H26" stroke={colors.buoy} strokeWidth={2.4} strokeLinecap="round" />
+    </Svg>
+  );
+}
+
+/** Overview: four tiles of different weight, like a dashboard seen from afar. */
+export function OverviewIcon({ size = 24, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Rect x={3.5} y={3.5} width={7} height={9} rx={1.5} stroke={color} strokeWidth={1.8} />
+      <Rect x={13.5} y={3.5} width={7} height={5} rx={1.5} stroke={color} strokeWidth={1.8} />
+      <Rect x={13.5} y={11.5} width={7} height={9} rx={1.5} stroke={color} strokeWidth={1.8} />
+      <Rect x={3.5} y={15.5} width={7} height={5} rx={1.5} stroke={color} strokeWidth={1.8} />
+    </Svg>
+  );
+}
+
+/** Sign out: a door frame with an arrow leaving it. */
+export function SignOutIcon({ size = 20, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Path d="M10 4 H5.5 A1.5 1.5 0 0 0 4 5.5 V18.5 A1.5 1.5 0 0 0 5.5 20 H10" stroke={color} strokeWidth={1.8} strokeLinecap="round" />
+      <Path d="M10 12 H20 M16.5 8.5 L20 12 L16.5 15.5" stroke={color} strokeWidth={1.8} strokeLinecap="round" strokeLinejoin="round" />
+    </Svg>
+  );
+}
+
+/** Person: for the signed-in user's badge. */
+export function PersonIcon({ size = 20, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Circle cx={12} cy={8.5} r={3.8} stroke={color} strokeWidth={1.8} />
+      <Path d="M4.5 20 C5.5 15.8, 8.5 14, 12 14 S18.5 15.8, 19.5 20" stroke={color} strokeWidth={1.8} strokeLinecap="round" />
+    </Svg>
+  );
+}

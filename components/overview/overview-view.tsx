@@ -1,0 +1,33 @@
+// The overview screen's data view: figure tiles above the list of coming windows, in a readable column.
+import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import type { Overview } from '@/shared/api';
+import { FigureTiles } from '@/components/overview/figure-tiles';
+import { NextWindows } from '@/components/overview/next-windows';
+import { colors, CONTENT_MAX_WIDTH_PX, space, type } from '@/constants/theme';
+
+/** True when there is nothing to summarise yet (no network loaded); the screen then shows its empty state. */
+export function isOverviewEmpty(overview: Overview): boolean {
+  return overview.sites === 0 && overview.slices === 0 && overview.nextWindows.length === 0;
+}
+
+export function OverviewView({ overview }: { overview: Overview }) {
+  const { width } = useWindowDimensions();
+  const columns = width >= 1100 ? 3 : 2;
+  return (
+    <ScrollView contentContainerStyle={styles.page}>
+      <View style={styles.column}>
+        <Text style={styles.title} role="heading" aria-level={1}>
+          Overview
+        </Text>
+        <FigureTiles overview={overview} columns={columns} />
+        <NextWindows windows={overview.nextWindows} />
+      </View>
+    </ScrollView>
+  );
+}
+
+const styles = StyleSheet.create({
+  page: { padding: space.lg, alignItems: 'center' },
+  column: { width: '100%', maxWidth: CONTENT_MAX_WIDTH_PX, gap: space.lg },
+  title: { ...type.display, color: colors.abyss },
+});

@@ -1,0 +1,54 @@
+// Who is signed in (name and roles) and the sign-out action, in a light (top bar) or dark (rail) tone.
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import type { Me } from '@/shared/api';
+import { PersonIcon, SignOutIcon } from '@/components/icons';
+import { colors, radii, space, type } from '@/constants/theme';
+
+type Props = { user: Me; onSignOut: () => void; signingOut: boolean; tone: 'light' | 'dark' };
+
+export function UserSummary({ user, onSignOut, signingOut, tone }: Props) {
+  const dark = tone === 'dark';
+  const ink = dark ? colors.onAbyss : colors.ink;
+  const muted = dark ? colors.onAbyssMuted : colors.inkMuted;
+  return (
+    <View style={styles.row} testID="user-summary">
+      <PersonIcon color={muted} />
+      <View style={styles.text}>
+        <Text style={[styles.name, { color: ink }]} numberOfLines={1} testID="user-name">
+          {user.name}
+        </Text>
+        <Text style={[styles.roles, { color: muted }]} numberOfLines={1} testID="user-roles">
+          {user.roles.join(' · ')}
+        </Text>
+      </View>
+      <Pressable
+        testID="sign-out"
+        role="button"
+        accessibilityLabel="Sign out"
+        disabled={signingOut}
+        onPress={onSignOut}
+        style={({ pressed }) => [styles.signOut, pressed && { backgroundColor: dark ? colors.ink : colors.primarySoft }]}
+      >
+        <SignOutIcon color={ink} />
+        <Text style={[styles.signOutLabel, { color: ink }]}>{signingOut ? 'Signing out…' : 'Sign out'}</Text>
+      </Pressable>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
+  text: { flex: 1, minWidth: 96 },
+  name: { ...type.bodyStrong },
+  roles: { ...type.caption },
+  signOut: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.xs,
+    paddingVertical: space.xs + 2,
+    paddingHorizontal: space.sm,
+    borderRadius: radii.sm,
+    minHeight: 36,
+  },
+  signOutLabel: { ...type.label },
+});

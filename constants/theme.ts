@@ -1,0 +1,62 @@
+// Slackwater's design tokens: a calm, deep-sea palette, a 4-point spacing scale and a Work Sans type ramp.
+// Screens and components take every colour, size and font from here, never from literals.
+import type { TextStyle } from 'react-native';
+
+export const colors = {
+  /** Deep water: main text and the side rail. */
+  abyss: '#0C2630',
+  ink: '#16323C',
+  inkMuted: '#4C6873',
+  inkFaint: '#7F97A0',
+  /** Still water at the turn of the tide: the page background. */
+  tide: '#EEF4F3',
+  surface: '#FFFFFF',
+  surfaceSunken: '#E2ECEA',
+  border: '#C9D9D7',
+  primary: '#0D5C6B',
+  primaryPressed: '#08434F',
+  primarySoft: '#D3E8E7',
+  onPrimary: '#FFFFFF',
+  /** Buoy yellow-orange: selection marks and highlights. */
+  buoy: '#D99A3D',
+  danger: '#A63A2B',
+  dangerSoft: '#F6E0DC',
+  warning: '#8A5A00',
+  /** Text and icons on the dark rail. */
+  onAbyss: '#DCEBEA',
+  onAbyssMuted: '#8FB0B4',
+} as const;
+
+/** 4-point spacing scale; index names read as multiples of 4 px. */
+export const space = { xxs: 2, xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32, xxxl: 48 } as const;
+
+export const radii = { sm: 4, md: 8, lg: 14, pill: 999 } as const;
+
+/** One family per weight: per-weight font files avoid faux bold on web and native. */
+export const fonts = {
+  regular: 'WorkSans_400Regular',
+  medium: 'WorkSans_500Medium',
+  semibold: 'WorkSans_600SemiBold',
+  bold: 'WorkSans_700Bold',
+} as const;
+
+type TypeStyle = Pick<TextStyle, 'fontFamily' | 'fontSize' | 'lineHeight' | 'letterSpacing'>;
+
+export const type = {
+  display: { fontFamily: fonts.bold, fontSize: 28, lineHeight: 34, letterSpacing: -0.3 },
+  title: { fontFamily: fonts.semibold, fontSize: 20, lineHeight: 26 },
+  heading: { fontFamily: fonts.semibold, fontSize: 16, lineHeight: 22 },
+  body: { fontFamily: fonts.regular, fontSize: 15, lineHeight: 22 },
+  bodyStrong: { fontFamily: fonts.medium, fontSize: 15, lineHeight: 22 },
+  label: { fontFamily: fonts.medium, fontSize: 13, lineHeight: 18, letterSpacing: 0.2 },
+  caption: { fontFamily: fonts.regular, fontSize: 12, lineHeight: 16 },
+  figure: { fontFamily: fonts.semibold, fontSize: 32, lineHeight: 38, letterSpacing: -0.5 },
+} as const satisfies Record<string, TypeStyle>;
+
+/** Window width (px) from which the shell shows a side rail instead of bottom tabs. */
+export const WIDE_LAYOUT_MIN_WIDTH_PX = 900;
+
+/** Widest a content column grows on large screens, so lines stay readable. */
+export const CONTENT_MAX_WIDTH_PX = 1080;
+
+export const theme = { colors, space, radii, fonts, type } as const;
