@@ -1,6 +1,6 @@
 // Capacity of every site and span during a window, and the load that given slices place on them today.
 import { UnknownElementError } from '../errors';
-import type { Inventory, Reservation, WindowSpec } from './types';
+import type { Inventory, Reservation, SlicePlacement, WindowSpec } from './types';
 import { resolveWindow } from './window-elements';
 
 export interface WindowCapacity {
@@ -48,17 +48,21 @@ export function windowCapacity(inv: Inventory, window: WindowSpec, reservations?
   return { siteCpu, spanGbps, siteDown, spanDown };
 }
 
+/** Adds one slice's placement (any placement, current or planned) to a load tally. */
+export function addPlacementLoad(inv: Inventory, sliceIndex: number, placement: SlicePlacement, into: PlacementLoad): void {
+  const slice = inv.slices[sliceIndex];
+  slice.functions.forEach((f, i) => { into.siteCpu[placement.sites[i]] += f.cpu; });
+  slice.ties.forEach((t, i) => {
+    for (const span of placement.paths[i]) into.spanGbps[span] += t.bandwidthGbps;
+  });
+}
+
 /** Sum of the CURRENT placements of the given slices (span capacity is shared by both directions). */
 export function placementLoad(inv: Inventory, sliceIndices: Iterable<number>): PlacementLoad {
-  const siteCpu = new Float64Array(inv.network.sites.length);
-  const spanGbps = new Float64Array(inv.network.spans.length);
-  for (const s of sliceIndices) {
-    const slice = inv.slices[s];
-    const placement = inv.placements[s];
-    slice.functions.forEach((f, i) => { siteCpu[placement.sites[i]] += f.cpu; });
-    slice.ties.forEach((t, i) => {
-      for (const span of placement.paths[i]) spanGbps[span] += t.bandwidthGbps;
-    });
-  }
-  return { siteCpu, spanGbps };
+  const load: PlacementLoad = {
+    siteCpu: new Float64Array(inv.network.sites.length),
+    spanGbps: new Float64Array(inv.network.spans.length),
+  };
+  for (const s of sliceIndices) addPlacementLoad(inv, s, inv.placements[s], load);
+  return load;
 }
