@@ -1,0 +1,66 @@
+// Options of planWindow, their defaults, and the hooks through which other modes plug in.
+import type { Scenario } from '../../shared/scenario';
+import type { Objective, PlanMode, Reservation, SlicePlacement } from '../model/types';
+import type { ParallelRunner } from './parallel-runner';
+import type { RemapProblem } from './remap-types';
+
+export interface PlanProgress {
+  generation: number;
+  evaluations: number;
+  best: Objective;
+  elapsedMs: number;
+}
+
+/** What an exact solver hands back: a plan in index form and its optimality figures. */
+export interface ExactOutcome {
+  next: Map<number, SlicePlacement | null>;
+  exact: { optimal: boolean; gap: number; bound: number };
+}
+
+/** 'exact' mode's solver (P3's exactPlan behind an adapter), injected so the DE code does not load HiGHS. */
+export type ExactSolver = (problem: RemapProblem, options: { timeLimitMs: number }) => Promise<ExactOutcome>;
+
+export interface PlanOptions {
+  mode: PlanMode;
+  seed: number;
+  population: number;
+  F: number;
+  CR: number;
+  generations: number;
+  stallGenerations: number;
+  timeLimitMs: number;
+  workers: number;
+  /** islands: generations between migrations */
+  migrationInterval: number;
+  maxCandidates: number;
+  reservations?: Reservation;
+  pinned?: string[];
+  excludedSites?: string[];
+  onProgress?: (p: PlanProgress) => void;
+  now?: () => number;
+  /** 'islands' and 'shared-eval' */
+  parallel?: ParallelRunner;
+  /** 'islands' and 'shared-eval': the scenario the inventory was built from, for the worker threads */
+  scenario?: Scenario;
+  /** 'exact' */
+  exact?: ExactSolver;
+}
+
+/**
+ * WARNING: CR is low on purpose. The genome has one gene per function of every affected slice, and good
+ * plans differ from the stay-put and greedy seeds in a few genes; a high CR rewrites most genes at once and
+ * almost every trial then loses to its parent.
+ */
+export const PLAN_DEFAULTS: Omit<PlanOptions, 'reservations' | 'pinned' | 'excludedSites' | 'onProgress' | 'now' | 'parallel' | 'scenario' | 'exact'> = {
+  mode: 'serial',
+  seed: 1,
+  population: 40,
+  F: 0.5,
+  CR: 0.2,
+  generations: 300,
+  stallGenerations: 60,
+  timeLimitMs: 30_000,
+  workers: 2,
+  migrationInterval: 10,
+  maxCandidates: 16,
+};

@@ -1,0 +1,104 @@
+// Plans one maintenance window: builds the re-mapping problem, searches it (serial DE or greedy here; the
+// parallel and exact modes through injected runners), then scores and verifies the result.
+import { runDE, type DETracePoint } from '../de/differential-evolution';
+import { InvalidOptionError, PlannerError } from '../errors';
+import { greedyPlan } from '../greedy/greedy-plan';
+import type { Inventory, PlanResult, SlicePlacement, TracePoint, WindowSpec } from '../model/types';
+import { compareObjectives, evaluatePlan, toSlicePlans } from '../plan/evaluate-plan';
+import { createRng } from '../random/rng';
+import { verifyPlan } from '../verify/verify-plan';
+import { createDecoder, objectiveFromFitness, stayPutGenes, toDEProblem, type Decoder } from './decoder';
+import { explainUnresolved } from './explain-unresolved';
+import { PLAN_DEFAULTS, type PlanOptions } from './plan-options';
+import { buildRemapProblem } from './problem';
+import type { RemapProblem } from './remap-types';
+
+export { PLAN_DEFAULTS, type PlanOptions, type PlanProgress, type ExactSolver, type ExactOutcome } from './plan-options';
+
+const MODES = new Set(['serial', 'islands', 'shared-eval', 'greedy', 'exact']);
+
+interface Search {
+  next: Map<number, SlicePlacement | null>;
+  trace: TracePoint[];
+  exact?: PlanResult['exact'];
+  /** decoder fitness of the found genes */
+  feasible?: boolean;
+}
+
+function toTrace(points: DETracePoint[]): TracePoint[] {
+  return points.map((p) => ({
+    generation: p.generation, evaluations: p.evaluations, best: objectiveFromFitness(p.best), feasible: p.best.violation <= 0,
+  }));
+}
+
+/** Serial DE, or the parallel runner; both seeded with stay-put and greedy genes. */
+async function evolve(problem: RemapProblem, decoder: Decoder, o: PlanOptions, seeds: Float64Array[], startMs: number, now: () => number): Promise<Search> {
+  const timeLimitMs = Math.max(0, o.timeLimitMs - (now() - startMs));
+  const report = (generation: number, evaluations: number, best: TracePoint['best']) =>
+    o.onProgress?.({ generation, evaluations, best, elapsedMs: now() - startMs });
+  const de = { population: o.population, F: o.F, CR: o.CR, generations: o.generations, stallGenerations: o.stallGenerations, timeLimitMs };
+  if (o.mode === 'serial') {
+    const r = runDE(toDEProblem(problem, decoder), {
+      ...de, now, onGeneration: (g, best, evaluations) => report(g, evaluations, objectiveFromFitness(best)),
+    }, createRng(o.seed), seeds);
+    return { next: decoder.decode(r.best).next, trace: toTrace(r.trace), feasible: r.fitness.violation <= 0 };
+  }
+  if (!o.parallel || !o.scenario) throw new InvalidOptionError(`mode "${o.mode}" needs options.parallel and options.scenario`);
+  const r = await o.parallel.run({
+    mode: o.mode === 'islands' ? 'islands' : 'shared-eval', scenario: o.scenario, window: problem.window,
+    problemOptions: problem.options, deOptions: { ...de, migrationInterval: o.migrationInterval },
+    seeds, seed: o.seed, workers: o.workers,
+    onGeneration: (p) => report(p.generation, p.evaluations, objectiveFromFitness(p.best)),
+  });
+  const decoded = decoder.decode(r.best);
+  return { next: decoded.next, trace: toTrace(r.trace), feasible: decoded.fitness.violation <= 0 };
+}
+
+async function search(problem: RemapProblem, o: PlanOptions, startMs: number, now: () => number): Promise<Search> {
+  const decoder = createDecoder(problem);
+  const greedy = greedyPlan(problem);
+  const greedyFit = decoder.evaluate(greedy.genes);
+  const greedyPoint: TracePoint = { generation: 0, evaluations: 1, best: objectiveFromFitness(greedyFit), feasible: greedyFit.violation <= 0 };
+  if (o.mode === 'greedy' || problem.slices.length === 0) return { next: greedy.next, trace: [greedyPoint] };
+  if (o.mode === 'exact') {
+    if (!o.exact) throw new InvalidOptionError('mode "exact" needs options.exact');
+    const r = await o.exact(problem, { timeLimitMs: o.timeLimitMs });
+    return { next: r.next, trace: [], exact: r.exact };
+  }
+  const found = await evolve(problem, decoder, o, [stayPutGenes(problem), greedy.genes], startMs, now);
+  // Greedy is a seed, so DE should never do worse; the guard also catches an infeasible best.
+  const better = found.feasible === true
+    && compareObjectives(evaluatePlan(problem.inv, problem.window, found.next, problem.options.reservations),
+      evaluatePlan(problem.inv, problem.window, greedy.next, problem.options.reservations)) <= 0;
+  return better ? found : { ...found, next: greedy.next };
+}
+
+function checkOptions(o: PlanOptions): void {
+  if (!MODES.has(o.mode)) throw new InvalidOptionError(`unknown mode "${String(o.mode)}"`);
+  if (!Number.isFinite(o.seed)) throw new InvalidOptionError('seed must be a finite number');
+  if (!(o.timeLimitMs > 0)) throw new InvalidOptionError('timeLimitMs must be greater than 0');
+}
+
+export async function planWindow(inv: Inventory, window: WindowSpec, options: Partial<PlanOptions> = {}): Promise<PlanResult> {
+  const o: PlanOptions = { ...PLAN_DEFAULTS, ...options };
+  checkOptions(o);
+  const now = o.now ?? Date.now;
+  const startMs = now();
+  const problem = buildRemapProblem(inv, window, {
+    reservations: o.reservations, pinned: o.pinned, excludedSites: o.excludedSites, maxCandidates: o.maxCandidates,
+  });
+  const found = await search(problem, o, startMs, now);
+  const affected = problem.affected.map((s) => inv.slices[s].id);
+  const slices = toSlicePlans(inv, found.next, explainUnresolved(problem, found.next));
+  const verdict = verifyPlan(inv, window, { affected, slices }, o.reservations);
+  if (!verdict.ok) {
+    const first = verdict.violations[0];
+    throw new PlannerError('PLAN_UNVERIFIED', `plan for window "${window.id}" fails verification: ${first.code} ${first.message}`);
+  }
+  const result: PlanResult = {
+    window: window.id, mode: o.mode, seed: o.seed, elapsedMs: now() - startMs, affected, slices,
+    objective: evaluatePlan(inv, window, found.next, o.reservations), trace: found.trace,
+  };
+  if (found.exact) result.exact = found.exact;
+  return result;
+}
