@@ -51,13 +51,16 @@ as_pg() {
 # private home directory would otherwise fail with "permission denied"). Adds o+x (search only).
 open_parents() {
   is_root || return 0
-  local dir="$ROOT"
-  while [ "$dir" != "/" ]; do
+  local dir="" part
+  local -a parts
+  IFS=/ read -r -a parts <<< "${ROOT#/}"
+  # Top-down, so only the directory that actually blocks the way is changed.
+  for part in "${parts[@]}"; do
+    dir="$dir/$part"
     if ! runuser -u postgres -- test -x "$dir"; then
       say "granting search permission (o+x) on $dir so the postgres user can reach .data"
       chmod o+x "$dir"
     fi
-    dir="$(dirname "$dir")"
   done
 }
 
@@ -92,7 +95,7 @@ start_server() {
 }
 
 psql_admin() {
-  "$(bindir)/psql" -X -q -v ON_ERROR_STOP=1 -h "$HOST" -p "$PORT" -U postgres -d postgres "$@"
+  PGOPTIONS="-c client_min_messages=warning" "$(bindir)/psql" -X -q -v ON_ERROR_STOP=1 -h "$HOST" -p "$PORT" -U postgres -d postgres "$@"
 }
 
 wait_ready() {

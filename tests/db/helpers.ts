@@ -26,10 +26,21 @@ export interface TestDb {
   close(): Promise<void>;
 }
 
+// The same key as tests/server's harness, so parallel test files never migrate one database at once.
+const MIGRATION_LOCK_KEY = 5_437_201;
+
 /** The run's shared test database with migrations applied. */
 export async function getTestDb(): Promise<TestDb> {
   const url = getTestDbUrl();
-  await migrateDatabase(url);
+  const client = new pg.Client({ connectionString: url });
+  await client.connect();
+  try {
+    await client.query('select pg_advisory_lock($1)', [MIGRATION_LOCK_KEY]);
+    await migrateDatabase(url);
+  } finally {
+    await client.query('select pg_advisory_unlock($1)', [MIGRATION_LOCK_KEY]).catch(() => undefined);
+    await client.end();
+  }
   const { db, pool } = createDb(url, { max: 4 });
   return { db, pool, url, close: () => pool.end() };
 }
