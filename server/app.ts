@@ -59,8 +59,8 @@ export function createApp(deps: AppDeps): express.Application {
   app.use(express.json({ limit: config.jsonBodyLimit }));
   app.use(cookieParser());
   app.use(originCheck({ allowedOrigins: config.allowedOrigins }));
-  app.use(sessionMiddleware({ db, config, now }));
-  app.use('/api', apiRouter({ db, config, now, signInLimit }));
+  // Only the API needs to know who is asking; static files skip the session look-up.
+  app.use('/api', sessionMiddleware({ db, config, now }), apiRouter({ db, config, now, signInLimit }));
   app.use(webApp({ webDist: config.webDist }));
   app.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.path)));
   app.use(errorHandler({ log: deps.log ?? ((message, err) => console.error(`[server] ${message}`, err)) }));
