@@ -25,7 +25,10 @@ module.exports = {
     },
     {
       displayName: 'app',
-      preset: 'jest-expo/web',
+      // WARNING: the native preset on purpose. Under 'jest-expo/web' with RN 0.85, @react-native/jest-preset's
+      // '^react-native($|/.*)' mapper wins over the web alias (native modules then throw), and with the alias
+      // forced, react-native-web's DOM host elements hide testID/onChangeText from Testing Library.
+      preset: 'jest-expo',
       moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
       testMatch: ['<rootDir>/tests/app/**/*.test.tsx'],
       transformIgnorePatterns: [
