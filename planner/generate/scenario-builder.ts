@@ -48,7 +48,10 @@ const CPU_FACTOR: Record<SiteKind, number> = { core: 4, aggregation: 2, edge: 1.
 function makeNetwork(o: ScenarioBuilderOptions, rng: Rng): { sites: ScenarioSite[]; spans: ScenarioSpan[] } {
   const g = waxmanGraph({ ...o.waxman, sites: o.sites, seed: deriveSeed(o.seed, 1) });
   const degree = new Array(o.sites).fill(0);
-  for (const [u, v] of g.links) (degree[u] += 1), (degree[v] += 1);
+  for (const [u, v] of g.links) {
+    degree[u] += 1;
+    degree[v] += 1;
+  }
   const kinds = kindsByDegree(degree);
   const sites = g.points.map((p, i): ScenarioSite => ({
     id: `site-${String(i + 1).padStart(4, '0')}`, name: `Site ${i + 1}`, kind: kinds[i],

@@ -4,10 +4,19 @@ import { waxmanGraph } from '../../../planner/generate/waxman';
 
 function connected(n: number, links: [number, number][]): boolean {
   const adj: number[][] = Array.from({ length: n }, () => []);
-  for (const [u, v] of links) (adj[u].push(v), adj[v].push(u));
+  for (const [u, v] of links) {
+    adj[u].push(v);
+    adj[v].push(u);
+  }
   const seen = new Set([0]);
   const stack = [0];
-  while (stack.length) for (const v of adj[stack.pop()!]) if (!seen.has(v)) (seen.add(v), stack.push(v));
+  while (stack.length) {
+    for (const v of adj[stack.pop()!]) {
+      if (seen.has(v)) continue;
+      seen.add(v);
+      stack.push(v);
+    }
+  }
   return seen.size === n;
 }
 
