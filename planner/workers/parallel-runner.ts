@@ -9,6 +9,8 @@ import type { ProblemShape } from './worker-protocol';
 
 export interface WorkerParallelRunner extends ParallelRunner {
   close(): Promise<void>;
+  /** worker threads started and not yet ended (0 after close) */
+  liveWorkers(): number;
 }
 
 export function createParallelRunner(): WorkerParallelRunner {
@@ -32,6 +34,7 @@ export function createParallelRunner(): WorkerParallelRunner {
       }
     },
     close: () => pool.close(),
+    liveWorkers: () => pool.live(),
   };
 }
 

@@ -26,6 +26,7 @@ class RemapWorker {
   private readonly worker: Worker;
   private readonly pending = new Map<number, Pending>();
   private nextId = 0;
+  exited = false;
 
   constructor() {
     this.worker = startWorker();
@@ -41,7 +42,10 @@ class RemapWorker {
       this.pending.clear();
     };
     this.worker.on('error', failAll);
-    this.worker.on('exit', (code) => failAll(new Error(`remap worker exited with code ${code}`)));
+    this.worker.on('exit', (code) => {
+      this.exited = true;
+      failAll(new Error(`remap worker exited with code ${code}`));
+    });
   }
 
   request<T>(req: WorkerRequest): Promise<T> {
@@ -58,8 +62,9 @@ class RemapWorker {
     else this.worker.unref();
   }
 
-  terminate(): Promise<number> {
-    return this.worker.terminate();
+  async terminate(): Promise<void> {
+    await this.worker.terminate();
+    this.exited = true;
   }
 }
 
@@ -68,7 +73,11 @@ export class WorkerPool {
 
   /** At least `count` workers, started on demand and reused across runs. */
   take(count: number): RemapWorker[] {
-    while (this.workers.length < count) this.workers.push(new RemapWorker());
+    while (this.workers.length < count) {
+      const w = new RemapWorker();
+      this.workers.push(w);
+      this.all.push(w);
+    }
     const taken = this.workers.slice(0, count);
     for (const w of taken) w.hold(true);
     return taken;
@@ -76,6 +85,13 @@ export class WorkerPool {
 
   release(): void {
     for (const w of this.workers) w.hold(false);
+  }
+
+  private all: RemapWorker[] = [];
+
+  /** Threads started by this pool that have not exited yet. */
+  live(): number {
+    return this.all.filter((w) => !w.exited).length;
   }
 
   async close(): Promise<void> {
