@@ -7,7 +7,7 @@ type IconProps = { size?: number; color?: string };
 /** Logo: a still tide line under a single slow swell, inside a rounded square. */
 export function LogoMark({ size = 32 }: { size?: number }) {
   return (
-    <Svg width={size} height={size} viewBox="0 0 32 32" accessibilityElementsHidden importantForAccessibility="no">
+    <Svg width={size} height={size} viewBox="0 0 32 32">
       <Rect x={0} y={0} width={32} height={32} rx={8} fill={colors.primary} />
       <Path d="M6 14 C10 9, 14 9, 16 13 S22 17, 26 12" stroke={colors.onPrimary} strokeWidth={2.4} fill="none" strokeLinecap="round" />
       <Path d="M6 21 H26" stroke={colors.buoy} strokeWidth={2.4} strokeLinecap="round" />

@@ -28,7 +28,7 @@ export function AppShell({ user, pathname, onSignOut, signingOut, children }: Pr
         <LogoMark size={28} />
         <Text style={styles.name}>Slackwater</Text>
         <View style={styles.user}>
-          <UserSummary user={user} onSignOut={onSignOut} signingOut={signingOut} tone="light" />
+          <UserSummary user={user} onSignOut={onSignOut} signingOut={signingOut} tone="light" compact />
         </View>
       </View>
       <View style={styles.content}>{children}</View>

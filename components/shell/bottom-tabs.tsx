@@ -14,10 +14,12 @@ export function BottomTabs({ pathname }: { pathname: string }) {
         const tint = active ? colors.primary : colors.inkMuted;
         return (
           <Link key={key} href={href} asChild>
-            <Pressable testID={`nav-${key}`} role="tab" aria-selected={active} style={styles.tab}>
-              <View style={[styles.mark, active && styles.markActive]} />
-              <Icon color={tint} />
-              <Text style={[styles.label, { color: tint }]}>{label}</Text>
+            <Pressable testID={`nav-${key}`} role="tab" aria-selected={active} style={styles.pressable}>
+              <View style={styles.tab}>
+                <View style={[styles.mark, active && styles.markActive]} />
+                <Icon color={tint} />
+                <Text style={[styles.label, { color: tint }]}>{label}</Text>
+              </View>
             </Pressable>
           </Link>
         );
@@ -34,7 +36,8 @@ const styles = StyleSheet.create({
     borderTopColor: colors.border,
     paddingTop: space.xs,
   },
-  tab: { flex: 1, alignItems: 'center', gap: space.xxs, paddingVertical: space.xs, minHeight: 48 },
+  pressable: { flex: 1 },
+  tab: { alignItems: 'center', gap: space.xxs, paddingVertical: space.xs, minHeight: 48 },
   mark: { width: 24, height: 3, borderRadius: 2, backgroundColor: 'transparent', marginBottom: space.xxs },
   markActive: { backgroundColor: colors.buoy },
   label: { ...type.caption },

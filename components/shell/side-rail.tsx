@@ -21,14 +21,13 @@ export function SideRail({ user, pathname, onSignOut, signingOut }: Props) {
           const active = matches(pathname);
           return (
             <Link key={key} href={href} asChild>
-              <Pressable
-                testID={`nav-${key}`}
-                aria-current={active ? 'page' : undefined}
-                style={({ hovered }) => [styles.item, (active || hovered) && styles.itemActive]}
-              >
-                <View style={[styles.mark, active && styles.markActive]} />
-                <Icon color={active ? colors.onAbyss : colors.onAbyssMuted} />
-                <Text style={[styles.label, active && styles.labelActive]}>{label}</Text>
+              <Pressable testID={`nav-${key}`} aria-current={active ? 'page' : undefined} style={styles.pressable}>
+                {/* Layout on an inner View: Link's asChild merge does not keep a Pressable style function. */}
+                <View style={[styles.item, active && styles.itemActive]}>
+                  <View style={[styles.mark, active && styles.markActive]} />
+                  <Icon color={active ? colors.onAbyss : colors.onAbyssMuted} />
+                  <Text style={[styles.label, active && styles.labelActive]}>{label}</Text>
+                </View>
               </Pressable>
             </Link>
           );
@@ -46,6 +45,7 @@ const styles = StyleSheet.create({
   brand: { flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingHorizontal: space.sm, marginBottom: space.xl },
   name: { ...type.title, color: colors.onAbyss },
   areas: { flex: 1, gap: space.xs },
+  pressable: { borderRadius: radii.md },
   item: { flexDirection: 'row', alignItems: 'center', gap: space.md, padding: space.sm, borderRadius: radii.md },
   itemActive: { backgroundColor: colors.ink },
   mark: { width: 3, height: 20, borderRadius: 2, backgroundColor: 'transparent' },

@@ -1,19 +1,20 @@
 // Who is signed in (name and roles) and the sign-out action, in a light (top bar) or dark (rail) tone.
+// `compact` (phones) shows the sign-out action as an icon; its accessible name stays "Sign out".
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { Me } from '@/shared/api';
 import { PersonIcon, SignOutIcon } from '@/components/icons';
 import { colors, radii, space, type } from '@/constants/theme';
 
-type Props = { user: Me; onSignOut: () => void; signingOut: boolean; tone: 'light' | 'dark' };
+type Props = { user: Me; onSignOut: () => void; signingOut: boolean; tone: 'light' | 'dark'; compact?: boolean };
 
-export function UserSummary({ user, onSignOut, signingOut, tone }: Props) {
+export function UserSummary({ user, onSignOut, signingOut, tone, compact = false }: Props) {
   const dark = tone === 'dark';
   const ink = dark ? colors.onAbyss : colors.ink;
   const muted = dark ? colors.onAbyssMuted : colors.inkMuted;
   return (
     <View style={styles.row} testID="user-summary">
-      <PersonIcon color={muted} />
-      <View style={styles.text}>
+      {compact ? null : <PersonIcon color={muted} />}
+      <View style={[styles.text, compact && styles.textCompact]}>
         <Text style={[styles.name, { color: ink }]} numberOfLines={1} testID="user-name">
           {user.name}
         </Text>
@@ -30,7 +31,9 @@ export function UserSummary({ user, onSignOut, signingOut, tone }: Props) {
         style={({ pressed }) => [styles.signOut, pressed && { backgroundColor: dark ? colors.ink : colors.primarySoft }]}
       >
         <SignOutIcon color={ink} />
-        <Text style={[styles.signOutLabel, { color: ink }]}>{signingOut ? 'Signing out…' : 'Sign out'}</Text>
+        {compact ? null : (
+          <Text style={[styles.signOutLabel, { color: ink }]}>{signingOut ? 'Signing out…' : 'Sign out'}</Text>
+        )}
       </Pressable>
     </View>
   );
@@ -39,6 +42,7 @@ export function UserSummary({ user, onSignOut, signingOut, tone }: Props) {
 const styles = StyleSheet.create({
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
   text: { flex: 1, minWidth: 96 },
+  textCompact: { alignItems: 'flex-end' },
   name: { ...type.bodyStrong },
   roles: { ...type.caption },
   signOut: {
