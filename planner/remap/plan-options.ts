@@ -56,7 +56,7 @@ export const PLAN_DEFAULTS: Omit<PlanOptions, 'reservations' | 'pinned' | 'exclu
   seed: 1,
   population: 40,
   F: 0.5,
-  CR: 0.2,
+  CR: 0.1,
   generations: 300,
   stallGenerations: 60,
   timeLimitMs: 30_000,

@@ -5,16 +5,19 @@ import { InvalidOptionError, PlannerError } from '../errors';
 import { greedyPlan } from '../greedy/greedy-plan';
 import type { Inventory, PlanResult, SlicePlacement, TracePoint, WindowSpec } from '../model/types';
 import { compareObjectives, evaluatePlan, toSlicePlans } from '../plan/evaluate-plan';
-import { createRng } from '../random/rng';
+import { createRng, deriveSeed } from '../random/rng';
 import { verifyPlan } from '../verify/verify-plan';
 import { createDecoder, objectiveFromFitness, stayPutGenes, toDEProblem, type Decoder } from './decoder';
 import { explainUnresolved } from './explain-unresolved';
 import { PLAN_DEFAULTS, type PlanOptions } from './plan-options';
 import { buildRemapProblem } from './problem';
+import { perturbedSeeds } from './seeding';
 import type { RemapProblem } from './remap-types';
 
 export { PLAN_DEFAULTS, type PlanOptions, type PlanProgress, type ExactSolver, type ExactOutcome } from './plan-options';
 
+/** rng stream for the initial members, apart from the DE's own stream */
+const SEEDING_STREAM = 0x5eed;
 const MODES = new Set(['serial', 'islands', 'shared-eval', 'greedy', 'exact']);
 
 interface Search {
@@ -54,6 +57,13 @@ async function evolve(problem: RemapProblem, decoder: Decoder, o: PlanOptions, s
   return { next: decoded.next, trace: toTrace(r.trace), feasible: decoded.fitness.violation <= 0 };
 }
 
+/** Stay-put and greedy first, then perturbed copies for three quarters of the rest (the others random). */
+function initialMembers(problem: RemapProblem, greedyGenes: Float64Array, o: PlanOptions): Float64Array[] {
+  const bases = [greedyGenes, stayPutGenes(problem)];
+  const extra = Math.max(0, Math.floor(((o.population - bases.length) * 3) / 4));
+  return [...bases, ...perturbedSeeds(problem, bases, extra, createRng(deriveSeed(o.seed, SEEDING_STREAM)))];
+}
+
 async function search(problem: RemapProblem, o: PlanOptions, startMs: number, now: () => number): Promise<Search> {
   const decoder = createDecoder(problem);
   const greedy = greedyPlan(problem);
@@ -65,7 +75,7 @@ async function search(problem: RemapProblem, o: PlanOptions, startMs: number, no
     const r = await o.exact(problem, { timeLimitMs: o.timeLimitMs });
     return { next: r.next, trace: [], exact: r.exact };
   }
-  const found = await evolve(problem, decoder, o, [stayPutGenes(problem), greedy.genes], startMs, now);
+  const found = await evolve(problem, decoder, o, initialMembers(problem, greedy.genes, o), startMs, now);
   // Greedy is a seed, so DE should never do worse; the guard also catches an infeasible best.
   const better = found.feasible === true
     && compareObjectives(evaluatePlan(problem.inv, problem.window, found.next, problem.options.reservations),

@@ -1,0 +1,31 @@
+// Initial DE members around the known good plans: each is a copy of the stay-put or greedy genes with a
+// few slices' genes re-drawn. Uniform random members of a genome this size are almost all hopeless, and
+// DE/rand/1 differences between near-copies then touch just the slices where they differ — a local search.
+import { randomInt, type Rng } from '../random/rng';
+import type { RemapProblem } from './remap-types';
+
+/** Slices re-drawn per perturbed member: 1 … MAX_REDRAWN. */
+const MAX_REDRAWN = 3;
+
+function redrawSlice(problem: RemapProblem, genes: Float64Array, block: number, rng: Rng): void {
+  const b = problem.slices[block];
+  // Bias towards keeping the slice in: leaving slices out is rarely what improves a seed.
+  genes[b.keepGene] = 0.25 + 0.75 * rng();
+  for (const k of b.functions) {
+    const f = problem.functions[k];
+    genes[f.gene] = problem.lower[f.gene] + rng() * (problem.upper[f.gene] - problem.lower[f.gene]);
+  }
+}
+
+/** `count` members, alternating between the bases, each with 1–3 slices re-drawn. */
+export function perturbedSeeds(problem: RemapProblem, bases: Float64Array[], count: number, rng: Rng): Float64Array[] {
+  const out: Float64Array[] = [];
+  if (problem.slices.length === 0 || bases.length === 0) return out;
+  for (let i = 0; i < count; i += 1) {
+    const genes = Float64Array.from(bases[i % bases.length]);
+    const redrawn = 1 + randomInt(rng, MAX_REDRAWN);
+    for (let k = 0; k < redrawn; k += 1) redrawSlice(problem, genes, randomInt(rng, problem.slices.length), rng);
+    out.push(genes);
+  }
+  return out;
+}

@@ -1,0 +1,101 @@
+// The re-mapping problem's candidate lists and genome, and the decoder's bookkeeping (invented data).
+import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
+import { greedyPlan } from '../../../planner/greedy/greedy-plan';
+import { evaluatePlan } from '../../../planner/plan/evaluate-plan';
+import { createDecoder, decode, genesFromPlacement, stayPutGenes } from '../../../planner/remap/decoder';
+import { buildRemapProblem } from '../../../planner/remap/problem';
+import { buildScenario } from '../../../planner/generate/scenario-builder';
+import { tinyScenario } from '../fixtures/tiny-scenario';
+
+function tiny(windowId: string, opts = {}) {
+  const sc = tinyScenario();
+  const inv = buildInventory(sc);
+  const w = compileWindow(sc.windows!.find((x) => x.id === windowId)!);
+  return { inv, w, problem: buildRemapProblem(inv, w, opts) };
+}
+
+describe('buildRemapProblem', () => {
+  it('lays out one keep gene then one gene per function, slices in priority order', () => {
+    const { inv, problem } = tiny('w-site-b');
+    expect(problem.slices.map((b) => inv.slices[b.slice].id)).toEqual(['s-transit', 's-hosted']);
+    expect(problem.dimension).toBe(6);
+    expect(problem.slices[1].keepGene).toBe(3);
+    expect(Array.from(problem.upper.subarray(0, 1))).toEqual([1]);
+  });
+
+  it('puts the current site first when usable, never offers a down site, and gives fixed functions one site', () => {
+    const { inv, problem } = tiny('w-site-b');
+    const B = inv.network.siteIndex.get('B')!;
+    for (const f of problem.functions) {
+      expect(Array.from(f.candidates)).not.toContain(B);
+      const current = inv.placements[f.slice].sites[f.fn];
+      if (current !== B) expect(f.candidates[0]).toBe(current);
+      if (inv.slices[f.slice].functions[f.fn].fixed) expect(f.candidates).toHaveLength(1);
+    }
+  });
+
+  it('honours maxCandidates, excluded sites and pinned functions', () => {
+    const { inv, problem } = tiny('w-site-b', { maxCandidates: 2, excludedSites: ['C'], pinned: ['s-hosted/app'] });
+    const C = inv.network.siteIndex.get('C')!;
+    for (const f of problem.functions) {
+      expect(f.candidates.length).toBeLessThanOrEqual(2);
+      expect(Array.from(f.candidates)).not.toContain(C);
+    }
+    const app = problem.functions.find((f) => inv.slices[f.slice].id === 's-hosted' && f.fn === 1)!;
+    expect(Array.from(app.candidates)).toEqual([inv.network.siteIndex.get('A')]);
+  });
+
+  it('residual capacity excludes the affected slices but counts everyone else', () => {
+    const { inv, problem } = tiny('w-site-b');
+    const D = inv.network.siteIndex.get('D')!;
+    expect(problem.residualCpu[D]).toBe(40 - 3); // s-quiet's d1 stays on D
+    expect(problem.residualCpu[inv.network.siteIndex.get('B')!]).toBe(0);
+  });
+});
+
+describe('decode', () => {
+  it('stay-put genes reroute a slice whose span goes down instead of moving it', () => {
+    const { inv, problem } = tiny('w-span-ab');
+    const d = decode(problem, stayPutGenes(problem));
+    expect(d.fitness.violation).toBe(0);
+    for (const [s, p] of d.next) expect(p!.sites).toEqual(inv.placements[s].sites);
+    expect(d.objective.rerouted).toBe(2);
+    expect(d.objective.moveCost).toBeCloseTo(0.5, 12);
+  });
+
+  it('a keep gene below 0.5 leaves the slice out with its priority weight and no resources', () => {
+    const { problem } = tiny('w-site-b');
+    const genes = stayPutGenes(problem);
+    genes[problem.slices[0].keepGene] = 0.1; // s-transit, priority 1 → weight 5
+    const d = decode(problem, genes);
+    expect(d.next.get(problem.slices[0].slice)).toBeNull();
+    expect(d.objective.unresolvedWeight).toBe(5);
+  });
+
+  it('counts over-full sites as violation, not as a feasible plan', () => {
+    const { problem } = tiny('w-site-b');
+    expect(decode(problem, stayPutGenes(problem)).fitness.violation).toBe(0);
+    problem.residualCpu.fill(0); // every site now full: the same genes must be infeasible
+    expect(decode(problem, stayPutGenes(problem)).fitness.violation).toBeGreaterThan(0);
+  });
+
+  it('greedy genes decode to exactly the greedy plan, and its objective agrees with evaluatePlan', () => {
+    const sc = buildScenario({ sites: 30, slices: 150, seed: 3 });
+    const inv = buildInventory(sc);
+    for (const sw of sc.windows!) {
+      const w = compileWindow(sw);
+      const problem = buildRemapProblem(inv, w);
+      const g = greedyPlan(problem);
+      const d = createDecoder(problem).decode(g.genes);
+      expect(d.fitness.violation).toBe(0);
+      expect(d.next).toEqual(g.next);
+      const e = evaluatePlan(inv, w, d.next);
+      expect(d.objective.unresolvedWeight).toBe(e.unresolvedWeight);
+      expect(d.objective.moveCost).toBeCloseTo(e.moveCost, 9);
+      expect(d.objective.usage).toBeCloseTo(e.usage, 6);
+      expect(d.objective.peakUtilisation).toBeCloseTo(e.peakUtilisation, 9);
+      expect(genesFromPlacement(problem, g.next).length).toBe(problem.dimension);
+      expect(createDecoder(problem).decode(genesFromPlacement(problem, g.next)).next).toEqual(g.next);
+    }
+  });
+});
