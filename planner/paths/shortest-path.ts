@@ -43,30 +43,61 @@ function tracePath(net: NetworkModel, prevSpan: Int32Array, from: number, to: nu
   return spans.reverse();
 }
 
+/**
+ * Scratch arrays reused across calls on the same network: the decoder routes thousands of ties per
+ * second, and allocating network-sized arrays per call dominated its time. A stamp per site marks
+ * which entries belong to the current search, so nothing needs clearing between calls.
+ * WARNING: not re-entrant; each worker thread has its own module instance, so threads are safe.
+ */
+interface Workspace {
+  dist: Float64Array;
+  prevSpan: Int32Array;
+  seen: Uint32Array;
+  done: Uint32Array;
+  heap: MinHeap;
+  stamp: number;
+}
+const workspaces = new WeakMap<NetworkModel, Workspace>();
+
+function workspaceFor(net: NetworkModel): Workspace {
+  let ws = workspaces.get(net);
+  if (!ws) {
+    const n = net.sites.length;
+    ws = { dist: new Float64Array(n), prevSpan: new Int32Array(n), seen: new Uint32Array(n),
+      done: new Uint32Array(n), heap: new MinHeap(Math.min(n, 1024)), stamp: 0 };
+    workspaces.set(net, ws);
+  }
+  if (++ws.stamp === 0xffffffff) {
+    ws.seen.fill(0);
+    ws.done.fill(0);
+    ws.stamp = 1;
+  }
+  ws.heap.size = 0;
+  return ws;
+}
+
 export function shortestLatencyPath(
   net: NetworkModel, from: number, to: number, opts: PathOptions = {},
 ): LatencyPath | null {
   if (opts.siteDown && (opts.siteDown[from] || opts.siteDown[to])) return null;
   if (from === to) return { spans: [], latencyMs: 0 };
-  const n = net.sites.length;
   const limit = opts.maxLatencyMs ?? Infinity;
-  const dist = new Float64Array(n).fill(Infinity);
-  const prevSpan = new Int32Array(n).fill(-1);
-  const done = new Uint8Array(n);
-  const heap = new MinHeap(Math.min(n, 1024));
+  const { dist, prevSpan, seen, done, heap, stamp } = workspaceFor(net);
   dist[from] = 0;
+  seen[from] = stamp;
   heap.push(0, from);
   while (heap.size > 0) {
     const site = heap.pop();
-    if (done[site]) continue;
-    done[site] = 1;
+    if (done[site] === stamp) continue;
+    done[site] = stamp;
     if (site === to) return { spans: tracePath(net, prevSpan, from, to), latencyMs: dist[to] };
     for (let k = net.adjStart[site]; k < net.adjStart[site + 1]; k++) {
       const next = net.adjSite[k];
       const span = net.adjSpan[k];
-      if (done[next] || !spanUsable(net, span, opts)) continue;
+      if (done[next] === stamp || !spanUsable(net, span, opts)) continue;
       const d = dist[site] + net.spans[span].latencyMs;
-      if (d < dist[next] && d <= limit) {
+      if ((seen[next] !== stamp || d < dist[next]) && d <= limit) {
+        seen[next] = stamp;
         dist[next] = d;
         prevSpan[next] = span;
         heap.push(d, next);
