@@ -57,11 +57,12 @@ describe.each(VIEWPORTS)('sign-in and overview at $width×$height', (viewport) =
     const context = await browser.newContext({ viewport: { width: viewport.width, height: viewport.height } });
     const page = await context.newPage();
     await signIn(page, 'tenant@demo.test');
+    const shown = await figure(page, 'slices');
     const me = await page.evaluate(async () => (await fetch('/api/me')).json());
     const own = demo.slices.filter((s) => s.tenant === me.tenantId).length;
     expect(own).toBeGreaterThan(0);
     expect(own).toBeLessThan(demo.slices.length);
-    expect(await figure(page, 'slices')).toBe(own);
+    expect(shown).toBe(own);
     await page.screenshot({ path: path.join(SHOTS, `overview-tenant-${viewport.name}.png`), fullPage: true });
     await context.close();
   });
