@@ -1,3 +1,4 @@
 export * from './auth';
 export * from './network';
 export * from './work';
+export * from './imports';

@@ -108,3 +108,11 @@ export const placements = pgTable(
     uniqueIndex('placements_one_current_key').on(t.sliceId).where(sql`${t.current}`),
   ],
 );
+
+/** One row (id 'network'): the network's name and map outline (GeoJSON Polygon/MultiPolygon). */
+export const networkMeta = pgTable('network_meta', {
+  id: text('id').primaryKey(),
+  name: text('name'),
+  outline: jsonb('outline'),
+  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+});
