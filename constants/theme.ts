@@ -59,4 +59,28 @@ export const WIDE_LAYOUT_MIN_WIDTH_PX = 900;
 /** Widest a content column grows on large screens, so lines stay readable. */
 export const CONTENT_MAX_WIDTH_PX = 1080;
 
+// ── Map tokens (components/map) ────────────────────────────────────────────────
+// Our own cartography: pale sand land on still water, spans from cool (idle) to warm (full).
+export const mapColors = {
+  sea: '#E1ECEE',
+  land: '#F5F1E6',
+  coast: '#C2B89E',
+  /** Span utilisation bands, lowest first; see components/map/colour-scale.ts for the thresholds. */
+  utilisation: ['#7DB8AE', '#2F8A8F', '#D9A23D', '#CC6A2C', '#9E2F3A'],
+  /** Elements without a figure (no capacity known). */
+  noFigure: '#A3B3B8',
+  siteStroke: '#0C2630',
+  label: '#16323C',
+  labelHalo: '#F5F1E6',
+  /** Highlight tones: a slice's placement, a maintenance window's elements, an alternative route. */
+  tonePlacement: '#3C3F9C',
+  toneWindow: '#B2386F',
+  toneAlternative: '#1D8757',
+  selection: '#D99A3D',
+} as const;
+
+/** Opacity of elements outside a highlight, so the highlighted ones read first. */
+export const MAP_DIMMED_OPACITY = 0.22;
+// ── end of map tokens ──────────────────────────────────────────────────────────
+
 export const theme = { colors, space, radii, fonts, type } as const;
