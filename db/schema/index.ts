@@ -2,3 +2,4 @@ export * from './auth';
 export * from './network';
 export * from './work';
 export * from './imports';
+export * from './policies';

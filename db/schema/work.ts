@@ -1,5 +1,7 @@
 // Maintenance windows, their elements, freezes, and the audit log.
-import { pgTable, text, integer, doublePrecision, jsonb, timestamp, bigserial, index } from 'drizzle-orm/pg-core';
+import {
+  pgTable, text, integer, doublePrecision, jsonb, timestamp, bigserial, index, customType,
+} from 'drizzle-orm/pg-core';
 import { users } from './auth';
 
 export const WINDOW_STATES = [
@@ -21,6 +23,8 @@ export const windows = pgTable(
     ownerId: text('owner_id').references(() => users.id, { onDelete: 'set null' }),
     /** optimistic locking: every update bumps it; a stale edit is refused */
     version: integer('version').notNull().default(1),
+    /** set when an admin booked the window inside a freeze: the written reason for overriding it */
+    freezeOverrideReason: text('freeze_override_reason'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
@@ -39,6 +43,31 @@ export const windowElements = pgTable(
   },
   (t) => [index('window_elements_window_idx').on(t.windowId), index('window_elements_element_idx').on(t.elementId)],
 );
+
+/** PostgreSQL bytea as a Node Buffer (drizzle has no built-in bytea column here). */
+const bytea = customType<{ data: Buffer; driverData: Buffer }>({ dataType: () => 'bytea' });
+
+/** The window's method-of-procedure document (one per window; a new upload replaces it). */
+export const windowDocuments = pgTable('window_documents', {
+  windowId: text('window_id').primaryKey().references(() => windows.id, { onDelete: 'cascade' }),
+  fileName: text('file_name').notNull(),
+  mime: text('mime').notNull(),
+  sizeBytes: integer('size_bytes').notNull(),
+  content: bytea('content').notNull(),
+  uploadedBy: text('uploaded_by').references(() => users.id, { onDelete: 'set null' }),
+  uploadedAt: timestamp('uploaded_at', { withTimezone: true }).notNull().defaultNow(),
+});
+
+/**
+ * The stored impact of a window, computed for one version of it; an edit of its times or elements
+ * deletes the row (DESIGN §3: the impact no longer holds).
+ */
+export const windowImpacts = pgTable('window_impacts', {
+  windowId: text('window_id').primaryKey().references(() => windows.id, { onDelete: 'cascade' }),
+  computedAt: timestamp('computed_at', { withTimezone: true }).notNull().defaultNow(),
+  windowVersion: integer('window_version').notNull(),
+  impact: jsonb('impact').notNull(),
+});
 
 export const freezes = pgTable('freezes', {
   id: text('id').primaryKey(),
