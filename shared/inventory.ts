@@ -1,0 +1,258 @@
+// Inventory API contract: list queries, list envelopes, and site/span/tenant/slice rows and details, plus the map.
+import { z } from 'zod';
+import { outlineSchema, SITE_KINDS } from './scenario';
+
+export const MAX_PAGE_SIZE = 200;
+export const DEFAULT_PAGE_SIZE = 50;
+export const SORT_ORDERS = ['asc', 'desc'] as const;
+
+/** Query-string booleans: only the words "true"/"false" (and 1/0), never JavaScript truthiness. */
+const queryBoolean = z.enum(['true', 'false', '1', '0']).transform((v) => v === 'true' || v === '1');
+
+/** Common list parameters; `sort` is checked per resource against its own columns. */
+function listQuery<const S extends readonly [string, ...string[]]>(sortKeys: S) {
+  return z.object({
+    page: z.coerce.number().int().min(1).default(1),
+    pageSize: z.coerce.number().int().min(1).max(MAX_PAGE_SIZE).default(DEFAULT_PAGE_SIZE),
+    sort: z.enum(sortKeys).default(sortKeys[0]),
+    order: z.enum(SORT_ORDERS).default('asc'),
+    /** case-insensitive search over ids and names */
+    q: z.string().trim().max(200).optional(),
+  });
+}
+
+/** Every list answers `{ items, total, page, pageSize }`; `total` counts all matches, not just this page. */
+export function listEnvelope<T extends z.ZodType>(item: T) {
+  return z.object({
+    items: z.array(item),
+    total: z.number().int().min(0),
+    page: z.number().int().min(1),
+    pageSize: z.number().int().min(1),
+  });
+}
+
+const ratio = z.number().min(0); // used ÷ capacity; above 1 when over-booked
+
+// ---- sites ---------------------------------------------------------------------------------------
+export const SITE_SORT_KEYS = ['id', 'name', 'kind', 'cpu', 'cpuUsed', 'utilisation', 'spanCount', 'sliceCount'] as const;
+export const siteListQuerySchema = listQuery(SITE_SORT_KEYS).extend({ kind: z.enum(SITE_KINDS).optional() });
+
+/**
+ * A site with its compute load. For a tenant user, `cpuUsed`, `utilisation` and `sliceCount` count
+ * its own slices only (other tenants' figures never leave the server).
+ */
+export const siteRowSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  kind: z.enum(SITE_KINDS),
+  lat: z.number(),
+  lon: z.number(),
+  cpu: z.number(),
+  cpuUsed: z.number(),
+  utilisation: ratio,
+  mtbfHours: z.number().nullable(),
+  mttrHours: z.number().nullable(),
+  spanCount: z.number().int(),
+  /** slices with a function hosted here */
+  sliceCount: z.number().int(),
+});
+export const siteListSchema = listEnvelope(siteRowSchema);
+
+// ---- spans ---------------------------------------------------------------------------------------
+export const SPAN_SORT_KEYS = [
+  'id', 'a', 'b', 'capacityGbps', 'lengthKm', 'latencyMs', 'usedGbps', 'utilisation', 'sliceCount',
+] as const;
+export const spanListQuerySchema = listQuery(SPAN_SORT_KEYS).extend({
+  /** spans with this site at either end */
+  site: z.string().min(1).optional(),
+  srlg: z.string().min(1).optional(),
+});
+
+/** A span with its bandwidth load; tenant users see their own slices' load only (as for sites). */
+export const spanRowSchema = z.object({
+  id: z.string(),
+  a: z.string(),
+  b: z.string(),
+  aName: z.string(),
+  bName: z.string(),
+  capacityGbps: z.number(),
+  lengthKm: z.number(),
+  /** as given, or derived from length at the fibre planning value */
+  latencyMs: z.number(),
+  latencyDerived: z.boolean(),
+  mtbfHours: z.number().nullable(),
+  mttrHours: z.number().nullable(),
+  srlg: z.array(z.string()),
+  /** Σ bandwidth of the ties routed over it (both directions share the capacity) */
+  usedGbps: z.number(),
+  utilisation: ratio,
+  sliceCount: z.number().int(),
+});
+export const spanListSchema = listEnvelope(spanRowSchema);
+
+// ---- slices --------------------------------------------------------------------------------------
+export const SLICE_SORT_KEYS = [
+  'id', 'name', 'tenant', 'sst', 'priority', 'critical', 'functionCount', 'cpu', 'bandwidthGbps', 'revision',
+] as const;
+export const sliceListQuerySchema = listQuery(SLICE_SORT_KEYS).extend({
+  tenant: z.string().min(1).optional(),
+  sst: z.coerce.number().int().min(1).max(255).optional(),
+  priority: z.coerce.number().int().min(1).max(5).optional(),
+  critical: queryBoolean.optional(),
+});
+
+export const sliceRowSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  tenantId: z.string(),
+  tenantName: z.string(),
+  sst: z.number().int(),
+  /** 6 hex digits, or null for "no SD" */
+  sd: z.string().nullable(),
+  priority: z.number().int(),
+  critical: z.boolean(),
+  status: z.string(),
+  functionCount: z.number().int(),
+  tieCount: z.number().int(),
+  /** Σ vCPU of its functions */
+  cpu: z.number(),
+  /** Σ bandwidth of its ties */
+  bandwidthGbps: z.number(),
+  /** revision of the current placement; null when it has none */
+  revision: z.number().int().nullable(),
+});
+export const sliceListSchema = listEnvelope(sliceRowSchema);
+
+// ---- tenants -------------------------------------------------------------------------------------
+export const TENANT_SORT_KEYS = ['id', 'name', 'noticeDays', 'sliceCount', 'criticalSliceCount'] as const;
+export const tenantListQuerySchema = listQuery(TENANT_SORT_KEYS);
+
+export const tenantRowSchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  noticeDays: z.number().int(),
+  contactCount: z.number().int(),
+  sliceCount: z.number().int(),
+  criticalSliceCount: z.number().int(),
+});
+export const tenantListSchema = listEnvelope(tenantRowSchema);
+
+export const tenantDetailSchema = z.object({
+  tenant: tenantRowSchema,
+  contacts: z.array(z.object({ name: z.string(), email: z.string() })),
+  slices: z.array(sliceRowSchema),
+});
+
+// ---- details -------------------------------------------------------------------------------------
+/** A slice's use of one element, for "what uses this" panels. */
+export const sliceUseSchema = z.object({
+  sliceId: z.string(),
+  sliceName: z.string(),
+  tenantId: z.string(),
+  tenantName: z.string(),
+  critical: z.boolean(),
+  /** functions hosted at the site (site detail, hosted list) */
+  functions: z.array(z.object({ id: z.string(), name: z.string().nullable(), cpu: z.number() })),
+  /** ties routed over the span or through the site */
+  ties: z.array(z.object({ id: z.string(), bandwidthGbps: z.number() })),
+});
+export type SliceUse = z.infer<typeof sliceUseSchema>;
+
+export const siteDetailSchema = z.object({
+  site: siteRowSchema,
+  spans: z.array(spanRowSchema),
+  /** slices with functions on this site */
+  hosted: z.array(sliceUseSchema),
+  /** slices whose ties pass through this site without a function there (or end here on a tie's path) */
+  transit: z.array(sliceUseSchema),
+});
+
+export const spanDetailSchema = z.object({
+  span: spanRowSchema,
+  slices: z.array(sliceUseSchema),
+});
+
+const anchorViewSchema = z.union([
+  z.object({ site: z.string() }),
+  z.object({ lat: z.number(), lon: z.number(), radiusKm: z.number() }),
+]);
+
+export const sliceFunctionViewSchema = z.object({
+  id: z.string(),
+  name: z.string().nullable(),
+  cpu: z.number(),
+  anchor: anchorViewSchema.nullable(),
+  moveCost: z.number(),
+  fixed: z.boolean(),
+  /** current site; null when the slice has no current placement */
+  siteId: z.string().nullable(),
+  siteName: z.string().nullable(),
+});
+
+export const sliceTieViewSchema = z.object({
+  id: z.string(),
+  from: z.string(),
+  to: z.string(),
+  bandwidthGbps: z.number(),
+  maxLatencyMs: z.number(),
+  minAvailability: z.number().nullable(),
+  path: z.object({
+    /** span ids in order from the `from` function's site */
+    spans: z.array(z.string()),
+    /** site ids visited, from the `from` function's site to the `to` function's site */
+    sites: z.array(z.string()),
+    latencyMs: z.number(),
+    /** series availability of the spans and sites on the path */
+    availability: z.number(),
+  }).nullable(),
+});
+
+export const placementRevisionSchema = z.object({
+  revision: z.number().int(),
+  current: z.boolean(),
+  reason: z.string(),
+  createdAt: z.string(),
+  sites: z.record(z.string(), z.string()),
+  paths: z.record(z.string(), z.array(z.string())),
+});
+
+export const sliceDetailSchema = z.object({
+  slice: sliceRowSchema,
+  functions: z.array(sliceFunctionViewSchema),
+  ties: z.array(sliceTieViewSchema),
+  /** every placement revision, newest first */
+  history: z.array(placementRevisionSchema),
+});
+
+// ---- map -----------------------------------------------------------------------------------------
+export const networkMapSchema = z.object({
+  name: z.string().nullable(),
+  outline: outlineSchema.nullable(),
+  sites: z.array(z.object({
+    id: z.string(), name: z.string(), kind: z.enum(SITE_KINDS), lat: z.number(), lon: z.number(), cpuUtilisation: ratio,
+  })),
+  spans: z.array(z.object({
+    id: z.string(), a: z.string(), b: z.string(), capacityGbps: z.number(), utilisation: ratio,
+  })),
+});
+
+export type SiteListQuery = z.infer<typeof siteListQuerySchema>;
+export type SpanListQuery = z.infer<typeof spanListQuerySchema>;
+export type SliceListQuery = z.infer<typeof sliceListQuerySchema>;
+export type TenantListQuery = z.infer<typeof tenantListQuerySchema>;
+export type SiteRow = z.infer<typeof siteRowSchema>;
+export type SpanRow = z.infer<typeof spanRowSchema>;
+export type SliceRow = z.infer<typeof sliceRowSchema>;
+export type TenantRow = z.infer<typeof tenantRowSchema>;
+export type SiteList = z.infer<typeof siteListSchema>;
+export type SpanList = z.infer<typeof spanListSchema>;
+export type SliceList = z.infer<typeof sliceListSchema>;
+export type TenantList = z.infer<typeof tenantListSchema>;
+export type SiteDetail = z.infer<typeof siteDetailSchema>;
+export type SpanDetail = z.infer<typeof spanDetailSchema>;
+export type SliceDetail = z.infer<typeof sliceDetailSchema>;
+export type TenantDetail = z.infer<typeof tenantDetailSchema>;
+export type SliceFunctionView = z.infer<typeof sliceFunctionViewSchema>;
+export type SliceTieView = z.infer<typeof sliceTieViewSchema>;
+export type PlacementRevision = z.infer<typeof placementRevisionSchema>;
+export type NetworkMap = z.infer<typeof networkMapSchema>;
