@@ -83,4 +83,42 @@ export const mapColors = {
 export const MAP_DIMMED_OPACITY = 0.22;
 // ── end of map tokens ──────────────────────────────────────────────────────────
 
+// ── Calendar tokens (components/calendar, components/freezes) ─────────────────
+// One tone per window status, in lifecycle order: cool while being worked out, green once cleared,
+// violet while work is underway, muted once over; red-brown for a return or roll-back.
+export const calendarColors = {
+  status: {
+    draft: '#8DA4AC',
+    assessed: '#4A86B5',
+    planned: '#3F5FAE',
+    'in-review': '#B8892B',
+    cleared: '#2E8A66',
+    returned: '#C0643B',
+    notified: '#1D7F8E',
+    underway: '#7E45A6',
+    done: '#7F948F',
+    'rolled-back': '#9E2F3A',
+    withdrawn: '#C2CDCF',
+  },
+  /** Freeze shading: a cool lavender wash with darker diagonal hatching, unlike any status tone. */
+  freezeWash: '#ECE6F5',
+  freezeHatch: '#B7A6D3',
+  freezeInk: '#4F3F78',
+  /** Today: a ring in buoy yellow, kept apart from the selection fill. */
+  todayRing: '#D99A3D',
+  selectedFill: '#0D5C6B',
+  onSelected: '#FFFFFF',
+  /** Days outside the shown month. */
+  outsideMonth: '#A9BABF',
+  /** Badges on windows: conflicts (danger) and a critical slice touched (caution). */
+  conflict: '#A63A2B',
+  conflictSoft: '#F6E0DC',
+  critical: '#8A5A00',
+  criticalSoft: '#F7EBD3',
+} as const;
+
+/** Most window bars a day cell draws; more show as "+n". */
+export const CALENDAR_MAX_LANES = 3;
+// ── end of calendar tokens ─────────────────────────────────────────────────────
+
 export const theme = { colors, space, radii, fonts, type } as const;
