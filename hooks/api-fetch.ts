@@ -1,5 +1,5 @@
 // The one door to the API: same-origin fetch with the session cookie, replies parsed by the shared zod schemas.
-import type { z } from 'zod';
+import { z } from 'zod';
 import { apiErrorSchema } from '@/shared/api';
 
 /** Codes the app itself gives to failures that never got a well-formed answer from the server. */
@@ -9,12 +9,15 @@ export const CLIENT_ERROR_CODES = { network: 'NETWORK_ERROR', badResponse: 'BAD_
 export class ApiError extends Error {
   readonly status: number;
   readonly code: string;
+  /** Per-field problems the server listed (VALIDATION_FAILED), located by JSON paths such as `$.endsAt`. */
+  readonly details: readonly { path: string; message: string }[];
 
-  constructor(status: number, code: string, message: string) {
+  constructor(status: number, code: string, message: string, details: readonly { path: string; message: string }[] = []) {
     super(message);
     this.name = 'ApiError';
     this.status = status;
     this.code = code;
+    this.details = details;
   }
 }
 
@@ -35,9 +38,15 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
+// Optional beside the contract's { code, message }: forms place these next to their fields.
+const errorDetailsSchema = z.object({ error: z.object({ details: z.array(z.object({ path: z.string(), message: z.string() })) }) });
+
 function errorFromReply(status: number, body: unknown): ApiError {
   const parsed = apiErrorSchema.safeParse(body);
-  if (parsed.success) return new ApiError(status, parsed.data.error.code, parsed.data.error.message);
+  const details = errorDetailsSchema.safeParse(body);
+  if (parsed.success) {
+    return new ApiError(status, parsed.data.error.code, parsed.data.error.message, details.success ? details.data.error.details : []);
+  }
   return new ApiError(status, CLIENT_ERROR_CODES.badResponse, `The server answered ${status} without an error body.`);
 }
 
