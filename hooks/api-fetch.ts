@@ -60,7 +60,8 @@ export async function apiFetch<S extends z.ZodType>(path: string, schema: S, ini
     response = await fetch(`${API_BASE_URL}${path}`, {
       ...init,
       credentials: 'include',
-      headers: { Accept: 'application/json', ...(init.body ? { 'Content-Type': 'application/json' } : {}), ...init.headers },
+      // Only string bodies are JSON here; FormData (uploads) must let fetch write its own multipart boundary.
+      headers: { Accept: 'application/json', ...(typeof init.body === 'string' ? { 'Content-Type': 'application/json' } : {}), ...init.headers },
     });
   } catch {
     throw new ApiError(0, CLIENT_ERROR_CODES.network, 'Could not reach the Slackwater server. Check your connection and try again.');
