@@ -12,7 +12,8 @@ export type AuditEntry = {
   at: Date;
 };
 
-export async function insertAuditEntry(db: Db, entry: AuditEntry): Promise<void> {
+/** Takes the pool or an open transaction (`Pick` keeps both assignable), so a change and its row commit together. */
+export async function insertAuditEntry(db: Pick<Db, 'insert'>, entry: AuditEntry): Promise<void> {
   await db.insert(auditLog).values({
     actorId: entry.actorId,
     action: entry.action,
