@@ -18,6 +18,8 @@ const envSchema = z.object({
   JSON_BODY_LIMIT: z.string().regex(/^\d+(b|kb|mb)$/i, 'JSON_BODY_LIMIT looks like 2mb or 500kb').default('2mb'),
   SIGN_IN_LIMIT_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60 * 1000),
   SIGN_IN_LIMIT_MAX: z.coerce.number().int().min(1).default(10),
+  /** Largest file POST /api/imports accepts, in bytes (default 5 MB). */
+  IMPORT_MAX_BYTES: z.coerce.number().int().min(1024).default(5 * 1024 * 1024),
 });
 
 export type ServerConfig = {
@@ -31,6 +33,7 @@ export type ServerConfig = {
   allowedOrigins: string[];
   jsonBodyLimit: string;
   signInLimit: { windowMs: number; max: number };
+  importMaxBytes: number;
 };
 
 export class ConfigError extends Error {}
@@ -54,5 +57,6 @@ export function parseEnv(source: Record<string, string | undefined> = process.en
     allowedOrigins: env.ALLOWED_ORIGINS.split(',').map((o) => o.trim()).filter(Boolean),
     jsonBodyLimit: env.JSON_BODY_LIMIT,
     signInLimit: { windowMs: env.SIGN_IN_LIMIT_WINDOW_MS, max: env.SIGN_IN_LIMIT_MAX },
+    importMaxBytes: env.IMPORT_MAX_BYTES,
   };
 }
