@@ -1,7 +1,7 @@
 // The areas of the signed-in app. List only areas that work; add each new one here when its screens land.
 import type { ComponentType } from 'react';
 import type { Href } from 'expo-router';
-import { OverviewIcon } from '@/components/icons';
+import { CalendarIcon, FreezeIcon, MapIcon, OverviewIcon } from '@/components/icons';
 
 export type NavArea = {
   key: string;
@@ -14,4 +14,14 @@ export type NavArea = {
 
 export const NAV_AREAS: readonly NavArea[] = [
   { key: 'overview', label: 'Overview', href: '/', matches: (pathname) => pathname === '/', Icon: OverviewIcon },
+  { key: 'map', label: 'Map', href: '/map', matches: (pathname) => pathname.startsWith('/map'), Icon: MapIcon },
+  {
+    key: 'calendar',
+    label: 'Calendar',
+    href: '/calendar',
+    // A window's own pages are reached from the calendar, so they keep it highlighted.
+    matches: (pathname) => pathname.startsWith('/calendar') || pathname.startsWith('/windows'),
+    Icon: CalendarIcon,
+  },
+  { key: 'freezes', label: 'Freezes', href: '/freezes', matches: (pathname) => pathname.startsWith('/freezes'), Icon: FreezeIcon },
 ];

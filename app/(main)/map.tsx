@@ -1,0 +1,14 @@
+// Map screen: the whole network (or a tenant's part of it) from GET /api/network/map.
+import { useNetworkMapQuery } from '@/hooks/queries/network-map';
+import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states';
+import { MapScreenView } from '@/components/map/map-screen-view';
+
+export default function MapScreen() {
+  const map = useNetworkMapQuery();
+  if (map.isError) return <ErrorState message={map.error.message} onRetry={() => map.refetch()} />;
+  if (!map.data) return <LoadingState label="Loading the map…" />;
+  if (map.data.sites.length === 0) {
+    return <EmptyState title="No network to show yet" hint="Import a scenario or a topology to see its sites and spans here." />;
+  }
+  return <MapScreenView data={map.data} />;
+}

@@ -1,0 +1,107 @@
+// The panel beside (wide) or under (phone) the map: the selected site or span, its load, and the slices that use it.
+import type { ReactNode } from 'react';
+import { ActivityIndicator, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+import { useSiteQuery } from '@/hooks/queries/sites';
+import { useSpanQuery } from '@/hooks/queries/spans';
+import { formatUtilisation } from '@/components/map/colour-scale';
+import { MapSliceUses } from '@/components/map/map-slice-uses';
+import type { MapSelection } from '@/components/map/map-types';
+import { KIND_LABELS } from '@/components/map/site-glyphs';
+import { colors, space, type } from '@/constants/theme';
+
+type Props = { selection: MapSelection; onClose: () => void; onOpenSlice?: (sliceId: string) => void };
+
+function Fact({ label, value }: { label: string; value: string }) {
+  return (
+    <View style={styles.fact}>
+      <Text style={styles.factLabel}>{label}</Text>
+      <Text style={styles.factValue}>{value}</Text>
+    </View>
+  );
+}
+
+function Frame({ title, subtitle, onClose, children }: { title: string; subtitle: string; onClose: () => void; children: ReactNode }) {
+  return (
+    <View style={styles.panel} testID="map-selection">
+      <View style={styles.head}>
+        <View style={styles.headText}>
+          <Text style={styles.subtitle}>{subtitle}</Text>
+          <Text style={styles.title} numberOfLines={2}>{title}</Text>
+        </View>
+        <Pressable onPress={onClose} role="button" accessibilityLabel="Close" testID="map-selection-close" style={styles.close}>
+          <Text style={styles.closeText}>×</Text>
+        </Pressable>
+      </View>
+      <ScrollView contentContainerStyle={styles.body}>{children}</ScrollView>
+    </View>
+  );
+}
+
+function Waiting({ error, onRetry }: { error: Error | null; onRetry: () => void }) {
+  if (!error) return <ActivityIndicator color={colors.primary} style={styles.waiting} />;
+  return (
+    <Pressable onPress={onRetry} role="button" style={styles.waiting}>
+      <Text style={styles.error}>{error.message} Tap to try again.</Text>
+    </Pressable>
+  );
+}
+
+function SiteSelection({ id, onClose, onOpenSlice }: { id: string } & Omit<Props, 'selection'>) {
+  const query = useSiteQuery(id);
+  const d = query.data;
+  return (
+    <Frame title={d?.site.name ?? id} subtitle={d ? `${KIND_LABELS[d.site.kind]} site · ${id}` : 'Site'} onClose={onClose}>
+      {!d ? <Waiting error={query.error} onRetry={() => query.refetch()} /> : (
+        <>
+          <View style={styles.facts}>
+            <Fact label="Compute used" value={`${formatUtilisation(d.site.utilisation)} of ${d.site.cpu} vCPU`} />
+            <Fact label="Spans" value={String(d.spans.length)} />
+          </View>
+          <MapSliceUses title="Hosted here" uses={d.hosted} emptyText="No slice has a function here." onOpenSlice={onOpenSlice} />
+          <MapSliceUses title="Passing through" uses={d.transit} emptyText="No slice's traffic passes through." onOpenSlice={onOpenSlice} />
+        </>
+      )}
+    </Frame>
+  );
+}
+
+function SpanSelection({ id, onClose, onOpenSlice }: { id: string } & Omit<Props, 'selection'>) {
+  const query = useSpanQuery(id);
+  const d = query.data;
+  return (
+    <Frame title={d ? `${d.span.aName} — ${d.span.bName}` : id} subtitle={`Span · ${id}`} onClose={onClose}>
+      {!d ? <Waiting error={query.error} onRetry={() => query.refetch()} /> : (
+        <>
+          <View style={styles.facts}>
+            <Fact label="Bandwidth used" value={`${formatUtilisation(d.span.utilisation)} of ${d.span.capacityGbps} Gbit/s`} />
+            <Fact label="Length" value={`${d.span.lengthKm} km · ${d.span.latencyMs.toFixed(2)} ms`} />
+          </View>
+          <MapSliceUses title="Slices over this span" uses={d.slices} emptyText="No slice's traffic uses this span." onOpenSlice={onOpenSlice} />
+        </>
+      )}
+    </Frame>
+  );
+}
+
+export function MapSelectionPanel({ selection, onClose, onOpenSlice }: Props) {
+  return selection.kind === 'site'
+    ? <SiteSelection key={selection.id} id={selection.id} onClose={onClose} onOpenSlice={onOpenSlice} />
+    : <SpanSelection key={selection.id} id={selection.id} onClose={onClose} onOpenSlice={onOpenSlice} />;
+}
+
+const styles = StyleSheet.create({
+  panel: { flex: 1, backgroundColor: colors.surface },
+  head: { flexDirection: 'row', alignItems: 'flex-start', gap: space.sm, padding: space.md, borderBottomWidth: 1, borderBottomColor: colors.border },
+  headText: { flex: 1, gap: space.xxs },
+  subtitle: { ...type.caption, color: colors.inkMuted },
+  title: { ...type.heading, color: colors.ink },
+  close: { width: 44, height: 44, alignItems: 'center', justifyContent: 'center', marginTop: -space.sm, marginRight: -space.sm },
+  closeText: { ...type.title, color: colors.inkMuted },
+  body: { padding: space.md, gap: space.lg },
+  facts: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
+  fact: { gap: space.xxs },
+  factLabel: { ...type.caption, color: colors.inkMuted },
+  factValue: { ...type.bodyStrong, color: colors.ink },
+  waiting: { padding: space.lg },
+  error: { ...type.body, color: colors.danger },
+});

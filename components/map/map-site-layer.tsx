@@ -1,0 +1,73 @@
+// Site glyphs by kind (filled by compute load), tone halos, name labels for the bigger sites, and 44 px tap circles.
+import { Circle, G, Path, Text as SvgText } from 'react-native-svg';
+import { formatUtilisation, utilisationColour } from '@/components/map/colour-scale';
+import type { PlacedSite } from '@/components/map/map-geometry';
+import type { EmphasisLookup } from '@/components/map/map-highlight';
+import { GLYPH_RADIUS_PX, glyphPath, KIND_LABELS, KIND_ORDER } from '@/components/map/site-glyphs';
+import { TONE_COLOURS } from '@/components/map/map-tones';
+import { fonts, MAP_DIMMED_OPACITY, mapColors } from '@/constants/theme';
+
+/** Radius of the invisible tap circle: 44 px across, the smallest comfortable finger target. */
+export const SITE_HIT_RADIUS_PX = 22;
+
+type Props = {
+  sites: readonly PlacedSite[];
+  emphasis: EmphasisLookup;
+  selectedId: string | null;
+  compact: boolean;
+  /** How many kinds, biggest first, carry name labels (0 = none). */
+  labelledKinds: number;
+  onPress: (id: string) => void;
+};
+
+// Smallest sites last, so a cell site beside a core site stays tappable.
+const drawOrder = (a: PlacedSite, b: PlacedSite) => KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind);
+
+export function MapSiteLayer({ sites, emphasis, selectedId, compact, labelledKinds, onPress }: Props) {
+  const ordered = [...sites].sort(drawOrder);
+  return (
+    <G>
+      {ordered.map((site) => {
+        const { dimmed, tone } = emphasis.site(site.id);
+        const r = GLYPH_RADIUS_PX[site.kind] * (compact ? 0.8 : 1) * (tone ? 1.2 : 1);
+        const selected = selectedId === site.id;
+        const labelled = selected || (!dimmed && KIND_ORDER.indexOf(site.kind) < labelledKinds);
+        return (
+          <G
+            key={site.id}
+            testID={`map-site-${site.id}`}
+            opacity={dimmed ? MAP_DIMMED_OPACITY : 1}
+            onPress={() => onPress(site.id)}
+            accessibilityLabel={`${KIND_LABELS[site.kind]} site ${site.name}, compute ${formatUtilisation(site.cpuUtilisation)} used`}
+          >
+            {selected ? <Circle cx={site.x} cy={site.y} r={r + 6} fill={mapColors.selection} /> : null}
+            {tone ? <Circle cx={site.x} cy={site.y} r={r + 5} fill={TONE_COLOURS[tone]} fillOpacity={0.4} /> : null}
+            <Path
+              d={glyphPath(site.kind, site.x, site.y, r)}
+              fill={utilisationColour(site.cpuUtilisation)}
+              stroke={tone ? TONE_COLOURS[tone] : mapColors.siteStroke}
+              strokeWidth={tone ? 2 : 1.2}
+            />
+            {labelled ? <SiteLabel x={site.x + r + 4} y={site.y + 4} name={site.name} /> : null}
+            <Circle cx={site.x} cy={site.y} r={SITE_HIT_RADIUS_PX} fill="transparent" />
+          </G>
+        );
+      })}
+    </G>
+  );
+}
+
+// A halo of the land colour under the name keeps it readable across spans and coastline.
+function SiteLabel({ x, y, name }: { x: number; y: number; name: string }) {
+  const common = { x, y, fontSize: 12, fontFamily: fonts.medium };
+  return (
+    <G>
+      <SvgText {...common} stroke={mapColors.labelHalo} strokeWidth={3} strokeLinejoin="round" fill={mapColors.labelHalo}>
+        {name}
+      </SvgText>
+      <SvgText {...common} fill={mapColors.label}>
+        {name}
+      </SvgText>
+    </G>
+  );
+}

@@ -1,0 +1,99 @@
+// The network map: land, spans coloured by load, sites by kind; tap to select, highlight a placement or a window,
+// pan and zoom (drag, pinch, wheel on the web, and buttons everywhere).
+import { useCallback, useMemo, useRef, useState } from 'react';
+import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
+import Svg, { Path, Rect } from 'react-native-svg';
+import { fitNetwork, placeNetwork } from '@/components/map/map-geometry';
+import { emphasisFor, type HighlightTone, type MapHighlight } from '@/components/map/map-highlight';
+import { MapControls } from '@/components/map/map-controls';
+import { MapLegend } from '@/components/map/map-legend';
+import { MapSiteLayer } from '@/components/map/map-site-layer';
+import { MapSpanLayer } from '@/components/map/map-span-layer';
+import type { MapSelection, NetworkMapData } from '@/components/map/map-types';
+import { HOME_VIEW, labelledKindCount, zoomAround, ZOOM_STEP, type MapView } from '@/components/map/map-view';
+import type { Point } from '@/components/map/projection';
+import { useMapGestures } from '@/components/map/use-map-gestures';
+import { useWheelZoom } from '@/components/map/use-wheel-zoom';
+import { colors, mapColors, radii } from '@/constants/theme';
+
+export type NetworkMapProps = {
+  data: NetworkMapData;
+  /** Drawn bold in its tone (default `placement`); everything else is dimmed. */
+  highlight?: MapHighlight;
+  /** A second set in its own tone (default `window`), e.g. a window's elements beside a slice's new route. */
+  secondaryHighlight?: MapHighlight;
+  selected?: MapSelection | null;
+  onSelect?: (selection: MapSelection) => void;
+  /** A smaller map for detail screens: fixed height, smaller glyphs, no labels, short legend. */
+  compact?: boolean;
+};
+
+// Until the first layout arrives (and in tests, where none does) the map draws at a phone-like size.
+const FALLBACK_SIZE = { widthPx: 360, heightPx: 320 };
+const COMPACT_HEIGHT_PX = 260;
+/** Room around the network for glyphs and labels at the edges. */
+const FIT_PADDING_PX = 28;
+
+function usedTones(...highlights: (MapHighlight | undefined)[]): HighlightTone[] {
+  const tones = highlights.map((h, i) => (h && ((h.sites?.length ?? 0) + (h.spans?.length ?? 0) > 0) ? (h.tone ?? (i === 0 ? 'placement' : 'window')) : null));
+  return [...new Set(tones.filter((t): t is HighlightTone => t !== null))];
+}
+
+export function NetworkMap({ data, highlight, secondaryHighlight, selected = null, onSelect, compact = false }: NetworkMapProps) {
+  const [size, setSize] = useState(FALLBACK_SIZE);
+  const [view, setView] = useState<MapView>(HOME_VIEW);
+  const surface = useRef<View>(null);
+  const gestures = useMapGestures({ view, size, setView });
+  useWheelZoom(surface, useCallback((factor: number, focus: Point) => setView((v) => zoomAround(v, factor, focus)), []));
+
+  const projection = useMemo(() => fitNetwork(data, size, FIT_PADDING_PX), [data, size]);
+  const geometry = useMemo(() => placeNetwork(data, projection, view), [data, projection, view]);
+  const emphasis = useMemo(() => emphasisFor(highlight, secondaryHighlight), [highlight, secondaryHighlight]);
+  // Wide maps have room for more names at the same zoom.
+  const labelledKinds = compact ? 0 : labelledKindCount(view.zoom * Math.max(1, size.widthPx / 700));
+
+  const onLayout = (e: LayoutChangeEvent) => {
+    const { width, height } = e.nativeEvent.layout;
+    if (width > 0 && height > 0) setSize({ widthPx: width, heightPx: height });
+  };
+  const select = (kind: MapSelection['kind']) => (id: string) => {
+    if (gestures.takeDragged()) return;
+    onSelect?.({ kind, id });
+  };
+  const centre = { x: size.widthPx / 2, y: size.heightPx / 2 };
+
+  return (
+    <View style={[styles.frame, compact && styles.compactFrame]} testID="network-map">
+      <View ref={surface} style={styles.surface} onLayout={onLayout} {...gestures.panHandlers}>
+        <Svg width={size.widthPx} height={size.heightPx} accessibilityLabel={`Map of ${data.name ?? "the network"}`}>
+          <Rect x={0} y={0} width={size.widthPx} height={size.heightPx} fill={mapColors.sea} />
+          {geometry.outlinePath ? (
+            <Path d={geometry.outlinePath} fill={mapColors.land} stroke={mapColors.coast} strokeWidth={1} fillRule="evenodd" testID="map-outline" />
+          ) : null}
+          <MapSpanLayer spans={geometry.spans} emphasis={emphasis} selectedId={selected?.kind === 'span' ? selected.id : null} compact={compact} onPress={select('span')} />
+          <MapSiteLayer
+            sites={geometry.sites}
+            emphasis={emphasis}
+            selectedId={selected?.kind === 'site' ? selected.id : null}
+            compact={compact}
+            labelledKinds={labelledKinds}
+            onPress={select('site')}
+          />
+        </Svg>
+        <MapControls
+          canZoomOut={view.zoom > 1}
+          onZoomIn={() => setView((v) => zoomAround(v, ZOOM_STEP, centre))}
+          onZoomOut={() => setView((v) => zoomAround(v, 1 / ZOOM_STEP, centre))}
+          onReset={() => setView(HOME_VIEW)}
+        />
+      </View>
+      <MapLegend tones={usedTones(highlight, secondaryHighlight)} compact={compact} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  frame: { flex: 1, backgroundColor: colors.surface, borderRadius: radii.md, borderWidth: 1, borderColor: colors.border, overflow: 'hidden' },
+  compactFrame: { flex: 0 },
+  surface: { flex: 1, minHeight: COMPACT_HEIGHT_PX, overflow: 'hidden', backgroundColor: mapColors.sea, userSelect: 'none', cursor: 'grab' } as object,
+});
