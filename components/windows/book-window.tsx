@@ -1,0 +1,44 @@
+// Booking a new window: sends the form, then the MOP if one was chosen, and hands the new window's id on.
+import type { Me } from '@/shared/api';
+import { useBookingPolicies, useWindowCreateMutation, useWindowMopUploadMutation } from '@/hooks/queries/windows';
+import { WindowForm, type WindowSubmission } from '@/components/windows/window-form';
+import { EMPTY_FORM } from '@/components/windows/window-form-state';
+
+export type SavedOutcome = { id: string; reverted: boolean; conflictCount: number; mopError: string | null };
+
+type Props = { me: Me; timeZone: string; onSaved: (outcome: SavedOutcome) => void; onCancel: () => void };
+
+export function BookWindow({ me, timeZone, onSaved, onCancel }: Props) {
+  const policy = useBookingPolicies();
+  const create = useWindowCreateMutation();
+  const upload = useWindowMopUploadMutation();
+
+  const save = async ({ output, freezeOverrideReason, mop }: WindowSubmission) => {
+    let saved;
+    try {
+      saved = await create.mutateAsync({ ...output, freezeOverrideReason });
+    } catch {
+      return; // The form shows create.error beside its fields; every input stays.
+    }
+    let mopError: string | null = null;
+    if (mop) {
+      // The window is booked either way; a failed upload is reported on its page, where Edit can retry it.
+      mopError = await upload.mutateAsync({ id: saved.window.id, file: mop }).then(() => null, (e: Error) => e.message);
+    }
+    onSaved({ id: saved.window.id, reverted: false, conflictCount: saved.conflictCount, mopError });
+  };
+
+  return (
+    <WindowForm
+      initialValues={EMPTY_FORM}
+      timeZone={timeZone}
+      policy={policy}
+      submitLabel="Book window"
+      submitting={create.isPending || upload.isPending}
+      saveError={create.error}
+      canOverrideFreeze={me.roles.includes('admin')}
+      onSubmit={(submission) => void save(submission)}
+      onCancel={onCancel}
+    />
+  );
+}

@@ -1,0 +1,51 @@
+// The actions a person may take on a window now (by role and state); withdrawing asks once more.
+import { useState } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
+import { Button } from '@/components/button';
+import type { WindowActions } from '@/components/windows/lifecycle';
+import { colors, radii, space, type } from '@/constants/theme';
+
+type Props = {
+  actions: WindowActions;
+  onEdit: () => void;
+  onAssess: () => void;
+  onOpenImpact: () => void;
+  onWithdraw: () => void;
+  assessing: boolean;
+  withdrawing: boolean;
+  impactStored: boolean;
+};
+
+export function WindowActionsBar(props: Props) {
+  const { actions } = props;
+  const [confirming, setConfirming] = useState(false);
+  if (confirming) {
+    return (
+      <View style={styles.confirm} testID="window-withdraw-confirm">
+        <Text style={styles.body}>Withdraw this window? It stays on record but no longer takes anything out.</Text>
+        <View style={styles.row}>
+          <Button label="Withdraw window" onPress={props.onWithdraw} busy={props.withdrawing} testID="window-withdraw-yes" />
+          <Button label="Keep it" variant="quiet" onPress={() => setConfirming(false)} disabled={props.withdrawing} />
+        </View>
+      </View>
+    );
+  }
+  return (
+    <View style={styles.row}>
+      {actions.assess ? (
+        <Button label={props.impactStored ? 'Assess again' : 'Assess impact'} onPress={props.onAssess} busy={props.assessing} testID="window-assess" />
+      ) : null}
+      {actions.viewImpact && props.impactStored ? (
+        <Button label="Impact review" variant={actions.assess ? 'quiet' : 'primary'} onPress={props.onOpenImpact} testID="window-open-impact" />
+      ) : null}
+      {actions.edit ? <Button label="Edit" variant="quiet" onPress={props.onEdit} testID="window-edit" /> : null}
+      {actions.withdraw ? <Button label="Withdraw" variant="quiet" onPress={() => setConfirming(true)} testID="window-withdraw" /> : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  confirm: { gap: space.sm, padding: space.md, borderRadius: radii.md, backgroundColor: colors.surfaceSunken },
+  body: { ...type.body, color: colors.ink },
+});
