@@ -4,6 +4,9 @@ import { NetworkMap } from '@/components/map/network-map';
 import { MAP_DIMMED_OPACITY } from '@/constants/theme';
 import { demoMapData } from './map-demo-data';
 
+// Drawing 120+ svg elements under the native test renderer is slow on a shared machine.
+jest.setTimeout(30_000);
+
 const data = demoMapData();
 
 function opacityOf(testID: string): number {
