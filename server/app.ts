@@ -14,10 +14,17 @@ import { securityHeaders } from './http/security-headers';
 import { webApp } from './http/web-app';
 import { authRouter } from './routes/auth';
 import { healthRouter } from './routes/health';
+import { importsRouter } from './routes/imports';
 import { meRouter } from './routes/me';
 import { overviewRouter } from './routes/overview';
 import { scenariosRouter } from './routes/scenarios';
 import { usersRouter } from './routes/users';
+import { exportRouter } from './routes/export';
+import { networkRouter } from './routes/network';
+import { sitesRouter } from './routes/sites';
+import { slicesRouter } from './routes/slices';
+import { spansRouter } from './routes/spans';
+import { tenantsRouter } from './routes/tenants';
 
 export type AppDeps = {
   db: Db;
@@ -43,6 +50,13 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   api.use('/overview', overviewRouter(deps));
   api.use('/users', usersRouter(deps));
   api.use('/scenarios', scenariosRouter());
+  api.use('/imports', importsRouter(deps));
+  api.use('/sites', sitesRouter(deps));
+  api.use('/spans', spansRouter(deps));
+  api.use('/tenants', tenantsRouter(deps));
+  api.use('/slices', slicesRouter(deps));
+  api.use('/network', networkRouter(deps));
+  api.use('/export', exportRouter(deps));
   api.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.originalUrl.split('?')[0])));
   return api;
 }

@@ -1,0 +1,75 @@
+// Applies a previewed import in one transaction, or refuses / fails leaving the inventory exactly as it was.
+import { eq, sql } from 'drizzle-orm';
+import type { Db } from '../../db/client';
+import { imports } from '../../db/schema';
+import type { Tx } from '../../db/seed/tx';
+import type { ImportApplied, ImportPreview } from '../../shared/imports';
+import { AppError } from '../errors';
+import { insertAuditEntry } from '../queries/audit';
+import { loadScenario } from '../services/inventory/load-scenario';
+import { scenarioChecksum } from './canonical';
+import { diffScenarios } from './diff';
+import { ImportApplyFailedError, ImportNotFoundError, ImportRefusedError } from './errors';
+import type { ImportPayload } from './preview';
+import { getImportRow, type ImportRow } from './import-records';
+import { writeTarget } from './write-target';
+
+/** Serialises applies across server processes: two imports computed against the same state cannot both land. */
+const APPLY_LOCK_KEY = 7_342_019;
+
+function refuseUnlessPending(row: ImportRow): ImportPayload {
+  if (row.status === 'applied') throw new ImportRefusedError('IMPORT_ALREADY_APPLIED', 409, 'This import has already been applied.');
+  if (row.status === 'superseded') throw new ImportRefusedError('IMPORT_STALE', 409, 'The data changed since this preview; upload the file again.');
+  if (row.status === 'failed') throw new ImportRefusedError('IMPORT_FAILED', 409, `This import failed earlier (${row.failureReason ?? 'no reason'}); upload the file again.`);
+  if (row.errorCount > 0 || !row.payload) {
+    throw new ImportRefusedError('IMPORT_HAS_ERRORS', 422, `The preview has ${row.errorCount} error(s); fix the file and upload it again.`);
+  }
+  return row.payload as ImportPayload;
+}
+
+type Outcome = { applied: ImportApplied } | { stale: true };
+
+async function applyInTx(tx: Tx, id: string, userId: string | null, now: Date): Promise<Outcome> {
+  await tx.execute(sql`select pg_advisory_xact_lock(${APPLY_LOCK_KEY})`);
+  const [row] = await tx.select().from(imports).where(eq(imports.id, id)).for('update');
+  if (!row) throw new ImportNotFoundError(id);
+  const payload = refuseUnlessPending(row);
+  const before = await loadScenario(tx);
+  if (scenarioChecksum(before) !== payload.beforeChecksum) {
+    await tx.update(imports).set({ status: 'superseded' }).where(eq(imports.id, id));
+    return { stale: true };
+  }
+  await writeTarget(tx, payload.target, diffScenarios(before, payload.target), userId, now);
+  await tx.update(imports).set({ status: 'applied', appliedBy: userId, appliedAt: now }).where(eq(imports.id, id));
+  const counts = (row.preview as ImportPreview).counts;
+  await insertAuditEntry(tx as unknown as Db, {
+    actorId: userId, action: 'import.apply', entity: 'import', entityId: id, at: now,
+    before: { checksum: payload.beforeChecksum },
+    after: { kind: row.kind, fileName: row.fileName, counts, checksum: scenarioChecksum(payload.target) },
+  });
+  return { applied: { id, status: 'applied', counts, appliedAt: now.toISOString() } };
+}
+
+/** Marks the import failed (outside the rolled-back transaction) and records the failure in the audit log. */
+async function markFailed(db: Db, id: string, reason: string, userId: string | null, now: Date): Promise<void> {
+  await db.transaction(async (tx) => {
+    await tx.update(imports).set({ status: 'failed', failureReason: reason }).where(eq(imports.id, id));
+    await insertAuditEntry(tx as unknown as Db, { actorId: userId, action: 'import.apply-failed', entity: 'import', entityId: id, at: now, after: { reason } });
+  });
+}
+
+export async function applyImport(db: Db, input: { id: string; userId: string | null; now: Date }): Promise<ImportApplied> {
+  const { id, userId, now } = input;
+  if (!(await getImportRow(db, id))) throw new ImportNotFoundError(id);
+  let outcome: Outcome;
+  try {
+    outcome = await db.transaction((tx) => applyInTx(tx, id, userId, now));
+  } catch (err) {
+    if (err instanceof AppError) throw err;
+    const reason = `the database refused the change: ${(err as Error).message}`;
+    await markFailed(db, id, reason, userId, now);
+    throw new ImportApplyFailedError(reason);
+  }
+  if ('stale' in outcome) throw new ImportRefusedError('IMPORT_STALE', 409, 'The data changed since this preview; nothing was applied. Upload the file again.');
+  return outcome.applied;
+}

@@ -1,0 +1,70 @@
+// The preview of an upload: read the file, lay it over the current data, validate the result, list what changes.
+import type { ImportIssue, ImportKind, ImportPreview } from '../../shared/imports';
+import type { Scenario } from '../../shared/scenario';
+import { validateScenario } from '../../shared/scenario-validate';
+import type { Queryable } from '../queries/inventory/scenario-tables';
+import { loadScenario } from '../services/inventory/load-scenario';
+import { scenarioChecksum } from './canonical';
+import { decodeUpload } from './decode-upload';
+import { detectKind } from './detect-kind';
+import { diffScenarios, emptyDiff, type ScenarioDiff } from './diff';
+import { mergeImport } from './merge';
+import { parseSitesCsv, parseSpansCsv } from './parse-csv-network';
+import { parseSlicesCsv } from './parse-csv-slices';
+import { parseGraphmlFile } from './parse-graphml';
+import { parseScenarioFile } from './parse-scenario-file';
+import { removalErrors } from './removal-checks';
+import type { ParsedImport } from './types';
+
+/** What apply needs: the state the preview was computed against (as a checksum) and the target to write. */
+export type ImportPayload = { beforeChecksum: string; target: Scenario };
+export type PreviewResult = { kind: ImportKind; preview: ImportPreview; payload: ImportPayload | null };
+
+const PARSERS: Record<ImportKind, (text: string, fileName: string) => ParsedImport> = {
+  scenario: parseScenarioFile,
+  graphml: parseGraphmlFile,
+  'csv-sites': parseSitesCsv,
+  'csv-spans': parseSpansCsv,
+  'csv-slices': parseSlicesCsv,
+};
+
+/** Whole-state kinds remove what the file lacks, so a partly read file must not be merged at all. */
+const WHOLE_STATE: ReadonlySet<ImportKind> = new Set(['scenario', 'graphml']);
+
+export function toPreview(diff: ScenarioDiff, errors: ImportIssue[], warnings: ImportIssue[]): ImportPreview {
+  const lists = Object.values(diff);
+  const sum = (f: (d: (typeof lists)[number]) => number) => lists.reduce((n, d) => n + f(d), 0);
+  const pick = <K extends 'adds' | 'changes' | 'removes'>(k: K) =>
+    Object.fromEntries(Object.entries(diff).map(([entity, d]) => [entity, d[k]])) as { [E in keyof ScenarioDiff]: ScenarioDiff[E][K] };
+  return {
+    adds: pick('adds'), changes: pick('changes'), removes: pick('removes'), errors, warnings,
+    counts: {
+      adds: sum((d) => d.adds.length), changes: sum((d) => d.changes.length), removes: sum((d) => d.removes.length),
+      errors: errors.length, warnings: warnings.length,
+    },
+  };
+}
+
+export async function buildPreview(
+  db: Queryable, input: { fileName: string; bytes: Buffer; requestedKind?: string },
+): Promise<PreviewResult> {
+  const { fileName } = input;
+  const text = decodeUpload(input.bytes);
+  const kind = detectKind(fileName, text, input.requestedKind);
+  const parsed = PARSERS[kind](text, fileName);
+  const errors = [...parsed.errors];
+  const warnings = [...parsed.warnings];
+  const before = await loadScenario(db);
+  const merged = WHOLE_STATE.has(kind) && errors.length > 0 ? { target: null, errors: [] } : mergeImport(before, parsed.content, fileName);
+  errors.push(...merged.errors);
+  if (!merged.target) return { kind, preview: toPreview(emptyDiff(), errors, warnings), payload: null };
+  const diff = diffScenarios(before, merged.target);
+  // Paths of a scenario file point into the file itself; for the other kinds they point into the merged result.
+  const resultFile = kind === 'scenario' ? fileName : `${fileName} (merged with the current data)`;
+  const validation = validateScenario(merged.target);
+  if (!validation.ok) errors.push(...validation.errors.map((i) => ({ file: resultFile, path: i.path, message: i.message })));
+  warnings.push(...validation.warnings.map((i) => ({ file: resultFile, path: i.path, message: i.message })));
+  errors.push(...await removalErrors(db, merged.target, diff, fileName));
+  const payload = errors.length === 0 ? { beforeChecksum: scenarioChecksum(before), target: merged.target } : null;
+  return { kind, preview: toPreview(diff, errors, warnings), payload };
+}

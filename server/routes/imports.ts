@@ -1,0 +1,52 @@
+// Imports: upload → preview (POST /), apply (POST /:id/apply), list, detail, and CSV templates. Admin and planner.
+import express from 'express';
+import { importKindSchema, importListQuerySchema } from '../../shared/imports';
+import { requireRole } from '../auth/guards';
+import { applyImport } from '../imports/apply';
+import { ImportFileError, ImportNotFoundError } from '../imports/errors';
+import { getImportRow, listImportRows, toDetail, toSummary } from '../imports/import-records';
+import { buildPreview } from '../imports/preview';
+import { recordPreview } from '../imports/record-preview';
+import { isTemplateKind, templateFile } from '../imports/templates';
+import { singleFileUpload } from '../imports/upload';
+import type { RouteDeps } from './deps';
+
+export function importsRouter({ db, config, now }: RouteDeps): express.Router {
+  const router = express.Router();
+  router.use(requireRole('admin', 'planner'));
+
+  router.post('/', singleFileUpload(config.importMaxBytes), async (req, res) => {
+    if (!req.file) throw new ImportFileError('NO_FILE', 'Send the file in the multipart field "file".');
+    const fileName = req.file.originalname || 'upload';
+    const kind = typeof req.body?.kind === 'string' ? req.body.kind : undefined;
+    const result = await buildPreview(db, { fileName, bytes: req.file.buffer, requestedKind: kind });
+    const id = await recordPreview(db, { ...result, fileName, sizeBytes: req.file.size, userId: req.user!.id, now: now() });
+    res.status(201).json({ id, kind: result.kind, fileName, preview: result.preview });
+  });
+
+  router.get('/', async (req, res) => {
+    const page = importListQuerySchema.parse(req.query);
+    res.json({ imports: (await listImportRows(db, page)).map(toSummary) });
+  });
+
+  router.get('/templates/:kind', (req, res) => {
+    const kind = importKindSchema.safeParse(req.params.kind);
+    if (!kind.success || !isTemplateKind(kind.data)) {
+      throw new ImportFileError('UNKNOWN_TEMPLATE', `No CSV template "${req.params.kind}"; use csv-sites, csv-spans or csv-slices.`);
+    }
+    const { fileName, text } = templateFile(kind.data);
+    res.type('text/csv').attachment(fileName).send(text);
+  });
+
+  router.get('/:id', async (req, res) => {
+    const row = await getImportRow(db, req.params.id);
+    if (!row) throw new ImportNotFoundError(req.params.id);
+    res.json(toDetail(row));
+  });
+
+  router.post('/:id/apply', async (req, res) => {
+    res.json(await applyImport(db, { id: req.params.id, userId: req.user!.id, now: now() }));
+  });
+
+  return router;
+}
