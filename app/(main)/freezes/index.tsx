@@ -1,0 +1,22 @@
+// Freezes: periods in which no window may be booked (GET /api/freezes); admins add, change and delete them.
+import { useMeQuery } from '@/hooks/queries/me';
+import { useFreezesQuery } from '@/hooks/queries/freezes';
+import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states';
+import { FreezesView } from '@/components/freezes/freezes-view';
+import { useFreezeEditor } from '@/components/freezes/use-freeze-editor';
+import { canEditFreezes } from '@/components/calendar/roles';
+import { viewerTimeZone } from '@/components/time';
+
+export default function FreezesScreen() {
+  const freezes = useFreezesQuery();
+  const editor = useFreezeEditor();
+  const canEdit = canEditFreezes(useMeQuery().data?.roles ?? []);
+  const timeZone = viewerTimeZone();
+
+  if (freezes.isError) return <ErrorState message={freezes.error.message} onRetry={() => freezes.refetch()} />;
+  if (!freezes.data) return <LoadingState label="Loading freezes…" />;
+  if (freezes.data.freezes.length === 0 && !canEdit) {
+    return <EmptyState title="No freezes" hint="Windows may be booked on any day. Admins set freezes for holidays and big events." />;
+  }
+  return <FreezesView freezes={freezes.data.freezes} timeZone={timeZone} canEdit={canEdit} editor={editor} />;
+}

@@ -1,0 +1,95 @@
+// One day cell of the month view: the date (today ringed, the selection filled), a conflict dot,
+// the windows' bars on their lanes, "+n" for more, and freeze hatching behind.
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import type { DateData } from 'react-native-calendars';
+import { calendarColors, colors, fonts, radii, space } from '@/constants/theme';
+import type { CalendarDayMark } from './calendar-types';
+import { FreezeHatch } from './freeze-hatch';
+
+type Props = {
+  date?: DateData;
+  state?: string;
+  marking?: CalendarDayMark;
+  onPress?: (date?: DateData) => void;
+  testID?: string;
+  accessibilityLabel?: string;
+  children?: React.ReactNode;
+};
+
+export const DAY_CELL_HEIGHT_PX = 66;
+
+export function CalendarDay({ date, state, marking, onPress, testID, accessibilityLabel, children }: Props) {
+  const outside = state === 'disabled';
+  const selected = marking?.selected === true;
+  const today = marking?.today === true;
+  const frozen = (marking?.freezeTitles.length ?? 0) > 0;
+  return (
+    <Pressable
+      testID={testID}
+      role="button"
+      accessibilityLabel={marking?.accessibilityLabel ?? accessibilityLabel}
+      accessibilityState={{ selected }}
+      aria-selected={selected}
+      onPress={() => onPress?.(date)}
+      style={({ pressed }) => [styles.cell, pressed && styles.pressed]}
+    >
+      {frozen ? <FreezeHatch /> : null}
+      <View style={styles.numberRow}>
+        <View style={[styles.number, today && styles.today, selected && styles.selected]}>
+          <Text style={[styles.numberText, outside && styles.outside, selected && styles.selectedText]}>{children}</Text>
+        </View>
+        {marking?.hasConflict ? <View style={styles.conflictDot} testID={`${testID}-conflict`} /> : null}
+      </View>
+      <View style={[styles.lanes, outside && styles.faded]}>
+        {(marking?.periods ?? []).map((period, lane) => (
+          <View
+            key={lane}
+            style={[
+              styles.bar,
+              { backgroundColor: period.color },
+              period.startingDay && styles.barStart,
+              period.endingDay && styles.barEnd,
+            ]}
+          />
+        ))}
+      </View>
+      {marking && marking.overflowCount > 0 ? <Text style={styles.more}>+{marking.overflowCount}</Text> : null}
+    </Pressable>
+  );
+}
+
+const BAR_HEIGHT_PX = 6;
+
+const styles = StyleSheet.create({
+  cell: {
+    alignSelf: 'stretch',
+    height: DAY_CELL_HEIGHT_PX,
+    paddingTop: space.xs,
+    borderTopWidth: 1,
+    borderTopColor: colors.surfaceSunken,
+    overflow: 'hidden',
+  },
+  pressed: { backgroundColor: colors.primarySoft },
+  numberRow: { flexDirection: 'row', justifyContent: 'center', alignItems: 'center', height: 28 },
+  number: { width: 28, height: 28, borderRadius: radii.pill, alignItems: 'center', justifyContent: 'center' },
+  today: { borderWidth: 2, borderColor: calendarColors.todayRing },
+  selected: { backgroundColor: calendarColors.selectedFill, borderColor: calendarColors.selectedFill },
+  numberText: { fontFamily: fonts.medium, fontSize: 14, color: colors.ink },
+  selectedText: { color: calendarColors.onSelected, fontFamily: fonts.semibold },
+  outside: { color: calendarColors.outsideMonth },
+  conflictDot: {
+    position: 'absolute',
+    top: 2,
+    right: '18%',
+    width: 7,
+    height: 7,
+    borderRadius: radii.pill,
+    backgroundColor: calendarColors.conflict,
+  },
+  lanes: { marginTop: space.xs, gap: 2 },
+  faded: { opacity: 0.45 },
+  bar: { height: BAR_HEIGHT_PX },
+  barStart: { marginLeft: 3, borderTopLeftRadius: 3, borderBottomLeftRadius: 3 },
+  barEnd: { marginRight: 3, borderTopRightRadius: 3, borderBottomRightRadius: 3 },
+  more: { fontFamily: fonts.medium, fontSize: 10, lineHeight: 12, color: colors.inkMuted, textAlign: 'center' },
+});

@@ -1,0 +1,104 @@
+// The calendar screen's body: month view and the selected day's agenda, stacked on phones and side by side
+// from WIDE_LAYOUT_MIN_WIDTH_PX; filters and the "Book a window" action above the agenda.
+import { useMemo } from 'react';
+import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { Button } from '@/components/button';
+import { colors, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
+import { AgendaList } from './agenda-list';
+import { buildMarkedDays, freezesOnDay, windowsOnDay } from './calendar-marks';
+import { CalendarFilters } from './calendar-filters';
+import type { CalendarFreeze, CalendarWindow } from './calendar-types';
+import { MonthCalendar } from './month-calendar';
+import type { CalendarState } from './use-calendar-state';
+import { countActiveFilters, matchesText } from './window-filters';
+
+export type CalendarViewProps = {
+  state: CalendarState;
+  timeZone: string;
+  windows: readonly CalendarWindow[];
+  freezes: readonly CalendarFreeze[];
+  tenants: readonly { id: string; name: string }[];
+  /** a new month is loading while the last one stays on screen */
+  refreshing: boolean;
+  /** a later load failed; the data shown may be stale */
+  refreshError?: string;
+  canBook: boolean;
+  onBook: () => void;
+  onOpenWindow: (id: string) => void;
+};
+
+export function CalendarView(props: CalendarViewProps) {
+  const { state, timeZone, freezes, refreshing, refreshError, canBook, onBook, onOpenWindow } = props;
+  const { width } = useWindowDimensions();
+  const wide = width >= WIDE_LAYOUT_MIN_WIDTH_PX;
+  const windows = useMemo(
+    () => props.windows.filter((w) => matchesText(w, state.filters.elementText)),
+    [props.windows, state.filters.elementText],
+  );
+  const marks = useMemo(
+    () => buildMarkedDays({ windows, freezes, timeZone, selectedDay: state.selectedDay, today: state.today }),
+    [windows, freezes, timeZone, state.selectedDay, state.today],
+  );
+  const filtered = countActiveFilters(state.filters) > 0;
+
+  const calendar = (
+    <MonthCalendar month={state.month} today={state.today} marks={marks} onDayPress={state.selectDay} onMonthChange={state.setMonth} loading={refreshing} />
+  );
+  const side = (
+    <>
+      <CalendarFilters filters={state.filters} onChange={state.setFilters} tenants={props.tenants} initiallyOpen={wide} />
+      {refreshError ? (
+        <Text style={styles.stale} role="alert" testID="calendar-refresh-error">
+          Could not load this month: {refreshError}
+        </Text>
+      ) : null}
+      <AgendaList
+        day={state.selectedDay}
+        timeZone={timeZone}
+        windows={windowsOnDay(windows, state.selectedDay, timeZone)}
+        freezes={freezesOnDay(freezes, state.selectedDay, timeZone)}
+        onOpenWindow={onOpenWindow}
+        emptyHint={filtered ? 'Filters are on; clear them to see every window.' : windows.length === 0 ? 'Nothing is booked this month.' : 'Pick a day with a bar to see its windows.'}
+      />
+    </>
+  );
+  return (
+    <ScrollView style={styles.screen} contentContainerStyle={[styles.content, wide && styles.contentWide]}>
+      <View style={styles.toolbar}>
+        <View style={styles.titleBox}>
+          <Text style={styles.title} role="heading">
+            Maintenance calendar
+          </Text>
+          <Text style={styles.subtitle}>Times in {timeZone}</Text>
+        </View>
+        {canBook ? <Button label="Book a window" onPress={onBook} testID="calendar-book" /> : null}
+      </View>
+      {wide ? (
+        <View style={styles.columns}>
+          <View style={styles.calendarColumn}>{calendar}</View>
+          <View style={styles.sideColumn}>{side}</View>
+        </View>
+      ) : (
+        <View style={styles.stack}>
+          {calendar}
+          {side}
+        </View>
+      )}
+    </ScrollView>
+  );
+}
+
+const styles = StyleSheet.create({
+  screen: { flex: 1 },
+  content: { padding: space.md, gap: space.md, paddingBottom: space.xxxl },
+  contentWide: { padding: space.xl, gap: space.lg },
+  toolbar: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: space.md, flexWrap: 'wrap' },
+  titleBox: { gap: space.xxs, flexShrink: 1 },
+  title: { ...type.title, color: colors.ink },
+  subtitle: { ...type.caption, color: colors.inkMuted },
+  columns: { flexDirection: 'row', alignItems: 'flex-start', gap: space.lg },
+  calendarColumn: { flex: 3, minWidth: 0 },
+  sideColumn: { flex: 2, minWidth: 0, gap: space.md },
+  stack: { gap: space.md },
+  stale: { ...type.caption, color: colors.danger },
+});
