@@ -80,24 +80,3 @@ export function FreezeIcon({ size = 24, color = colors.ink }: IconProps) {
     </Svg>
   );
 }
-
-/** Calendar: a month page with one window drawn as a bar across three days. */
-export function CalendarIcon({ size = 24, color = colors.ink }: IconProps) {
-  return (
-    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
-      <Rect x={3.5} y={5} width={17} height={15.5} rx={2} stroke={color} strokeWidth={1.8} />
-      <Path d="M3.5 9.5 H20.5 M8 3 V6.5 M16 3 V6.5" stroke={color} strokeWidth={1.8} strokeLinecap="round" />
-      <Path d="M7 14 H15" stroke={color} strokeWidth={2.6} strokeLinecap="round" />
-    </Svg>
-  );
-}
-
-/** Freeze: a six-armed ice crystal. */
-export function FreezeIcon({ size = 24, color = colors.ink }: IconProps) {
-  return (
-    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
-      <Path d="M12 3 V21 M4.2 7.5 L19.8 16.5 M4.2 16.5 L19.8 7.5" stroke={color} strokeWidth={1.8} strokeLinecap="round" />
-      <Path d="M9.5 4.5 L12 7 L14.5 4.5 M9.5 19.5 L12 17 L14.5 19.5" stroke={color} strokeWidth={1.5} strokeLinecap="round" strokeLinejoin="round" />
-    </Svg>
-  );
-}

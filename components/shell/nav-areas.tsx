@@ -24,13 +24,4 @@ export const NAV_AREAS: readonly NavArea[] = [
     Icon: CalendarIcon,
   },
   { key: 'freezes', label: 'Freezes', href: '/freezes', matches: (pathname) => pathname.startsWith('/freezes'), Icon: FreezeIcon },
-  {
-    key: 'calendar',
-    label: 'Calendar',
-    href: '/calendar',
-    // A window's own pages are reached from the calendar, so they keep it highlighted.
-    matches: (pathname) => pathname.startsWith('/calendar') || pathname.startsWith('/windows'),
-    Icon: CalendarIcon,
-  },
-  { key: 'freezes', label: 'Freezes', href: '/freezes', matches: (pathname) => pathname.startsWith('/freezes'), Icon: FreezeIcon },
 ];
