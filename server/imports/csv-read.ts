@@ -20,7 +20,8 @@ export function readCsv(text: string, fileName: string, columns: CsvColumns, iss
   for (const col of fields) if (!known.has(col)) headerError(`unknown column "${col}" (expected ${[...known].join(', ')})`);
   if (issues.errors.length > 0) return [];
   const badRows = new Set<number>();
-  for (const e of result.errors) {
+  // Short rows are fine (trailing empty cells left out, as hand-written files do); long ones are not.
+  for (const e of result.errors.filter((x) => x.code !== 'TooFewFields')) {
     if (e.row === undefined) { headerError(e.message); continue; }
     badRows.add(e.row);
     issues.errors.push({ file: fileName, row: e.row + 2, message: `${e.message} (${e.code})` });
