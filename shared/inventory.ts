@@ -31,6 +31,9 @@ export function listEnvelope<T extends z.ZodType>(item: T) {
   });
 }
 
+/** `:id` route parameter of every detail route. */
+export const inventoryIdParamSchema = z.object({ id: z.string().min(1).max(200) });
+
 const ratio = z.number().min(0); // used ÷ capacity; above 1 when over-booked
 
 // ---- sites ---------------------------------------------------------------------------------------
@@ -163,7 +166,7 @@ export const siteDetailSchema = z.object({
   spans: z.array(spanRowSchema),
   /** slices with functions on this site */
   hosted: z.array(sliceUseSchema),
-  /** slices whose ties pass through this site without a function there (or end here on a tie's path) */
+  /** slices with a tie whose path passes through this site (an interior site of the path) */
   transit: z.array(sliceUseSchema),
 });
 
@@ -202,7 +205,7 @@ export const sliceTieViewSchema = z.object({
     /** site ids visited, from the `from` function's site to the `to` function's site */
     sites: z.array(z.string()),
     latencyMs: z.number(),
-    /** series availability of the spans and sites on the path */
+    /** series availability of the spans on the path (as the planner checks a tie's minimum) */
     availability: z.number(),
   }).nullable(),
 });

@@ -19,7 +19,9 @@ export async function selectScenarioTables(db: Queryable) {
     db.select().from(slices),
     db.select().from(sliceFunctions),
     db.select().from(sliceTies),
-    db.select({ sliceId: placements.sliceId, sites: placements.sites, paths: placements.paths })
+    db.select({
+      sliceId: placements.sliceId, revision: placements.revision, sites: placements.sites, paths: placements.paths,
+    })
       .from(placements).where(eq(placements.current, true)),
     db.select({ name: networkMeta.name, outline: networkMeta.outline })
       .from(networkMeta).where(eq(networkMeta.id, NETWORK_META_ID)),

@@ -1,0 +1,48 @@
+// Slices: list rows (tenant, service type, priority, totals, current revision) with their filters.
+import type { SliceList, SliceListQuery, SliceRow } from '../../../shared/inventory';
+import type { ScenarioSlice } from '../../../shared/scenario';
+import type { InventoryView } from './inventory-view';
+import { pageRows } from './paging';
+
+const sum = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0);
+
+/** Row builder with the per-request look-ups (tenant names, status, current revision) made once. */
+export function sliceRowBuilder(view: InventoryView): (slice: ScenarioSlice) => SliceRow {
+  const tenantNames = new Map(view.tables.tenantRows.map((t) => [t.id, t.name]));
+  const status = new Map(view.tables.sliceRows.map((s) => [s.id, s.status]));
+  const revision = new Map(view.tables.placementRows.map((p) => [p.sliceId, p.revision]));
+  return (slice) => ({
+    id: slice.id,
+    name: slice.name,
+    tenantId: slice.tenant,
+    tenantName: tenantNames.get(slice.tenant) ?? slice.tenant,
+    sst: slice.sst,
+    sd: slice.sd ?? null,
+    priority: slice.priority,
+    critical: slice.critical ?? false,
+    status: status.get(slice.id) ?? 'active',
+    functionCount: slice.functions.length,
+    tieCount: slice.ties.length,
+    cpu: sum(slice.functions.map((f) => f.cpu)),
+    bandwidthGbps: sum(slice.ties.map((t) => t.bandwidthGbps)),
+    revision: revision.get(slice.id) ?? null,
+  });
+}
+
+function matchesFilters(slice: ScenarioSlice, query: SliceListQuery): boolean {
+  if (query.tenant !== undefined && slice.tenant !== query.tenant) return false;
+  if (query.sst !== undefined && slice.sst !== query.sst) return false;
+  if (query.priority !== undefined && slice.priority !== query.priority) return false;
+  if (query.critical !== undefined && (slice.critical ?? false) !== query.critical) return false;
+  return true;
+}
+
+export function listSlices(view: InventoryView, query: SliceListQuery): SliceList {
+  const toRow = sliceRowBuilder(view);
+  const rows = view.slices.filter((s) => matchesFilters(s, query)).map(toRow);
+  return pageRows(
+    rows, query,
+    (row, key) => (key === 'tenant' ? row.tenantName : row[key]),
+    (row) => `${row.id} ${row.name} ${row.tenantName}`,
+  );
+}
