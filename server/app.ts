@@ -14,6 +14,7 @@ import { securityHeaders } from './http/security-headers';
 import { webApp } from './http/web-app';
 import { authRouter } from './routes/auth';
 import { healthRouter } from './routes/health';
+import { importsRouter } from './routes/imports';
 import { meRouter } from './routes/me';
 import { overviewRouter } from './routes/overview';
 import { scenariosRouter } from './routes/scenarios';
@@ -49,6 +50,7 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   api.use('/overview', overviewRouter(deps));
   api.use('/users', usersRouter(deps));
   api.use('/scenarios', scenariosRouter());
+  api.use('/imports', importsRouter(deps));
   api.use('/sites', sitesRouter(deps));
   api.use('/spans', spansRouter(deps));
   api.use('/tenants', tenantsRouter(deps));
