@@ -18,7 +18,7 @@ type Props = {
 function dayHeading(day: string, timeZone: string): string {
   return new Intl.DateTimeFormat('en-GB', { weekday: 'long', day: 'numeric', month: 'long', year: 'numeric', timeZone }).format(
     new Date(startOfDayMs(day, timeZone)),
-  );
+  ).replace(',', '');
 }
 
 export function AgendaList({ day, timeZone, windows, freezes, onOpenWindow, emptyHint }: Props) {
