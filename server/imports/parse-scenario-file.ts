@@ -18,7 +18,9 @@ function parseJson(text: string, fileName: string): unknown {
     return JSON.parse(text);
   } catch (err) {
     const message = (err as Error).message;
-    if (/end of JSON input|Unterminated/i.test(message)) {
+    const pos = Number(message.match(/position (\d+)/)?.[1]);
+    // A cut-off file fails at its very end (or with "end of input"), whatever token it was cut in.
+    if (/end of JSON input|Unterminated/i.test(message) || pos >= text.trimEnd().length) {
       throw new ImportFileError('BAD_JSON', `"${fileName}" ends before its JSON is complete; the file looks truncated.`);
     }
     throw new ImportFileError('BAD_JSON', `"${fileName}" is not valid JSON${where(text, message)}: ${message}`);
