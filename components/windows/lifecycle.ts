@@ -37,17 +37,16 @@ export const MAIN_PATH: readonly WindowStatus[] = ['draft', 'assessed', 'planned
 const BEFORE_WORK: readonly WindowStatus[] = ['draft', 'assessed', 'planned', 'in-review', 'cleared', 'returned', 'notified'];
 const ASSESSABLE: readonly WindowStatus[] = ['draft', 'assessed'];
 const BOOKERS: readonly RoleName[] = ['engineer', 'planner', 'admin'];
-const ASSESSORS: readonly RoleName[] = ['planner', 'admin'];
 
 export type WindowActions = { edit: boolean; assess: boolean; withdraw: boolean; viewImpact: boolean };
 
 export function windowActions(roles: readonly RoleName[], status: WindowStatus): WindowActions {
   const books = roles.some((r) => BOOKERS.includes(r));
-  const assesses = roles.some((r) => ASSESSORS.includes(r));
   const beforeWork = BEFORE_WORK.includes(status);
   return {
     edit: books && beforeWork,
-    assess: assesses && ASSESSABLE.includes(status),
+    // The server lets anyone who books also assess (engineers check their own bookings).
+    assess: books && ASSESSABLE.includes(status),
     withdraw: books && beforeWork,
     // Tenants see their own slices in the impact too (the server trims it to them).
     viewImpact: status !== 'withdrawn',

@@ -3,7 +3,7 @@
 /** PDF or plain text, as the issue asks; anything else is refused before upload. */
 export const MOP_MIME_TYPES = ['application/pdf', 'text/plain'] as const;
 /** Same cap the server enforces; a scanned MOP over this is usually a photo album, not a procedure. */
-export const MOP_MAX_BYTES = 5 * 1024 * 1024;
+export const MOP_MAX_BYTES = 10 * 1024 * 1024;
 
 export type MopFile = { name: string; sizeBytes: number; mime: string; uri: string; blob?: Blob };
 

@@ -63,7 +63,7 @@ export function WindowDetail({ window: w, me, timeZone, flash, onEdit, onOpenImp
           withdrawing={transition.isPending}
           onEdit={onEdit}
           onOpenImpact={onOpenImpact}
-          onAssess={() => assess.mutate(undefined, { onSuccess: onOpenImpact })}
+          onAssess={() => assess.mutate(w.version, { onSuccess: onOpenImpact })}
           onWithdraw={() => transition.mutate({ to: 'withdrawn', version: w.version })}
         />
         <Section title="Taken out">

@@ -68,14 +68,16 @@ export function useWindowPatchMutation(id: string) {
   });
 }
 
-// The assess reply is the fresh impact; the screen re-reads window and impact, so any JSON will do here.
-const assessReplySchema = z.unknown();
-
+/** Computes and stores the impact for `version` (a stale version is refused), which moves the window to assessed. */
 export function useWindowAssessMutation(id: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: () => apiFetch(`${windowPath(id)}/assess`, assessReplySchema, jsonBody('POST', {})),
-    onSuccess: () => invalidateWindowViews(queryClient),
+    mutationFn: (version: number) =>
+      apiFetch(`${windowPath(id)}/assess`, windowImpactSchema, jsonBody('POST', { version })),
+    onSuccess: (impact) => {
+      queryClient.setQueryData(windowImpactKey(id), impact);
+      invalidateWindowViews(queryClient);
+    },
   });
 }
 
@@ -90,7 +92,7 @@ export function useWindowTransitionMutation(id: string) {
 
 /** True for the 404 the impact route gives while no impact is stored for the window. */
 export function isNoImpactYet(error: unknown): boolean {
-  return isApiError(error) && error.status === 404 && error.code !== 'WINDOW_NOT_FOUND';
+  return isApiError(error) && error.status === 404 && error.code === 'IMPACT_NOT_FOUND';
 }
 
 

@@ -1,0 +1,30 @@
+// Edit a window against the version it was loaded at; a stale edit is refused with a reload offer.
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useMeQuery } from '@/hooks/queries/me';
+import { useWindowQuery } from '@/hooks/queries/windows';
+import { ErrorState, LoadingState } from '@/components/screen-states';
+import { viewerTimeZone } from '@/components/time';
+import { EditWindow } from '@/components/windows/edit-window';
+import { detailHref, FormPage } from '@/components/windows/form-page';
+
+export default function EditWindowScreen() {
+  const { id } = useLocalSearchParams<{ id: string }>();
+  const router = useRouter();
+  const me = useMeQuery();
+  const window = useWindowQuery(id);
+  if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => window.refetch()} />;
+  if (!window.data || !me.data) return <LoadingState label="Loading the window…" />;
+  return (
+    <FormPage title={`Edit: ${window.data.title}`}>
+      <EditWindow
+        window={window.data}
+        me={me.data}
+        timeZone={viewerTimeZone()}
+        onReload={() => window.refetch()}
+        reloading={window.isFetching}
+        onSaved={(outcome) => router.replace(detailHref({ ...outcome, saved: 'edited' }))}
+        onCancel={() => router.replace(detailHref({ id }))}
+      />
+    </FormPage>
+  );
+}

@@ -1,0 +1,29 @@
+// One window: times, state, equipment, MOP, conflicts and the actions the viewer may take.
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useMeQuery } from '@/hooks/queries/me';
+import { useWindowQuery } from '@/hooks/queries/windows';
+import { ErrorState, LoadingState } from '@/components/screen-states';
+import { viewerTimeZone } from '@/components/time';
+import { detailHref, flashFromParams } from '@/components/windows/form-page';
+import { WindowDetail } from '@/components/windows/window-detail';
+
+export default function WindowScreen() {
+  const params = useLocalSearchParams<{ id: string; saved?: string; reverted?: string; mop?: string }>();
+  const router = useRouter();
+  const me = useMeQuery();
+  const window = useWindowQuery(params.id);
+  if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => window.refetch()} />;
+  if (!window.data || !me.data) return <LoadingState label="Loading the window…" />;
+  return (
+    <WindowDetail
+      window={window.data}
+      me={me.data}
+      timeZone={viewerTimeZone()}
+      flash={flashFromParams(params)}
+      onEdit={() => router.push(`/windows/${encodeURIComponent(params.id)}/edit`)}
+      onOpenImpact={() => router.push(`/windows/${encodeURIComponent(params.id)}/impact`)}
+      onOpenWindow={(id) => router.push(detailHref({ id }))}
+      onReload={() => void window.refetch()}
+    />
+  );
+}

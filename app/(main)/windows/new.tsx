@@ -1,0 +1,25 @@
+// Book a maintenance window (engineers, planners, admins); on success, open the new window's page.
+import { useRouter } from 'expo-router';
+import { useMeQuery } from '@/hooks/queries/me';
+import { ErrorState, LoadingState } from '@/components/screen-states';
+import { viewerTimeZone } from '@/components/time';
+import { BookWindow } from '@/components/windows/book-window';
+import { canBook, detailHref, FormPage } from '@/components/windows/form-page';
+
+export default function NewWindowScreen() {
+  const router = useRouter();
+  const me = useMeQuery();
+  if (me.isError) return <ErrorState message={me.error.message} onRetry={() => me.refetch()} />;
+  if (!me.data) return <LoadingState />;
+  if (!canBook(me.data)) return <ErrorState message="Your roles do not include booking windows." />;
+  return (
+    <FormPage title="Book a window">
+      <BookWindow
+        me={me.data}
+        timeZone={viewerTimeZone()}
+        onSaved={(outcome) => router.replace(detailHref({ ...outcome, saved: 'booked' }))}
+        onCancel={() => (router.canGoBack() ? router.back() : router.replace('/calendar'))}
+      />
+    </FormPage>
+  );
+}

@@ -1,0 +1,61 @@
+// Words and figures for an impact: service types by 3GPP SST, risk as a percentage, the order slices are listed in.
+import type { AffectedSlice, WindowImpact } from '@/shared/window-impact';
+
+/** Standardized SST values, 3GPP TS 23.501 Table 5.15.2.2-1 (secondary): 1 eMBB, 2 URLLC, 3 MIoT, 4 V2X, 5 HMTC. */
+const SST_NAMES: Record<number, string> = { 1: 'eMBB', 2: 'URLLC', 3: 'MIoT', 4: 'V2X', 5: 'HMTC' };
+
+export function serviceTypeLabel(sst: number): string {
+  return SST_NAMES[sst] ?? `SST ${sst}`;
+}
+
+export const REASON_LABELS: Record<AffectedSlice['reasons'][number], string> = {
+  hosted: 'Hosted',
+  transit: 'Transit',
+  squeezed: 'Squeezed',
+  unprotected: 'Unprotected',
+};
+
+export const REASON_HINTS: Record<AffectedSlice['reasons'][number], string> = {
+  hosted: 'a function sits on a site that goes down',
+  transit: 'a link of the slice runs over equipment that goes down',
+  squeezed: 'reduced capacity no longer fits it',
+  unprotected: 'it loses its separate backup path',
+};
+
+/** "0.42 %", "< 0.01 %" for tiny but non-zero chances, "0 %" for none. */
+export function formatRiskPercent(probability: number): string {
+  if (!(probability > 0)) return '0 %';
+  const percent = probability * 100;
+  if (percent < 0.01) return '< 0.01 %';
+  if (percent < 10) return `${percent.toFixed(2)} %`;
+  return `${percent.toFixed(1)} %`;
+}
+
+const SEVERITY_RANK: Record<AffectedSlice['severity'], number> = { critical: 0, high: 1, medium: 2, low: 3 };
+
+/** Critical slices first, then by severity, then the riskiest; ties by name so the order is stable. */
+export function sortAffected(slices: readonly AffectedSlice[]): AffectedSlice[] {
+  return [...slices].sort((a, b) =>
+    Number(b.critical) - Number(a.critical)
+    || SEVERITY_RANK[a.severity] - SEVERITY_RANK[b.severity]
+    || b.failureProbability - a.failureProbability
+    || a.name.localeCompare(b.name));
+}
+
+/** Sites and spans the affected slices use today, for the map's second highlight. */
+export function affectedPathElements(impact: Pick<WindowImpact, 'currentPaths'>): { sites: string[]; spans: string[] } {
+  const sites = new Set<string>();
+  const spans = new Set<string>();
+  for (const placement of impact.currentPaths) {
+    Object.values(placement.sites).forEach((site) => sites.add(site));
+    Object.values(placement.paths).forEach((path) => path.forEach((span) => spans.add(span)));
+  }
+  return { sites: [...sites], spans: [...spans] };
+}
+
+export function windowElementIds(impact: Pick<WindowImpact, 'elements'>): { sites: string[]; spans: string[] } {
+  return {
+    sites: impact.elements.filter((e) => e.kind === 'site').map((e) => e.id),
+    spans: impact.elements.filter((e) => e.kind === 'span').map((e) => e.id),
+  };
+}
