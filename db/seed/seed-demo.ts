@@ -4,7 +4,7 @@ import type { Db } from '../client';
 import { formatIssue, validateScenario, type ScenarioIssue } from '../../shared/scenario-validate';
 import type { Scenario } from '../../shared/scenario';
 import {
-  tenants, sites, spans, slices, sliceFunctions, sliceTies, placements, windows, windowElements,
+  tenants, sites, spans, slices, sliceFunctions, sliceTies, placements, windows, windowElements, networkMeta,
 } from '../schema';
 import { scenarioRows } from './scenario-rows';
 import { windowShiftMs } from './shift-windows';
@@ -62,6 +62,10 @@ export async function seedDemo(db: Db, input: unknown, options: { now?: Date } =
       functions: await insertNew(tx, sliceFunctions, rows.functions),
       ties: await insertNew(tx, sliceTies, rows.ties),
       placements: await insertNew(tx, placements, rows.placements),
+      // The map's name and outline; an existing row (e.g. from a later import) is left as it is.
+      networkMeta: await insertNew(tx, networkMeta, [
+        { id: 'network', name: scenario.name ?? null, outline: scenario.outline ?? null },
+      ]),
     };
     summary.users = await seedDemoUsers(tx, pickDemoTenantId(scenario));
     summary.windows = await insertNewWindows(tx, rows);
