@@ -1,0 +1,23 @@
+// The stored impact of a window (one row per window, replaced on each assessment).
+import { eq } from 'drizzle-orm';
+import type { Tx } from '../../../db/seed/tx';
+import { windowImpacts } from '../../../db/schema';
+import type { WindowImpact } from '../../../shared/window-impact';
+import type { Queryable } from './window-rows';
+
+export async function upsertWindowImpact(tx: Tx, impact: WindowImpact): Promise<void> {
+  const row = { windowId: impact.windowId, windowVersion: impact.windowVersion, computedAt: new Date(impact.computedAt), impact };
+  await tx.insert(windowImpacts).values(row)
+    .onConflictDoUpdate({ target: windowImpacts.windowId, set: { windowVersion: row.windowVersion, computedAt: row.computedAt, impact } });
+}
+
+export async function getWindowImpact(db: Queryable, windowId: string): Promise<WindowImpact | null> {
+  const rows = await db.select({ impact: windowImpacts.impact }).from(windowImpacts).where(eq(windowImpacts.windowId, windowId));
+  return (rows[0]?.impact as WindowImpact | undefined) ?? null;
+}
+
+/** Returns whether a stored impact was dropped. */
+export async function deleteWindowImpact(tx: Tx, windowId: string): Promise<boolean> {
+  const deleted = await tx.delete(windowImpacts).where(eq(windowImpacts.windowId, windowId)).returning({ id: windowImpacts.windowId });
+  return deleted.length > 0;
+}

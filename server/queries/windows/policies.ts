@@ -1,0 +1,24 @@
+// Policies: stored overrides merged over the defaults in shared/policies.ts.
+import { inArray, sql } from 'drizzle-orm';
+import type { Tx } from '../../../db/seed/tx';
+import { policies } from '../../../db/schema';
+import { POLICY_DEFAULTS, policiesSchema, type Policies, type PoliciesPatch } from '../../../shared/policies';
+import type { Queryable } from './window-rows';
+
+export async function getPolicies(db: Queryable): Promise<Policies> {
+  const keys = Object.keys(POLICY_DEFAULTS);
+  const rows = await db.select().from(policies).where(inArray(policies.key, keys));
+  const stored = Object.fromEntries(rows.map((r) => [r.key, r.value]));
+  // A stored value that no longer fits the schema falls back to the default rather than breaking bookings.
+  const merged = { ...POLICY_DEFAULTS, ...stored };
+  const parsed = policiesSchema.safeParse(merged);
+  return parsed.success ? parsed.data : POLICY_DEFAULTS;
+}
+
+export async function upsertPolicies(tx: Tx, patch: PoliciesPatch, actorId: string, now: Date): Promise<void> {
+  for (const [key, value] of Object.entries(patch)) {
+    if (value === undefined) continue;
+    await tx.insert(policies).values({ key, value, updatedBy: actorId, updatedAt: now })
+      .onConflictDoUpdate({ target: policies.key, set: { value: sql`excluded.value`, updatedBy: actorId, updatedAt: now } });
+  }
+}

@@ -1,0 +1,107 @@
+// Reads windows with their elements, owner, MOP details and stored-impact flag; writes the window row itself.
+import { and, asc, eq, gt, inArray, lt, ne, sql, type SQL } from 'drizzle-orm';
+import type { Db } from '../../../db/client';
+import type { Tx } from '../../../db/seed/tx';
+import { users, windowDocuments, windowElements, windowImpacts, windows } from '../../../db/schema';
+import type { WindowStatus } from '../../../shared/windows';
+import { windowTouchesTenant } from './tenant-footprint';
+
+export type Queryable = Db | Tx;
+
+export type WindowFilter = {
+  ids?: string[];
+  from?: Date;
+  to?: Date;
+  ownerId?: string;
+  statuses?: WindowStatus[];
+  elementId?: string;
+  affectsTenant?: string;
+  /** tenant users: only windows touching this tenant's slices, never withdrawn ones */
+  scopeTenant?: string | null;
+};
+
+export type ElementRow = { kind: 'site' | 'span'; id: string; effect: 'down' | 'reduced'; fraction: number | null };
+
+function conditions(f: WindowFilter): SQL[] {
+  const out: SQL[] = [];
+  if (f.ids) out.push(inArray(windows.id, f.ids.length > 0 ? f.ids : ['']));
+  if (f.from) out.push(gt(windows.endsAt, f.from));
+  if (f.to) out.push(lt(windows.startsAt, f.to));
+  if (f.ownerId) out.push(eq(windows.ownerId, f.ownerId));
+  if (f.statuses) out.push(inArray(windows.status, f.statuses));
+  if (f.elementId) {
+    out.push(sql`exists (select 1 from window_elements we where we.window_id = "windows"."id" and we.element_id = ${f.elementId})`);
+  }
+  if (f.affectsTenant) out.push(windowTouchesTenant(f.affectsTenant));
+  if (f.scopeTenant != null) out.push(windowTouchesTenant(f.scopeTenant), ne(windows.status, 'withdrawn'));
+  return out;
+}
+
+export async function selectWindowRows(db: Queryable, filter: WindowFilter) {
+  const rows = await db.select({
+    id: windows.id, title: windows.title, startsAt: windows.startsAt, endsAt: windows.endsAt,
+    workType: windows.workType, notes: windows.notes, status: windows.status, version: windows.version,
+    ownerId: windows.ownerId, ownerName: users.name, freezeOverrideReason: windows.freezeOverrideReason,
+    createdAt: windows.createdAt, updatedAt: windows.updatedAt,
+    mopFileName: windowDocuments.fileName, mopMime: windowDocuments.mime,
+    mopSizeBytes: windowDocuments.sizeBytes, mopUploadedAt: windowDocuments.uploadedAt,
+    touchesCritical: sql<boolean | null>`(${windowImpacts.impact} ->> 'touchesCritical')::boolean`,
+    impactStored: sql<boolean>`${windowImpacts.windowId} is not null`,
+  }).from(windows)
+    .leftJoin(users, eq(users.id, windows.ownerId))
+    .leftJoin(windowDocuments, eq(windowDocuments.windowId, windows.id))
+    .leftJoin(windowImpacts, eq(windowImpacts.windowId, windows.id))
+    .where(and(...conditions(filter)))
+    .orderBy(asc(windows.startsAt), asc(windows.id));
+  return rows;
+}
+export type WindowRow = Awaited<ReturnType<typeof selectWindowRows>>[number];
+
+export async function selectElementsByWindow(db: Queryable, windowIds: string[]): Promise<Map<string, ElementRow[]>> {
+  const out = new Map<string, ElementRow[]>(windowIds.map((id) => [id, []]));
+  if (windowIds.length === 0) return out;
+  const rows = await db.select().from(windowElements)
+    .where(inArray(windowElements.windowId, windowIds))
+    .orderBy(asc(windowElements.elementKind), asc(windowElements.elementId));
+  for (const r of rows) {
+    out.get(r.windowId)?.push({ kind: r.elementKind, id: r.elementId, effect: r.effect, fraction: r.fraction });
+  }
+  return out;
+}
+
+/** Active windows overlapping [from, to), for conflict checks (any owner, any tenant). */
+export async function selectActiveOverlapping(db: Queryable, from: Date, to: Date, active: readonly WindowStatus[]) {
+  return db.select({ id: windows.id, title: windows.title, startsAt: windows.startsAt, endsAt: windows.endsAt, status: windows.status })
+    .from(windows)
+    .where(and(gt(windows.endsAt, from), lt(windows.startsAt, to), inArray(windows.status, [...active])));
+}
+
+export type WindowWrite = {
+  title: string; startsAt: Date; endsAt: Date; workType: string | null; notes: string | null;
+  status: WindowStatus; freezeOverrideReason: string | null;
+};
+
+export async function insertWindowRow(tx: Tx, row: WindowWrite & { id: string; ownerId: string; now: Date }): Promise<void> {
+  const { now, ...values } = row;
+  await tx.insert(windows).values({ ...values, version: 1, createdAt: now, updatedAt: now });
+}
+
+/** Optimistic locking: writes only when the version still matches; returns the new version or null. */
+export async function updateWindowRow(
+  tx: Tx, id: string, expectedVersion: number, row: Partial<WindowWrite> & { now: Date },
+): Promise<number | null> {
+  const { now, ...values } = row;
+  const updated = await tx.update(windows)
+    .set({ ...values, updatedAt: now, version: sql`${windows.version} + 1` })
+    .where(and(eq(windows.id, id), eq(windows.version, expectedVersion)))
+    .returning({ version: windows.version });
+  return updated[0]?.version ?? null;
+}
+
+export async function replaceElements(tx: Tx, windowId: string, elements: ElementRow[]): Promise<void> {
+  await tx.delete(windowElements).where(eq(windowElements.windowId, windowId));
+  if (elements.length === 0) return;
+  await tx.insert(windowElements).values(elements.map((e) => ({
+    windowId, elementKind: e.kind, elementId: e.id, effect: e.effect, fraction: e.effect === 'reduced' ? e.fraction : null,
+  })));
+}

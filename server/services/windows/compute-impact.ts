@@ -1,0 +1,65 @@
+// A window's impact from the planner (affected slices, splits, overloads) plus per-slice risk, in API shape.
+import { assessImpact } from '../../../planner/impact/assess-impact';
+import type { Inventory, WindowSpec } from '../../../planner/model/types';
+import { sliceRisk } from '../../../planner/risk/slice-risk';
+import type { Scenario } from '../../../shared/scenario';
+import type { AffectedSlice, WindowImpact } from '../../../shared/window-impact';
+import { durationHours } from '../../../shared/window-checks';
+import type { ElementRow } from '../../queries/windows/window-rows';
+
+export type ImpactSubject = { id: string; version: number; startsAt: Date; endsAt: Date; elements: ElementRow[] };
+
+/** The same WindowSpec compileWindow() makes from a scenario window, built from stored rows. */
+export function windowSpecOf(w: ImpactSubject): WindowSpec {
+  const down = (kind: 'site' | 'span') => w.elements.filter((e) => e.kind === kind && e.effect === 'down').map((e) => e.id);
+  return {
+    id: w.id,
+    downSites: down('site'),
+    downSpans: down('span'),
+    reduced: w.elements.filter((e) => e.effect === 'reduced').map((e) =>
+      (e.kind === 'site' ? { site: e.id, fraction: e.fraction ?? 1 } : { span: e.id, fraction: e.fraction ?? 1 })),
+    durationHours: durationHours(w.startsAt, w.endsAt),
+  };
+}
+
+export function computeWindowImpact(scenario: Scenario, inv: Inventory, w: ImpactSubject, now: Date): WindowImpact {
+  const spec = windowSpecOf(w);
+  const report = assessImpact(inv, spec);
+  // Stay-put risk: each slice where it sits today, so the figure shows what doing nothing would risk.
+  const risks = new Map(sliceRisk(inv, spec, new Map()).map((r) => [r.slice, r]));
+  const sliceMeta = new Map(scenario.slices.map((s) => [s.id, s]));
+  const tenantNames = new Map(scenario.tenants.map((t) => [t.id, t.name]));
+  const affected: AffectedSlice[] = report.affected.map((a) => {
+    const s = sliceMeta.get(a.slice)!;
+    const risk = risks.get(a.slice);
+    return {
+      slice: a.slice, name: s.name,
+      tenant: { id: s.tenant, name: tenantNames.get(s.tenant) ?? s.tenant },
+      sst: s.sst, priority: s.priority, critical: s.critical ?? false,
+      reasons: a.reasons, severity: a.severity,
+      failureProbability: risk?.failureProbability ?? 0,
+      unprotected: a.reasons.includes('unprotected') || (risk?.unprotected ?? false),
+    };
+  });
+  const affectedIds = new Set(affected.map((a) => a.slice));
+  return {
+    windowId: w.id, windowVersion: w.version, computedAt: now.toISOString(),
+    affected,
+    touchesCritical: affected.some((a) => a.critical),
+    splits: report.splits, components: report.components,
+    overloaded: report.overloaded,
+    elements: w.elements,
+    currentPaths: scenario.placements.filter((p) => affectedIds.has(p.slice))
+      .map((p) => ({ slice: p.slice, sites: p.sites, paths: p.paths })),
+  };
+}
+
+/** What a tenant user may see of an impact: its own slices only, no other tenant's loads. */
+export function scopeImpact(impact: WindowImpact, tenantId: string): WindowImpact {
+  const affected = impact.affected.filter((a) => a.tenant.id === tenantId);
+  const own = new Set(affected.map((a) => a.slice));
+  return {
+    ...impact, affected, touchesCritical: affected.some((a) => a.critical),
+    overloaded: [], currentPaths: impact.currentPaths.filter((p) => own.has(p.slice)),
+  };
+}

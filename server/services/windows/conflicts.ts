@@ -1,0 +1,73 @@
+// Conflicts of windows with every other active window overlapping them in time, computed on read so that
+// counts are right for seeded, booked and edited windows alike (and after a network change).
+import { countComponents } from '../../../planner/impact/bridges';
+import type { Inventory } from '../../../planner/model/types';
+import type { WindowConflict } from '../../../shared/window-impact';
+import { ACTIVE_WINDOW_STATUSES, type WindowStatus } from '../../../shared/windows';
+import {
+  selectActiveOverlapping, selectElementsByWindow, selectWindowRows, type ElementRow, type Queryable,
+} from '../../queries/windows/window-rows';
+import { loadInventory } from '../inventory/load-scenario';
+import { outageOf, pairConflictReasons, strandMessage, type Outage } from './pair-conflicts';
+
+export type ConflictSubject = { id: string; title: string; startsAt: Date; endsAt: Date; status: string; elements: ElementRow[] };
+
+const isActive = (status: string) => ACTIVE_WINDOW_STATUSES.includes(status as WindowStatus);
+const overlaps = (a: ConflictSubject, b: ConflictSubject) => a.startsAt < b.endsAt && b.startsAt < a.endsAt;
+
+async function overlappingOthers(db: Queryable, subjects: ConflictSubject[]): Promise<ConflictSubject[]> {
+  const from = new Date(Math.min(...subjects.map((w) => w.startsAt.getTime())));
+  const to = new Date(Math.max(...subjects.map((w) => w.endsAt.getTime())));
+  const rows = await selectActiveOverlapping(db, from, to, ACTIVE_WINDOW_STATUSES);
+  const elements = await selectElementsByWindow(db, rows.map((r) => r.id));
+  return rows.map((r) => ({ ...r, elements: elements.get(r.id) ?? [] }));
+}
+
+/** Keeps what a tenant user may see: conflicts with windows visible to it, and only its own stranded slices. */
+async function scopeConflicts(
+  db: Queryable, inv: Inventory, byWindow: Map<string, WindowConflict[]>, tenantId: string,
+): Promise<void> {
+  const otherIds = [...new Set([...byWindow.values()].flat().map((c) => c.window.id))];
+  const visible = new Set((await selectWindowRows(db, { ids: otherIds, scopeTenant: tenantId })).map((r) => r.id));
+  const own = (slice: string) => inv.slices[inv.sliceIndex.get(slice) ?? -1]?.tenant === tenantId;
+  for (const [id, list] of byWindow) {
+    const scoped = list.filter((c) => visible.has(c.window.id)).map((c) => ({
+      ...c,
+      reasons: c.reasons.flatMap((r) => {
+        if (r.reason !== 'strands-slice') return [r];
+        const ids = r.ids.filter(own);
+        return ids.length > 0 ? [{ ...r, ids, message: strandMessage(ids) }] : [];
+      }),
+    })).filter((c) => c.reasons.length > 0);
+    byWindow.set(id, scoped);
+  }
+}
+
+/** Conflicts per subject window (withdrawn/finished windows have none); `scopeTenant` trims them for tenants. */
+export async function conflictsByWindow(
+  db: Queryable, subjects: ConflictSubject[], scopeTenant: string | null,
+): Promise<Map<string, WindowConflict[]>> {
+  const byWindow = new Map<string, WindowConflict[]>(subjects.map((w) => [w.id, []]));
+  const active = subjects.filter((w) => isActive(w.status));
+  if (active.length === 0) return byWindow;
+  const others = await overlappingOthers(db, active);
+  const pairs = active.flatMap((w) => others.filter((o) => o.id !== w.id && overlaps(w, o)).map((o) => [w, o] as const));
+  if (pairs.length === 0) return byWindow;
+  const { inventory: inv } = await loadInventory(db);
+  const base = countComponents(inv.network);
+  const outages = new Map<string, Outage>();
+  const outage = (w: ConflictSubject) => {
+    if (!outages.has(w.id)) outages.set(w.id, outageOf(inv.network, w.elements));
+    return outages.get(w.id)!;
+  };
+  for (const [w, o] of pairs) {
+    const reasons = pairConflictReasons(inv, { elements: w.elements, outage: outage(w) }, { elements: o.elements, outage: outage(o) }, base);
+    if (reasons.length === 0) continue;
+    byWindow.get(w.id)!.push({
+      window: { id: o.id, title: o.title, startsAt: o.startsAt.toISOString(), endsAt: o.endsAt.toISOString(), status: o.status },
+      reasons,
+    });
+  }
+  if (scopeTenant !== null) await scopeConflicts(db, inv, byWindow, scopeTenant);
+  return byWindow;
+}

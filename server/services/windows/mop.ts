@@ -1,0 +1,51 @@
+// The method-of-procedure upload: multipart parsing with a size cap, type sniffing, storage with an audit row.
+import type { RequestHandler } from 'express';
+import multer from 'multer';
+import type { Db } from '../../../db/client';
+import type { Me } from '../../../shared/api';
+import { insertAuditEntry } from '../../queries/audit';
+import { upsertWindowDocument } from '../../queries/windows/documents';
+import { MopMissingError, MopTooLargeError, MopTypeError } from './errors';
+
+export const MOP_MAX_BYTES = 10 * 1024 * 1024;
+const PDF_MAGIC = Buffer.from('%PDF-');
+
+/** multer in memory, one file in field "file"; its errors become our domain errors. */
+export function mopUpload(maxBytes = MOP_MAX_BYTES): RequestHandler {
+  const single = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1 } }).single('file');
+  return (req, res, next) => single(req, res, (err: unknown) => {
+    if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') return next(new MopTooLargeError(maxBytes));
+    if (err instanceof multer.MulterError) return next(new MopMissingError());
+    next(err);
+  });
+}
+
+/** Trusts the bytes, not the browser's label: a PDF must start with %PDF-, text must be UTF-8 without NULs. */
+export function sniffMopType(file: { buffer: Buffer; mimetype: string }): 'application/pdf' | 'text/plain' {
+  if (file.buffer.subarray(0, PDF_MAGIC.length).equals(PDF_MAGIC)) return 'application/pdf';
+  const declaredText = file.mimetype === 'text/plain' || file.mimetype.startsWith('text/plain;');
+  if (declaredText && !file.buffer.includes(0)) {
+    try {
+      new TextDecoder('utf-8', { fatal: true }).decode(file.buffer);
+      return 'text/plain';
+    } catch {
+      // falls through: not UTF-8
+    }
+  }
+  throw new MopTypeError();
+}
+
+export async function storeMop(
+  db: Db, windowId: string, file: Express.Multer.File | undefined, user: Me, now: Date,
+): Promise<void> {
+  if (!file) throw new MopMissingError();
+  const mime = sniffMopType(file);
+  const fileName = file.originalname.replace(/[\\/\r\n]/g, '_').slice(0, 200) || 'mop';
+  await db.transaction(async (tx) => {
+    await upsertWindowDocument(tx, { windowId, fileName, mime, content: file.buffer, uploadedBy: user.id, uploadedAt: now });
+    await insertAuditEntry(tx, {
+      actorId: user.id, action: 'window.mop.upload', entity: 'window', entityId: windowId, at: now,
+      before: null, after: { fileName, mime, sizeBytes: file.buffer.length },
+    });
+  });
+}

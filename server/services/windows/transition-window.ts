@@ -1,0 +1,26 @@
+// Moves a window along its lifecycle (withdraw, start, finish, roll back) under optimistic locking.
+import type { Db } from '../../../db/client';
+import type { Me } from '../../../shared/api';
+import type { WindowTransition } from '../../../shared/windows';
+import { insertAuditEntry } from '../../queries/audit';
+import { updateWindowRow } from '../../queries/windows/window-rows';
+import { IllegalTransitionError, StaleVersionError, TransitionGuardedError } from './errors';
+import { checkTransition } from './lifecycle';
+import { loadWindow } from './window-view';
+
+export async function transitionWindow(db: Db, id: string, body: WindowTransition, user: Me, now: Date): Promise<void> {
+  const w = await loadWindow(db, id, null);
+  if (body.version !== w.version) throw new StaleVersionError();
+  const check = checkTransition(w.status, body.to);
+  if (!check.ok && check.kind === 'illegal') throw new IllegalTransitionError(w.status, body.to, check.why);
+  if (!check.ok) throw new TransitionGuardedError(body.to, check.why);
+  await db.transaction(async (tx) => {
+    const version = await updateWindowRow(tx, id, body.version, { status: body.to, now });
+    if (version === null) throw new StaleVersionError();
+    await insertAuditEntry(tx, {
+      actorId: user.id, action: 'window.transition', entity: 'window', entityId: id, at: now,
+      before: { status: w.status, version: w.version },
+      after: { status: body.to, version, reason: body.reason ?? null },
+    });
+  });
+}
