@@ -66,9 +66,9 @@ export const mapColors = {
   land: '#F5F1E6',
   coast: '#C2B89E',
   /** Span utilisation bands, lowest first; see components/map/colour-scale.ts for the thresholds. */
-  utilisation: ['#7DB8AE', '#2F8A8F', '#D9A23D', '#CC6A2C', '#9E2F3A'],
+  utilisation: ['#C3D3D4', '#6FB3A6', '#2A7F8E', '#D9A23D', '#CC6A2C', '#9E2F3A'],
   /** Elements without a figure (no capacity known). */
-  noFigure: '#A3B3B8',
+  noFigure: '#9AA5A8',
   siteStroke: '#0C2630',
   label: '#16323C',
   labelHalo: '#F5F1E6',

@@ -11,10 +11,13 @@ export type UtilisationBand = {
   colour: string;
 };
 
-/** Band edges as fractions of capacity; the top band means booked beyond capacity. */
-export const UTILISATION_EDGES = [0.5, 0.7, 0.85, 1] as const;
+/**
+ * Band edges as fractions of capacity. The first band sets apart what carries (almost) nothing, spare routes a
+ * planner looks for; the top band means booked beyond capacity.
+ */
+export const UTILISATION_EDGES = [0.01, 0.3, 0.6, 0.8, 1] as const;
 
-const LABELS = ['under 50 %', '50–70 %', '70–85 %', '85–100 %', 'over capacity'] as const;
+const LABELS = ['idle', '1–30 %', '30–60 %', '60–80 %', '80–100 %', 'over capacity'] as const;
 
 export const UTILISATION_BANDS: readonly UtilisationBand[] = LABELS.map((label, index) => ({
   index,

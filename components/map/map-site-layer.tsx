@@ -3,6 +3,7 @@ import { Circle, G, Path, Text as SvgText } from 'react-native-svg';
 import { formatUtilisation, utilisationColour } from '@/components/map/colour-scale';
 import type { PlacedSite } from '@/components/map/map-geometry';
 import type { EmphasisLookup } from '@/components/map/map-highlight';
+import type { MapSiteKind } from '@/components/map/map-types';
 import { GLYPH_RADIUS_PX, glyphPath, KIND_LABELS, KIND_ORDER } from '@/components/map/site-glyphs';
 import { TONE_COLOURS } from '@/components/map/map-tones';
 import { fonts, MAP_DIMMED_OPACITY, mapColors } from '@/constants/theme';
@@ -15,23 +16,26 @@ type Props = {
   emphasis: EmphasisLookup;
   selectedId: string | null;
   compact: boolean;
-  /** How many kinds, biggest first, carry name labels (0 = none). */
-  labelledKinds: number;
+  /** Ids of the sites whose names are printed (see map-labels.ts). */
+  labelled: ReadonlySet<string>;
   onPress: (id: string) => void;
 };
+
+export function siteRadiusPx(kind: MapSiteKind, compact: boolean, toned: boolean): number {
+  return GLYPH_RADIUS_PX[kind] * (compact ? 0.8 : 1) * (toned ? 1.2 : 1);
+}
 
 // Smallest sites last, so a cell site beside a core site stays tappable.
 const drawOrder = (a: PlacedSite, b: PlacedSite) => KIND_ORDER.indexOf(a.kind) - KIND_ORDER.indexOf(b.kind);
 
-export function MapSiteLayer({ sites, emphasis, selectedId, compact, labelledKinds, onPress }: Props) {
+export function MapSiteLayer({ sites, emphasis, selectedId, compact, labelled, onPress }: Props) {
   const ordered = [...sites].sort(drawOrder);
   return (
     <G>
       {ordered.map((site) => {
         const { dimmed, tone } = emphasis.site(site.id);
-        const r = GLYPH_RADIUS_PX[site.kind] * (compact ? 0.8 : 1) * (tone ? 1.2 : 1);
+        const r = siteRadiusPx(site.kind, compact, tone !== null);
         const selected = selectedId === site.id;
-        const labelled = selected || (!dimmed && KIND_ORDER.indexOf(site.kind) < labelledKinds);
         return (
           <G
             key={site.id}
@@ -48,7 +52,7 @@ export function MapSiteLayer({ sites, emphasis, selectedId, compact, labelledKin
               stroke={tone ? TONE_COLOURS[tone] : mapColors.siteStroke}
               strokeWidth={tone ? 2 : 1.2}
             />
-            {labelled ? <SiteLabel x={site.x + r + 4} y={site.y + 4} name={site.name} /> : null}
+            {labelled.has(site.id) && (selected || !dimmed) ? <SiteLabel x={site.x + r + 4} y={site.y + 4} name={site.name} /> : null}
             <Circle cx={site.x} cy={site.y} r={SITE_HIT_RADIUS_PX} fill="transparent" />
           </G>
         );

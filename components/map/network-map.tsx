@@ -7,7 +7,8 @@ import { fitNetwork, placeNetwork } from '@/components/map/map-geometry';
 import { emphasisFor, type HighlightTone, type MapHighlight } from '@/components/map/map-highlight';
 import { MapControls } from '@/components/map/map-controls';
 import { MapLegend } from '@/components/map/map-legend';
-import { MapSiteLayer } from '@/components/map/map-site-layer';
+import { MapSiteLayer, siteRadiusPx } from '@/components/map/map-site-layer';
+import { pickLabels } from '@/components/map/map-labels';
 import { MapSpanLayer } from '@/components/map/map-span-layer';
 import type { MapSelection, NetworkMapData } from '@/components/map/map-types';
 import { HOME_VIEW, labelledKindCount, zoomAround, ZOOM_STEP, type MapView } from '@/components/map/map-view';
@@ -50,7 +51,11 @@ export function NetworkMap({ data, highlight, secondaryHighlight, selected = nul
   const geometry = useMemo(() => placeNetwork(data, projection, view), [data, projection, view]);
   const emphasis = useMemo(() => emphasisFor(highlight, secondaryHighlight), [highlight, secondaryHighlight]);
   // Wide maps have room for more names at the same zoom.
-  const labelledKinds = compact ? 0 : labelledKindCount(view.zoom * Math.max(1, size.widthPx / 700));
+  const selectedSite = selected?.kind === 'site' ? selected.id : null;
+  const labelled = useMemo(() => {
+    const kinds = compact ? 0 : labelledKindCount(view.zoom * Math.max(1, size.widthPx / 400));
+    return pickLabels(geometry.sites, kinds, (s) => siteRadiusPx(s.kind, compact, emphasis.site(s.id).tone !== null), size, selectedSite);
+  }, [geometry, compact, view.zoom, size, emphasis, selectedSite]);
 
   const onLayout = (e: LayoutChangeEvent) => {
     const { width, height } = e.nativeEvent.layout;
@@ -74,9 +79,9 @@ export function NetworkMap({ data, highlight, secondaryHighlight, selected = nul
           <MapSiteLayer
             sites={geometry.sites}
             emphasis={emphasis}
-            selectedId={selected?.kind === 'site' ? selected.id : null}
+            selectedId={selectedSite}
             compact={compact}
-            labelledKinds={labelledKinds}
+            labelled={labelled}
             onPress={select('site')}
           />
         </Svg>

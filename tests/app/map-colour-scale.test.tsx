@@ -5,14 +5,16 @@ import { emphasisFor } from '@/components/map/map-highlight';
 import { mapColors } from '@/constants/theme';
 
 test('each edge belongs to the band above it', () => {
-  expect(utilisationBand(0)?.index).toBe(0);
-  expect(utilisationBand(0.4999)?.index).toBe(0);
-  expect(utilisationBand(0.5)?.index).toBe(1);
-  expect(utilisationBand(0.7)?.index).toBe(2);
-  expect(utilisationBand(0.85)?.index).toBe(3);
-  expect(utilisationBand(0.9999)?.index).toBe(3);
+  expect(utilisationBand(0)?.label).toBe('idle');
+  expect(utilisationBand(0.0099)?.index).toBe(0);
+  expect(utilisationBand(0.01)?.index).toBe(1);
+  expect(utilisationBand(0.2999)?.index).toBe(1);
+  expect(utilisationBand(0.3)?.index).toBe(2);
+  expect(utilisationBand(0.6)?.index).toBe(3);
+  expect(utilisationBand(0.8)?.index).toBe(4);
+  expect(utilisationBand(0.9999)?.index).toBe(4);
   expect(utilisationBand(1)?.label).toBe('over capacity');
-  expect(utilisationBand(7)?.index).toBe(4);
+  expect(utilisationBand(7)?.index).toBe(5);
 });
 
 test('negative counts as idle; missing or non-finite figures have no band and draw grey', () => {
