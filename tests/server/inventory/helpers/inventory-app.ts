@@ -14,13 +14,14 @@ export function readDemo(): Scenario {
   return JSON.parse(fs.readFileSync(DEMO_FILE, 'utf8')) as Scenario;
 }
 
-function withDatabase(url: string, name: string): string {
+export function withDatabase(url: string, name: string): string {
   const u = new URL(url);
   u.pathname = `/${name}`;
   return u.toString();
 }
 
-async function admin(baseUrl: string, statements: string[]): Promise<void> {
+/** Runs statements on the cluster's `postgres` database (create/drop scratch databases). */
+export async function admin(baseUrl: string, statements: string[]): Promise<void> {
   const client = new pg.Client({ connectionString: withDatabase(baseUrl, 'postgres') });
   await client.connect();
   try {
