@@ -80,7 +80,9 @@ export function ImpactReview({ window: w, me, timeZone, onOpenWindow }: Props) {
   return (
     <ScrollView contentContainerStyle={styles.page}>
       <View style={styles.column}>
-        <Button label="‹ Back to the window" variant="quiet" onPress={onOpenWindow} testID="impact-back" />
+        <View style={styles.back}>
+          <Button label="‹ Back to the window" variant="quiet" onPress={onOpenWindow} testID="impact-back" />
+        </View>
         <Text style={styles.title} role="heading" aria-level={1}>Impact: {w.title}</Text>
         <View style={styles.row}>
           <StatusBadge status={w.status} testID="impact-window-status" />
@@ -97,6 +99,7 @@ const styles = StyleSheet.create({
   page: { padding: space.lg, alignItems: 'center' },
   column: { width: '100%', maxWidth: CONTENT_MAX_WIDTH_PX, gap: space.md },
   title: { ...type.title, color: colors.abyss },
+  back: { alignSelf: 'flex-start' },
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
   body: { gap: space.md },
   columns: { flexDirection: 'row', gap: space.md, alignItems: 'flex-start' },
