@@ -80,3 +80,37 @@ export function FreezeIcon({ size = 24, color = colors.ink }: IconProps) {
     </Svg>
   );
 }
+
+/** Network: three sites joined by spans, one of them a hub. */
+export function NetworkIcon({ size = 24, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Path d="M6 7 L12 15 L18 6 M6 7 L18 6 M12 15 L17 19" stroke={color} strokeWidth={1.6} strokeLinecap="round" />
+      <Circle cx={6} cy={7} r={2.4} fill={colors.surface} stroke={color} strokeWidth={1.8} />
+      <Circle cx={18} cy={6} r={2.4} fill={colors.surface} stroke={color} strokeWidth={1.8} />
+      <Rect x={9.6} y={12.6} width={4.8} height={4.8} rx={1} fill={colors.surface} stroke={color} strokeWidth={1.8} />
+      <Circle cx={17.5} cy={19.5} r={1.6} fill={color} />
+    </Svg>
+  );
+}
+
+/** Slices: three thin layers stacked over one another, like slices riding the same network. */
+export function SlicesIcon({ size = 24, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Path d="M12 4 L20 8 L12 12 L4 8 Z" stroke={color} strokeWidth={1.8} strokeLinejoin="round" />
+      <Path d="M4 12 L12 16 L20 12" stroke={color} strokeWidth={1.8} strokeLinecap="round" strokeLinejoin="round" />
+      <Path d="M4 16 L12 20 L20 16" stroke={color} strokeWidth={1.8} strokeLinecap="round" strokeLinejoin="round" />
+    </Svg>
+  );
+}
+
+/** Imports: a sheet dropping into an open tray. */
+export function ImportIcon({ size = 24, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Path d="M12 3.5 V13 M8.5 9.5 L12 13 L15.5 9.5" stroke={color} strokeWidth={1.8} strokeLinecap="round" strokeLinejoin="round" />
+      <Path d="M4 14 V18.5 A1.5 1.5 0 0 0 5.5 20 H18.5 A1.5 1.5 0 0 0 20 18.5 V14" stroke={color} strokeWidth={1.8} strokeLinecap="round" />
+    </Svg>
+  );
+}

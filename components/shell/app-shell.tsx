@@ -32,7 +32,7 @@ export function AppShell({ user, pathname, onSignOut, signingOut, children }: Pr
         </View>
       </View>
       <View style={styles.content}>{children}</View>
-      <BottomTabs pathname={pathname} />
+      <BottomTabs pathname={pathname} roles={user.roles} />
     </View>
   );
 }

@@ -2,14 +2,15 @@
 import { Link } from 'expo-router';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
-import { NAV_AREAS } from '@/components/shell/nav-areas';
+import type { RoleName } from '@/shared/api';
+import { areasFor } from '@/components/shell/nav-areas';
 import { colors, space, type } from '@/constants/theme';
 
-export function BottomTabs({ pathname }: { pathname: string }) {
+export function BottomTabs({ pathname, roles }: { pathname: string; roles: readonly RoleName[] }) {
   const insets = useSafeAreaInsets();
   return (
     <View style={[styles.bar, { paddingBottom: insets.bottom + space.xs }]} role="tablist" testID="bottom-tabs">
-      {NAV_AREAS.map(({ key, label, href, matches, Icon }) => {
+      {areasFor(roles).map(({ key, label, href, matches, Icon }) => {
         const active = matches(pathname);
         const tint = active ? colors.primary : colors.inkMuted;
         return (

@@ -1,7 +1,8 @@
 // The areas of the signed-in app. List only areas that work; add each new one here when its screens land.
 import type { ComponentType } from 'react';
 import type { Href } from 'expo-router';
-import { CalendarIcon, FreezeIcon, MapIcon, OverviewIcon } from '@/components/icons';
+import type { RoleName } from '@/shared/api';
+import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, OverviewIcon, SlicesIcon } from '@/components/icons';
 
 export type NavArea = {
   key: string;
@@ -10,10 +11,14 @@ export type NavArea = {
   /** Path prefixes that count as being inside this area. */
   matches: (pathname: string) => boolean;
   Icon: ComponentType<{ size?: number; color?: string }>;
+  /** Only users holding one of these roles see the area (the API checks again); unset = everyone signed in. */
+  roles?: readonly RoleName[];
 };
 
 export const NAV_AREAS: readonly NavArea[] = [
   { key: 'overview', label: 'Overview', href: '/', matches: (pathname) => pathname === '/', Icon: OverviewIcon },
+  { key: 'network', label: 'Network', href: '/network', matches: (pathname) => pathname.startsWith('/network'), Icon: NetworkIcon },
+  { key: 'slices', label: 'Slices', href: '/slices', matches: (pathname) => pathname.startsWith('/slices'), Icon: SlicesIcon },
   { key: 'map', label: 'Map', href: '/map', matches: (pathname) => pathname.startsWith('/map'), Icon: MapIcon },
   {
     key: 'calendar',
@@ -24,4 +29,13 @@ export const NAV_AREAS: readonly NavArea[] = [
     Icon: CalendarIcon,
   },
   { key: 'freezes', label: 'Freezes', href: '/freezes', matches: (pathname) => pathname.startsWith('/freezes'), Icon: FreezeIcon },
+  {
+    key: 'imports', label: 'Imports', href: '/imports', matches: (pathname) => pathname.startsWith('/imports'),
+    Icon: ImportIcon, roles: ['admin', 'planner'],
+  },
 ];
+
+/** The areas a user with these roles may open. */
+export function areasFor(roles: readonly RoleName[]): NavArea[] {
+  return NAV_AREAS.filter((area) => !area.roles || area.roles.some((role) => roles.includes(role)));
+}

@@ -2,7 +2,7 @@
 import { Link } from 'expo-router';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { LogoMark } from '@/components/icons';
-import { NAV_AREAS } from '@/components/shell/nav-areas';
+import { areasFor } from '@/components/shell/nav-areas';
 import { UserSummary } from '@/components/shell/user-summary';
 import type { Me } from '@/shared/api';
 import { colors, radii, space, type } from '@/constants/theme';
@@ -17,7 +17,7 @@ export function SideRail({ user, pathname, onSignOut, signingOut }: Props) {
         <Text style={styles.name}>Slackwater</Text>
       </View>
       <View style={styles.areas}>
-        {NAV_AREAS.map(({ key, label, href, matches, Icon }) => {
+        {areasFor(user.roles).map(({ key, label, href, matches, Icon }) => {
           const active = matches(pathname);
           return (
             <Link key={key} href={href} asChild>

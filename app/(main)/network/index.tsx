@@ -1,0 +1,6 @@
+// Network with nothing selected: on wide screens the detail pane shows the whole network as a map.
+import { InventoryMapPane } from '@/components/inventory/inventory-map-pane';
+
+export default function NetworkIndexScreen() {
+  return <InventoryMapPane />;
+}

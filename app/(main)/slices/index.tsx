@@ -1,0 +1,6 @@
+// Slices with nothing selected (seen on wide screens only; phones show the list).
+import { DetailPlaceholder } from '@/components/inventory/detail-placeholder';
+
+export default function SlicesIndexScreen() {
+  return <DetailPlaceholder title="Pick a slice" hint="Its functions, ties, current placement and history show here." />;
+}

@@ -1,0 +1,34 @@
+// List and detail: side by side from WIDE_LAYOUT_MIN_WIDTH_PX, otherwise one at a time (list, then detail).
+// On phones the list stays mounted while hidden, so its search, sort and scroll survive a visit to a detail.
+import type { ReactNode } from 'react';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
+import { colors, space, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
+
+type Props = { list: ReactNode; detail: ReactNode; showDetail: boolean };
+
+export function SplitView({ list, detail, showDetail }: Props) {
+  const { width } = useWindowDimensions();
+  if (width >= WIDE_LAYOUT_MIN_WIDTH_PX) {
+    return (
+      <View style={styles.wide} testID="split-wide">
+        <View style={styles.listPane}>{list}</View>
+        <View style={styles.detailPane}>{detail}</View>
+      </View>
+    );
+  }
+  return (
+    <View style={styles.narrow} testID="split-narrow">
+      <View style={[styles.narrowPane, showDetail && styles.hidden]}>{list}</View>
+      {showDetail ? <View style={styles.narrowPane}>{detail}</View> : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wide: { flex: 1, flexDirection: 'row' },
+  listPane: { flex: 5, minWidth: 360, padding: space.lg, paddingRight: space.sm },
+  detailPane: { flex: 6, borderLeftWidth: 1, borderLeftColor: colors.border, backgroundColor: colors.surface },
+  narrow: { flex: 1 },
+  narrowPane: { flex: 1 },
+  hidden: { display: 'none' },
+});
