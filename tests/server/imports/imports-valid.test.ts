@@ -1,7 +1,6 @@
 // Every import kind with a valid file: preview lists the right adds/changes/removes, apply writes them in one go.
 import request from 'supertest';
 import { importCreatedSchema, importDetailSchema, importListSchema } from '../../../shared/imports';
-import { scenarioToGraphml } from '../../../server/services/inventory/graphml-export';
 import { loadScenario } from '../../../server/services/inventory/load-scenario';
 import { apply, csv, inventoryFingerprint, setupScratchApp, upload, type ImportsContext } from './helpers/scratch-app';
 
@@ -12,9 +11,22 @@ afterAll(() => ctx.dropDatabase());
 const currentPlacement = async (sliceId: string) =>
   (await ctx.pool.query('select revision, current, reason, sites, paths from placements where slice_id = $1 order by revision', [sliceId])).rows;
 
-test('export → import round trip of the demo previews zero changes (scenario file)', async () => {
-  const current = await loadScenario(ctx.db);
-  const res = await upload(ctx, { text: JSON.stringify(current, null, 2), name: 'demo-export.json' });
+/** GET an export as the exact text served (supertest would otherwise parse JSON or drop unknown types). */
+async function exported(path: string): Promise<{ text: string; fileName: string }> {
+  const res = await request(ctx.app).get(path).set('Cookie', ctx.planner).buffer(true)
+    .parse((stream, done) => {
+      let text = '';
+      stream.setEncoding('utf8');
+      stream.on('data', (chunk: string) => { text += chunk; });
+      stream.on('end', () => done(null, text));
+    });
+  expect(res.status).toBe(200);
+  return { text: res.body as string, fileName: /filename="([^"]+)"/.exec(res.headers['content-disposition'])![1] };
+}
+
+test('export → import round trip of the demo previews zero changes (GET /api/export/scenario)', async () => {
+  const file = await exported('/api/export/scenario');
+  const res = await upload(ctx, { text: file.text, name: file.fileName });
   expect(res.status).toBe(201);
   const body = importCreatedSchema.parse(res.body);
   expect(body.kind).toBe('scenario');
@@ -22,9 +34,9 @@ test('export → import round trip of the demo previews zero changes (scenario f
   expect(body.preview.counts).toMatchObject({ adds: 0, changes: 0, removes: 0, errors: 0 });
 });
 
-test('export → import round trip of the GraphML export previews zero changes', async () => {
-  const graphml = scenarioToGraphml(await loadScenario(ctx.db));
-  const body = importCreatedSchema.parse((await upload(ctx, { text: graphml, name: 'network.graphml' })).body);
+test('export → import round trip of the GraphML export previews zero changes (GET /api/export/graphml)', async () => {
+  const file = await exported('/api/export/graphml');
+  const body = importCreatedSchema.parse((await upload(ctx, { text: file.text, name: file.fileName })).body);
   expect(body.kind).toBe('graphml');
   expect(body.preview.errors).toEqual([]);
   expect(body.preview.counts).toMatchObject({ adds: 0, changes: 0, removes: 0 });
