@@ -27,11 +27,17 @@ function orderFunctions(functions: ScenarioFunction[], ties: ScenarioTie[]): Sce
   return [...ordered, ...[...byId.values()].sort(byNaturalId)];
 }
 
+function pushTo<T>(groups: Map<string, T[]>, key: string, item: T): void {
+  const list = groups.get(key);
+  if (list) list.push(item);
+  else groups.set(key, [item]);
+}
+
 function toSlices(t: ScenarioTables): ScenarioSlice[] {
   const functionsBySlice = new Map<string, ScenarioFunction[]>();
   for (const f of t.functionRows) {
     const fn = present({ id: f.id, name: f.name, cpu: f.cpu, anchor: f.anchor, moveCost: f.moveCost, fixed: f.fixed });
-    functionsBySlice.set(f.sliceId, [...(functionsBySlice.get(f.sliceId) ?? []), fn]);
+    pushTo(functionsBySlice, f.sliceId, fn);
   }
   const tiesBySlice = new Map<string, ScenarioTie[]>();
   for (const e of [...t.tieRows].sort(byNaturalId)) {
@@ -39,7 +45,7 @@ function toSlices(t: ScenarioTables): ScenarioSlice[] {
       id: e.id, from: e.fromFunction, to: e.toFunction, bandwidthGbps: e.bandwidthGbps,
       maxLatencyMs: e.maxLatencyMs, minAvailability: e.minAvailability,
     });
-    tiesBySlice.set(e.sliceId, [...(tiesBySlice.get(e.sliceId) ?? []), tie]);
+    pushTo(tiesBySlice, e.sliceId, tie);
   }
   return [...t.sliceRows].sort(byNaturalId).map((s) => {
     const ties = tiesBySlice.get(s.id) ?? [];
