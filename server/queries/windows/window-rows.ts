@@ -37,6 +37,13 @@ function conditions(f: WindowFilter): SQL[] {
   return out;
 }
 
+/** From the stored impact; for a tenant user only its own critical slices count (no hint of others'). */
+function touchesCritical(scopeTenant: string | null): SQL<boolean | null> {
+  if (scopeTenant === null) return sql<boolean | null>`(${windowImpacts.impact} ->> 'touchesCritical')::boolean`;
+  return sql<boolean | null>`exists (select 1 from jsonb_array_elements(${windowImpacts.impact} -> 'affected') a
+    where (a ->> 'critical')::boolean and a -> 'tenant' ->> 'id' = ${scopeTenant})`;
+}
+
 export async function selectWindowRows(db: Queryable, filter: WindowFilter) {
   const rows = await db.select({
     id: windows.id, title: windows.title, startsAt: windows.startsAt, endsAt: windows.endsAt,
@@ -45,7 +52,7 @@ export async function selectWindowRows(db: Queryable, filter: WindowFilter) {
     createdAt: windows.createdAt, updatedAt: windows.updatedAt,
     mopFileName: windowDocuments.fileName, mopMime: windowDocuments.mime,
     mopSizeBytes: windowDocuments.sizeBytes, mopUploadedAt: windowDocuments.uploadedAt,
-    touchesCritical: sql<boolean | null>`(${windowImpacts.impact} ->> 'touchesCritical')::boolean`,
+    touchesCritical: touchesCritical(filter.scopeTenant ?? null),
     impactStored: sql<boolean>`${windowImpacts.windowId} is not null`,
   }).from(windows)
     .leftJoin(users, eq(users.id, windows.ownerId))

@@ -4,7 +4,7 @@ import multer from 'multer';
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import { insertAuditEntry } from '../../queries/audit';
-import { upsertWindowDocument } from '../../queries/windows/documents';
+import { getWindowDocument, upsertWindowDocument } from '../../queries/windows/documents';
 import { MopMissingError, MopTooLargeError, MopTypeError } from './errors';
 
 export const MOP_MAX_BYTES = 10 * 1024 * 1024;
@@ -42,10 +42,12 @@ export async function storeMop(
   const mime = sniffMopType(file);
   const fileName = file.originalname.replace(/[\\/\r\n]/g, '_').slice(0, 200) || 'mop';
   await db.transaction(async (tx) => {
+    const previous = await getWindowDocument(tx, windowId);
     await upsertWindowDocument(tx, { windowId, fileName, mime, content: file.buffer, uploadedBy: user.id, uploadedAt: now });
     await insertAuditEntry(tx, {
       actorId: user.id, action: 'window.mop.upload', entity: 'window', entityId: windowId, at: now,
-      before: null, after: { fileName, mime, sizeBytes: file.buffer.length },
+      before: previous && { fileName: previous.fileName, mime: previous.mime, sizeBytes: previous.sizeBytes },
+      after: { fileName, mime, sizeBytes: file.buffer.length },
     });
   });
 }

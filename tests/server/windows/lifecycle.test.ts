@@ -182,6 +182,9 @@ describe('method of procedure', () => {
     expect(big.status).toBe(413);
     expect(big.body.error.code).toBe('MOP_TOO_LARGE');
     expect((await engineer('get', `/api/windows/${windowId}`)).body.mop).toMatchObject({ fileName: 'steps.txt', mime: 'text/plain' });
+    const audit = await ctx.pool.query(`select before, after from audit_log where entity_id = $1 and action = 'window.mop.upload' order by id`, [windowId]);
+    expect(audit.rows).toHaveLength(2); // refused uploads leave no row
+    expect(audit.rows[1]).toMatchObject({ before: { fileName: 'splice plan.pdf' }, after: { fileName: 'steps.txt', mime: 'text/plain' } });
   });
 
   test('tenants cannot download it; a window without one answers 404', async () => {

@@ -67,6 +67,21 @@ test("a tenant sees only its own slices in an impact, and no other tenant's load
   expect(JSON.stringify(scoped)).not.toContain(otherTenantId);
 });
 
+test("a tenant's touchesCritical counts only its own critical slices", async () => {
+  const planner = await ctx.as('planner');
+  await planner('post', `/api/windows/${w['transit-site']}/assess`).send({});
+  // Staff see the flag from the own slice (critical); the tenant owns that slice, so it sees it too.
+  const staffRead = (await planner('get', `/api/windows/${w['transit-site']}`)).body;
+  const tenantRead = (await (await ctx.as('tenant'))('get', `/api/windows/${w['transit-site']}`)).body;
+  expect([staffRead.touchesCritical, tenantRead.touchesCritical]).toEqual([true, true]);
+  // Make the other tenant's slice critical instead: staff still see a critical touch via the impact; the tenant does not.
+  await ctx.pool.query(`update window_impacts set impact = jsonb_set(impact, '{affected}', (
+    select jsonb_agg(case when a->'tenant'->>'id' = $2 then jsonb_set(a, '{critical}', 'false') else jsonb_set(a, '{critical}', 'true') end)
+    from jsonb_array_elements(impact->'affected') a)) where window_id = $1`, [w['transit-site'], ctx.tenantId]);
+  const tenantAfter = (await (await ctx.as('tenant'))('get', `/api/windows/${w['transit-site']}`)).body;
+  expect(tenantAfter.touchesCritical).toBe(false);
+});
+
 test('filters: mine, status, element and affected tenant', async () => {
   expect(await listIds('admin', '&mine=true')).toEqual([w['transit-site']]);
   expect(await listIds('planner', '&status=withdrawn')).toEqual([w.withdrawn]);
