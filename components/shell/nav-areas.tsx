@@ -28,7 +28,11 @@ export const NAV_AREAS: readonly NavArea[] = [
     matches: (pathname) => pathname.startsWith('/calendar') || pathname.startsWith('/windows'),
     Icon: CalendarIcon,
   },
-  { key: 'freezes', label: 'Freezes', href: '/freezes', matches: (pathname) => pathname.startsWith('/freezes'), Icon: FreezeIcon },
+  {
+    key: 'freezes', label: 'Freezes', href: '/freezes', matches: (pathname) => pathname.startsWith('/freezes'),
+    // Operator staff only: the API does not show freezes to tenant users.
+    Icon: FreezeIcon, roles: ['admin', 'engineer', 'planner', 'approver'],
+  },
   {
     key: 'imports', label: 'Imports', href: '/imports', matches: (pathname) => pathname.startsWith('/imports'),
     Icon: ImportIcon, roles: ['admin', 'planner'],
