@@ -1,8 +1,8 @@
 // One day cell of the month view: the date (today ringed, the selection filled), a conflict dot,
 // the windows' bars on their lanes, "+n" for more, and freeze hatching behind.
-import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import type { DateData } from 'react-native-calendars';
-import { calendarColors, colors, fonts, radii, space } from '@/constants/theme';
+import { calendarColors, colors, fonts, radii, space, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
 import type { CalendarDayMark } from './calendar-types';
 import { FreezeHatch } from './freeze-hatch';
 
@@ -16,13 +16,15 @@ type Props = {
   children?: React.ReactNode;
 };
 
-export const DAY_CELL_HEIGHT_PX = 66;
+/** Shorter cells on phones so the agenda starts within the first screen. */
+export const DAY_CELL_HEIGHT_PX = { phone: 52, wide: 72 } as const;
 
 export function CalendarDay({ date, state, marking, onPress, testID, accessibilityLabel, children }: Props) {
   const outside = state === 'disabled';
   const selected = marking?.selected === true;
   const today = marking?.today === true;
   const frozen = (marking?.freezeTitles.length ?? 0) > 0;
+  const height = useWindowDimensions().width >= WIDE_LAYOUT_MIN_WIDTH_PX ? DAY_CELL_HEIGHT_PX.wide : DAY_CELL_HEIGHT_PX.phone;
   return (
     <Pressable
       testID={testID}
@@ -31,7 +33,7 @@ export function CalendarDay({ date, state, marking, onPress, testID, accessibili
       accessibilityState={{ selected }}
       aria-selected={selected}
       onPress={() => onPress?.(date)}
-      style={({ pressed }) => [styles.cell, pressed && styles.pressed]}
+      style={({ pressed }) => [styles.cell, { height }, pressed && styles.pressed]}
     >
       {frozen ? <FreezeHatch /> : null}
       <View style={styles.numberRow}>
@@ -63,7 +65,6 @@ const BAR_HEIGHT_PX = 6;
 const styles = StyleSheet.create({
   cell: {
     alignSelf: 'stretch',
-    height: DAY_CELL_HEIGHT_PX,
     paddingTop: space.xs,
     borderTopWidth: 1,
     borderTopColor: colors.surfaceSunken,
@@ -86,7 +87,7 @@ const styles = StyleSheet.create({
     borderRadius: radii.pill,
     backgroundColor: calendarColors.conflict,
   },
-  lanes: { marginTop: space.xs, gap: 2 },
+  lanes: { marginTop: 3, gap: 2 },
   faded: { opacity: 0.45 },
   bar: { height: BAR_HEIGHT_PX },
   barStart: { marginLeft: 3, borderTopLeftRadius: 3, borderBottomLeftRadius: 3 },

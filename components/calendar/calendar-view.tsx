@@ -1,6 +1,6 @@
 // The calendar screen's body: month view and the selected day's agenda, stacked on phones and side by side
 // from WIDE_LAYOUT_MIN_WIDTH_PX; filters and the "Book a window" action above the agenda.
-import { useMemo } from 'react';
+import { useMemo, useRef } from 'react';
 import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { Button } from '@/components/button';
 import { colors, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
@@ -27,6 +27,11 @@ export type CalendarViewProps = {
   onOpenWindow: (id: string) => void;
 };
 
+function emptyHint(filtered: boolean, windowCount: number): string {
+  if (filtered) return 'Filters are on; clear them to see every window.';
+  return windowCount === 0 ? 'Nothing is booked this month.' : 'Pick a day with a bar to see its windows.';
+}
+
 export function CalendarView(props: CalendarViewProps) {
   const { state, timeZone, freezes, refreshing, refreshError, canBook, onBook, onOpenWindow } = props;
   const { width } = useWindowDimensions();
@@ -40,34 +45,45 @@ export function CalendarView(props: CalendarViewProps) {
     [windows, freezes, timeZone, state.selectedDay, state.today],
   );
   const filtered = countActiveFilters(state.filters) > 0;
+  const scroller = useRef<ScrollView>(null);
+  // Offsets inside the scroll content: the phone stack's top, and the agenda's top within the stack.
+  const stackY = useRef(0);
+  const agendaY = useRef(0);
+  // On phones the agenda sits below the month; bring it into view when a day is picked.
+  const selectDay = (day: string) => {
+    state.selectDay(day);
+    if (!wide) scroller.current?.scrollTo({ y: Math.max(0, stackY.current + agendaY.current - space.sm), animated: true });
+  };
 
   const calendar = (
-    <MonthCalendar month={state.month} today={state.today} marks={marks} onDayPress={state.selectDay} onMonthChange={state.setMonth} loading={refreshing} />
+    <MonthCalendar month={state.month} today={state.today} marks={marks} onDayPress={selectDay} onMonthChange={state.setMonth} loading={refreshing} />
   );
   const side = (
     <>
-      <CalendarFilters filters={state.filters} onChange={state.setFilters} tenants={props.tenants} initiallyOpen={wide} />
+      <CalendarFilters filters={state.filters} onChange={state.setFilters} tenants={props.tenants} initiallyOpen={false} />
       {refreshError ? (
         <Text style={styles.stale} role="alert" testID="calendar-refresh-error">
           Could not load this month: {refreshError}
         </Text>
       ) : null}
-      <AgendaList
-        day={state.selectedDay}
-        timeZone={timeZone}
-        windows={windowsOnDay(windows, state.selectedDay, timeZone)}
-        freezes={freezesOnDay(freezes, state.selectedDay, timeZone)}
-        onOpenWindow={onOpenWindow}
-        emptyHint={filtered ? 'Filters are on; clear them to see every window.' : windows.length === 0 ? 'Nothing is booked this month.' : 'Pick a day with a bar to see its windows.'}
-      />
+      <View onLayout={(event) => (agendaY.current = event.nativeEvent.layout.y)}>
+        <AgendaList
+          day={state.selectedDay}
+          timeZone={timeZone}
+          windows={windowsOnDay(windows, state.selectedDay, timeZone)}
+          freezes={freezesOnDay(freezes, state.selectedDay, timeZone)}
+          onOpenWindow={onOpenWindow}
+          emptyHint={emptyHint(filtered, windows.length)}
+        />
+      </View>
     </>
   );
   return (
-    <ScrollView style={styles.screen} contentContainerStyle={[styles.content, wide && styles.contentWide]}>
+    <ScrollView ref={scroller} style={styles.screen} contentContainerStyle={[styles.content, wide && styles.contentWide]}>
       <View style={styles.toolbar}>
         <View style={styles.titleBox}>
           <Text style={styles.title} role="heading">
-            Maintenance calendar
+            {wide ? 'Maintenance calendar' : 'Calendar'}
           </Text>
           <Text style={styles.subtitle}>Times in {timeZone}</Text>
         </View>
@@ -79,7 +95,7 @@ export function CalendarView(props: CalendarViewProps) {
           <View style={styles.sideColumn}>{side}</View>
         </View>
       ) : (
-        <View style={styles.stack}>
+        <View style={styles.stack} onLayout={(event) => (stackY.current = event.nativeEvent.layout.y)}>
           {calendar}
           {side}
         </View>

@@ -73,10 +73,17 @@ export function formatWindowRange(startsAtIso: string, endsAtIso: string, timeZo
   return `${startText} – ${endText} ${endZone}`;
 }
 
-/** "4 h 30 min" for a duration measured between instants (never between wall-clock readings). */
+/** From this length on, durations read in days ("4 d"), which is how long freezes are thought of. */
+const DAYS_FROM_HOURS = 48;
+
+/** "4 h 30 min" (or "3 d 2 h" for long ones) for a duration measured between instants, never wall-clock readings. */
 export function formatDuration(durationMs: number): string {
   const totalMinutes = Math.round(durationMs / 60_000);
   const hours = Math.floor(totalMinutes / 60);
+  if (hours >= DAYS_FROM_HOURS) {
+    const days = Math.floor(hours / 24);
+    return hours % 24 === 0 ? `${days} d` : `${days} d ${hours % 24} h`;
+  }
   const minutes = totalMinutes % 60;
   if (hours === 0) return `${minutes} min`;
   return minutes === 0 ? `${hours} h` : `${hours} h ${minutes} min`;

@@ -10,8 +10,9 @@ const FREEZES_ROOT = ['freezes'] as const;
 /** Key of every cached freeze list; invalidate after any freeze change. */
 export const freezesKey = () => [...FREEZES_ROOT] as const;
 
-export function useFreezesQuery() {
-  return useQuery({ queryKey: freezesKey(), queryFn: () => apiFetch('/api/freezes', freezeListSchema) });
+/** Every freeze; `enabled` false for tenant users, who may not read them (the API answers 403). */
+export function useFreezesQuery(enabled = true) {
+  return useQuery({ queryKey: freezesKey(), queryFn: () => apiFetch('/api/freezes', freezeListSchema), enabled });
 }
 
 // Create and update answer with the freeze, possibly wrapped; both shapes are accepted.

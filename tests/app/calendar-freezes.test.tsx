@@ -67,7 +67,7 @@ afterEach(() => queryClient?.clear());
 
 test('other staff see freezes in their zone, coming before past, with no way to change them', () => {
   renderScreen(false);
-  expect(screen.getByTestId('freeze-f-1')).toHaveTextContent(/Thu 24 Dec, 00:00 – Sun 27 Dec, 00:00 CET · 72 h/);
+  expect(screen.getByTestId('freeze-f-1')).toHaveTextContent(/Thu 24 Dec, 00:00 – Sun 27 Dec, 00:00 CET · 3 d/);
   expect(screen.getByTestId('freeze-f-0')).toBeTruthy();
   expect(screen.queryByTestId('freeze-new')).toBeNull();
   expect(screen.queryByTestId('freeze-f-1-edit')).toBeNull();

@@ -79,6 +79,8 @@ describe('daylight-saving change days', () => {
     expect(segment.durationMs).toBe(2 * HOUR_MS);
     expect(formatWindowRange(startsAt, endsAt, BERLIN)).toBe('Sun 28 Mar, 01:00 CET – 04:00 CEST');
     expect(formatDuration(segment.durationMs)).toBe('2 h');
+    expect(formatDuration(90 * 60_000)).toBe('1 h 30 min');
+    expect(formatDuration(74 * HOUR_MS)).toBe('3 d 2 h');
   });
 
   test('Berlin 2027-10-31 has 25 hours', () => {

@@ -16,7 +16,7 @@ export default function CalendarScreen() {
   const state = useCalendarState(timeZone);
   const roles = useMeQuery().data?.roles ?? [];
   const windows = useWindowsListQuery(listParams(visibleRange(state.month, timeZone), state.filters));
-  const freezes = useFreezesQuery();
+  const freezes = useFreezesQuery(isStaff(roles));
   const tenants = useTenantChoicesQuery(isStaff(roles));
 
   if (windows.isError && !windows.data) return <ErrorState message={windows.error.message} onRetry={() => windows.refetch()} />;
