@@ -3,7 +3,17 @@ import { Pressable, StyleSheet, View } from 'react-native';
 import Svg, { Path } from 'react-native-svg';
 import { colors, radii, space } from '@/constants/theme';
 
-type Props = { onZoomIn: () => void; onZoomOut: () => void; onReset: () => void; canZoomOut: boolean };
+type Props = {
+  onZoomIn: () => void;
+  onZoomOut: () => void;
+  onReset: () => void;
+  canZoomOut: boolean;
+  /** A row along the top (narrow maps, where a column would cover the network) instead of a column. */
+  row?: boolean;
+};
+
+/** Height the row of buttons takes at the top of a narrow map, so the fitted network can stay clear of it. */
+export const CONTROLS_ROW_HEIGHT_PX = 44 + 8 + 4;
 
 const ICONS = {
   in: 'M12 6 V18 M6 12 H18',
@@ -33,13 +43,14 @@ function ControlButton({ icon, label, testID, onPress, disabled = false }: {
   );
 }
 
-export function MapControls({ onZoomIn, onZoomOut, onReset, canZoomOut }: Props) {
+export function MapControls({ onZoomIn, onZoomOut, onReset, canZoomOut, row = false }: Props) {
+  const ruleStyle = row ? styles.ruleRow : styles.rule;
   return (
-    <View style={styles.stack}>
+    <View style={[styles.stack, row && styles.stackRow]}>
       <ControlButton icon="in" label="Zoom in" testID="map-zoom-in" onPress={onZoomIn} />
-      <View style={styles.rule} />
+      <View style={ruleStyle} />
       <ControlButton icon="out" label="Zoom out" testID="map-zoom-out" onPress={onZoomOut} disabled={!canZoomOut} />
-      <View style={styles.rule} />
+      <View style={ruleStyle} />
       <ControlButton icon="reset" label="Show the whole network" testID="map-reset" onPress={onReset} disabled={!canZoomOut} />
     </View>
   );
@@ -59,5 +70,7 @@ const styles = StyleSheet.create({
   button: { width: 44, height: 44, alignItems: 'center', justifyContent: 'center' },
   pressed: { backgroundColor: colors.primarySoft },
   disabled: { opacity: 0.35 },
+  stackRow: { flexDirection: 'row' },
   rule: { height: 1, backgroundColor: colors.border },
+  ruleRow: { width: 1, backgroundColor: colors.border },
 });

@@ -12,11 +12,17 @@ function outlineRings(outline: MapOutline | null): number[][][] {
   return outline.type === 'Polygon' ? outline.coordinates : outline.coordinates.flat();
 }
 
-/** Fits sites and outline (together) into the viewport, leaving room for glyphs and labels at the edges. */
-export function fitNetwork(data: NetworkMapData, size: { widthPx: number; heightPx: number }, paddingPx: number): Projection {
+/**
+ * Fits sites and outline (together) into the viewport, leaving room for glyphs and labels at the edges and
+ * `topInsetPx` clear at the top (where narrow maps keep their buttons).
+ */
+export function fitNetwork(data: NetworkMapData, size: { widthPx: number; heightPx: number }, paddingPx: number, topInsetPx = 0): Projection {
   const points: LonLat[] = data.sites.map(({ lon, lat }) => ({ lon, lat }));
   for (const ring of outlineRings(data.outline)) for (const [lon, lat] of ring) points.push({ lon, lat });
-  return fitProjection(points, { ...size, paddingPx });
+  const inset = Math.min(topInsetPx, size.heightPx / 3);
+  const fitted = fitProjection(points, { widthPx: size.widthPx, heightPx: size.heightPx - inset, paddingPx });
+  if (inset === 0) return fitted;
+  return { ...fitted, project: (p) => { const { x, y } = fitted.project(p); return { x, y: y + inset }; } };
 }
 
 function ringPath(ring: number[][], toScreen: (p: LonLat) => Point): string {

@@ -17,19 +17,24 @@ export function labelBox(site: PlacedSite, r: number): Box {
 }
 
 /**
- * Ids of the sites to label: the selected one always, then the first `kindCount` kinds (biggest first), skipping
- * any whose label would overlap one already placed or fall outside the viewport.
+ * Ids of the sites to label: pinned ones first (the selected site, highlighted ones; `pinOf` gives their order,
+ * null for unpinned), then the first `kindCount` kinds, biggest first, skipping any label that would overlap one
+ * already placed or fall outside the viewport.
  */
 export function pickLabels(
   sites: readonly PlacedSite[],
   kindCount: number,
   radiusOf: (site: PlacedSite) => number,
   size: { widthPx: number; heightPx: number },
-  selectedId: string | null,
+  pinOf: (site: PlacedSite) => number | null = () => null,
 ): Set<string> {
   const chosen = new Set<string>();
   const placed: Box[] = [];
-  const rank = (s: PlacedSite) => (s.id === selectedId ? -1 : KIND_ORDER.indexOf(s.kind));
+  // Pinned sites rank below every kind index, so they are always candidates and placed first.
+  const rank = (s: PlacedSite) => {
+    const pin = pinOf(s);
+    return pin === null ? KIND_ORDER.indexOf(s.kind) : pin - KIND_ORDER.length - 1;
+  };
   const candidates = sites.filter((s) => rank(s) < kindCount).sort((a, b) => rank(a) - rank(b));
   for (const site of candidates) {
     const box = labelBox(site, radiusOf(site));

@@ -5,7 +5,7 @@ import { StyleSheet, View, type LayoutChangeEvent } from 'react-native';
 import Svg, { Path, Rect } from 'react-native-svg';
 import { fitNetwork, placeNetwork } from '@/components/map/map-geometry';
 import { emphasisFor, type HighlightTone, type MapHighlight } from '@/components/map/map-highlight';
-import { MapControls } from '@/components/map/map-controls';
+import { CONTROLS_ROW_HEIGHT_PX, MapControls } from '@/components/map/map-controls';
 import { MapLegend } from '@/components/map/map-legend';
 import { MapSiteLayer, siteRadiusPx } from '@/components/map/map-site-layer';
 import { pickLabels } from '@/components/map/map-labels';
@@ -32,6 +32,10 @@ export type NetworkMapProps = {
 // Until the first layout arrives (and in tests, where none does) the map draws at a phone-like size.
 const FALLBACK_SIZE = { widthPx: 360, heightPx: 320 };
 const COMPACT_HEIGHT_PX = 260;
+/** Smallest a full map gets when the screen around it is crowded (a phone with the selection panel open). */
+const MIN_HEIGHT_PX = 200;
+/** Below this width the zoom buttons go in a row along the top, and the network is fitted below them. */
+const NARROW_MAP_MAX_WIDTH_PX = 600;
 /** Room around the network for glyphs and labels at the edges. */
 const FIT_PADDING_PX = 28;
 
@@ -47,14 +51,21 @@ export function NetworkMap({ data, highlight, secondaryHighlight, selected = nul
   const gestures = useMapGestures({ view, size, setView });
   useWheelZoom(surface, useCallback((factor: number, focus: Point) => setView((v) => zoomAround(v, factor, focus)), []));
 
-  const projection = useMemo(() => fitNetwork(data, size, FIT_PADDING_PX), [data, size]);
+  const narrow = size.widthPx < NARROW_MAP_MAX_WIDTH_PX;
+  const projection = useMemo(
+    () => fitNetwork(data, size, FIT_PADDING_PX, narrow ? CONTROLS_ROW_HEIGHT_PX - FIT_PADDING_PX / 2 : 0),
+    [data, size, narrow],
+  );
   const geometry = useMemo(() => placeNetwork(data, projection, view), [data, projection, view]);
   const emphasis = useMemo(() => emphasisFor(highlight, secondaryHighlight), [highlight, secondaryHighlight]);
   // Wide maps have room for more names at the same zoom.
   const selectedSite = selected?.kind === 'site' ? selected.id : null;
   const labelled = useMemo(() => {
     const kinds = compact ? 0 : labelledKindCount(view.zoom * Math.max(1, size.widthPx / 400));
-    return pickLabels(geometry.sites, kinds, (s) => siteRadiusPx(s.kind, compact, emphasis.site(s.id).tone !== null), size, selectedSite);
+    const toned = (id: string) => emphasis.site(id).tone !== null;
+    // The selected site first, then highlighted ones, whatever their kind.
+    const pinOf = (s: { id: string }) => (s.id === selectedSite ? 0 : toned(s.id) ? 1 : null);
+    return pickLabels(geometry.sites, kinds, (s) => siteRadiusPx(s.kind, compact, toned(s.id)), size, pinOf);
   }, [geometry, compact, view.zoom, size, emphasis, selectedSite]);
 
   const onLayout = (e: LayoutChangeEvent) => {
@@ -68,8 +79,8 @@ export function NetworkMap({ data, highlight, secondaryHighlight, selected = nul
   const centre = { x: size.widthPx / 2, y: size.heightPx / 2 };
 
   return (
-    <View style={[styles.frame, compact && styles.compactFrame]} testID="network-map">
-      <View ref={surface} style={styles.surface} onLayout={onLayout} {...gestures.panHandlers}>
+    <View style={[styles.frame, !compact && styles.fill]} testID="network-map">
+      <View ref={surface} style={[styles.surface, compact ? styles.compactSurface : styles.fill]} onLayout={onLayout} {...gestures.panHandlers}>
         <Svg width={size.widthPx} height={size.heightPx} accessibilityLabel={`Map of ${data.name ?? "the network"}`}>
           <Rect x={0} y={0} width={size.widthPx} height={size.heightPx} fill={mapColors.sea} />
           {geometry.outlinePath ? (
@@ -86,6 +97,7 @@ export function NetworkMap({ data, highlight, secondaryHighlight, selected = nul
           />
         </Svg>
         <MapControls
+          row={narrow}
           canZoomOut={view.zoom > 1}
           onZoomIn={() => setView((v) => zoomAround(v, ZOOM_STEP, centre))}
           onZoomOut={() => setView((v) => zoomAround(v, 1 / ZOOM_STEP, centre))}
@@ -98,7 +110,9 @@ export function NetworkMap({ data, highlight, secondaryHighlight, selected = nul
 }
 
 const styles = StyleSheet.create({
-  frame: { flex: 1, backgroundColor: colors.surface, borderRadius: radii.md, borderWidth: 1, borderColor: colors.border, overflow: 'hidden' },
-  compactFrame: { flex: 0 },
-  surface: { flex: 1, minHeight: COMPACT_HEIGHT_PX, overflow: 'hidden', backgroundColor: mapColors.sea, userSelect: 'none', cursor: 'grab' } as object,
+  frame: { backgroundColor: colors.surface, borderRadius: radii.md, borderWidth: 1, borderColor: colors.border, overflow: 'hidden' },
+  // WARNING: no `flex: 0` for the compact map: react-native-web turns it into a zero flex-basis and the map collapses.
+  fill: { flex: 1 },
+  surface: { minHeight: MIN_HEIGHT_PX, overflow: 'hidden', backgroundColor: mapColors.sea, userSelect: 'none', cursor: 'grab' } as object,
+  compactSurface: { height: COMPACT_HEIGHT_PX },
 });
