@@ -2,6 +2,7 @@
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { elementKey, type ElementEffect, type PickedElement } from '@/components/windows/window-form-state';
 import { ChoiceChips } from '@/components/windows/choice-chips';
+import { ElementName } from '@/components/windows/element-name';
 import { colors, radii, space, type } from '@/constants/theme';
 
 const EFFECT_CHOICES = [
@@ -29,7 +30,7 @@ export function PickedElements({ elements, onChange, fractionErrors = {}, disabl
           <View key={key} style={styles.row} testID={`window-picked-${e.id}`}>
             <View style={styles.head}>
               <View style={styles.headText}>
-                <Text style={styles.name}>{e.label}</Text>
+                {e.label === e.id ? <ElementName kind={e.kind} id={e.id} style={styles.name} /> : <Text style={styles.name}>{e.label}</Text>}
                 <Text style={styles.muted}>{e.kind === 'site' ? 'Site' : 'Span'} · {e.id}</Text>
               </View>
               <Pressable role="button" accessibilityLabel={`Remove ${e.label}`} disabled={disabled} onPress={() => onChange(elements.filter((x) => elementKey(x) !== key))} style={styles.remove}>

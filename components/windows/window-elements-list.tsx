@@ -1,6 +1,7 @@
 // The sites and spans a window takes out, and how (down, or reduced to a share of capacity).
 import { StyleSheet, Text, View } from 'react-native';
 import type { Window } from '@/shared/windows';
+import { ElementName } from '@/components/windows/element-name';
 import { colors, radii, space, type } from '@/constants/theme';
 
 export function effectText(e: { effect: 'down' | 'reduced'; fraction: number | null }): string {
@@ -15,7 +16,10 @@ export function WindowElementsList({ elements }: { elements: Window['elements'] 
       {elements.map((e) => (
         <View key={`${e.kind}:${e.id}`} style={styles.row}>
           <Text style={styles.kind}>{e.kind === 'site' ? 'Site' : 'Span'}</Text>
-          <Text style={styles.id}>{e.id}</Text>
+          <View style={styles.names}>
+            <ElementName kind={e.kind} id={e.id} style={styles.id} />
+            <Text style={styles.muted}>{e.id}</Text>
+          </View>
           <Text style={[styles.effect, e.effect === 'down' ? styles.down : styles.reduced]}>{effectText(e)}</Text>
         </View>
       ))}
@@ -27,9 +31,10 @@ const styles = StyleSheet.create({
   list: { gap: space.xs },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingVertical: space.xs },
   kind: { ...type.caption, color: colors.inkMuted, width: 36 },
-  id: { ...type.bodyStrong, color: colors.ink, flex: 1 },
+  names: { flex: 1 },
+  id: { ...type.bodyStrong, color: colors.ink },
   effect: { ...type.label, paddingHorizontal: space.sm, paddingVertical: space.xxs, borderRadius: radii.pill, overflow: 'hidden' },
   down: { color: colors.danger, backgroundColor: colors.dangerSoft },
   reduced: { color: colors.warning, backgroundColor: colors.surfaceSunken },
-  muted: { ...type.body, color: colors.inkMuted },
+  muted: { ...type.caption, color: colors.inkMuted },
 });

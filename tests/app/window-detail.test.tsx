@@ -1,0 +1,65 @@
+// Window page: times in the viewer's zone with the zone named, the lifecycle in words, conflicts with reasons
+// that open the other window, and withdrawing with the loaded version.
+import { act, fireEvent, screen, waitFor, within } from '@testing-library/react-native';
+import { WindowDetail } from '@/components/windows/window-detail';
+import { STATUS_SENTENCES } from '@/components/windows/lifecycle';
+import { clearQueries, engineer, renderWithQueries, routedFetch, windowFixture } from './window-test-kit';
+
+afterEach(clearQueries);
+
+const conflicts = {
+  windowId: 'w-1',
+  conflicts: [{
+    window: { id: 'w-other', title: 'Duct repair in the shared trench', startsAt: '2030-01-10T23:00:00.000Z', endsAt: '2030-01-11T03:00:00.000Z', status: 'draft' },
+    reasons: [{ reason: 'shared-element', message: 'Both windows take out site:cell-pellow-sands.', ids: ['site:cell-pellow-sands'] }],
+  }],
+};
+
+function renderDetail(onOpenWindow = jest.fn()) {
+  renderWithQueries(
+    <WindowDetail
+      window={windowFixture({ status: 'draft', conflictCount: 1, impactStored: false })}
+      me={engineer}
+      timeZone="Europe/Berlin"
+      flash={{}}
+      onEdit={jest.fn()}
+      onOpenImpact={jest.fn()}
+      onOpenWindow={onOpenWindow}
+      onReload={jest.fn()}
+    />,
+  );
+  return { onOpenWindow };
+}
+
+test('shows the times in the viewer zone, the lifecycle sentence, and conflicts that open the other window', async () => {
+  routedFetch([{ method: 'GET', path: /^\/api\/windows\/w-1\/conflicts$/, reply: () => ({ status: 200, body: conflicts }) }]);
+  const { onOpenWindow } = renderDetail();
+  // 21:00–01:00 UTC is 22:00–02:00 in Berlin in January (CET, UTC+1).
+  expect(screen.getByTestId('window-when')).toHaveTextContent('Thu 10 Jan, 22:00 – Fri 11 Jan, 02:00 CET');
+  expect(screen.getByTestId('window-lifecycle-sentence')).toHaveTextContent(STATUS_SENTENCES.draft);
+  expect(screen.getByTestId('window-conflict-note')).toHaveTextContent(/Collides with 1 other window/);
+
+  const conflict = await screen.findByTestId('window-conflict-w-other');
+  expect(within(conflict).getByText('Shares equipment')).toBeTruthy();
+  expect(conflict).toHaveTextContent(/Both windows take out site:cell-pellow-sands/);
+  fireEvent.press(conflict);
+  expect(onOpenWindow).toHaveBeenCalledWith('w-other');
+});
+
+test('withdrawing asks once more, then sends the transition with the loaded version', async () => {
+  const { calls } = routedFetch([
+    { method: 'GET', path: /^\/api\/windows\/w-1\/conflicts$/, reply: () => ({ status: 200, body: conflicts }) },
+    {
+      method: 'POST', path: /^\/api\/windows\/w-1\/transition$/,
+      reply: () => ({ status: 200, body: { window: windowFixture({ status: 'withdrawn', version: 4 }), reverted: false, conflictCount: 0 } }),
+    },
+  ]);
+  renderDetail();
+  await screen.findByTestId('window-conflict-w-other');
+  expect(screen.getByTestId('window-assess')).toBeTruthy();
+  fireEvent.press(screen.getByTestId('window-withdraw'));
+  expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
+  await act(async () => fireEvent.press(screen.getByTestId('window-withdraw-yes')));
+  await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1));
+  expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ to: 'withdrawn', version: 3 });
+});
