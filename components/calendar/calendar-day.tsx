@@ -81,7 +81,9 @@ const styles = StyleSheet.create({
   conflictDot: {
     position: 'absolute',
     top: 2,
-    right: '18%',
+    // Just right of the date's circle, whatever the cell's width.
+    left: '50%',
+    marginLeft: 13,
     width: 7,
     height: 7,
     borderRadius: radii.pill,
