@@ -10,6 +10,10 @@ type Box = { left: number; top: number; right: number; bottom: number };
 
 const overlaps = (a: Box, b: Box) => a.left < b.right && b.left < a.right && a.top < b.bottom && b.top < a.bottom;
 
+function glyphBox(site: PlacedSite, r: number): Box {
+  return { left: site.x - r, top: site.y - r, right: site.x + r, bottom: site.y + r };
+}
+
 /** Label box to the right of a glyph of radius `r`, baseline just under the site's centre. */
 export function labelBox(site: PlacedSite, r: number): Box {
   const left = site.x + r + 4;
@@ -36,10 +40,13 @@ export function pickLabels(
     return pin === null ? KIND_ORDER.indexOf(s.kind) : pin - KIND_ORDER.length - 1;
   };
   const candidates = sites.filter((s) => rank(s) < kindCount).sort((a, b) => rank(a) - rank(b));
+  // A name must not cover another named-kind site's glyph either (it would read as that site's name).
+  const glyphs = candidates.map((s) => ({ id: s.id, box: glyphBox(s, radiusOf(s)) }));
   for (const site of candidates) {
     const box = labelBox(site, radiusOf(site));
     const visible = box.right > 0 && box.left < size.widthPx && box.bottom > 0 && box.top < size.heightPx;
-    if (!visible || placed.some((p) => overlaps(p, box))) continue;
+    const coversGlyph = glyphs.some((g) => g.id !== site.id && overlaps(g.box, box));
+    if (!visible || coversGlyph || placed.some((p) => overlaps(p, box))) continue;
     placed.push(box);
     chosen.add(site.id);
   }

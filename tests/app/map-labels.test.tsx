@@ -28,3 +28,9 @@ test('a label that would overlap a bigger site\'s label is left out; a pinned si
 test('labels off screen are not placed', () => {
   expect(pickLabels([site('c', 'core', -300, 50)], 4, r, size).size).toBe(0);
 });
+
+test("a name that would cover another named site's glyph is left out", () => {
+  // 'b' sits where the label of 'a' would run (to the right of 'a').
+  const sites = [site('a', 'core', 100, 100), site('b', 'core', 130, 100)];
+  expect([...pickLabels(sites, 1, r, size)]).toEqual(['b']);
+});
