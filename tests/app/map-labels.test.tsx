@@ -9,20 +9,26 @@ const r = () => 5;
 
 test('only the first kinds are named, biggest first', () => {
   const sites = [site('c', 'core', 50, 50), site('a', 'aggregation', 50, 150), site('e', 'edge', 50, 250)];
-  expect([...pickLabels(sites, 1, r, size)]).toEqual(['c']);
-  expect(pickLabels(sites, 2, r, size)).toEqual(new Set(['c', 'a']));
+  expect([...pickLabels(sites, 1, r, size).keys()]).toEqual(['c']);
+  expect(new Set(pickLabels(sites, 2, r, size).keys())).toEqual(new Set(['c', 'a']));
   expect(pickLabels(sites, 0, r, size).size).toBe(0);
 });
 
-test('a label that would overlap a bigger site\'s label is left out; a pinned site always wins its place', () => {
-  const sites = [site('agg', 'aggregation', 100, 104), site('core', 'core', 100, 100)];
-  expect([...pickLabels(sites, 2, r, size)]).toEqual(['core']);
-  expect([...pickLabels(sites, 2, r, size, (s) => (s.id === 'agg' ? 0 : null))]).toEqual(['agg']);
-  // A pinned (selected or highlighted) site is named even when its kind would not be at this zoom, even with none.
-  expect(pickLabels([site('cell', 'cell-site', 10, 10)], 0, r, size, () => 1).has('cell')).toBe(true);
-  // Among pinned sites the lower pin goes first.
+test('a name goes left when right is taken, and is left out when both sides are; pinned sites go first', () => {
+  // 'agg' sits 4 px under 'core': their names cannot both go right.
+  const core = site('core', 'core', 100, 100);
+  const agg = site('agg', 'aggregation', 100, 104);
+  expect([...pickLabels([agg, core], 2, r, size)]).toEqual([['core', 'right'], ['agg', 'left']]);
+  // A cell site left of them blocks the left side too (its glyph may not be covered).
+  const cell = site('cell', 'cell-site', 70, 104);
+  expect([...pickLabels([agg, core, cell], 2, r, size)]).toEqual([['core', 'right']]);
+  // Pinning 'agg' gives it the right side first; then 'core' has no side left.
+  expect([...pickLabels([agg, core, cell], 2, r, size, (s) => (s.id === 'agg' ? 0 : null))]).toEqual([['agg', 'right']]);
+  // A pinned (selected or highlighted) site is named even when its kind would not be at this zoom.
+  expect(pickLabels([site('c', 'cell-site', 10, 10)], 0, r, size, () => 1).has('c')).toBe(true);
+  // Among pinned sites the lower pin goes first and takes the right side.
   const pair = [site('x', 'cell-site', 100, 100), site('y', 'cell-site', 100, 102)];
-  expect([...pickLabels(pair, 0, r, size, (s) => (s.id === 'y' ? 0 : 1))]).toEqual(['y']);
+  expect([...pickLabels(pair, 0, r, size, (s) => (s.id === 'y' ? 0 : 1))]).toEqual([['y', 'right'], ['x', 'left']]);
 });
 
 test('labels off screen are not placed', () => {
@@ -30,7 +36,7 @@ test('labels off screen are not placed', () => {
 });
 
 test("a name that would cover another named site's glyph is left out", () => {
-  // 'b' sits where the label of 'a' would run (to the right of 'a').
-  const sites = [site('a', 'core', 100, 100), site('b', 'core', 130, 100)];
-  expect([...pickLabels(sites, 1, r, size)]).toEqual(['b']);
+  // 'b' sits where the name of 'a' would run on the right, and 'c' where it would run on the left.
+  const sites = [site('a', 'core', 100, 100), site('b', 'aggregation', 130, 100), site('c', 'cell-site', 70, 100)];
+  expect(pickLabels(sites, 1, r, size).has('a')).toBe(false);
 });
