@@ -64,7 +64,7 @@ const styles = StyleSheet.create({
   back: { alignSelf: 'flex-start', paddingVertical: space.xs, minHeight: 36, justifyContent: 'center' },
   backText: { ...type.bodyStrong, color: colors.primary },
   head: { gap: space.xxs },
-  kicker: { ...type.label, color: colors.inkMuted, textTransform: 'uppercase' },
+  kicker: { ...type.label, color: colors.inkMuted },
   title: { ...type.title, color: colors.abyss },
   badges: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs, marginTop: space.xs },
   section: { gap: space.sm },

@@ -8,7 +8,7 @@ type Props<V extends string> = { choices: readonly Choice<V>[]; value: V; onChan
 
 export function Segmented<V extends string>({ choices, value, onChange, testID, label }: Props<V>) {
   return (
-    <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.row} role="tablist" aria-label={label}>
+    <ScrollView horizontal showsHorizontalScrollIndicator={false} style={styles.strip} contentContainerStyle={styles.row} role="tablist" aria-label={label}>
       {choices.map((choice) => {
         const active = choice.value === value;
         return (
@@ -29,6 +29,8 @@ export function Segmented<V extends string>({ choices, value, onChange, testID, 
 }
 
 const styles = StyleSheet.create({
+  // A horizontal ScrollView grows to fill a column by default; the strip keeps its own height.
+  strip: { flexGrow: 0, flexShrink: 0 },
   row: { gap: space.xs, paddingVertical: space.xxs },
   choice: {
     paddingHorizontal: space.md,

@@ -19,11 +19,11 @@ const PAGE_SIZE = 50;
 
 const COLUMNS: Column<SiteRow>[] = [
   { key: 'name', label: 'Site', primary: true, flex: 2, sortable: true, render: (s) => <NameCell name={s.name} id={s.id} /> },
-  { key: 'kind', label: 'Kind', sortable: true, render: (s) => siteKindLabel(s.kind) },
+  { key: 'kind', label: 'Kind', flex: 1.3, sortable: true, render: (s) => siteKindLabel(s.kind) },
   { key: 'cpu', label: 'Compute', sortable: true, align: 'end', render: (s) => formatCpu(s.cpu) },
   { key: 'utilisation', label: 'Utilisation', flex: 1.6, sortable: true, render: (s) => <UtilisationBar share={s.utilisation} /> },
-  { key: 'spanCount', label: 'Spans', sortable: true, align: 'end', hideInCards: true, render: (s) => s.spanCount },
-  { key: 'sliceCount', label: 'Slices', sortable: true, align: 'end', render: (s) => s.sliceCount },
+  { key: 'spanCount', label: 'Spans', sortable: true, align: 'end', hideInCards: true, minPaneWidthPx: 760, render: (s) => s.spanCount },
+  { key: 'sliceCount', label: 'Slices', sortable: true, align: 'end', minPaneWidthPx: 660, render: (s) => s.sliceCount },
 ];
 
 const KIND_CHOICES = [{ value: 'all', label: 'All kinds' }, ...SITE_KINDS.map((k) => ({ value: k, label: siteKindLabel(k) }))] as const;

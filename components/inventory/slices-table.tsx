@@ -23,7 +23,7 @@ const COLUMNS: Column<SliceRow>[] = [
   },
   { key: 'tenant', label: 'Tenant', flex: 1.5, sortable: true, render: (s) => s.tenantName },
   { key: 'sst', label: 'Service', sortable: true, render: (s) => sstName(s.sst) },
-  { key: 'snssai', label: 'S-NSSAI', render: (s) => formatSnssai(s.sst, s.sd) },
+  { key: 'snssai', label: 'S-NSSAI', minPaneWidthPx: 680, render: (s) => formatSnssai(s.sst, s.sd) },
   { key: 'priority', label: 'Priority', sortable: true, align: 'end', render: (s) => s.priority },
 ];
 

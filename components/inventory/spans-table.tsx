@@ -29,10 +29,10 @@ export function latencyLabel(span: Pick<SpanRow, 'latencyMs' | 'latencyDerived'>
 const COLUMNS: Column<SpanRow>[] = [
   { key: 'a', label: 'Ends', primary: true, flex: 2.2, sortable: true, render: (s) => <Ends span={s} /> },
   { key: 'capacityGbps', label: 'Capacity', sortable: true, align: 'end', render: (s) => formatGbps(s.capacityGbps) },
-  { key: 'lengthKm', label: 'Length', sortable: true, align: 'end', render: (s) => formatKm(s.lengthKm) },
+  { key: 'lengthKm', label: 'Length', sortable: true, align: 'end', minPaneWidthPx: 680, render: (s) => formatKm(s.lengthKm) },
   { key: 'latencyMs', label: 'Latency', sortable: true, align: 'end', render: latencyLabel },
   { key: 'utilisation', label: 'Utilisation', flex: 1.6, sortable: true, render: (s) => <UtilisationBar share={s.utilisation} /> },
-  { key: 'sliceCount', label: 'Slices', sortable: true, align: 'end', hideInCards: true, render: (s) => s.sliceCount },
+  { key: 'sliceCount', label: 'Slices', sortable: true, align: 'end', hideInCards: true, minPaneWidthPx: 760, render: (s) => s.sliceCount },
 ];
 
 export function SpansTable({ selectedId, onOpen }: { selectedId: string | null; onOpen: (id: string) => void }) {

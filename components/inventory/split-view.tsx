@@ -26,8 +26,8 @@ export function SplitView({ list, detail, showDetail }: Props) {
 
 const styles = StyleSheet.create({
   wide: { flex: 1, flexDirection: 'row' },
-  listPane: { flex: 5, minWidth: 360, padding: space.lg, paddingRight: space.sm },
-  detailPane: { flex: 6, borderLeftWidth: 1, borderLeftColor: colors.border, backgroundColor: colors.surface },
+  listPane: { flex: 6, minWidth: 360, padding: space.lg, paddingRight: space.sm },
+  detailPane: { flex: 5, borderLeftWidth: 1, borderLeftColor: colors.border, backgroundColor: colors.surface },
   narrow: { flex: 1 },
   narrowPane: { flex: 1 },
   hidden: { display: 'none' },

@@ -11,7 +11,7 @@ import type { Column, SortState } from './types';
 import { colors, space, type } from '@/constants/theme';
 
 /** A pane narrower than this shows cards: columns squeezed below it truncate every value. */
-export const TABLE_COLUMNS_MIN_WIDTH_PX = 600;
+export const TABLE_COLUMNS_MIN_WIDTH_PX = 520;
 
 export type DataTableProps<T> = {
   testID: string;
@@ -79,6 +79,7 @@ export function DataTable<T>(props: DataTableProps<T>) {
   const body = bodyState({ ...props, status, empty: props.rows.length === 0 });
   const viewProps = {
     ...props,
+    columns: columnsMode ? props.columns.filter((c) => !c.minPaneWidthPx || width >= c.minPaneWidthPx) : props.columns,
     body,
     onSortPress: (key: string) => props.onSortChange(nextSort(props.sort, key)),
   };

@@ -13,7 +13,7 @@ export function TableCardsView<T>(props: RowsViewProps<T>) {
   return (
     <View style={styles.frame}>
       {sortable.length > 0 ? (
-        <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.chips}>
+        <ScrollView horizontal showsHorizontalScrollIndicator={false} style={styles.strip} contentContainerStyle={styles.chips}>
           <Text style={styles.chipsLabel}>Sort</Text>
           {sortable.map((column) => {
             const active = sort?.key === column.key;
@@ -65,6 +65,8 @@ export function TableCardsView<T>(props: RowsViewProps<T>) {
 
 const styles = StyleSheet.create({
   frame: { flex: 1 },
+  // A horizontal ScrollView grows to fill a column by default; the chips keep their own height.
+  strip: { flexGrow: 0, flexShrink: 0 },
   chips: { gap: space.sm, alignItems: 'center', paddingVertical: space.sm },
   chipsLabel: { ...type.label, color: colors.inkMuted },
   chip: { paddingHorizontal: space.md, paddingVertical: space.xs + 2, borderRadius: radii.pill, borderWidth: 1, borderColor: colors.border, backgroundColor: colors.surface },
@@ -78,12 +80,13 @@ const styles = StyleSheet.create({
     borderRadius: radii.lg,
     borderWidth: 1,
     borderColor: colors.border,
-    padding: space.md,
-    gap: space.sm,
+    paddingHorizontal: space.md,
+    paddingVertical: space.sm,
+    gap: space.xs,
   },
   selected: { borderColor: colors.buoy, borderWidth: 2 },
   pressed: { backgroundColor: colors.tide },
   fields: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.xs },
-  field: { minWidth: 120, flexGrow: 1, flexBasis: '40%', gap: space.xxs },
+  field: { minWidth: 90, flexGrow: 1, flexBasis: '28%', gap: 1 },
   fieldLabel: { ...type.caption, color: colors.inkMuted },
 });

@@ -20,6 +20,8 @@ export type Column<T> = {
   primary?: boolean;
   /** Left out of the card view (e.g. a detail that only fits a wide row). */
   hideInCards?: boolean;
+  /** Left out of the column view when the pane is narrower than this, so the other columns keep room. */
+  minPaneWidthPx?: number;
 };
 
 export function isSortable<T>(column: Column<T>): boolean {
