@@ -19,7 +19,7 @@ export interface ExactOptions extends Partial<PathSetting> {
   start?: Map<number, SlicePlacement | null>;
 }
 
-export const EXACT_DEFAULTS = { timeLimitMs: 30_000, kPaths: 4, maxAllPaths: 64, allPathsMaxSites: 30 };
+export const EXACT_DEFAULTS = { timeLimitMs: 30_000, kPaths: 4, maxAllPaths: 200, allPathsMaxSites: 30 };
 
 export interface ExactResult {
   next: Map<number, SlicePlacement | null>;

@@ -1,0 +1,34 @@
+// Benchmark instances: Waxman networks (BRITE convention, α = 0.5, β = 0.2, see planner/generate/waxman.ts)
+// loaded to 60–70 % peak utilisation, with random windows of 1–5 elements that touch at least one slice.
+import { randomWindow } from '../../planner/generate/random-window';
+import { buildScenario } from '../../planner/generate/scenario-builder';
+import { buildInventory, compileWindow } from '../../planner/model/build-inventory';
+import type { Inventory, WindowSpec } from '../../planner/model/types';
+import { buildRemapProblem } from '../../planner/remap/problem';
+import { createRng } from '../../planner/random/rng';
+import type { Scenario } from '../../shared/scenario';
+
+export interface Instance {
+  label: string;
+  scenario: Scenario;
+  inv: Inventory;
+  windows: WindowSpec[];
+}
+
+/** `count` windows whose re-mapping problem has between 1 and maxAffected affected slices. */
+export function buildInstance(sites: number, slices: number, seed: number, count: number, maxAffected = Infinity, maxCandidates?: number): Instance {
+  const scenario = buildScenario({ sites, slices, seed, windows: 0 });
+  const inv = buildInventory(scenario);
+  const rng = createRng(seed * 7919);
+  const windows: WindowSpec[] = [];
+  for (let tries = 0; windows.length < count && tries < 50 * count; tries += 1) {
+    const w = compileWindow(randomWindow(scenario, rng, `w${tries}`));
+    const n = buildRemapProblem(inv, w, { maxCandidates }).slices.length;
+    if (n >= 1 && n <= maxAffected) windows.push(w);
+  }
+  return { label: `${sites} sites / ${slices} slices`, scenario, inv, windows };
+}
+
+export function log(message: string): void {
+  process.stderr.write(`[bench] ${message}\n`);
+}
