@@ -6,7 +6,11 @@ import { MapSelectionPanel } from '@/components/map/map-selection';
 import type { MapSelection, NetworkMapData } from '@/components/map/map-types';
 import { colors, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
 
-type Props = { data: NetworkMapData; onOpenSlice?: (sliceId: string) => void };
+type Props = {
+  data: NetworkMapData;
+  onOpenSlice?: (sliceId: string) => void;
+  onOpenElement?: (selection: MapSelection) => void;
+};
 
 const SIDE_PANEL_WIDTH_PX = 340;
 
@@ -22,12 +26,12 @@ function Summary({ data }: { data: NetworkMapData }) {
   );
 }
 
-export function MapScreenView({ data, onOpenSlice }: Props) {
+export function MapScreenView({ data, onOpenSlice, onOpenElement }: Props) {
   const [selection, setSelection] = useState<MapSelection | null>(null);
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_LAYOUT_MIN_WIDTH_PX;
   const panel = selection ? (
-    <MapSelectionPanel selection={selection} onClose={() => setSelection(null)} onOpenSlice={onOpenSlice} />
+    <MapSelectionPanel selection={selection} onClose={() => setSelection(null)} onOpenSlice={onOpenSlice} onOpenElement={onOpenElement} />
   ) : null;
   const map = <NetworkMap data={data} selected={selection} onSelect={setSelection} />;
 

@@ -9,7 +9,13 @@ import type { MapSelection } from '@/components/map/map-types';
 import { KIND_LABELS } from '@/components/map/site-glyphs';
 import { colors, space, type } from '@/constants/theme';
 
-type Props = { selection: MapSelection; onClose: () => void; onOpenSlice?: (sliceId: string) => void };
+type Props = {
+  selection: MapSelection;
+  onClose: () => void;
+  onOpenSlice?: (sliceId: string) => void;
+  /** Opens the element's own page (site or span detail), when the app has one. */
+  onOpenElement?: (selection: MapSelection) => void;
+};
 
 function Fact({ label, value }: { label: string; value: string }) {
   return (
@@ -20,13 +26,20 @@ function Fact({ label, value }: { label: string; value: string }) {
   );
 }
 
-function Frame({ title, subtitle, onClose, children }: { title: string; subtitle: string; onClose: () => void; children: ReactNode }) {
+type FrameProps = { title: string; subtitle: string; onClose: () => void; onOpen?: () => void; children: ReactNode };
+
+function Frame({ title, subtitle, onClose, onOpen, children }: FrameProps) {
   return (
     <View style={styles.panel} testID="map-selection">
       <View style={styles.head}>
         <View style={styles.headText}>
           <Text style={styles.subtitle}>{subtitle}</Text>
           <Text style={styles.title} numberOfLines={2}>{title}</Text>
+          {onOpen ? (
+            <Pressable onPress={onOpen} role="link" testID="map-selection-open" style={styles.open}>
+              <Text style={styles.openText}>Open full details →</Text>
+            </Pressable>
+          ) : null}
         </View>
         <Pressable onPress={onClose} role="button" accessibilityLabel="Close" testID="map-selection-close" style={styles.close}>
           <Text style={styles.closeText}>×</Text>
@@ -46,11 +59,13 @@ function Waiting({ error, onRetry }: { error: Error | null; onRetry: () => void 
   );
 }
 
-function SiteSelection({ id, onClose, onOpenSlice }: { id: string } & Omit<Props, 'selection'>) {
+type Part = { id: string; onClose: () => void; onOpenSlice?: (sliceId: string) => void; onOpen?: () => void };
+
+function SiteSelection({ id, onClose, onOpenSlice, onOpen }: Part) {
   const query = useSiteQuery(id);
   const d = query.data;
   return (
-    <Frame title={d?.site.name ?? id} subtitle={d ? `${KIND_LABELS[d.site.kind]} site · ${id}` : 'Site'} onClose={onClose}>
+    <Frame title={d?.site.name ?? id} subtitle={d ? `${KIND_LABELS[d.site.kind]} site · ${id}` : 'Site'} onClose={onClose} onOpen={onOpen}>
       {!d ? <Waiting error={query.error} onRetry={() => query.refetch()} /> : (
         <>
           <View style={styles.facts}>
@@ -65,11 +80,11 @@ function SiteSelection({ id, onClose, onOpenSlice }: { id: string } & Omit<Props
   );
 }
 
-function SpanSelection({ id, onClose, onOpenSlice }: { id: string } & Omit<Props, 'selection'>) {
+function SpanSelection({ id, onClose, onOpenSlice, onOpen }: Part) {
   const query = useSpanQuery(id);
   const d = query.data;
   return (
-    <Frame title={d ? `${d.span.aName} — ${d.span.bName}` : id} subtitle={`Span · ${id}`} onClose={onClose}>
+    <Frame title={d ? `${d.span.aName} — ${d.span.bName}` : id} subtitle={`Span · ${id}`} onClose={onClose} onOpen={onOpen}>
       {!d ? <Waiting error={query.error} onRetry={() => query.refetch()} /> : (
         <>
           <View style={styles.facts}>
@@ -83,10 +98,9 @@ function SpanSelection({ id, onClose, onOpenSlice }: { id: string } & Omit<Props
   );
 }
 
-export function MapSelectionPanel({ selection, onClose, onOpenSlice }: Props) {
-  return selection.kind === 'site'
-    ? <SiteSelection key={selection.id} id={selection.id} onClose={onClose} onOpenSlice={onOpenSlice} />
-    : <SpanSelection key={selection.id} id={selection.id} onClose={onClose} onOpenSlice={onOpenSlice} />;
+export function MapSelectionPanel({ selection, onClose, onOpenSlice, onOpenElement }: Props) {
+  const part: Part = { id: selection.id, onClose, onOpenSlice, onOpen: onOpenElement ? () => onOpenElement(selection) : undefined };
+  return selection.kind === 'site' ? <SiteSelection key={selection.id} {...part} /> : <SpanSelection key={selection.id} {...part} />;
 }
 
 const styles = StyleSheet.create({
@@ -95,6 +109,8 @@ const styles = StyleSheet.create({
   headText: { flex: 1, gap: space.xxs },
   subtitle: { ...type.caption, color: colors.inkMuted },
   title: { ...type.heading, color: colors.ink },
+  open: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
+  openText: { ...type.label, color: colors.primary },
   close: { width: 44, height: 44, alignItems: 'center', justifyContent: 'center', marginTop: -space.sm, marginRight: -space.sm },
   closeText: { ...type.title, color: colors.inkMuted },
   body: { padding: space.md, gap: space.lg },

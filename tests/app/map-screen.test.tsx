@@ -3,6 +3,10 @@ import type { ReactNode } from 'react';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { act, fireEvent, render, screen } from '@testing-library/react-native';
 import MapScreen from '@/app/(main)/map';
+
+// The route only needs router.push; expo-router's navigation stack is not under test here.
+const mockPush = jest.fn();
+jest.mock('expo-router', () => ({ useRouter: () => ({ push: mockPush }) }));
 import { demoMapData } from './map-demo-data';
 
 // Drawing 120+ svg elements under the native test renderer is slow on a shared machine.
@@ -31,6 +35,7 @@ function siteDetail(id: string) {
 }
 
 beforeEach(() => {
+  mockPush.mockReset();
   fetchMock.mockReset();
   global.fetch = fetchMock as unknown as typeof fetch;
 });
@@ -56,7 +61,7 @@ test('an empty network shows the empty state', async () => {
   expect(await screen.findByTestId('state-empty')).toBeTruthy();
 });
 
-test('tapping a site opens the panel with the slices hosted there', async () => {
+test('tapping a site opens the panel with the slices hosted there, each leading to its page', async () => {
   const site = data.sites[0];
   fetchMock.mockImplementation(async (url) =>
     String(url) === '/api/network/map' ? reply(200, data) : reply(200, siteDetail(site.id)));
@@ -66,6 +71,10 @@ test('tapping a site opens the panel with the slices hosted there', async () => 
   expect(screen.getByTestId('map-selection')).toHaveTextContent(new RegExp(site.name));
   expect(screen.getByText('critical')).toBeTruthy();
   expect(fetchMock.mock.calls.map((c) => String(c[0]))).toContain(`/api/sites/${site.id}`);
+  fireEvent.press(screen.getByTestId('map-use-sl-a'));
+  expect(mockPush).toHaveBeenLastCalledWith({ pathname: '/slices/[id]', params: { id: 'sl-a' } });
+  fireEvent.press(screen.getByTestId('map-selection-open'));
+  expect(mockPush).toHaveBeenLastCalledWith({ pathname: '/network/sites/[id]', params: { id: site.id } });
   fireEvent.press(screen.getByTestId('map-selection-close'));
   expect(screen.queryByTestId('map-selection')).toBeNull();
 });
