@@ -28,7 +28,7 @@ export function labelBox(site: PlacedSite, r: number, side: LabelSide = 'right')
  * The sites to name, each with its side: pinned ones first (the selected site, highlighted ones; `pinOf` gives
  * their order, null for unpinned), then the first `kindCount` kinds, biggest first. A name goes right of its site,
  * or left when right is taken; it is left out when both sides would cover another name or any site's glyph, or
- * fall outside the viewport.
+ * fall outside the viewport — except pin 0 (the selected site), which is always named.
  */
 export function pickLabels(
   sites: readonly PlacedSite[],
@@ -50,7 +50,9 @@ export function pickLabels(
     box.left >= 0 && box.right <= size.widthPx && box.top >= 0 && box.bottom <= size.heightPx &&
     !taken.some((t) => t.id !== site.id && overlaps(t.box, box));
   for (const site of candidates) {
-    const side = (['right', 'left'] as const).find((s) => fits(site, labelBox(site, radiusOf(site), s)));
+    // Pin 0 (the selected site) is named even in a crowd: the user is looking for it.
+    const side = (['right', 'left'] as const).find((s) => fits(site, labelBox(site, radiusOf(site), s))) ??
+      (pinOf(site) === 0 ? 'right' : undefined);
     if (!side) continue;
     taken.push({ id: null, box: labelBox(site, radiusOf(site), side) });
     chosen.set(site.id, side);

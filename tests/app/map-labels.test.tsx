@@ -22,6 +22,10 @@ test('a name goes left when right is taken, and is left out when both sides are;
   // A cell site left of them blocks the left side too (its glyph may not be covered).
   const cell = site('cell', 'cell-site', 70, 104);
   expect([...pickLabels([agg, core, cell], 2, r, size)]).toEqual([['core', 'right']]);
+  // Pin 0 (the selected site) is named even with both sides blocked.
+  const crowded = [site('sel', 'edge', 100, 100), site('e', 'edge', 125, 100), site('w', 'edge', 75, 100)];
+  expect(pickLabels(crowded, 0, r, size, (s) => (s.id === 'sel' ? 1 : null)).has('sel')).toBe(false);
+  expect(pickLabels(crowded, 0, r, size, (s) => (s.id === 'sel' ? 0 : null)).get('sel')).toBe('right');
   // Pinning 'agg' gives it the right side first; then 'core' has no side left.
   expect([...pickLabels([agg, core, cell], 2, r, size, (s) => (s.id === 'agg' ? 0 : null))]).toEqual([['agg', 'right']]);
   // A pinned (selected or highlighted) site is named even when its kind would not be at this zoom.
