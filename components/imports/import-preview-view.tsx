@@ -1,5 +1,5 @@
 // One import's preview: file and kind, the counts, errors and warnings, the add/change/remove lists, then Apply.
-import { Link } from 'expo-router';
+import type { ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { ImportApplied, ImportKind, ImportPreview, ImportStatus } from '@/shared/imports';
 import { ApplyBar } from './apply-bar';
@@ -16,6 +16,8 @@ type Props = {
   applying: boolean;
   applyError: string | null;
   applied: ImportApplied | null;
+  /** Where to go once applied (links into the app; passed in so this view stays free of the router). */
+  appliedActions?: ReactNode;
 };
 
 function Counts({ preview }: { preview: ImportPreview }) {
@@ -35,21 +37,18 @@ function Counts({ preview }: { preview: ImportPreview }) {
   );
 }
 
-function AppliedNote({ applied }: { applied: ImportApplied }) {
+function AppliedNote({ applied, actions }: { applied: ImportApplied; actions?: ReactNode }) {
   const { counts } = applied;
   return (
     <View style={styles.applied} testID="import-result" role="status">
       <Text style={styles.appliedTitle}>Applied</Text>
       <Text style={styles.text}>{`${counts.adds} added, ${counts.changes} changed, ${counts.removes} removed.`}</Text>
-      <View style={styles.links}>
-        <Link href="/network" style={styles.link} testID="import-open-network">Open the network</Link>
-        <Link href="/slices" style={styles.link}>Open the slices</Link>
-      </View>
+      {actions}
     </View>
   );
 }
 
-export function ImportPreviewView({ record, onApply, applying, applyError, applied }: Props) {
+export function ImportPreviewView({ record, onApply, applying, applyError, applied, appliedActions }: Props) {
   const { preview } = record;
   return (
     <View style={styles.panel} testID="import-preview">
@@ -65,7 +64,7 @@ export function ImportPreviewView({ record, onApply, applying, applyError, appli
         <ChangeLists preview={preview} />
       ) : null}
       {applied ? (
-        <AppliedNote applied={applied} />
+        <AppliedNote applied={applied} actions={appliedActions} />
       ) : (
         <ApplyBar counts={preview.counts} status={record.status} onApply={onApply} applying={applying} applyError={applyError} />
       )}
@@ -85,6 +84,4 @@ const styles = StyleSheet.create({
   applied: { backgroundColor: colors.primarySoft, borderRadius: radii.lg, padding: space.md, gap: space.xs },
   appliedTitle: { ...type.heading, color: colors.primary },
   text: { ...type.body, color: colors.ink },
-  links: { flexDirection: 'row', gap: space.lg, flexWrap: 'wrap' },
-  link: { ...type.bodyStrong, color: colors.primary },
 });

@@ -1,6 +1,7 @@
 // The Imports screen: upload and the current preview in the main column, past imports beside it (wide) or below (phone).
 import { ActivityIndicator, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import type { ImportSummary } from '@/shared/imports';
+import { AppliedLinks } from './applied-links';
 import { ImportHistory } from './import-history';
 import { ImportPreviewView } from './import-preview-view';
 import { UploadPanel } from './upload-panel';
@@ -21,6 +22,7 @@ export function ImportsView({ history }: { history: readonly ImportSummary[] }) 
             applying={flow.applying}
             applyError={flow.applyError}
             applied={flow.applied}
+            appliedActions={<AppliedLinks />}
           />
         </View>
       ) : null}
