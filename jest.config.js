@@ -6,12 +6,12 @@ const tsJest = {
 const moduleNameMapper = { '^@/(.*)$': '<rootDir>/$1', '^(\\.{1,2}/.*)\\.js$': '$1' };
 
 module.exports = {
+  // Generous: CI shares two cores between jest workers, PostgreSQL and worker threads; speed is
+  // measured by the benchmark, never by test time-outs.
+  testTimeout: 60000,
   projects: [
     {
       displayName: 'planner',
-      // Generous: CI shares two cores between jest workers, PostgreSQL and worker threads; speed is
-      // measured by the benchmark, never by test time-outs.
-      testTimeout: 60000,
       testEnvironment: 'node',
       transform: tsJest,
       moduleNameMapper,
@@ -19,7 +19,6 @@ module.exports = {
     },
     {
       displayName: 'server',
-      testTimeout: 60000,
       testEnvironment: 'node',
       // @oslojs/* ship only ES modules; ts-jest (allowJs) turns them into CommonJS for jest.
       transform: { ...tsJest, '^.+/node_modules/@oslojs/.+\\.js$': ['ts-jest', { tsconfig: { allowJs: true }, diagnostics: false }] },
@@ -29,7 +28,6 @@ module.exports = {
     },
     {
       displayName: 'app',
-      testTimeout: 60000,
       // WARNING: the native preset on purpose. Under 'jest-expo/web' with RN 0.85, @react-native/jest-preset's
       // '^react-native($|/.*)' mapper wins over the web alias (native modules then throw), and with the alias
       // forced, react-native-web's DOM host elements hide testID/onChangeText from Testing Library.
