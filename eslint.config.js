@@ -21,7 +21,7 @@ const rules = {
       'db/ imports drizzle, pg and shared only.'),
   ],
   'server/**': [
-    pattern(['../app/*', '../../app/*', '../components/*', '../../components/*', '../hooks/*', '../../hooks/*', 'react', 'react-native', 'expo*'],
+    pattern(['../app/*', '../../app/*', '../components/*', '../../components/*', '../hooks/*', '../../hooks/*', 'react', 'react-native', 'expo', 'expo-*', '@expo/*'],
       'server/ must not import app code.'),
   ],
   'app/**': [
