@@ -12,9 +12,10 @@ import { colors, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme
 type Tab = 'sites' | 'spans' | 'map';
 
 export function NetworkLists() {
-  const [tab, setTab] = useState<Tab>('sites');
   const router = useRouter();
   const selection = selectionFromPath(usePathname());
+  // Opened straight on a span's page, the list starts on spans so the selected row is in view.
+  const [tab, setTab] = useState<Tab>(selection?.kind === 'span' ? 'spans' : 'sites');
   const wide = useWindowDimensions().width >= WIDE_LAYOUT_MIN_WIDTH_PX;
   // Wide screens show the map beside the list whenever nothing is selected, so the tab is for phones.
   const choices: Choice<Tab>[] = [

@@ -28,8 +28,39 @@ beforeAll(async () => {
   });
 });
 afterAll(async () => {
+  await restoreDemoNetwork();
   await browser?.close();
 });
+
+type PreviewReply = { id: string; preview: { counts: { adds: number; changes: number }; removes: Record<string, string[]> } };
+
+/**
+ * Puts the network back as the demo file has it, so other suites that count the demo's sites still agree: a scenario
+ * import of scenarios/demo.json removes the sites this test added. Applied only when that is all it would do
+ * (no adds, no changes, nothing removed but this test's own e2e sites), so nothing else is ever overwritten.
+ */
+async function restoreDemoNetwork(): Promise<void> {
+  if (!browser) return;
+  const context = await browser.newContext();
+  try {
+    const page = await context.newPage();
+    await signIn(page, 'planner@demo.test');
+    const headers = { Origin: new URL(BASE_URL).origin };
+    const demoFile = fs.readFileSync(path.resolve(__dirname, '../../scenarios/demo.json'));
+    const upload = await context.request.post(`${BASE_URL}/api/imports`, {
+      headers, multipart: { kind: 'scenario', file: { name: 'demo.json', mimeType: 'application/json', buffer: demoFile } },
+    });
+    const { id, preview } = (await upload.json()) as PreviewReply;
+    const removed = Object.values(preview.removes).flat();
+    const onlyOurs = removed.length > 0 && removed.every((siteId) => siteId.startsWith('e2e-site-'))
+      && preview.removes.sites.length === removed.length;
+    if (preview.counts.adds === 0 && preview.counts.changes === 0 && onlyOurs) {
+      await context.request.post(`${BASE_URL}/api/imports/${id}/apply`, { headers });
+    }
+  } finally {
+    await context.close();
+  }
+}
 
 async function signIn(page: Page, email: string): Promise<void> {
   await page.goto(BASE_URL);
