@@ -46,7 +46,8 @@ step "end-to-end (Chromium)"
 bash scripts/ensure-chromium.sh
 bash scripts/export-web.sh
 DATABASE_URL="$E2E_DATABASE_URL" npx tsx db/setup.ts
-E2E_PORT="${E2E_PORT:-8099}"
+# A free port picked by the OS, so a server left over elsewhere can never answer for ours.
+E2E_PORT="${E2E_PORT:-$(node -e "const s=require('net').createServer().listen(0,'127.0.0.1',()=>{console.log(s.address().port);s.close()})")}"
 DATABASE_URL="$E2E_DATABASE_URL" PORT="$E2E_PORT" HOST=127.0.0.1 npx tsx server/index.ts > .data/e2e-server.log 2>&1 &
 server_pid=$!
 for _ in $(seq 1 60); do
@@ -54,4 +55,5 @@ for _ in $(seq 1 60); do
   kill -0 "$server_pid" 2>/dev/null || { cat .data/e2e-server.log >&2; exit 1; }
   sleep 0.5
 done
-E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" npx jest --ci -c jest.e2e.config.js
+# --forceExit: a failed test must not leave jest waiting on a browser it could not close.
+E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" npx jest --ci --forceExit -c jest.e2e.config.js
