@@ -26,15 +26,8 @@ trap cleanup EXIT
 trap 'exit 130' INT
 trap 'exit 143' TERM
 
-if [ -z "${DATABASE_URL:-}" ]; then
-  if ! bash scripts/pg.sh status >/dev/null 2>&1; then started_pg=1; fi
-  bash scripts/pg.sh ensure
-  bash scripts/pg.sh createdb slackwater
-  DATABASE_URL="$(bash scripts/pg.sh url slackwater)"
-  export DATABASE_URL
-else
-  say "using DATABASE_URL (no local PostgreSQL started)"
-fi
+. scripts/lib/local-db.sh
+use_local_database
 
 BIN=node_modules/.bin
 "$BIN/tsx" db/setup.ts

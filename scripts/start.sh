@@ -27,15 +27,8 @@ trap cleanup EXIT
 trap 'exit 130' INT
 trap 'exit 143' TERM
 
-if [ -z "${DATABASE_URL:-}" ]; then
-  if ! bash scripts/pg.sh status >/dev/null 2>&1; then started_pg=1; fi
-  bash scripts/pg.sh ensure
-  bash scripts/pg.sh createdb slackwater
-  DATABASE_URL="$(bash scripts/pg.sh url slackwater)"
-  export DATABASE_URL
-else
-  say "using DATABASE_URL (no local PostgreSQL started)"
-fi
+. scripts/lib/local-db.sh
+use_local_database
 
 # The local tsx binary is what `npx tsx` would run; calling it directly saves a process layer
 # between this shell and the server, so signals reach the server at once.

@@ -1,12 +1,10 @@
 // A planner imports a sites CSV through the web app in Chromium: a file with one bad row shows that row's error
 // and cannot be applied; the fixed file previews the new sites, applies, and the new site shows in the Network
 // list and on the map. Site ids carry a per-run suffix so the test can run twice against the same database.
-import { chromium, type Browser, type Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import fs from 'node:fs';
 import path from 'node:path';
-
-const BASE_URL = process.env.E2E_BASE_URL ?? 'http://127.0.0.1:8099';
-const SHOTS = path.resolve(__dirname, '../../test-results/e2e');
+import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
 const RUN = `${Date.now().toString(36)}${Math.floor(Math.random() * 1296).toString(36)}`;
 const SITE_ID = `e2e-site-${RUN}`;
 const SECOND_ID = `e2e-site-${RUN}-b`;
@@ -20,12 +18,7 @@ const FIXED_FILE = [HEADER, GOOD_ROW, `${SECOND_ID},Quillhaven Annex ${RUN},cell
 let browser: Browser;
 
 beforeAll(async () => {
-  fs.mkdirSync(SHOTS, { recursive: true });
-  browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking',
-      '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
-  });
+  browser = await launchBrowser();
 });
 afterAll(async () => {
   await restoreDemoNetwork();
@@ -63,10 +56,7 @@ async function restoreDemoNetwork(): Promise<void> {
 }
 
 async function signIn(page: Page, email: string): Promise<void> {
-  await page.goto(BASE_URL);
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill('demo-password-1');
-  await page.getByTestId('sign-in-submit').click();
+  await submitSignIn(page, email);
   await page.getByTestId('overview-slices').waitFor({ timeout: 30000 });
 }
 

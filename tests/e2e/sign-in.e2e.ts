@@ -1,10 +1,8 @@
 // Signs in through the real web app in Chromium, on a phone-sized and a wide screen, and reads the overview figures.
-import { chromium, type Browser, type Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import fs from 'node:fs';
 import path from 'node:path';
-
-const BASE_URL = process.env.E2E_BASE_URL ?? 'http://127.0.0.1:8099';
-const SHOTS = path.resolve(__dirname, '../../test-results/e2e');
+import { BASE_URL, launchBrowser, screenshotPath, submitSignIn } from './helpers/browser';
 const demo = JSON.parse(fs.readFileSync(path.resolve(__dirname, '../../scenarios/demo.json'), 'utf8')) as {
   sites: unknown[];
   slices: { tenant: string }[];
@@ -18,23 +16,13 @@ const VIEWPORTS = [
 let browser: Browser;
 
 beforeAll(async () => {
-  fs.mkdirSync(SHOTS, { recursive: true });
-  browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking',
-      '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
-  });
+  browser = await launchBrowser();
 });
 afterAll(async () => {
   await browser?.close();
 });
 
-async function signIn(page: Page, email: string): Promise<void> {
-  await page.goto(BASE_URL);
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill('demo-password-1');
-  await page.getByTestId('sign-in-submit').click();
-}
+const signIn = submitSignIn;
 
 async function figure(page: Page, key: string): Promise<number> {
   const el = page.getByTestId(`overview-${key}`);
@@ -49,7 +37,7 @@ describe.each(VIEWPORTS)('sign-in and overview at $width×$height', (viewport) =
     await signIn(page, 'planner@demo.test');
     expect(await figure(page, 'slices')).toBe(demo.slices.length);
     expect(await figure(page, 'sites')).toBe(demo.sites.length);
-    await page.screenshot({ path: path.join(SHOTS, `overview-planner-${viewport.name}.png`), fullPage: true });
+    await page.screenshot({ path: screenshotPath(`overview-planner-${viewport.name}.png`), fullPage: true });
     await context.close();
   });
 
@@ -63,7 +51,7 @@ describe.each(VIEWPORTS)('sign-in and overview at $width×$height', (viewport) =
     expect(own).toBeGreaterThan(0);
     expect(own).toBeLessThan(demo.slices.length);
     expect(shown).toBe(own);
-    await page.screenshot({ path: path.join(SHOTS, `overview-tenant-${viewport.name}.png`), fullPage: true });
+    await page.screenshot({ path: screenshotPath(`overview-tenant-${viewport.name}.png`), fullPage: true });
     await context.close();
   });
 

@@ -1,11 +1,9 @@
 // On a phone-sized Chromium: an engineer books a window on a demo site that hosts a critical slice's function,
 // then a planner opens it, runs Assess, and sees the affected slices with the caution for the critical one.
-import { chromium, type Browser, type Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import fs from 'node:fs';
 import path from 'node:path';
-
-const BASE_URL = process.env.E2E_BASE_URL ?? 'http://127.0.0.1:8099';
-const SHOTS = path.resolve(__dirname, '../../test-results/e2e');
+import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
 const PHONE = { width: 390, height: 844 };
 /** A zone away from UTC, so the form's local-time conversion is exercised for real. */
 const TIME_ZONE = 'Europe/Oslo';
@@ -39,12 +37,7 @@ function dayAhead(days: number, timeZone: string): string {
 let browser: Browser;
 
 beforeAll(async () => {
-  fs.mkdirSync(SHOTS, { recursive: true });
-  browser = await chromium.launch({
-    executablePath: '/usr/bin/chromium',
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-background-networking',
-      '--disable-component-update', '--disable-sync', '--no-first-run', '--disable-quic'],
-  });
+  browser = await launchBrowser();
 });
 afterAll(async () => {
   await browser?.close();
@@ -53,10 +46,7 @@ afterAll(async () => {
 async function signedInPage(email: string): Promise<Page> {
   const context = await browser.newContext({ viewport: PHONE, timezoneId: TIME_ZONE });
   const page = await context.newPage();
-  await page.goto(BASE_URL);
-  await page.getByTestId('sign-in-email').fill(email);
-  await page.getByTestId('sign-in-password').fill('demo-password-1');
-  await page.getByTestId('sign-in-submit').click();
+  await submitSignIn(page, email);
   await page.getByTestId('overview-sites').waitFor({ timeout: 30000 });
   return page;
 }
