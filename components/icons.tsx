@@ -114,3 +114,14 @@ export function ImportIcon({ size = 24, color = colors.ink }: IconProps) {
     </Svg>
   );
 }
+
+/** More: three buoys in a row, for the areas kept behind the phone's More tab. */
+export function MoreIcon({ size = 24, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Circle cx={5.5} cy={12} r={1.9} stroke={color} strokeWidth={1.8} />
+      <Circle cx={12} cy={12} r={1.9} stroke={color} strokeWidth={1.8} />
+      <Circle cx={18.5} cy={12} r={1.9} stroke={color} strokeWidth={1.8} />
+    </Svg>
+  );
+}

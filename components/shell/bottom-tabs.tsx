@@ -1,30 +1,54 @@
-// Phones: the areas as a tab bar along the bottom edge, clear of the home indicator.
+// Phones: the areas as a tab bar along the bottom edge, clear of the home indicator. When there are
+// more areas than fit (see phone-areas.ts), the last place is a More tab opening a sheet with the rest.
+import { useState } from 'react';
+import type { ComponentType } from 'react';
 import { Link } from 'expo-router';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import type { RoleName } from '@/shared/api';
+import { MoreIcon } from '@/components/icons';
 import { areasFor } from '@/components/shell/nav-areas';
+import { MoreSheet } from '@/components/shell/more-sheet';
+import { splitPhoneAreas } from '@/components/shell/phone-areas';
 import { colors, space, type } from '@/constants/theme';
 
 export function BottomTabs({ pathname, roles }: { pathname: string; roles: readonly RoleName[] }) {
   const insets = useSafeAreaInsets();
+  const [moreOpen, setMoreOpen] = useState(false);
+  const { tabs, more } = splitPhoneAreas(areasFor(roles));
+  // More reads as active while the user is inside one of the areas it holds.
+  const moreActive = more.some((area) => area.matches(pathname));
   return (
     <View style={[styles.bar, { paddingBottom: insets.bottom + space.xs }]} role="tablist" testID="bottom-tabs">
-      {areasFor(roles).map(({ key, label, href, matches, Icon }) => {
-        const active = matches(pathname);
-        const tint = active ? colors.primary : colors.inkMuted;
-        return (
-          <Link key={key} href={href} asChild>
-            <Pressable testID={`nav-${key}`} role="tab" aria-selected={active} style={styles.pressable}>
-              <View style={styles.tab}>
-                <View style={[styles.mark, active && styles.markActive]} />
-                <Icon color={tint} />
-                <Text style={[styles.label, { color: tint }]}>{label}</Text>
-              </View>
-            </Pressable>
-          </Link>
-        );
-      })}
+      {tabs.map(({ key, label, href, matches, Icon }) => (
+        <Link key={key} href={href} asChild>
+          <Pressable testID={`nav-${key}`} role="tab" aria-selected={matches(pathname)} style={styles.pressable}>
+            <TabFace label={label} Icon={Icon} active={matches(pathname)} />
+          </Pressable>
+        </Link>
+      ))}
+      {more.length > 0 && (
+        <Pressable
+          testID="nav-more" role="tab" aria-selected={moreActive} aria-expanded={moreOpen}
+          onPress={() => setMoreOpen(true)} style={styles.pressable}
+        >
+          <TabFace label="More" Icon={MoreIcon} active={moreActive} />
+        </Pressable>
+      )}
+      <MoreSheet areas={more} pathname={pathname} visible={moreOpen} onClose={() => setMoreOpen(false)} />
+    </View>
+  );
+}
+
+type FaceProps = { label: string; Icon: ComponentType<{ color?: string }>; active: boolean };
+
+function TabFace({ label, Icon, active }: FaceProps) {
+  const tint = active ? colors.primary : colors.inkMuted;
+  return (
+    <View style={styles.tab}>
+      <View style={[styles.mark, active && styles.markActive]} />
+      <Icon color={tint} />
+      <Text style={[styles.label, { color: tint }]} numberOfLines={1}>{label}</Text>
     </View>
   );
 }

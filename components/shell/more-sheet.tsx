@@ -1,0 +1,59 @@
+// Phones: the areas that did not fit the tab bar, as a list in a sheet rising from the bottom edge.
+import { Link } from 'expo-router';
+import { Modal, Pressable, StyleSheet, Text, View } from 'react-native';
+import { useSafeAreaInsets } from 'react-native-safe-area-context';
+import type { NavArea } from '@/components/shell/nav-areas';
+import { colors, radii, space, type } from '@/constants/theme';
+
+type Props = { areas: readonly NavArea[]; pathname: string; visible: boolean; onClose: () => void };
+
+export function MoreSheet({ areas, pathname, visible, onClose }: Props) {
+  const insets = useSafeAreaInsets();
+  return (
+    <Modal visible={visible} transparent animationType="fade" onRequestClose={onClose}>
+      <View style={styles.frame}>
+        {/* Tapping the dimmed page closes the sheet, as does the system back gesture (onRequestClose). */}
+        <Pressable style={styles.backdrop} onPress={onClose} testID="nav-more-backdrop" aria-label="Close more areas" />
+        <View style={[styles.sheet, { paddingBottom: insets.bottom + space.lg }]} role="menu" testID="nav-more-sheet">
+          <View style={styles.grip} />
+          <Text style={styles.heading}>More areas</Text>
+          {areas.map(({ key, label, href, matches, Icon }) => {
+            const active = matches(pathname);
+            return (
+              <Link key={key} href={href} asChild onPress={onClose}>
+                <Pressable testID={`nav-${key}`} role="menuitem" aria-current={active ? 'page' : undefined}>
+                  <View style={[styles.row, active && styles.rowActive]}>
+                    <View style={[styles.mark, active && styles.markActive]} />
+                    <Icon color={active ? colors.primary : colors.ink} />
+                    <Text style={[styles.label, active && styles.labelActive]}>{label}</Text>
+                  </View>
+                </Pressable>
+              </Link>
+            );
+          })}
+        </View>
+      </View>
+    </Modal>
+  );
+}
+
+const styles = StyleSheet.create({
+  frame: { flex: 1, justifyContent: 'flex-end' },
+  backdrop: { ...StyleSheet.absoluteFillObject, backgroundColor: colors.abyss, opacity: 0.4 },
+  sheet: {
+    backgroundColor: colors.surface,
+    borderTopLeftRadius: radii.lg,
+    borderTopRightRadius: radii.lg,
+    paddingTop: space.sm,
+    paddingHorizontal: space.lg,
+    gap: space.xs,
+  },
+  grip: { alignSelf: 'center', width: 40, height: 4, borderRadius: radii.pill, backgroundColor: colors.border, marginBottom: space.sm },
+  heading: { ...type.label, color: colors.inkMuted, marginBottom: space.xs },
+  row: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: 48, paddingHorizontal: space.sm, borderRadius: radii.md },
+  rowActive: { backgroundColor: colors.primarySoft },
+  mark: { width: 3, height: 20, borderRadius: 2, backgroundColor: 'transparent' },
+  markActive: { backgroundColor: colors.buoy },
+  label: { ...type.bodyStrong, color: colors.ink },
+  labelActive: { color: colors.primary },
+});

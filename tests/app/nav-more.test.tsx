@@ -1,0 +1,85 @@
+// The phone tab bar: at most five tabs, a More tab listing the remaining areas, and those areas still navigate.
+import type { ReactElement } from 'react';
+import { fireEvent, render, screen, within } from '@testing-library/react-native';
+import { Text } from 'react-native';
+import type { Me } from '@/shared/api';
+import { AppShell } from '@/components/shell/app-shell';
+import { NAV_AREAS } from '@/components/shell/nav-areas';
+
+// Link stands in for expo-router's: pressing its child runs Link's onPress, then "navigates" by recording href.
+const mockPush = jest.fn();
+jest.mock('expo-router', () => ({
+  Link: ({ href, children, onPress }: { href: string; children: ReactElement<{ onPress?: () => void }>; onPress?: () => void }) =>
+    require('react').cloneElement(children, { onPress: () => { onPress?.(); mockPush(href); } }),
+}));
+jest.mock('react-native-safe-area-context', () => require('react-native-safe-area-context/jest/mock').default);
+
+let mockWidthPx = 390;
+jest.mock('react-native/Libraries/Utilities/useWindowDimensions', () => ({
+  __esModule: true,
+  default: () => ({ width: mockWidthPx, height: 844, scale: 2, fontScale: 1 }),
+}));
+
+const planner: Me = { id: 'u-pl', email: 'planner@demo.test', name: 'Pat Planner', roles: ['planner'], tenantId: null };
+const tenant: Me = { id: 'u-te', email: 'tenant@demo.test', name: 'Tia Tenant', roles: ['tenant'], tenantId: 't1' };
+
+function renderShell(user: Me, pathname = '/') {
+  render(
+    <AppShell user={user} pathname={pathname} onSignOut={() => undefined} signingOut={false}>
+      <Text>page</Text>
+    </AppShell>,
+  );
+}
+
+function tabKeys(): string[] {
+  return within(screen.getByTestId('bottom-tabs')).queryAllByRole('tab').map((tab) => String(tab.props.testID));
+}
+
+beforeEach(() => {
+  mockPush.mockReset();
+  mockWidthPx = 390;
+});
+
+test('a planner on a phone gets four areas plus More; More lists the rest, and one of them navigates', () => {
+  renderShell(planner);
+  const tabs = tabKeys();
+  expect(tabs.length).toBeLessThanOrEqual(5);
+  expect(tabs).toEqual(['nav-overview', 'nav-calendar', 'nav-network', 'nav-map', 'nav-more']);
+  expect(screen.queryByTestId('nav-more-sheet')).toBeNull();
+  expect(screen.queryByTestId('nav-imports')).toBeNull();
+
+  fireEvent.press(screen.getByTestId('nav-more'));
+  const sheet = screen.getByTestId('nav-more-sheet');
+  // Planner holds every area: the sheet shows exactly those not in the bar.
+  for (const key of ['slices', 'freezes', 'imports']) expect(within(sheet).getByTestId(`nav-${key}`)).toBeTruthy();
+  expect(within(sheet).queryByTestId('nav-overview')).toBeNull();
+
+  fireEvent.press(within(sheet).getByTestId('nav-imports'));
+  expect(mockPush).toHaveBeenCalledWith('/imports');
+  expect(screen.queryByTestId('nav-more-sheet')).toBeNull();
+});
+
+test('More reads as selected while inside an area it holds, and the backdrop closes the sheet', () => {
+  renderShell(planner, '/freezes');
+  expect(screen.getByTestId('nav-more')).toBeSelected();
+  expect(screen.getByTestId('nav-overview')).not.toBeSelected();
+  fireEvent.press(screen.getByTestId('nav-more'));
+  expect(screen.getByTestId('nav-more-sheet')).toBeTruthy();
+  fireEvent.press(screen.getByTestId('nav-more-backdrop'));
+  expect(screen.queryByTestId('nav-more-sheet')).toBeNull();
+  expect(mockPush).not.toHaveBeenCalled();
+});
+
+test('a tenant user has five areas: all fit the bar and there is no More', () => {
+  renderShell(tenant);
+  expect(tabKeys()).toHaveLength(5);
+  expect(screen.queryByTestId('nav-more')).toBeNull();
+});
+
+test('the side rail on a wide screen keeps every area and has no More', () => {
+  mockWidthPx = 1280;
+  renderShell(planner);
+  expect(screen.queryByTestId('bottom-tabs')).toBeNull();
+  for (const { key } of NAV_AREAS) expect(screen.getByTestId(`nav-${key}`)).toBeTruthy();
+  expect(screen.queryByTestId('nav-more')).toBeNull();
+});
