@@ -39,7 +39,7 @@ export function MoreSheet({ areas, pathname, visible, onClose }: Props) {
 
 const styles = StyleSheet.create({
   frame: { flex: 1, justifyContent: 'flex-end' },
-  backdrop: { ...StyleSheet.absoluteFillObject, backgroundColor: colors.abyss, opacity: 0.4 },
+  backdrop: { position: 'absolute', top: 0, right: 0, bottom: 0, left: 0, backgroundColor: colors.abyss, opacity: 0.4 },
   sheet: {
     backgroundColor: colors.surface,
     borderTopLeftRadius: radii.lg,
