@@ -3,7 +3,7 @@
 // the decoder's own kernel — so the greedy plan is exactly reproducible as a DE seed.
 import type { SlicePlacement } from '../model/types';
 import { fits } from '../model/tolerance';
-import { createBookingState, placeSlice, type BookingState } from '../remap/booking';
+import { createBookingState, placeSlice, releaseHeld, type BookingState } from '../remap/booking';
 import type { RemapProblem, RemapSlice } from '../remap/remap-types';
 import { grcRank } from './grc';
 
@@ -44,14 +44,15 @@ function chooseSites(problem: RemapProblem, state: BookingState, block: RemapSli
 }
 
 function snapshot(state: BookingState): BookingState {
-  return { ...state, cpu: Float64Array.from(state.cpu), gbps: Float64Array.from(state.gbps) };
+  return { ...state, cpu: Float64Array.from(state.cpu), gbps: Float64Array.from(state.gbps), protectedGbps: Float64Array.from(state.protectedGbps) };
 }
 
 function restore(state: BookingState, saved: BookingState): void {
-  const { cpu, gbps, pathOptions } = state;
+  const { cpu, gbps, protectedGbps, pathOptions, protectedOptions } = state;
   cpu.set(saved.cpu);
   gbps.set(saved.gbps);
-  Object.assign(state, saved, { cpu, gbps, pathOptions });
+  protectedGbps.set(saved.protectedGbps);
+  Object.assign(state, saved, { cpu, gbps, protectedGbps, pathOptions, protectedOptions });
 }
 
 /** Tries the ranked choice, then the nearest one; keeps the first that books without any violation. */
@@ -76,6 +77,7 @@ export function greedyPlan(problem: RemapProblem): GreedyResult {
   const genes = new Float64Array(problem.dimension).fill(0.5);
   for (const block of problem.slices) {
     const placed = block.blockedReason === undefined ? placeGreedily(problem, state, block, rank) : null;
+    if (!placed) releaseHeld(state, block);
     genes[block.keepGene] = placed ? 0.75 : 0.25;
     next.set(block.slice, placed ? placed.placement : null);
     placed?.picks.forEach((p, fn) => { genes[problem.functions[block.functions[fn]].gene] = p + 0.5; });

@@ -9,7 +9,10 @@ import type { RemapProblem, RemapSlice } from './remap-types';
 export interface BookingState {
   cpu: Float64Array;
   gbps: Float64Array;
+  /** gbps minus the current paths of the slices not yet booked (see RemapProblem.protectedGbps) */
+  protectedGbps: Float64Array;
   pathOptions: PathOptions;
+  protectedOptions: PathOptions;
   violation: number;
   unresolvedWeight: number;
   unresolved: number;
@@ -23,8 +26,11 @@ export interface BookingState {
 export function createBookingState(problem: RemapProblem): BookingState {
   const cpu = Float64Array.from(problem.residualCpu);
   const gbps = Float64Array.from(problem.residualGbps);
+  const protectedGbps = Float64Array.from(problem.protectedGbps);
   return {
-    cpu, gbps, pathOptions: { spanDown: problem.spanDown, siteDown: problem.siteDown, residualGbps: gbps },
+    cpu, gbps, protectedGbps,
+    pathOptions: { spanDown: problem.spanDown, siteDown: problem.siteDown, residualGbps: gbps },
+    protectedOptions: { spanDown: problem.spanDown, siteDown: problem.siteDown, residualGbps: protectedGbps },
     violation: 0, unresolvedWeight: 0, unresolved: 0, moved: 0, rerouted: 0, moveCost: 0, usage: 0,
     peakUtilisation: problem.basePeakUtilisation,
   };
@@ -34,6 +40,7 @@ export function createBookingState(problem: RemapProblem): BookingState {
 export function resetBookingState(problem: RemapProblem, state: BookingState): void {
   state.cpu.set(problem.residualCpu);
   state.gbps.set(problem.residualGbps);
+  state.protectedGbps.set(problem.protectedGbps);
   state.violation = 0;
   state.unresolvedWeight = 0;
   state.unresolved = 0;
@@ -42,6 +49,33 @@ export function resetBookingState(problem: RemapProblem, state: BookingState): v
   state.moveCost = 0;
   state.usage = 0;
   state.peakUtilisation = problem.basePeakUtilisation;
+}
+
+const TOTALS = 8;
+
+/** A copy of the state's arrays and totals in one buffer (reused when `into` has the right size). */
+export function saveBookingState(state: BookingState, into?: Float64Array): Float64Array {
+  const a = state.cpu.length;
+  const b = state.gbps.length;
+  const out = into && into.length === a + 2 * b + TOTALS ? into : new Float64Array(a + 2 * b + TOTALS);
+  out.set(state.cpu, 0);
+  out.set(state.gbps, a);
+  out.set(state.protectedGbps, a + b);
+  const t = a + 2 * b;
+  out[t] = state.violation; out[t + 1] = state.unresolvedWeight; out[t + 2] = state.unresolved; out[t + 3] = state.moved;
+  out[t + 4] = state.rerouted; out[t + 5] = state.moveCost; out[t + 6] = state.usage; out[t + 7] = state.peakUtilisation;
+  return out;
+}
+
+export function loadBookingState(state: BookingState, saved: Float64Array): void {
+  const a = state.cpu.length;
+  const b = state.gbps.length;
+  state.cpu.set(saved.subarray(0, a));
+  state.gbps.set(saved.subarray(a, a + b));
+  state.protectedGbps.set(saved.subarray(a + b, a + 2 * b));
+  const t = a + 2 * b;
+  state.violation = saved[t]; state.unresolvedWeight = saved[t + 1]; state.unresolved = saved[t + 2]; state.moved = saved[t + 3];
+  state.rerouted = saved[t + 4]; state.moveCost = saved[t + 5]; state.usage = saved[t + 6]; state.peakUtilisation = saved[t + 7];
 }
 
 function samePath(a: readonly number[], b: readonly number[]): boolean {
@@ -70,6 +104,7 @@ function bookPath(problem: RemapProblem, state: BookingState, path: number[], gb
   const spans = problem.inv.network.spans;
   for (const span of path) {
     state.gbps[span] -= gbps;
+    state.protectedGbps[span] -= gbps;
     state.usage += gbps * spans[span].latencyMs;
     const cap = problem.capacityGbps[span];
     if (cap > 0) state.peakUtilisation = Math.max(state.peakUtilisation, (cap - state.gbps[span]) / cap);
@@ -88,9 +123,13 @@ function routeTie(problem: RemapProblem, state: BookingState, block: RemapSlice,
     path = keepCurrentPath(problem, state, current.paths[tie], t.bandwidthGbps, t.maxLatencyMs);
   }
   if (path === null) {
-    state.pathOptions.minGbps = t.bandwidthGbps;
-    state.pathOptions.maxLatencyMs = t.maxLatencyMs;
-    path = shortestLatencyPath(problem.inv.network, from, to, state.pathOptions)?.spans ?? null;
+    // First around the current paths of the slices still to come, so they can keep theirs; then anywhere.
+    for (const o of [state.protectedOptions, state.pathOptions]) {
+      o.minGbps = t.bandwidthGbps;
+      o.maxLatencyMs = t.maxLatencyMs;
+    }
+    path = shortestLatencyPath(problem.inv.network, from, to, state.protectedOptions)?.spans
+      ?? shortestLatencyPath(problem.inv.network, from, to, state.pathOptions)?.spans ?? null;
   }
   if (path === null) {
     state.violation += 1;
@@ -105,12 +144,18 @@ function routeTie(problem: RemapProblem, state: BookingState, block: RemapSlice,
   return path;
 }
 
+/** The slice's turn has come: its current paths no longer need protecting from the others' new routes. */
+export function releaseHeld(state: BookingState, block: RemapSlice): void {
+  for (let i = 0; i < block.heldSpans.length; i += 1) state.protectedGbps[block.heldSpans[i]] += block.heldGbps[i];
+}
+
 /**
  * Books slice `block` on `sites` (one site per function). Over-full sites are booked anyway and counted
  * as violation (share of the demand that does not fit), so Deb's rules can steer away from them.
  * Returns the placement when `record`, else null.
  */
 export function placeSlice(problem: RemapProblem, state: BookingState, block: RemapSlice, sites: Int32Array, record: boolean): SlicePlacement | null {
+  releaseHeld(state, block);
   const slice = problem.inv.slices[block.slice];
   const current = problem.inv.placements[block.slice];
   let moved = false;

@@ -2,7 +2,7 @@
 import type { DEProblem, Fitness } from '../de/differential-evolution';
 import type { Objective, SlicePlacement } from '../model/types';
 import { sliceWeight } from '../plan/evaluate-plan';
-import { createBookingState, placeSlice, resetBookingState, type BookingState } from './booking';
+import { createBookingState, loadBookingState, placeSlice, releaseHeld, resetBookingState, saveBookingState, type BookingState } from './booking';
 import type { RemapProblem } from './remap-types';
 
 /** Genes at the middle of their cell, so small DE steps do not flip them. */
@@ -19,6 +19,13 @@ export interface Decoded {
 export interface Decoder {
   evaluate(genes: Float64Array): Fitness;
   decode(genes: Float64Array): Decoded;
+  /** evaluate, saving the booking state before each slice block for evaluateFrom */
+  evaluateSaving(genes: Float64Array): Fitness;
+  /**
+   * evaluate for genes that equal those of the last evaluateSaving call in every block before `block`:
+   * decodes only from that block on (same result as evaluate).
+   */
+  evaluateFrom(genes: Float64Array, block: number): Fitness;
 }
 
 /** Objective vector order: the lexicographic keys, then counts as tie-breakers (fewer is better there too). */
@@ -39,11 +46,25 @@ function candidateIndex(gene: number, count: number): number {
   return i < 0 ? 0 : i >= count ? count - 1 : i;
 }
 
-function run(problem: RemapProblem, state: BookingState, sites: Int32Array, genes: Float64Array, next?: Map<number, SlicePlacement | null>): void {
-  resetBookingState(problem, state);
+/** Partial decodes: the booking state before each slice block, saved by a full pass. */
+interface Resume {
+  /** start at this block from saves[from] (0 = from scratch) */
+  from: number;
+  saves: Float64Array[];
+  /** save the state before each block into saves */
+  save: boolean;
+}
+
+function run(problem: RemapProblem, state: BookingState, sites: Int32Array, genes: Float64Array, next?: Map<number, SlicePlacement | null>, resume?: Resume): void {
+  const from = resume?.from ?? 0;
+  if (from > 0 && resume) loadBookingState(state, resume.saves[from]);
+  else resetBookingState(problem, state);
   const record = next !== undefined;
-  for (const block of problem.slices) {
+  for (let b = from; b < problem.slices.length; b += 1) {
+    const block = problem.slices[b];
+    if (resume?.save) resume.saves[b] = saveBookingState(state, resume.saves[b]);
     if (block.blockedReason !== undefined || genes[block.keepGene] < 0.5) {
+      releaseHeld(state, block);
       state.unresolvedWeight += sliceWeight(problem.inv.slices[block.slice].priority);
       state.unresolved += 1;
       next?.set(block.slice, null);
@@ -64,7 +85,17 @@ export function createDecoder(problem: RemapProblem): Decoder {
   let widest = 1;
   for (const block of problem.slices) widest = Math.max(widest, block.functions.length);
   const sites = new Int32Array(widest);
+  const saves: Float64Array[] = [];
   return {
+    evaluateSaving(genes) {
+      run(problem, state, sites, genes, undefined, { from: 0, saves, save: true });
+      return toFitness(state);
+    },
+    evaluateFrom(genes, block) {
+      // Without saved states (no evaluateSaving yet) this is a plain evaluate.
+      run(problem, state, sites, genes, undefined, { from: saves.length === problem.slices.length ? block : 0, saves, save: false });
+      return toFitness(state);
+    },
     evaluate(genes) {
       run(problem, state, sites, genes);
       return toFitness(state);

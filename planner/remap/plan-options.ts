@@ -58,7 +58,7 @@ export const PLAN_DEFAULTS: Omit<PlanOptions, 'reservations' | 'pinned' | 'exclu
   F: 0.5,
   CR: 0.1,
   generations: 300,
-  stallGenerations: 60,
+  stallGenerations: 30,
   timeLimitMs: 30_000,
   workers: 2,
   migrationInterval: 10,

@@ -11,6 +11,7 @@ import { createDecoder, objectiveFromFitness, stayPutGenes, toDEProblem, type De
 import { explainUnresolved } from './explain-unresolved';
 import { PLAN_DEFAULTS, type PlanOptions } from './plan-options';
 import { buildRemapProblem } from './problem';
+import { polish } from './polish';
 import { perturbedSeeds } from './seeding';
 import type { RemapProblem } from './remap-types';
 
@@ -26,6 +27,8 @@ interface Search {
   exact?: PlanResult['exact'];
   /** decoder fitness of the found genes */
   feasible?: boolean;
+  /** the genes that decode to `next` (DE modes) */
+  genes?: Float64Array;
 }
 
 function toTrace(points: DETracePoint[]): TracePoint[] {
@@ -44,7 +47,7 @@ async function evolve(problem: RemapProblem, decoder: Decoder, o: PlanOptions, s
     const r = runDE(toDEProblem(problem, decoder), {
       ...de, now, onGeneration: (g, best, evaluations) => report(g, evaluations, objectiveFromFitness(best)),
     }, createRng(o.seed), seeds);
-    return { next: decoder.decode(r.best).next, trace: toTrace(r.trace), feasible: r.fitness.violation <= 0 };
+    return { next: decoder.decode(r.best).next, trace: toTrace(r.trace), feasible: r.fitness.violation <= 0, genes: r.best };
   }
   if (!o.parallel || !o.scenario) throw new InvalidOptionError(`mode "${o.mode}" needs options.parallel and options.scenario`);
   const r = await o.parallel.run({
@@ -54,7 +57,7 @@ async function evolve(problem: RemapProblem, decoder: Decoder, o: PlanOptions, s
     onGeneration: (p) => report(p.generation, p.evaluations, objectiveFromFitness(p.best)),
   });
   const decoded = decoder.decode(r.best);
-  return { next: decoded.next, trace: toTrace(r.trace), feasible: decoded.fitness.violation <= 0 };
+  return { next: decoded.next, trace: toTrace(r.trace), feasible: decoded.fitness.violation <= 0, genes: r.best };
 }
 
 /** Stay-put and greedy first, then perturbed copies for three quarters of the rest (the others random). */
@@ -62,6 +65,18 @@ function initialMembers(problem: RemapProblem, greedyGenes: Float64Array, o: Pla
   const bases = [greedyGenes, stayPutGenes(problem)];
   const extra = Math.max(0, Math.floor(((o.population - bases.length) * 3) / 4));
   return [...bases, ...perturbedSeeds(problem, bases, extra, createRng(deriveSeed(o.seed, SEEDING_STREAM)))];
+}
+
+/** Decodes per hill-climb: a few passes over the genome. */
+function polishBudget(problem: RemapProblem): number {
+  return Math.max(200, 4 * problem.dimension);
+}
+
+function polishFound(problem: RemapProblem, decoder: Decoder, found: Search, budget: number): Search {
+  if (!found.genes) return found;
+  const p = polish(problem, decoder, found.genes, budget);
+  const decoded = decoder.decode(p.genes);
+  return { ...found, next: decoded.next, feasible: decoded.fitness.violation <= 0, genes: p.genes };
 }
 
 async function search(problem: RemapProblem, o: PlanOptions, startMs: number, now: () => number): Promise<Search> {
@@ -75,7 +90,12 @@ async function search(problem: RemapProblem, o: PlanOptions, startMs: number, no
     const r = await o.exact(problem, { timeLimitMs: o.timeLimitMs });
     return { next: r.next, trace: [], exact: r.exact };
   }
-  const found = await evolve(problem, decoder, o, initialMembers(problem, greedy.genes, o), startMs, now);
+  // Memetic steps around DE (same in every DE mode, so shared-eval still follows serial exactly):
+  // the greedy seed is hill-climbed first, and DE's best is hill-climbed at the end.
+  const budget = polishBudget(problem);
+  const seed = polish(problem, decoder, greedy.genes, budget).genes;
+  const evolved = await evolve(problem, decoder, o, initialMembers(problem, seed, o), startMs, now);
+  const found = polishFound(problem, decoder, evolved, budget);
   // Greedy is a seed, so DE should never do worse; the guard also catches an infeasible best.
   const better = found.feasible === true
     && compareObjectives(evaluatePlan(problem.inv, problem.window, found.next, problem.options.reservations),

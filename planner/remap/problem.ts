@@ -45,6 +45,27 @@ function decodeOrder(inv: Inventory, affected: number[]): number[] {
   return [...affected].sort((a, b) => inv.slices[a].priority - inv.slices[b].priority || a - b);
 }
 
+/** The surviving current paths of a slice's ties, as (span, Gbps) pairs. */
+function heldLoad(inv: Inventory, slice: number, spanDown: Uint8Array): { heldSpans: Int32Array; heldGbps: Float64Array } {
+  const spans: number[] = [];
+  const gbps: number[] = [];
+  inv.slices[slice].ties.forEach((t, i) => {
+    const path = inv.placements[slice].paths[i];
+    if (path.some((span) => spanDown[span])) return;
+    for (const span of path) {
+      spans.push(span);
+      gbps.push(t.bandwidthGbps);
+    }
+  });
+  return { heldSpans: Int32Array.from(spans), heldGbps: Float64Array.from(gbps) };
+}
+
+function protectedResidual(residualGbps: Float64Array, slices: RemapSlice[]): Float64Array {
+  const out = Float64Array.from(residualGbps);
+  for (const b of slices) b.heldSpans.forEach((span, i) => { out[span] -= b.heldGbps[i]; });
+  return out;
+}
+
 export function buildRemapProblem(inv: Inventory, window: WindowSpec, options: RemapProblemOptions = {}): RemapProblem {
   const maxCandidates = options.maxCandidates ?? DEFAULT_MAX_CANDIDATES;
   if (!Number.isInteger(maxCandidates) || maxCandidates < 1) throw new InvalidOptionError('maxCandidates must be an integer ≥ 1');
@@ -59,7 +80,7 @@ export function buildRemapProblem(inv: Inventory, window: WindowSpec, options: R
   const lower: number[] = [];
   const upper: number[] = [];
   for (const slice of decodeOrder(inv, affected)) {
-    const block: RemapSlice = { slice, keepGene: lower.length, functions: [] };
+    const block: RemapSlice = { slice, keepGene: lower.length, functions: [], ...heldLoad(inv, slice, r.spanDown) };
     lower.push(0);
     upper.push(1);
     inv.slices[slice].functions.forEach((_f, fn) => {
@@ -76,6 +97,7 @@ export function buildRemapProblem(inv: Inventory, window: WindowSpec, options: R
     inv, window, options, affected, slices, functions,
     dimension: lower.length, lower: Float64Array.from(lower), upper: Float64Array.from(upper),
     residualCpu: r.residualCpu, residualGbps: r.residualGbps, capacityGbps: r.capacityGbps,
+    protectedGbps: protectedResidual(r.residualGbps, slices),
     siteDown: r.siteDown, spanDown: r.spanDown, basePeakUtilisation: r.basePeak,
   };
 }

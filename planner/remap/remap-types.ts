@@ -32,6 +32,9 @@ export interface RemapSlice {
   functions: number[];
   /** why no decode can place it (a function without candidates), else undefined */
   blockedReason?: string;
+  /** spans of its ties' current paths that survive the window (repeats allowed) and the Gbps each holds */
+  heldSpans: Int32Array;
+  heldGbps: Float64Array;
 }
 
 export interface RemapProblem extends Omit<DEProblem, 'evaluate'> {
@@ -45,6 +48,8 @@ export interface RemapProblem extends Omit<DEProblem, 'evaluate'> {
   /** capacity left during the window for the affected slices */
   residualCpu: Float64Array;
   residualGbps: Float64Array;
+  /** residualGbps minus every affected tie's surviving current path: new routes try this first */
+  protectedGbps: Float64Array;
   /** window capacity without reservations, for utilisation */
   capacityGbps: Float64Array;
   siteDown: Uint8Array;
