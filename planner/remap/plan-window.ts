@@ -39,7 +39,7 @@ function toTrace(points: DETracePoint[]): TracePoint[] {
 
 /** Serial DE, or the parallel runner; both seeded with stay-put and greedy genes. */
 async function evolve(problem: RemapProblem, decoder: Decoder, o: PlanOptions, seeds: Float64Array[], startMs: number, now: () => number): Promise<Search> {
-  const timeLimitMs = Math.max(0, o.timeLimitMs - (now() - startMs));
+  const timeLimitMs = Math.max(0, o.timeLimitMs * (1 - FINAL_POLISH_SHARE) - (now() - startMs));
   const report = (generation: number, evaluations: number, best: TracePoint['best']) =>
     o.onProgress?.({ generation, evaluations, best, elapsedMs: now() - startMs });
   const de = { population: o.population, F: o.F, CR: o.CR, generations: o.generations, stallGenerations: o.stallGenerations, timeLimitMs };
@@ -72,9 +72,17 @@ function polishBudget(problem: RemapProblem): number {
   return Math.max(200, 4 * problem.dimension);
 }
 
-function polishFound(problem: RemapProblem, decoder: Decoder, found: Search, budget: number): Search {
+/**
+ * Shares of the time limit: the greedy seed's hill-climb may use the first SEED_POLISH_SHARE, DE runs until
+ * FINAL_POLISH_SHARE is left, and the final hill-climb takes the rest. On large windows a full hill-climb
+ * costs thousands of decodes, so without these the time limit would not hold.
+ */
+const SEED_POLISH_SHARE = 0.15;
+const FINAL_POLISH_SHARE = 0.15;
+
+function polishFound(problem: RemapProblem, decoder: Decoder, found: Search, budget: number, timeUp: () => boolean): Search {
   if (!found.genes) return found;
-  const p = polish(problem, decoder, found.genes, budget);
+  const p = polish(problem, decoder, found.genes, budget, timeUp);
   const decoded = decoder.decode(p.genes);
   return { ...found, next: decoded.next, feasible: decoded.fitness.violation <= 0, genes: p.genes };
 }
@@ -93,9 +101,10 @@ async function search(problem: RemapProblem, o: PlanOptions, startMs: number, no
   // Memetic steps around DE (same in every DE mode, so shared-eval still follows serial exactly):
   // the greedy seed is hill-climbed first, and DE's best is hill-climbed at the end.
   const budget = polishBudget(problem);
-  const seed = polish(problem, decoder, greedy.genes, budget).genes;
+  const until = (share: number) => () => now() - startMs >= o.timeLimitMs * share;
+  const seed = polish(problem, decoder, greedy.genes, budget, until(SEED_POLISH_SHARE)).genes;
   const evolved = await evolve(problem, decoder, o, initialMembers(problem, seed, o), startMs, now);
-  const found = polishFound(problem, decoder, evolved, budget);
+  const found = polishFound(problem, decoder, evolved, budget, until(1));
   // Greedy is a seed, so DE should never do worse; the guard also catches an infeasible best.
   const better = found.feasible === true
     && compareObjectives(evaluatePlan(problem.inv, problem.window, found.next, problem.options.reservations),

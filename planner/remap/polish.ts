@@ -28,12 +28,18 @@ interface Climb {
   validThrough: number;
   /** block being climbed */
   block: number;
+  /** true once the caller's time is up (checked before every decode) */
+  timeUp: () => boolean;
+}
+
+function spent(c: Climb): boolean {
+  return c.evaluations >= c.maxEvaluations || c.timeUp();
 }
 
 /** Sets gene j to v; keeps it when strictly better, else puts the old value back. */
 function attempt(c: Climb, j: number, v: number): boolean {
   const old = c.x[j];
-  if (old === v || c.evaluations >= c.maxEvaluations) return false;
+  if (old === v || spent(c)) return false;
   c.x[j] = v;
   if (accept(c)) return true;
   c.x[j] = old;
@@ -54,7 +60,7 @@ function accept(c: Climb): boolean {
 function attemptStayPut(c: Climb, block: RemapSlice): boolean {
   const genes = block.functions.map((k) => c.problem.functions[k].gene);
   const old = genes.map((j) => c.x[j]);
-  if (old.every((v) => Math.floor(v) === 0) || c.evaluations >= c.maxEvaluations) return false;
+  if (old.every((v) => Math.floor(v) === 0) || spent(c)) return false;
   for (const j of genes) c.x[j] = CELL_MIDDLE;
   if (accept(c)) return true;
   genes.forEach((j, i) => { c.x[j] = old[i]; });
@@ -97,13 +103,19 @@ function changedSlices(c: Climb): number[] {
   return out;
 }
 
-/** Hill-climbs from `start` until no single change helps or `maxEvaluations` decodes are spent. Deterministic. */
-export function polish(problem: RemapProblem, decoder: Decoder, start: Float64Array, maxEvaluations: number): Polished {
+/**
+ * Hill-climbs from `start` until no single change helps, `maxEvaluations` decodes are spent, or `timeUp()`
+ * says the caller's time is over. Deterministic whenever it finishes before the time is up.
+ */
+export function polish(
+  problem: RemapProblem, decoder: Decoder, start: Float64Array, maxEvaluations: number, timeUp: () => boolean = () => false,
+): Polished {
   const c: Climb = {
-    problem, decoder, x: Float64Array.from(start), fit: decoder.evaluate(start), evaluations: 1, maxEvaluations, validThrough: -1, block: 0,
+    problem, decoder, x: Float64Array.from(start), fit: decoder.evaluate(start), evaluations: 1, maxEvaluations,
+    validThrough: -1, block: 0, timeUp,
   };
   let improved = true;
-  while (improved && c.evaluations < maxEvaluations) {
+  while (improved && !spent(c)) {
     improved = false;
     for (const b of changedSlices(c)) improved = climbSlice(c, b) || improved;
   }
