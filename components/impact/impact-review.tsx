@@ -8,7 +8,7 @@ import { Button } from '@/components/button';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { formatInstant, formatWindowRange } from '@/components/time';
 import { AffectedSlicesTable } from '@/components/impact/affected-slices-table';
-import { CriticalCaution } from '@/components/impact/critical-caution';
+import { CriticalCaution } from '@/components/critical-caution';
 import { ImpactMap } from '@/components/impact/impact-map';
 import { OverloadedSpans, SplitsBanner } from '@/components/impact/network-effects';
 import { windowActions } from '@/components/windows/lifecycle';
@@ -44,7 +44,13 @@ export function ImpactBody({ impact, wide }: { impact: WindowImpact; wide: boole
   );
   return (
     <View style={styles.body}>
-      {critical.length > 0 ? <CriticalCaution sliceNames={critical} /> : null}
+      {critical.length > 0 ? (
+        <CriticalCaution
+          testID="impact-critical-caution"
+          title="Caution: this work touches an emergency, health or utility service"
+          lead={`Critical slices affected: ${critical.join(', ')}.`}
+        />
+      ) : null}
       <SplitsBanner impact={impact} />
       {wide ? (
         <View style={styles.columns}>

@@ -3,7 +3,7 @@
 import { useMemo } from 'react';
 import type { SliceDetail } from '@/shared/inventory';
 import { Badge, CriticalBadge } from '@/components/inventory/badges';
-import { CriticalCaution } from '@/components/inventory/critical-caution';
+import { CriticalCaution } from '@/components/critical-caution';
 import { DetailFrame, Facts, Section } from '@/components/inventory/detail-frame';
 import { formatCpu, formatGbps, formatSnssai, sstName } from '@/components/inventory/format';
 import { InventoryMap } from '@/components/inventory/inventory-map';
@@ -36,7 +36,13 @@ export function SliceDetailView({ detail }: { detail: SliceDetail }) {
         </>
       }
     >
-      {slice.critical ? <CriticalCaution /> : null}
+      {slice.critical ? (
+        <CriticalCaution
+          testID="critical-caution"
+          title="Critical service"
+          lead="This slice carries a public-safety, health or utility service. Before any work that touches it:"
+        />
+      ) : null}
       <Facts
         items={[
           { label: 'Functions', value: String(slice.functionCount) },

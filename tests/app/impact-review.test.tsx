@@ -3,7 +3,7 @@
 import { screen, within } from '@testing-library/react-native';
 import type { AffectedSlice, WindowImpact } from '@/shared/window-impact';
 import { ImpactBody } from '@/components/impact/impact-review';
-import { CRITICAL_CAUTION_POINTS } from '@/components/impact/critical-caution';
+import { CRITICAL_CAUTION_POINTS } from '@/components/critical-caution';
 import { affectedPathElements, formatRiskPercent, serviceTypeLabel, sortAffected } from '@/components/impact/impact-format';
 import { clearQueries, renderWithQueries, routedFetch } from './window-test-kit';
 

@@ -1,8 +1,8 @@
-// The caution on every impact that touches a critical slice (DESIGN §7): people's safety can depend on it.
+// The one caution (DESIGN §7) wherever a critical slice is involved: people's safety can depend on the service,
+// so the work is agreed with its operators, follows the regulator and local practice, and the tool's figures
+// support that judgement rather than replace it.
 import { StyleSheet, Text, View } from 'react-native';
 import { calendarColors, colors, radii, space, type } from '@/constants/theme';
-
-export const CRITICAL_CAUTION_TITLE = 'Caution: this work touches an emergency, health or utility service';
 
 /** Our own words for DESIGN §7; each point is a separate line so none is skimmed over. */
 export const CRITICAL_CAUTION_POINTS = [
@@ -11,11 +11,11 @@ export const CRITICAL_CAUTION_POINTS = [
   'Do not rely on the figures here alone: the risk numbers are estimates from a model, not a guarantee.',
 ] as const;
 
-export function CriticalCaution({ sliceNames }: { sliceNames: readonly string[] }) {
+export function CriticalCaution({ title, lead, testID }: { title: string; lead: string; testID: string }) {
   return (
-    <View style={styles.box} role="alert" testID="impact-critical-caution">
-      <Text style={styles.title}>{CRITICAL_CAUTION_TITLE}</Text>
-      <Text style={styles.body}>Critical slices affected: {sliceNames.join(', ')}.</Text>
+    <View style={styles.box} role="alert" testID={testID}>
+      <Text style={styles.title}>{title}</Text>
+      <Text style={styles.body}>{lead}</Text>
       {CRITICAL_CAUTION_POINTS.map((point) => (
         <View key={point} style={styles.point}>
           <Text style={styles.bullet}>•</Text>
