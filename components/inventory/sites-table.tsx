@@ -7,7 +7,7 @@ import { useSitesQuery } from '@/hooks/queries/sites';
 import { DataTable } from '@/components/table/data-table';
 import { Pager } from '@/components/table/pager';
 import { UtilisationBar } from '@/components/table/utilisation-bar';
-import { sortKeyIn, useServerTable } from '@/components/table/use-server-table';
+import { serverTableProps, sortKeyIn, useServerTable } from '@/components/table/use-server-table';
 import type { Column } from '@/components/table/types';
 import { Segmented } from '@/components/inventory/segmented';
 import { NameCell } from '@/components/inventory/name-cell';
@@ -39,19 +39,12 @@ export function SitesTable({ selectedId, onOpen }: { selectedId: string | null; 
   return (
     <DataTable
       testID="sites-table"
-      rows={data?.items ?? []}
+      {...serverTableProps(table, sites)}
       columns={COLUMNS}
       rowKey={(s) => s.id}
-      sort={table.sort}
-      onSortChange={table.setSort}
-      query={table.query}
-      onQueryChange={table.setQuery}
       searchLabel="Search sites by name or id"
       onRowPress={(s) => onOpen(s.id)}
       selectedKey={selectedId}
-      status={sites.isError && !data ? 'error' : !data ? 'loading' : 'ready'}
-      errorMessage={sites.error?.message}
-      onRetry={() => sites.refetch()}
       emptyTitle={table.q || kind !== 'all' ? 'No site matches' : 'No sites yet'}
       emptyHint={table.q || kind !== 'all' ? 'Try another search or kind.' : 'Import a scenario, a GraphML topology or a sites CSV.'}
       toolbar={

@@ -5,7 +5,7 @@ import { SLICE_SORT_KEYS, type SliceRow } from '@/shared/inventory';
 import { useSlicesQuery } from '@/hooks/queries/slices';
 import { DataTable } from '@/components/table/data-table';
 import { Pager } from '@/components/table/pager';
-import { sortKeyIn, useServerTable } from '@/components/table/use-server-table';
+import { serverTableProps, sortKeyIn, useServerTable } from '@/components/table/use-server-table';
 import type { Column } from '@/components/table/types';
 import { CriticalBadge } from '@/components/inventory/badges';
 import { NameCell } from '@/components/inventory/name-cell';
@@ -49,19 +49,12 @@ export function SlicesTable({ selectedId, onOpen }: { selectedId: string | null;
   return (
     <DataTable
       testID="slices-table"
-      rows={data?.items ?? []}
+      {...serverTableProps(table, slices)}
       columns={COLUMNS}
       rowKey={(s) => s.id}
-      sort={table.sort}
-      onSortChange={table.setSort}
-      query={table.query}
-      onQueryChange={table.setQuery}
       searchLabel="Search slices by name or id"
       onRowPress={(s) => onOpen(s.id)}
       selectedKey={selectedId}
-      status={slices.isError && !data ? 'error' : !data ? 'loading' : 'ready'}
-      errorMessage={slices.error?.message}
-      onRetry={() => slices.refetch()}
       emptyTitle={filtered ? 'No slice matches' : 'No slices yet'}
       emptyHint={filtered ? 'Try other filters.' : 'Import a scenario or a slices CSV.'}
       toolbar={

@@ -5,7 +5,7 @@ import { useSpansQuery } from '@/hooks/queries/spans';
 import { DataTable } from '@/components/table/data-table';
 import { Pager } from '@/components/table/pager';
 import { UtilisationBar } from '@/components/table/utilisation-bar';
-import { sortKeyIn, useServerTable } from '@/components/table/use-server-table';
+import { serverTableProps, sortKeyIn, useServerTable } from '@/components/table/use-server-table';
 import type { Column } from '@/components/table/types';
 import { formatGbps, formatKm, formatMs } from '@/components/inventory/format';
 import { colors, type } from '@/constants/theme';
@@ -45,19 +45,12 @@ export function SpansTable({ selectedId, onOpen }: { selectedId: string | null; 
   return (
     <DataTable
       testID="spans-table"
-      rows={data?.items ?? []}
+      {...serverTableProps(table, spans)}
       columns={COLUMNS}
       rowKey={(s) => s.id}
-      sort={table.sort}
-      onSortChange={table.setSort}
-      query={table.query}
-      onQueryChange={table.setQuery}
       searchLabel="Search spans by id or site"
       onRowPress={(s) => onOpen(s.id)}
       selectedKey={selectedId}
-      status={spans.isError && !data ? 'error' : !data ? 'loading' : 'ready'}
-      errorMessage={spans.error?.message}
-      onRetry={() => spans.refetch()}
       emptyTitle={table.q ? 'No span matches' : 'No spans yet'}
       emptyHint={table.q ? 'Try another search.' : 'Import a scenario, a GraphML topology or a spans CSV.'}
       footer={

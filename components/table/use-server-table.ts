@@ -31,3 +31,26 @@ export function useServerTable(initialSort: SortState) {
 export function sortKeyIn<K extends string>(keys: readonly K[], key: string, fallback: K): K {
   return (keys as readonly string[]).includes(key) ? (key as K) : fallback;
 }
+
+type ServerTable = ReturnType<typeof useServerTable>;
+interface ListQuery<T> {
+  data?: { items: T[] };
+  isError: boolean;
+  error: { message: string } | null;
+  refetch: () => unknown;
+}
+
+/** The DataTable props every API-backed list shares: its rows, sort and search state, and load status. */
+export function serverTableProps<T>(table: ServerTable, list: ListQuery<T>) {
+  const data = list.data;
+  return {
+    rows: data?.items ?? [],
+    sort: table.sort,
+    onSortChange: table.setSort,
+    query: table.query,
+    onQueryChange: table.setQuery,
+    status: (list.isError && !data ? 'error' : !data ? 'loading' : 'ready') as 'error' | 'loading' | 'ready',
+    errorMessage: list.error?.message,
+    onRetry: () => { void list.refetch(); },
+  };
+}
