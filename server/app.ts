@@ -8,6 +8,7 @@ import { sessionMiddleware } from './auth/session-middleware';
 import type { SignInLimit } from './auth/sign-in-limit';
 import type { ServerConfig } from './env';
 import { RouteNotFoundError } from './errors';
+import { noJobQueue, type JobQueue } from './jobs/queue';
 import { errorHandler } from './http/error-handler';
 import { originCheck } from './http/origin-check';
 import { securityHeaders } from './http/security-headers';
@@ -35,6 +36,8 @@ export type AppDeps = {
   pool?: pg.Pool;
   config: ServerConfig;
   now?: () => Date;
+  /** plan runs and mail; default: none (routes that enqueue answer 503) */
+  jobs?: JobQueue;
   signInLimit?: SignInLimit;
   log?: (message: string, err: unknown) => void;
 };
@@ -45,7 +48,7 @@ const noStore: express.RequestHandler = (_req, res, next) => {
   next();
 };
 
-function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signInLimit'>>): express.Router {
+function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signInLimit' | 'jobs'>>): express.Router {
   const api = express.Router();
   api.use(noStore);
   api.use('/auth', authRouter(deps));
@@ -75,12 +78,12 @@ export function createApp(deps: AppDeps): express.Application {
   app.disable('x-powered-by');
   app.use(securityHeaders());
   // Before sessions and body parsing: a health probe must not depend on a cookie's database look-up.
-  app.use('/api/health', noStore, healthRouter({ db, config, now }));
+  app.use('/api/health', noStore, healthRouter({ db, config, now, jobs: deps.jobs ?? noJobQueue }));
   app.use(express.json({ limit: config.jsonBodyLimit }));
   app.use(cookieParser());
   app.use(originCheck({ allowedOrigins: config.allowedOrigins }));
   // Only the API needs to know who is asking; static files skip the session look-up.
-  app.use('/api', sessionMiddleware({ db, config, now }), apiRouter({ db, config, now, signInLimit }));
+  app.use('/api', sessionMiddleware({ db, config, now }), apiRouter({ db, config, now, signInLimit, jobs: deps.jobs ?? noJobQueue }));
   app.use(webApp({ webDist: config.webDist }));
   app.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.path)));
   app.use(errorHandler({ log: deps.log ?? ((message, err) => console.error(`[server] ${message}`, err)) }));

@@ -20,6 +20,19 @@ const envSchema = z.object({
   SIGN_IN_LIMIT_MAX: z.coerce.number().int().min(1).default(10),
   /** Largest file POST /api/imports accepts, in bytes (default 5 MB). */
   IMPORT_MAX_BYTES: z.coerce.number().int().min(1024).default(5 * 1024 * 1024),
+  /** `true`: the API process also works the job queue (plan runs, mail); `false`: only `npm run worker` does. */
+  WORKER_IN_PROCESS: z.enum(['true', 'false']).default('true'),
+  /** How long past its time limit a plan run may hold its job before the queue assumes the worker died. */
+  PLAN_EXPIRE_MARGIN_SECONDS: z.coerce.number().int().min(1).default(120),
+  /** How often the queue looks for expired jobs (pg-boss maintenance), in seconds. */
+  JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(30),
+  /** `sink` (default): mail goes to the local SMTP sink started with the server; or an smtp:// / smtps:// URL. */
+  SMTP_URL: z.string().regex(/^(sink|smtps?:\/\/.+)$/, 'SMTP_URL is `sink` or an smtp:// or smtps:// URL').default('sink'),
+  /** Loopback port of the local SMTP sink (0 = any free port). */
+  SMTP_SINK_PORT: z.coerce.number().int().min(0).max(65535).default(2525),
+  MAIL_FROM: z.string().min(3).default('Slackwater <maintenance@slackwater.invalid>'),
+  /** Where links in e-mails point (the app's address as users reach it). */
+  PUBLIC_URL: z.url().optional(),
 });
 
 export type ServerConfig = {
@@ -34,6 +47,12 @@ export type ServerConfig = {
   jsonBodyLimit: string;
   signInLimit: { windowMs: number; max: number };
   importMaxBytes: number;
+  workerInProcess: boolean;
+  planExpireMarginSeconds: number;
+  jobMaintenanceSeconds: number;
+  smtp: { mode: 'sink'; sinkPort: number } | { mode: 'relay'; url: string };
+  mailFrom: string;
+  publicUrl: string;
 };
 
 export class ConfigError extends Error {}
@@ -58,5 +77,11 @@ export function parseEnv(source: Record<string, string | undefined> = process.en
     jsonBodyLimit: env.JSON_BODY_LIMIT,
     signInLimit: { windowMs: env.SIGN_IN_LIMIT_WINDOW_MS, max: env.SIGN_IN_LIMIT_MAX },
     importMaxBytes: env.IMPORT_MAX_BYTES,
+    workerInProcess: env.WORKER_IN_PROCESS === 'true',
+    planExpireMarginSeconds: env.PLAN_EXPIRE_MARGIN_SECONDS,
+    jobMaintenanceSeconds: env.JOB_MAINTENANCE_SECONDS,
+    smtp: env.SMTP_URL === 'sink' ? { mode: 'sink', sinkPort: env.SMTP_SINK_PORT } : { mode: 'relay', url: env.SMTP_URL },
+    mailFrom: env.MAIL_FROM,
+    publicUrl: (env.PUBLIC_URL ?? `http://${env.HOST}:${env.PORT}`).replace(/\/$/, ''),
   };
 }

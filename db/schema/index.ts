@@ -3,3 +3,5 @@ export * from './network';
 export * from './work';
 export * from './imports';
 export * from './policies';
+export * from './plans';
+export * from './signoff';

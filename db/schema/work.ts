@@ -25,6 +25,10 @@ export const windows = pgTable(
     version: integer('version').notNull().default(1),
     /** set when an admin booked the window inside a freeze: the written reason for overriding it */
     freezeOverrideReason: text('freeze_override_reason'),
+    /** the move plan accepted for this window (plans.id); cleared when an edit sends it back to draft */
+    acceptedPlanId: text('accepted_plan_id'),
+    /** sign-off round: every submission for sign-off starts a new one; decisions count within their round */
+    reviewRound: integer('review_round').notNull().default(0),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
   },
