@@ -26,6 +26,8 @@ const envSchema = z.object({
   PLAN_EXPIRE_MARGIN_SECONDS: z.coerce.number().int().min(1).default(120),
   /** How often the queue looks for expired jobs (pg-boss maintenance), in seconds. */
   JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(30),
+  /** PostgreSQL schema of the job queue's tables; every API process and worker sharing a queue uses the same one. */
+  JOB_SCHEMA: z.string().regex(/^[a-z_][a-z0-9_]{0,49}$/, 'JOB_SCHEMA is a lower-case PostgreSQL identifier').default('pgboss'),
   /** `sink` (default): mail goes to the local SMTP sink started with the server; or an smtp:// / smtps:// URL. */
   SMTP_URL: z.string().regex(/^(sink|smtps?:\/\/.+)$/, 'SMTP_URL is `sink` or an smtp:// or smtps:// URL').default('sink'),
   /** Loopback port of the local SMTP sink (0 = any free port). */
@@ -50,6 +52,7 @@ export type ServerConfig = {
   workerInProcess: boolean;
   planExpireMarginSeconds: number;
   jobMaintenanceSeconds: number;
+  jobSchema: string;
   smtp: { mode: 'sink'; sinkPort: number } | { mode: 'relay'; url: string };
   mailFrom: string;
   publicUrl: string;
@@ -80,6 +83,7 @@ export function parseEnv(source: Record<string, string | undefined> = process.en
     workerInProcess: env.WORKER_IN_PROCESS === 'true',
     planExpireMarginSeconds: env.PLAN_EXPIRE_MARGIN_SECONDS,
     jobMaintenanceSeconds: env.JOB_MAINTENANCE_SECONDS,
+    jobSchema: env.JOB_SCHEMA,
     smtp: env.SMTP_URL === 'sink' ? { mode: 'sink', sinkPort: env.SMTP_SINK_PORT } : { mode: 'relay', url: env.SMTP_URL },
     mailFrom: env.MAIL_FROM,
     publicUrl: (env.PUBLIC_URL ?? `http://${env.HOST}:${env.PORT}`).replace(/\/$/, ''),
