@@ -6,6 +6,7 @@ import type { WindowPatch, WindowStatus } from '../../../shared/windows';
 import { insertAuditEntry } from '../../queries/audit';
 import { deleteWindowImpact } from '../../queries/windows/impacts';
 import { replaceElements, updateWindowRow, type ElementRow } from '../../queries/windows/window-rows';
+import { clearAcceptedPlan } from '../plans/clear-accepted';
 import { checkBooking, toElementRows } from './booking-checks';
 import { StaleVersionError, WindowNotEditableError } from './errors';
 import { windowSnapshot } from './snapshot';
@@ -51,10 +52,11 @@ export async function editWindow(db: Db, id: string, patch: WindowPatch, user: M
     if (version === null) throw new StaleVersionError();
     if (c.elementsChanged) await replaceElements(tx, id, c.elements);
     const impactDropped = invalidates ? await deleteWindowImpact(tx, id) : false;
+    const planDropped = reverted ? await clearAcceptedPlan(tx, id) : null;
     await insertAuditEntry(tx, {
       actorId: user.id, action: 'window.update', entity: 'window', entityId: id, at: now,
       before: windowSnapshot(current),
-      after: { ...windowSnapshot({ ...row, version, elements: c.elements }), reverted, impactDropped },
+      after: { ...windowSnapshot({ ...row, version, elements: c.elements }), reverted, impactDropped, planDropped },
     });
   });
   return { reverted };

@@ -4,6 +4,7 @@ import type { Me } from '../../../shared/api';
 import type { WindowTransition } from '../../../shared/windows';
 import { insertAuditEntry } from '../../queries/audit';
 import { updateWindowRow } from '../../queries/windows/window-rows';
+import { applyPlanPlacements } from '../plans/apply-placements';
 import { IllegalTransitionError, StaleVersionError, TransitionGuardedError } from './errors';
 import { checkTransition } from './lifecycle';
 import { loadWindow } from './window-view';
@@ -17,6 +18,8 @@ export async function transitionWindow(db: Db, id: string, body: WindowTransitio
   await db.transaction(async (tx) => {
     const version = await updateWindowRow(tx, id, body.version, { status: body.to, now });
     if (version === null) throw new StaleVersionError();
+    // Starting the work puts the accepted plan's placements in force; finishing or rolling back may restore them.
+    await applyPlanPlacements(tx, { windowId: id, from: w.status, to: body.to, actorId: user.id, now });
     await insertAuditEntry(tx, {
       actorId: user.id, action: 'window.transition', entity: 'window', entityId: id, at: now,
       before: { status: w.status, version: w.version },
