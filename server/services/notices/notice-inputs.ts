@@ -1,0 +1,101 @@
+// Reads what composing a window's notices needs: the window, its accepted plan's review, the tenants with
+// their recipients and lead time, and the look-ups that turn sites, spans and ties into tenant-facing words.
+import { eq, inArray } from 'drizzle-orm';
+import { plans, sites, sliceFunctions, sliceTies, slices, spans, tenants, users, windows } from '../../../db/schema';
+import { planReviewSchema, planSettingsSchema, type PlanSlice } from '../../../shared/plans';
+import { FIBRE_MS_PER_KM } from '../../../shared/scenario';
+import { getPolicies } from '../../queries/windows/policies';
+import type { Queryable } from '../../queries/windows/window-rows';
+import { NoticeStateError } from './errors';
+import type { NoticeLookups } from './slice-wording';
+
+export type NoticeTenant = { id: string; name: string; leadDays: number; recipients: string[] };
+
+export type WindowNoticeInputs = {
+  window: { id: string; startsAt: Date; endsAt: Date; workType: string | null; status: string };
+  slicesByTenant: Map<string, PlanSlice[]>;
+  tenants: Map<string, NoticeTenant>;
+  lookups: NoticeLookups;
+  outageAccepted: Set<string>;
+  afterWindow: 'return' | 'keep';
+};
+
+export async function loadNoticeWindow(db: Queryable, windowId: string) {
+  const [w] = await db.select({
+    id: windows.id, startsAt: windows.startsAt, endsAt: windows.endsAt, workType: windows.workType,
+    status: windows.status, acceptedPlanId: windows.acceptedPlanId,
+  }).from(windows).where(eq(windows.id, windowId));
+  if (!w) throw new NoticeStateError(`No window ${windowId}.`);
+  return w;
+}
+
+/** Affected slices of the accepted plan; slices listed as affected without an entry count as staying. */
+async function acceptedPlanSlices(db: Queryable, planId: string | null) {
+  if (!planId) throw new NoticeStateError('The window has no accepted plan.');
+  const [p] = await db.select({ result: plans.result, settings: plans.settings, outageAccepted: plans.outageAccepted })
+    .from(plans).where(eq(plans.id, planId));
+  if (!p?.result) throw new NoticeStateError(`The accepted plan ${planId} has no result.`);
+  const review = planReviewSchema.parse(p.result);
+  const settings = planSettingsSchema.safeParse(p.settings ?? {});
+  return {
+    review,
+    outageAccepted: new Set(p.outageAccepted ?? []),
+    afterWindow: settings.success ? settings.data.afterWindow : 'return' as const,
+  };
+}
+
+/** Affected slice ids the review names but has no row for (defensive: stays-put slices may be left out). */
+async function missingSlices(db: Queryable, affected: string[], listed: Set<string>): Promise<PlanSlice[]> {
+  const ids = affected.filter((id) => !listed.has(id));
+  if (ids.length === 0) return [];
+  const rows = await db.select().from(slices).where(inArray(slices.id, ids));
+  return rows.map((r) => ({
+    slice: r.id, name: r.name, tenantId: r.tenantId, critical: r.critical, priority: r.priority, sst: r.sst,
+    reasons: [], outcome: 'stays', moves: [], reroutes: [], before: { sites: {}, paths: {} }, after: null, unresolvedReason: null,
+  }));
+}
+
+export async function loadTenants(db: Queryable, ids: string[]): Promise<Map<string, NoticeTenant>> {
+  const list = ids.length > 0 ? ids : [''];
+  const [rows, tenantUsers, policy] = await Promise.all([
+    db.select().from(tenants).where(inArray(tenants.id, list)),
+    db.select({ tenantId: users.tenantId, email: users.email }).from(users).where(inArray(users.tenantId, list)),
+    getPolicies(db),
+  ]);
+  const out = new Map<string, NoticeTenant>();
+  for (const t of rows) {
+    const emails = [...t.contacts.map((c) => c.email), ...tenantUsers.filter((u) => u.tenantId === t.id).map((u) => u.email)];
+    const recipients = [...new Set(emails.map((e) => e.trim().toLowerCase()).filter(Boolean))];
+    out.set(t.id, { id: t.id, name: t.name, leadDays: Math.max(t.noticeDays, policy.noticeLeadDays), recipients });
+  }
+  return out;
+}
+
+async function loadLookups(db: Queryable, planSlices: PlanSlice[]): Promise<NoticeLookups> {
+  const sliceIds = planSlices.map((s) => s.slice);
+  const siteIds = planSlices.flatMap((s) => s.moves.flatMap((m) => [m.from, m.to]));
+  const spanIds = planSlices.flatMap((s) => s.reroutes.flatMap((r) => [...r.from, ...r.to]));
+  const any = (xs: string[]) => (xs.length > 0 ? xs : ['']);
+  const [siteRows, spanRows, fnRows, tieRows] = await Promise.all([
+    db.select({ id: sites.id, lat: sites.lat, lon: sites.lon }).from(sites).where(inArray(sites.id, any(siteIds))),
+    db.select({ id: spans.id, latencyMs: spans.latencyMs, lengthKm: spans.lengthKm }).from(spans).where(inArray(spans.id, any(spanIds))),
+    db.select({ id: sliceFunctions.id, name: sliceFunctions.name }).from(sliceFunctions).where(inArray(sliceFunctions.sliceId, any(sliceIds))),
+    db.select().from(sliceTies).where(inArray(sliceTies.sliceId, any(sliceIds))),
+  ]);
+  return {
+    sites: new Map(siteRows.map((s) => [s.id, { lat: s.lat, lon: s.lon }])),
+    spanLatencyMs: new Map(spanRows.map((s) => [s.id, s.latencyMs ?? s.lengthKm * FIBRE_MS_PER_KM])),
+    functionNames: new Map(fnRows.map((f) => [f.id, f.name ?? f.id])),
+    ties: new Map(tieRows.map((t) => [t.id, { from: t.fromFunction, to: t.toFunction, maxLatencyMs: t.maxLatencyMs }])),
+  };
+}
+
+export async function loadWindowNoticeInputs(db: Queryable, windowId: string): Promise<WindowNoticeInputs> {
+  const w = await loadNoticeWindow(db, windowId);
+  const { review, outageAccepted, afterWindow } = await acceptedPlanSlices(db, w.acceptedPlanId);
+  const planSlices = [...review.slices, ...await missingSlices(db, review.affected, new Set(review.slices.map((s) => s.slice)))];
+  const slicesByTenant = new Map<string, PlanSlice[]>();
+  for (const s of planSlices) slicesByTenant.set(s.tenantId, [...(slicesByTenant.get(s.tenantId) ?? []), s]);
+  const [tenantMap, lookups] = await Promise.all([loadTenants(db, [...slicesByTenant.keys()]), loadLookups(db, planSlices)]);
+  return { window: w, slicesByTenant, tenants: tenantMap, lookups, outageAccepted, afterWindow };
+}

@@ -1,0 +1,75 @@
+// One affected slice of an accepted plan in tenant-facing words: what moves, how far, what it does to
+// latency, and the expected effect. Never names the operator's sites or spans (they are internal).
+import { greatCircleKm, type LatLon } from '../../../planner/geo/great-circle';
+import type { NoticeSlice } from '../../../shared/notices';
+import type { PlanSlice } from '../../../shared/plans';
+
+export type NoticeLookups = {
+  sites: Map<string, LatLon>;
+  spanLatencyMs: Map<string, number>;
+  functionNames: Map<string, string>;
+  ties: Map<string, { from: string; to: string; maxLatencyMs: number }>;
+};
+
+const HITLESS = 'Hitless: the new placement carries traffic before the old one is released (make-before-break).';
+
+function km(value: number): string {
+  return value >= 10 ? `${Math.round(value)} km` : `${value.toFixed(1)} km`;
+}
+
+function ms(value: number): string {
+  return `${value.toFixed(1)} ms`;
+}
+
+function fnName(id: string, look: NoticeLookups): string {
+  return `"${look.functionNames.get(id) ?? id}"`;
+}
+
+function moveLine(m: PlanSlice['moves'][number], look: NoticeLookups): string {
+  const from = look.sites.get(m.from);
+  const to = look.sites.get(m.to);
+  if (!from || !to) return `Function ${fnName(m.function, look)} moves to another site.`;
+  const distanceKm = greatCircleKm(from, to);
+  const where = distanceKm < 0.5 ? 'another site at the same location' : `another site ${km(distanceKm)} away`;
+  return `Function ${fnName(m.function, look)} moves to ${where}.`;
+}
+
+function pathLatencyMs(path: string[], look: NoticeLookups): number {
+  return path.reduce((sum, span) => sum + (look.spanLatencyMs.get(span) ?? 0), 0);
+}
+
+function rerouteLine(r: PlanSlice['reroutes'][number], look: NoticeLookups): string {
+  const tie = look.ties.get(r.tie);
+  const link = tie ? `The link between ${fnName(tie.from, look)} and ${fnName(tie.to, look)}` : 'One of its links';
+  const latency = `latency ${ms(pathLatencyMs(r.from, look))} → ${ms(pathLatencyMs(r.to, look))}`;
+  const budget = tie ? `, within its ${ms(tie.maxLatencyMs)} budget` : '';
+  return `${link} is rerouted on a different path; ${latency}${budget}.`;
+}
+
+function staysLines(s: PlanSlice): string[] {
+  const lines = ['Stays where it is; nothing of it moves.'];
+  if (s.reasons.includes('unprotected')) {
+    lines.push('Its backup path is unavailable during the work, so it runs without that protection for the duration.');
+  }
+  if (s.reasons.includes('squeezed')) lines.push('It runs on equipment with reduced capacity; its reserved capacity still fits.');
+  return lines;
+}
+
+/** `whenText` is the window's time range as the notice shows it (for the interruption sentence). */
+export function describeSlice(s: PlanSlice, look: NoticeLookups, outageAccepted: Set<string>, whenText: string): NoticeSlice {
+  const base = { slice: s.slice, name: s.name, critical: s.critical, outcome: s.outcome };
+  if (s.outcome === 'unresolved') {
+    const accepted = outageAccepted.has(s.slice) ? 'The operator has accepted this outage. ' : '';
+    return {
+      ...base,
+      changes: ['No alternative placement fits during the work.'],
+      effect: 'interruption',
+      effectText: `Interruption: ${accepted}Expect the slice to be unavailable for the whole window, ${whenText}.`,
+    };
+  }
+  if (s.outcome === 'stays') {
+    return { ...base, changes: staysLines(s), effect: 'none', effectText: 'No interruption expected.' };
+  }
+  const changes = [...s.moves.map((m) => moveLine(m, look)), ...s.reroutes.map((r) => rerouteLine(r, look))];
+  return { ...base, changes, effect: 'hitless', effectText: HITLESS };
+}
