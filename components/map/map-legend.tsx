@@ -7,7 +7,7 @@ import { TONE_COLOURS, TONE_LABELS } from '@/components/map/map-tones';
 import { glyphPath, KIND_LABELS, KIND_ORDER } from '@/components/map/site-glyphs';
 import { colors, mapColors, space, type } from '@/constants/theme';
 
-type Props = { tones?: readonly HighlightTone[]; compact?: boolean };
+type Props = { tones?: readonly HighlightTone[]; compact?: boolean; toneLabels?: Partial<Record<HighlightTone, string>> };
 
 function Swatch({ colour, dashed = false }: { colour: string; dashed?: boolean }) {
   return (
@@ -17,7 +17,7 @@ function Swatch({ colour, dashed = false }: { colour: string; dashed?: boolean }
   );
 }
 
-export function MapLegend({ tones = [], compact = false }: Props) {
+export function MapLegend({ tones = [], compact = false, toneLabels }: Props) {
   return (
     <View style={styles.legend} testID="map-legend" accessibilityLabel="Map legend">
       <View style={styles.row}>
@@ -47,7 +47,7 @@ export function MapLegend({ tones = [], compact = false }: Props) {
           {tones.map((tone) => (
             <View key={tone} style={styles.item}>
               <Swatch colour={TONE_COLOURS[tone]} dashed={tone === 'window'} />
-              <Text style={styles.text}>{TONE_LABELS[tone]}</Text>
+              <Text style={styles.text}>{toneLabels?.[tone] ?? TONE_LABELS[tone]}</Text>
             </View>
           ))}
         </View>

@@ -27,6 +27,8 @@ export type NetworkMapProps = {
   onSelect?: (selection: MapSelection) => void;
   /** A smaller map for detail screens: fixed height, smaller glyphs, no labels, short legend. */
   compact?: boolean;
+  /** Legend words for the tones when a screen gives them its own meaning (a plan's before and after). */
+  toneLabels?: Partial<Record<HighlightTone, string>>;
 };
 
 // Until the first layout arrives (and in tests, where none does) the map draws at a phone-like size.
@@ -44,7 +46,7 @@ function usedTones(...highlights: (MapHighlight | undefined)[]): HighlightTone[]
   return [...new Set(tones.filter((t): t is HighlightTone => t !== null))];
 }
 
-export function NetworkMap({ data, highlight, secondaryHighlight, selected = null, onSelect, compact = false }: NetworkMapProps) {
+export function NetworkMap({ data, highlight, secondaryHighlight, selected = null, onSelect, compact = false, toneLabels }: NetworkMapProps) {
   const [size, setSize] = useState(FALLBACK_SIZE);
   const [view, setView] = useState<MapView>(HOME_VIEW);
   const surface = useRef<View>(null);
@@ -104,7 +106,7 @@ export function NetworkMap({ data, highlight, secondaryHighlight, selected = nul
           onReset={() => setView(HOME_VIEW)}
         />
       </View>
-      <MapLegend tones={usedTones(highlight, secondaryHighlight)} compact={compact} />
+      <MapLegend tones={usedTones(highlight, secondaryHighlight)} compact={compact} toneLabels={toneLabels} />
     </View>
   );
 }
