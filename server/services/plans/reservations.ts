@@ -1,0 +1,57 @@
+// What a plan run for one window must leave alone: capacity promised to the accepted plans of OTHER active
+// windows that overlap it in time (DESIGN §4.2). The amounts are the planner's rule (overlapReservations).
+import { and, eq, gt, inArray, isNotNull, lt, ne } from 'drizzle-orm';
+import { plans, windows } from '../../../db/schema';
+import { overlapReservations, type OverlappingPlan } from '../../../planner/plan/overlap-reservations';
+import type { Inventory, Reservation, SlicePlan } from '../../../planner/model/types';
+import type { PlanSlice } from '../../../shared/plans';
+import { ACTIVE_WINDOW_STATUSES } from '../../../shared/windows';
+import { loadInventory } from '../inventory/load-scenario';
+import { selectElementsByWindow, type Queryable } from '../../queries/windows/window-rows';
+import { windowSpecOf } from '../windows/compute-impact';
+import { WindowNotFoundError } from '../windows/errors';
+
+export interface WindowReservations {
+  reservations: Reservation;
+  /** ids of the windows whose accepted plans were reserved, ascending */
+  reservedFor: string[];
+}
+
+/** A stored review slice in the planner's id form (`after` is null when the plan left it unresolved). */
+function toSlicePlan(s: PlanSlice): SlicePlan {
+  return { slice: s.slice, outcome: s.outcome, sites: { ...(s.after?.sites ?? {}) }, paths: { ...(s.after?.paths ?? {}) } };
+}
+
+function storedSlices(result: unknown): PlanSlice[] {
+  const slices = (result as { slices?: unknown } | null)?.slices;
+  return Array.isArray(slices) ? (slices as PlanSlice[]) : [];
+}
+
+async function overlappingAccepted(db: Queryable, windowId: string, startsAt: Date, endsAt: Date) {
+  return db.select({
+    id: windows.id, version: windows.version, startsAt: windows.startsAt, endsAt: windows.endsAt, result: plans.result,
+  }).from(windows)
+    .innerJoin(plans, eq(plans.id, windows.acceptedPlanId))
+    .where(and(
+      ne(windows.id, windowId), isNotNull(windows.acceptedPlanId),
+      inArray(windows.status, [...ACTIVE_WINDOW_STATUSES]),
+      // half-open intervals: a window ending when this one starts does not overlap it
+      gt(windows.endsAt, startsAt), lt(windows.startsAt, endsAt),
+    ))
+    .orderBy(windows.id);
+}
+
+/** Reservations for a run of `windowId`; `inv` is the current inventory (loaded when not given). */
+export async function reservationsFor(db: Queryable, windowId: string, inv?: Inventory): Promise<WindowReservations> {
+  const [self] = await db.select({ startsAt: windows.startsAt, endsAt: windows.endsAt }).from(windows).where(eq(windows.id, windowId));
+  if (!self) throw new WindowNotFoundError(windowId);
+  const rows = await overlappingAccepted(db, windowId, self.startsAt, self.endsAt);
+  if (rows.length === 0) return { reservations: {}, reservedFor: [] };
+  const inventory = inv ?? (await loadInventory(db)).inventory;
+  const elements = await selectElementsByWindow(db, rows.map((r) => r.id));
+  const others: OverlappingPlan[] = rows.map((r) => ({
+    window: windowSpecOf({ ...r, elements: elements.get(r.id) ?? [] }),
+    slices: storedSlices(r.result).map(toSlicePlan),
+  }));
+  return { reservations: overlapReservations(inventory, others), reservedFor: rows.map((r) => r.id) };
+}
