@@ -29,6 +29,7 @@ import { sitesRouter } from './routes/sites';
 import { slicesRouter } from './routes/slices';
 import { spansRouter } from './routes/spans';
 import { tenantsRouter } from './routes/tenants';
+import { plansRouter } from './routes/plans';
 
 export type AppDeps = {
   db: Db;
@@ -66,6 +67,7 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   api.use('/slices', slicesRouter(deps));
   api.use('/network', networkRouter(deps));
   api.use('/export', exportRouter(deps));
+  api.use(plansRouter(deps));
   api.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.originalUrl.split('?')[0])));
   return api;
 }

@@ -1,0 +1,74 @@
+// Starts a plan run: checks the window and the settings, stores the run as `queued` and hands it to the job queue.
+import { randomBytes } from 'node:crypto';
+import { inArray } from 'drizzle-orm';
+import type { Db } from '../../../db/client';
+import { sites, sliceFunctions } from '../../../db/schema';
+import type { Me } from '../../../shared/api';
+import type { PlanSettings } from '../../../shared/plans';
+import type { WindowStatus } from '../../../shared/windows';
+import type { ServerConfig } from '../../env';
+import type { JobQueue } from '../../jobs/queue';
+import { insertAuditEntry } from '../../queries/audit';
+import { ImpactNotCurrentError, QueueUnavailableError, UnknownPlanInputsError, WindowNotPlannableError } from './errors';
+import { planExpireSeconds } from './expire';
+import { endPlanRun, insertPlanRow, setPlanJobId } from './plan-rows';
+import { selectWindowFacts } from './plan-view';
+
+/** States in which a window's plans may be run and accepted. */
+export const PLANNABLE: readonly WindowStatus[] = ['assessed', 'planned', 'returned'];
+
+export type EnqueueDeps = { db: Db; jobs: JobQueue; config: ServerConfig; now: Date };
+
+export const newPlanId = () => `pl-${randomBytes(9).toString('base64url')}`;
+
+async function checkSettings(db: Db, settings: PlanSettings): Promise<void> {
+  const known = async (ids: string[], table: typeof sites | typeof sliceFunctions) => {
+    if (ids.length === 0) return new Set<string>();
+    const rows = await db.select({ id: table.id }).from(table).where(inArray(table.id, ids));
+    return new Set(rows.map((r) => r.id));
+  };
+  const functions = await known(settings.pinned, sliceFunctions);
+  const siteIds = await known(settings.excludedSites, sites);
+  const unknownFunctions = [...new Set(settings.pinned.filter((id) => !functions.has(id)))];
+  const unknownSites = [...new Set(settings.excludedSites.filter((id) => !siteIds.has(id)))];
+  if (unknownFunctions.length + unknownSites.length > 0) throw new UnknownPlanInputsError(unknownFunctions, unknownSites);
+}
+
+export async function enqueuePlan(deps: EnqueueDeps, windowId: string, settings: PlanSettings, user: Me): Promise<string> {
+  const { db, now } = deps;
+  const w = await selectWindowFacts(db, windowId);
+  if (!PLANNABLE.includes(w.status)) throw new WindowNotPlannableError(w.status);
+  if (w.impactVersion === null) throw new ImpactNotCurrentError();
+  await checkSettings(db, settings);
+  const id = newPlanId();
+  // Committed before the job is sent: a worker that picks the job up at once must find the row.
+  await db.transaction(async (tx) => {
+    await insertPlanRow(tx, { id, windowId, windowVersion: w.version, settings, createdBy: user.id, now });
+    await insertAuditEntry(tx, {
+      actorId: user.id, action: 'plan.enqueue', entity: 'plan', entityId: id, at: now,
+      before: null, after: { status: 'queued', windowId, windowVersion: w.version, settings },
+    });
+  });
+  await sendRun(deps, id, settings, user);
+  return id;
+}
+
+/** A run the queue never took must not wait as `queued` forever: it is marked failed with the reason. */
+async function sendRun(deps: EnqueueDeps, id: string, settings: PlanSettings, user: Me): Promise<void> {
+  let jobId: string;
+  try {
+    jobId = await deps.jobs.sendPlanRun(id, { expireInSeconds: planExpireSeconds(settings, deps.config) });
+  } catch (err) {
+    const reason = err instanceof Error ? err.message : String(err);
+    const error = `The job queue did not take the run: ${reason}`;
+    await deps.db.transaction(async (tx) => {
+      await endPlanRun(tx, id, { from: ['queued'], to: 'failed', error, now: deps.now });
+      await insertAuditEntry(tx, {
+        actorId: user.id, action: 'plan.fail', entity: 'plan', entityId: id, at: deps.now,
+        before: { status: 'queued' }, after: { status: 'failed', error },
+      });
+    });
+    throw new QueueUnavailableError(reason);
+  }
+  await setPlanJobId(deps.db, id, jobId);
+}
