@@ -1,0 +1,66 @@
+// An approver's decision: approve (the quorum clears the window and issues notices) or send back (returned at once).
+import type { Me } from '../../../shared/api';
+import type { SignoffDecisionBody, SignoffDecisionResult } from '../../../shared/signoff';
+import { signoffs, windows } from '../../../db/schema';
+import { eq } from 'drizzle-orm';
+import { OtpCodeRequiredError } from '../../auth/otp-errors';
+import { spendOtpCode } from '../../auth/otp-keys';
+import { insertAuditEntry } from '../../queries/audit';
+import { getPolicies } from '../../queries/windows/policies';
+import type { Queryable } from '../../queries/windows/window-rows';
+import { issueNotices } from '../notices/issue-notices';
+import { setWindowStatus } from '../windows/set-window-status';
+import { AlreadyDecidedError, NoAcceptedPlanError, NotInReviewError, SelfSignoffError } from './errors';
+import { countApprovals, hasDecided, isOwnWork, loadSignoffContext, quorumFor, riskOfContext, usersByIds, type SignoffContext } from './signoff-rows';
+import { queueMails, sendBackMail } from './signoff-mail';
+import type { SignoffDeps } from './submit';
+
+/** A code is checked whenever one is given; without one, only a policy that requires codes refuses. */
+async function confirmWithCode(tx: Queryable, requireCode: boolean, userId: string, code: string | undefined, at: Date): Promise<boolean> {
+  if (code === undefined) {
+    if (requireCode) throw new OtpCodeRequiredError();
+    return false;
+  }
+  await spendOtpCode(tx, userId, code, at);
+  return true;
+}
+
+type Recorded = SignoffDecisionResult & { ctx: SignoffContext };
+
+async function record(tx: Queryable, deps: SignoffDeps, windowId: string, user: Me, body: SignoffDecisionBody): Promise<Recorded> {
+  const ctx = await loadSignoffContext(tx, windowId, true);
+  if (ctx.window.status !== 'in-review') throw new NotInReviewError(ctx.window.status);
+  if (!ctx.plan) throw new NoAcceptedPlanError();
+  if (isOwnWork(user.id, ctx)) throw new SelfSignoffError();
+  const round = ctx.window.reviewRound;
+  if (await hasDecided(tx, windowId, round, user.id)) throw new AlreadyDecidedError();
+  const policies = await getPolicies(tx);
+  const codeConfirmed = await confirmWithCode(tx, policies.signoffRequireCode, user.id, body.code, deps.now);
+  const decision = { windowId, round, planId: ctx.plan.id, approverId: user.id, decision: body.decision, comment: body.comment, codeConfirmed };
+  await tx.insert(signoffs).values({ ...decision, decidedAt: deps.now });
+  await insertAuditEntry(tx, { actorId: user.id, action: 'signoff.decision', entity: 'window', entityId: windowId, at: deps.now, after: decision });
+  const quorum = quorumFor(policies, riskOfContext(ctx));
+  const approvals = await countApprovals(tx, windowId, round);
+  const change = { windowId, from: ['in-review'] as const, actorId: user.id, now: deps.now };
+  if (body.decision === 'send-back') {
+    await setWindowStatus(tx, { ...change, to: 'returned', action: 'signoff.send-back', details: { round, comment: body.comment } });
+    return { status: 'returned', approvals, quorum, notices: null, ctx };
+  }
+  if (approvals < quorum) return { status: 'in-review', approvals, quorum, notices: null, ctx };
+  await setWindowStatus(tx, { ...change, to: 'cleared', action: 'signoff.cleared', details: { round, approvals, quorum } });
+  const notices = await issueNotices(tx, { jobs: deps.jobs, config: deps.config, now: deps.now }, windowId, user.id);
+  const [after] = await tx.select({ status: windows.status }).from(windows).where(eq(windows.id, windowId));
+  return { status: after.status, approvals, quorum, notices, ctx };
+}
+
+export async function decideSignoff(deps: SignoffDeps, windowId: string, user: Me, body: SignoffDecisionBody): Promise<SignoffDecisionResult> {
+  const { ctx, ...result } = await deps.db.transaction((tx) => record(tx, deps, windowId, user, body));
+  if (result.status === 'returned') {
+    // The planner who accepted the plan and the window's owner hear of it, with the approver's words.
+    const people = await usersByIds(deps.db, [ctx.plan?.acceptedBy ?? null, ctx.window.ownerId]);
+    const log = deps.log ?? ((message, err) => console.error(`[signoff] ${message}`, err));
+    await queueMails(deps.jobs, (to) => sendBackMail(deps.config, ctx.window, user.name, body.comment, to),
+      [...people.values()].map((p) => p.email), (err) => log(`send-back mail for ${windowId} not queued`, err));
+  }
+  return result;
+}

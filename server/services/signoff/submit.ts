@@ -1,0 +1,33 @@
+// Submit for sign-off (planner): an accepted plan goes to the change board; every approver gets an e-mail.
+import type { Me } from '../../../shared/api';
+import type { SignoffSubmitResult } from '../../../shared/signoff';
+import type { RouteDeps } from '../../routes/deps';
+import { setWindowStatus } from '../windows/set-window-status';
+import { NoAcceptedPlanError } from './errors';
+import { listApprovers, loadSignoffContext, riskOfContext } from './signoff-rows';
+import { queueMails, signoffRequestMail } from './signoff-mail';
+
+export type SignoffDeps = Pick<RouteDeps, 'db' | 'config' | 'jobs'> & { now: Date; log?: (message: string, err: unknown) => void };
+
+const defaultLog = (message: string, err: unknown) => console.error(`[signoff] ${message}`, err);
+
+export async function submitForSignoff(deps: SignoffDeps, windowId: string, user: Me): Promise<SignoffSubmitResult> {
+  const { window, round } = await deps.db.transaction(async (tx) => {
+    const ctx = await loadSignoffContext(tx, windowId, true);
+    if (ctx.window.status === 'planned' && !ctx.plan) throw new NoAcceptedPlanError();
+    const next = ctx.window.reviewRound + 1;
+    await setWindowStatus(tx, {
+      windowId, from: ['planned'], to: 'in-review', actorId: user.id, action: 'signoff.submit', now: deps.now,
+      set: { reviewRound: next }, details: { planId: ctx.plan?.id ?? null, round: next, riskClass: riskOfContext(ctx) },
+    });
+    return { window: ctx.window, round: next };
+  });
+  // After the commit: a mail must never announce a submission that was rolled back.
+  const approvers = await listApprovers(deps.db);
+  const log = deps.log ?? defaultLog;
+  const approversMailed = await queueMails(
+    deps.jobs, (to) => signoffRequestMail(deps.config, window, round, to), approvers.map((a) => a.email),
+    (err) => log(`sign-off request for ${windowId} not queued`, err),
+  );
+  return { windowId, status: 'in-review', round, approversMailed };
+}

@@ -1,0 +1,64 @@
+// Pieces of the one-screen summary worked out from the accepted plan's review: tenants, unresolved slices, risks.
+import { inArray } from 'drizzle-orm';
+import { sites, spans, tenants } from '../../../db/schema';
+import type { PlanReview } from '../../../shared/plans';
+import type { SignoffSummary } from '../../../shared/signoff';
+import type { ElementRow, Queryable } from '../../queries/windows/window-rows';
+
+const SEVERITY_RANK = { low: 0, medium: 1, high: 2, critical: 3 } as const;
+/** A phone screen shows a handful; the full plan (one tap away) lists every slice's risk. */
+const HIGHEST_RISKS_SHOWN = 5;
+
+const moving = (s: PlanReview['slices'][number]) => s.outcome === 'move' || s.outcome === 'reroute';
+
+export async function tenantNames(db: Queryable, ids: string[]): Promise<Map<string, string>> {
+  if (ids.length === 0) return new Map();
+  const rows = await db.select({ id: tenants.id, name: tenants.name }).from(tenants).where(inArray(tenants.id, ids));
+  return new Map(rows.map((r) => [r.id, r.name]));
+}
+
+export function tenantCounts(review: PlanReview, names: Map<string, string>): SignoffSummary['tenants'] {
+  const byTenant = new Map<string, { affected: number; moving: number }>();
+  for (const s of review.slices) {
+    const entry = byTenant.get(s.tenantId) ?? { affected: 0, moving: 0 };
+    entry.affected += 1;
+    if (moving(s)) entry.moving += 1;
+    byTenant.set(s.tenantId, entry);
+  }
+  return [...byTenant].map(([id, c]) => ({ id, name: names.get(id) ?? id, ...c }))
+    .sort((a, b) => b.moving - a.moving || a.name.localeCompare(b.name));
+}
+
+export function planTotals(review: PlanReview): SignoffSummary['totals'] {
+  const count = (f: (s: PlanReview['slices'][number]) => boolean) => review.slices.filter(f).length;
+  return {
+    affected: review.slices.length, moving: count(moving),
+    stays: count((s) => s.outcome === 'stays'), unresolved: count((s) => s.outcome === 'unresolved'),
+  };
+}
+
+export function unresolvedSlices(review: PlanReview, names: Map<string, string>, outageAccepted: string[]): SignoffSummary['unresolved'] {
+  return review.slices.filter((s) => s.outcome === 'unresolved').map((s) => ({
+    slice: s.slice, name: s.name, tenantName: names.get(s.tenantId) ?? s.tenantId,
+    reason: s.unresolvedReason, outageAccepted: outageAccepted.includes(s.slice),
+  }));
+}
+
+export function highestRisks(review: PlanReview): SignoffSummary['highestRisks'] {
+  const sliceName = new Map(review.slices.map((s) => [s.slice, s.name]));
+  return [...review.risk]
+    .sort((a, b) => SEVERITY_RANK[b.severity] - SEVERITY_RANK[a.severity] || b.failureProbability - a.failureProbability)
+    .slice(0, HIGHEST_RISKS_SHOWN)
+    .map((r) => ({ ...r, name: sliceName.get(r.slice) ?? r.slice }));
+}
+
+/** Sites by name, spans as "A – B" by their end sites' names (spans have no names of their own). */
+export async function namedElements(db: Queryable, elements: ElementRow[]): Promise<SignoffSummary['window']['elements']> {
+  const spanIds = elements.filter((e) => e.kind === 'span').map((e) => e.id);
+  const spanRows = spanIds.length ? await db.select({ id: spans.id, a: spans.siteA, b: spans.siteB }).from(spans).where(inArray(spans.id, spanIds)) : [];
+  const siteIds = [...elements.filter((e) => e.kind === 'site').map((e) => e.id), ...spanRows.flatMap((s) => [s.a, s.b])];
+  const siteRows = siteIds.length ? await db.select({ id: sites.id, name: sites.name }).from(sites).where(inArray(sites.id, siteIds)) : [];
+  const site = new Map(siteRows.map((s) => [s.id, s.name]));
+  const span = new Map(spanRows.map((s) => [s.id, `${site.get(s.a) ?? s.a} – ${site.get(s.b) ?? s.b}`]));
+  return elements.map((e) => ({ ...e, name: (e.kind === 'site' ? site.get(e.id) : span.get(e.id)) ?? e.id }));
+}

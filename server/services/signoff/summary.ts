@@ -1,0 +1,79 @@
+// The approver's one-screen summary of a window's accepted plan, and the queue of windows awaiting decisions.
+import { asc, eq } from 'drizzle-orm';
+import { windows } from '../../../db/schema';
+import type { Me } from '../../../shared/api';
+import type { SignoffQueue, SignoffQueueItem, SignoffSummary } from '../../../shared/signoff';
+import { getPolicies } from '../../queries/windows/policies';
+import { getWindowDocument } from '../../queries/windows/documents';
+import { selectElementsByWindow, type Queryable } from '../../queries/windows/window-rows';
+import { SignoffNotFoundError } from './errors';
+import {
+  countApprovals, hasDecided, isOwnWork, listDecisions, loadSignoffContext, quorumFor, riskOfContext, usersByIds,
+  type SignoffContext,
+} from './signoff-rows';
+import { highestRisks, namedElements, planTotals, tenantCounts, tenantNames, unresolvedSlices } from './summary-parts';
+
+type My = SignoffSummary['me'];
+
+async function myState(db: Queryable, ctx: SignoffContext, user: Me): Promise<My> {
+  const decided = await hasDecided(db, ctx.window.id, ctx.window.reviewRound, user.id);
+  const blocked: My['blocked'] = !user.roles.includes('approver') ? 'role'
+    : ctx.window.status !== 'in-review' ? 'closed'
+      : decided ? 'decided'
+        : isOwnWork(user.id, ctx) ? 'self' : null;
+  return { decided, blocked };
+}
+
+const person = (p: { id: string; name: string } | undefined) => (p ? { id: p.id, name: p.name } : null);
+
+export async function signoffSummary(db: Queryable, windowId: string, user: Me): Promise<SignoffSummary> {
+  const ctx = await loadSignoffContext(db, windowId);
+  const plan = ctx.plan;
+  if (!plan) throw new SignoffNotFoundError(windowId);
+  const w = ctx.window;
+  const [policies, elements, doc, people, decisions, approvals, me] = await Promise.all([
+    getPolicies(db), selectElementsByWindow(db, [w.id]), getWindowDocument(db, w.id),
+    usersByIds(db, [w.ownerId, plan.acceptedBy]), listDecisions(db, w.id), countApprovals(db, w.id, w.reviewRound),
+    myState(db, ctx, user),
+  ]);
+  const names = await tenantNames(db, [...new Set(plan.review.slices.map((s) => s.tenantId))]);
+  const riskClass = riskOfContext(ctx);
+  return {
+    window: {
+      id: w.id, title: w.title, workType: w.workType, status: w.status, round: w.reviewRound,
+      startsAt: w.startsAt.toISOString(), endsAt: w.endsAt.toISOString(), owner: person(people.get(w.ownerId ?? '')),
+      elements: await namedElements(db, elements.get(w.id) ?? []),
+    },
+    plan: {
+      id: plan.id, href: `/windows/${encodeURIComponent(w.id)}/plans/${encodeURIComponent(plan.id)}`,
+      acceptedAt: plan.acceptedAt?.toISOString() ?? null, acceptedBy: person(people.get(plan.acceptedBy ?? '')),
+    },
+    tenants: tenantCounts(plan.review, names),
+    totals: planTotals(plan.review),
+    unresolved: unresolvedSlices(plan.review, names, plan.outageAccepted),
+    riskClass, highestRisks: highestRisks(plan.review),
+    criticalSlices: plan.review.slices.filter((s) => s.critical).length,
+    mop: doc ? { fileName: doc.fileName, href: `/api/windows/${encodeURIComponent(w.id)}/mop` } : null,
+    quorum: quorumFor(policies, riskClass), approvals, requireCode: policies.signoffRequireCode,
+    decisions, me,
+  };
+}
+
+async function queueItem(db: Queryable, windowId: string, user: Me, quorum: (ctx: SignoffContext) => number): Promise<SignoffQueueItem> {
+  const ctx = await loadSignoffContext(db, windowId);
+  const w = ctx.window;
+  return {
+    windowId: w.id, title: w.title, startsAt: w.startsAt.toISOString(), endsAt: w.endsAt.toISOString(),
+    workType: w.workType, round: w.reviewRound, riskClass: riskOfContext(ctx),
+    critical: ctx.plan?.review.slices.some((s) => s.critical) ?? false,
+    quorum: quorum(ctx), approvals: await countApprovals(db, w.id, w.reviewRound), me: await myState(db, ctx, user),
+  };
+}
+
+/** Windows in review, soonest first. A handful at a time in practice, so one look-up each is fine. */
+export async function signoffQueue(db: Queryable, user: Me): Promise<SignoffQueue> {
+  const policies = await getPolicies(db);
+  const rows = await db.select({ id: windows.id }).from(windows).where(eq(windows.status, 'in-review')).orderBy(asc(windows.startsAt), asc(windows.id));
+  const items = await Promise.all(rows.map((r) => queueItem(db, r.id, user, (ctx) => quorumFor(policies, riskOfContext(ctx)))));
+  return { windows: items, requireCode: policies.signoffRequireCode };
+}
