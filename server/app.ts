@@ -29,6 +29,8 @@ import { sitesRouter } from './routes/sites';
 import { slicesRouter } from './routes/slices';
 import { spansRouter } from './routes/spans';
 import { tenantsRouter } from './routes/tenants';
+import { otpRouter } from './routes/otp';
+import { signoffRouter, signoffSubmitRouter } from './routes/signoff';
 import { plansRouter } from './routes/plans';
 
 export type AppDeps = {
@@ -53,11 +55,14 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   const api = express.Router();
   api.use(noStore);
   api.use('/auth', authRouter(deps));
+  api.use('/me/otp', otpRouter(deps));
   api.use('/me', meRouter());
   api.use('/overview', overviewRouter(deps));
   api.use('/users', usersRouter(deps));
   api.use('/scenarios', scenariosRouter());
   api.use('/windows', windowsRouter(deps));
+  api.use('/windows', signoffSubmitRouter(deps));
+  api.use('/signoff', signoffRouter(deps));
   api.use('/freezes', freezesRouter(deps));
   api.use('/policies', policiesRouter(deps));
   api.use('/imports', importsRouter(deps));
