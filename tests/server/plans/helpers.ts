@@ -1,0 +1,188 @@
+// Plans API test harness: a scratch database of its own, a recording job queue, a small network whose windows
+// force reroutes over one thin backup span, and finished plan runs computed in the test (no worker).
+import pg from 'pg';
+import request from 'supertest';
+import { plans, placements, sites, sliceFunctions, sliceTies, slices, spans, tenants } from '../../../db/schema';
+import { computePlan } from '../../../server/jobs/plan-compute';
+import type { JobQueue } from '../../../server/jobs/queue';
+import { loadScenario } from '../../../server/services/inventory/load-scenario';
+import { reservationsFor } from '../../../server/services/plans/reservations';
+import { loadWindow } from '../../../server/services/windows/window-view';
+import { planSettingsSchema, type PlanReview, type PlanSettingsInput } from '../../../shared/plans';
+import type { ScenarioWindow } from '../../../shared/scenario';
+import { signInAs } from '../helpers/sign-in';
+import { setupTestApp, type TestContext } from '../helpers/test-app';
+
+const DUPLICATE_DATABASE = '42P04';
+const UNIQUE_VIOLATION = '23505';
+
+/** Plans tests load the whole inventory (assess, accept), so other suites' half-built fixtures must not be in it. */
+async function ensureScratchDatabase(): Promise<void> {
+  const base = process.env.TEST_DATABASE_URL;
+  if (!base) throw new Error('TEST_DATABASE_URL is not set');
+  if (process.env.PLANS_API_TEST_DATABASE_URL) return;
+  const url = new URL(base);
+  const name = `${url.pathname.slice(1)}_plansapi`;
+  const client = new pg.Client({ connectionString: base });
+  await client.connect();
+  try {
+    await client.query(`create database "${name}"`);
+  } catch (err) {
+    const code = (err as { code?: string }).code;
+    if (code !== DUPLICATE_DATABASE && code !== UNIQUE_VIOLATION) throw err;
+  } finally {
+    await client.end();
+  }
+  url.pathname = `/${name}`;
+  process.env.PLANS_API_TEST_DATABASE_URL = url.toString();
+  process.env.TEST_DATABASE_URL = url.toString();
+}
+
+/** Records what the API enqueued; `failing` makes sendPlanRun throw like a queue that is down. */
+export function recordingQueue() {
+  const runs: { planId: string; expireInSeconds: number; jobId: string }[] = [];
+  const cancelled: string[] = [];
+  const state = { failing: false };
+  const jobs: JobQueue = {
+    sendPlanRun: async (planId, { expireInSeconds }) => {
+      if (state.failing) throw new Error('connection refused');
+      const jobId = `job-${runs.length + 1}-${planId}`;
+      runs.push({ planId, expireInSeconds, jobId });
+      return jobId;
+    },
+    cancelPlanRun: async (jobId) => { cancelled.push(jobId); },
+    sendMail: async () => 'mail-job',
+  };
+  return { jobs, runs, cancelled, state };
+}
+
+type Role = keyof TestContext['users'];
+type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';
+
+export type PlansContext = TestContext & {
+  queue: ReturnType<typeof recordingQueue>;
+  as: (role: Role) => Promise<(method: Method, path: string) => request.Test>;
+  cleanup: () => Promise<void>;
+};
+
+export async function setupPlansApp(now: Date): Promise<PlansContext> {
+  await ensureScratchDatabase();
+  const ctx = await setupTestApp();
+  const queue = recordingQueue();
+  const app = ctx.makeApp({ now: () => now, jobs: queue.jobs });
+  const cookies = new Map<string, string>();
+  const as: PlansContext['as'] = async (role) => {
+    if (!cookies.has(role)) cookies.set(role, await signInAs(app, ctx.users[role].email));
+    const cookie = cookies.get(role)!;
+    return (method, path) => request(app)[method](path).set('Cookie', cookie);
+  };
+  return { ...ctx, app, queue, as, cleanup: () => removePrefixed(ctx.pool, ctx.prefix) };
+}
+
+async function removePrefixed(pool: pg.Pool, prefix: string): Promise<void> {
+  const like = `${prefix}%`;
+  await pool.query(`delete from windows where title like $1 or owner_id like $1`, [like]);
+  await pool.query(`delete from slices where id like $1`, [like]);
+  await pool.query(`delete from spans where id like $1`, [like]);
+  await pool.query(`delete from sites where id like $1`, [like]);
+  await pool.query(`delete from users where id like $1`, [like]);
+  await pool.query(`delete from tenants where id like $1`, [like]);
+}
+
+/**
+ *   A ──p1── B        S1 (own tenant, priority 1): f1 on A, f2 on B (both fixed), tie e1 1 Gbit/s over p1
+ *   │        │        S2 (other tenant, priority 2): g1 on C, g2 on D (both fixed), tie e2 1 Gbit/s over p2
+ *   a1       b2       S3 (own tenant, priority 3): h1 on E (movable), h2 on A (fixed), tie e3 over ea
+ *   │        │
+ *   H1 ─bk── H2       bk carries 1.5 Gbit/s: one rerouted slice fits, two do not.
+ *   │        │
+ *   c1       d2       E ─ea─ A (E only reaches the rest through A)
+ *   │        │
+ *   C ──p2── D
+ * Inserted in one transaction so parallel files never see half of it.
+ */
+export async function insertBackupNetwork(ctx: TestContext) {
+  const id = (name: string) => `${ctx.prefix}-${name}`;
+  const otherTenantId = id('other-tenant');
+  await ctx.db.transaction(async (tx) => {
+    await tx.insert(tenants).values({ id: otherTenantId, name: `${ctx.prefix} Other`, noticeDays: 3 });
+    await tx.insert(sites).values(['A', 'B', 'C', 'D', 'E', 'H1', 'H2'].map((s, i) => ({
+      id: id(s), name: `Site ${s}`, kind: 'edge' as const, lat: 20 + i / 100, lon: 20, cpu: 16,
+    })));
+    const links: [string, string, string, number][] = [['p1', 'A', 'B', 10], ['p2', 'C', 'D', 10], ['a1', 'A', 'H1', 10],
+      ['b2', 'H2', 'B', 10], ['c1', 'C', 'H1', 10], ['d2', 'H2', 'D', 10], ['bk', 'H1', 'H2', 1.5], ['ea', 'E', 'A', 10]];
+    await tx.insert(spans).values(links.map(([k, a, b, gbps]) => ({ id: id(k), siteA: id(a), siteB: id(b), capacityGbps: gbps, lengthKm: 10 })));
+    await tx.insert(slices).values([
+      { id: id('S1'), tenantId: ctx.tenantId, name: 'Own control', sst: 2, priority: 1 },
+      { id: id('S2'), tenantId: otherTenantId, name: 'Other video', sst: 1, priority: 2 },
+      { id: id('S3'), tenantId: ctx.tenantId, name: 'Own edge', sst: 1, priority: 3 },
+    ]);
+    await tx.insert(sliceFunctions).values([
+      { id: id('f1'), sliceId: id('S1'), cpu: 2, fixed: true }, { id: id('f2'), sliceId: id('S1'), cpu: 2, fixed: true },
+      { id: id('g1'), sliceId: id('S2'), cpu: 2, fixed: true }, { id: id('g2'), sliceId: id('S2'), cpu: 2, fixed: true },
+      { id: id('h1'), sliceId: id('S3'), cpu: 2 }, { id: id('h2'), sliceId: id('S3'), cpu: 2, fixed: true },
+    ]);
+    await tx.insert(sliceTies).values([
+      { id: id('e1'), sliceId: id('S1'), fromFunction: id('f1'), toFunction: id('f2'), bandwidthGbps: 1, maxLatencyMs: 50 },
+      { id: id('e2'), sliceId: id('S2'), fromFunction: id('g1'), toFunction: id('g2'), bandwidthGbps: 1, maxLatencyMs: 50 },
+      { id: id('e3'), sliceId: id('S3'), fromFunction: id('h1'), toFunction: id('h2'), bandwidthGbps: 0.5, maxLatencyMs: 50 },
+    ]);
+    await tx.insert(placements).values([
+      { sliceId: id('S1'), revision: 1, sites: { [id('f1')]: id('A'), [id('f2')]: id('B') }, paths: { [id('e1')]: [id('p1')] } },
+      { sliceId: id('S2'), revision: 1, sites: { [id('g1')]: id('C'), [id('g2')]: id('D') }, paths: { [id('e2')]: [id('p2')] } },
+      { sliceId: id('S3'), revision: 1, sites: { [id('h1')]: id('E'), [id('h2')]: id('A') }, paths: { [id('e3')]: [id('ea')] } },
+    ]);
+  });
+  return { id, otherTenantId };
+}
+
+export type Element = { kind: 'site' | 'span'; id: string; effect: 'down' | 'reduced'; fraction?: number };
+
+/** Books a window through the API and assesses it (planner); returns its id. */
+export async function bookAssessed(ctx: PlansContext, title: string, startsAt: string, endsAt: string, elements: Element[]): Promise<string> {
+  const planner = await ctx.as('planner');
+  const booked = await planner('post', '/api/windows').send({ title: `${ctx.prefix} ${title}`, startsAt, endsAt, workType: 'fibre splice', elements });
+  if (booked.status !== 201) throw new Error(`booking failed: ${booked.status} ${JSON.stringify(booked.body)}`);
+  const id = booked.body.window.id as string;
+  const assessed = await planner('post', `/api/windows/${id}/assess`).send({});
+  if (assessed.status !== 200) throw new Error(`assessing failed: ${assessed.status} ${JSON.stringify(assessed.body)}`);
+  return id;
+}
+
+/** The stored window in the scenario format computePlan takes. */
+async function scenarioWindow(ctx: TestContext, windowId: string): Promise<ScenarioWindow> {
+  const w = await loadWindow(ctx.db, windowId, null);
+  const down = (kind: 'site' | 'span') => w.elements.filter((e) => e.kind === kind && e.effect === 'down').map((e) => e.id);
+  return {
+    id: w.id, title: w.title, start: w.startsAt.toISOString(), end: w.endsAt.toISOString(),
+    down: { sites: down('site'), spans: down('span') },
+    reduced: w.elements.filter((e) => e.effect === 'reduced')
+      .map((e) => (e.kind === 'site' ? { site: e.id, fraction: e.fraction ?? 1 } : { span: e.id, fraction: e.fraction ?? 1 })),
+  };
+}
+
+/**
+ * Computes a plan for the window as the worker would (computePlan on the current inventory, with or without the
+ * reservations of other accepted plans) and stores it as a finished run made for the window's current version.
+ */
+export async function storeFinishedPlan(
+  ctx: TestContext, windowId: string, opts: { settings?: PlanSettingsInput; reserve?: boolean } = {},
+): Promise<{ planId: string; review: PlanReview }> {
+  const settings = planSettingsSchema.parse({ timeLimitSeconds: 1, ...opts.settings });
+  const scenario = { ...(await loadScenario(ctx.db)), windows: [await scenarioWindow(ctx, windowId)] };
+  const held = opts.reserve === false ? { reservations: {}, reservedFor: [] } : await reservationsFor(ctx.db, windowId);
+  const review = await computePlan({ scenario, windowId, settings, ...held }, () => undefined);
+  const [w] = (await ctx.pool.query('select version from windows where id = $1', [windowId])).rows;
+  const planId = `pl-${ctx.prefix}-${Math.random().toString(36).slice(2, 10)}`;
+  const at = new Date();
+  await ctx.db.insert(plans).values({
+    id: planId, windowId, windowVersion: w.version, status: 'done', settings, result: review, attempts: 1,
+    createdBy: ctx.users.planner.id, createdAt: at, startedAt: at, finishedAt: at,
+  });
+  return { planId, review };
+}
+
+export async function windowRow(ctx: TestContext, windowId: string) {
+  const { rows } = await ctx.pool.query('select status, version, accepted_plan_id from windows where id = $1', [windowId]);
+  return rows[0] as { status: string; version: number; accepted_plan_id: string | null };
+}
