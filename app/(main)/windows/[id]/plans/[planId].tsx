@@ -1,0 +1,31 @@
+// One run of the re-mapper: progress while it computes (polled), then the review, accept, or adjust and re-run.
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useMeQuery } from '@/hooks/queries/me';
+import { usePlanQuery } from '@/hooks/queries/plans';
+import { useWindowQuery } from '@/hooks/queries/windows';
+import { ErrorState, LoadingState } from '@/components/screen-states';
+import { viewerTimeZone } from '@/components/time';
+import { PlanDetailView } from '@/components/plans/plan-detail-view';
+
+export default function PlanScreen() {
+  const { id, planId } = useLocalSearchParams<{ id: string; planId: string }>();
+  const router = useRouter();
+  const me = useMeQuery();
+  const window = useWindowQuery(id);
+  const plan = usePlanQuery(planId);
+  if (plan.isError && !plan.data) return <ErrorState message={plan.error.message} onRetry={() => void plan.refetch()} />;
+  if (!plan.data || !me.data) return <LoadingState label="Loading the run…" />;
+  const runs = `/windows/${encodeURIComponent(id)}/plans`;
+  return (
+    <PlanDetailView
+      plan={plan.data.plan}
+      windowTitle={window.data?.title ?? id}
+      me={me.data}
+      timeZone={viewerTimeZone()}
+      onOpenRuns={() => router.push(runs)}
+      onAdjust={() => router.push(`${runs}?from=${encodeURIComponent(planId)}`)}
+      onReschedule={() => router.push(`/windows/${encodeURIComponent(id)}/edit`)}
+      onAddCapacity={(where) => router.push(where === 'imports' ? '/imports' : '/network')}
+    />
+  );
+}

@@ -1,0 +1,67 @@
+// Words and figures for move plans: run states, outcomes, durations, costs and a one-line summary of the settings.
+import type { PlanObjective, PlanProgress, PlanRunStatus, PlanSettings, SliceOutcome } from '@/shared/plans';
+
+export const PLAN_STATUS_LABELS: Record<PlanRunStatus, string> = {
+  queued: 'Waiting for a worker',
+  running: 'Computing',
+  done: 'Finished',
+  failed: 'Failed',
+  cancelled: 'Cancelled',
+};
+
+export const OUTCOME_LABELS: Record<SliceOutcome, string> = {
+  stays: 'Stays',
+  reroute: 'Reroute',
+  move: 'Move',
+  unresolved: 'Unresolved',
+};
+
+/** "850 ms", "12.4 s", "3 min 05 s". */
+export function formatDurationMs(ms: number): string {
+  if (ms < 1_000) return `${Math.round(ms)} ms`;
+  const seconds = ms / 1_000;
+  if (seconds < 60) return `${seconds.toFixed(1)} s`;
+  const whole = Math.round(seconds);
+  return `${Math.floor(whole / 60)} min ${String(whole % 60).padStart(2, '0')} s`;
+}
+
+/** Move costs are sums of per-function weights: two decimals at most, no trailing zeros. */
+export function formatCost(value: number): string {
+  return String(Math.round(value * 100) / 100);
+}
+
+/** Share of the time limit used so far, 0–1; the reference solvers run after the limit, so it stays full then. */
+export function progressFraction(progress: Pick<PlanProgress, 'elapsedMs' | 'timeLimitMs' | 'phase'>): number {
+  if (progress.phase === 'references' || progress.phase === 'finishing') return 1;
+  if (!(progress.timeLimitMs > 0)) return 0;
+  return Math.min(1, Math.max(0, progress.elapsedMs / progress.timeLimitMs));
+}
+
+export const PHASE_LABELS: Record<PlanProgress['phase'], string> = {
+  preparing: 'Preparing the network',
+  searching: 'Searching for placements',
+  references: 'Running the greedy and exact references',
+  finishing: 'Writing up the result',
+};
+
+/** "2 unresolved (weight 5) · move cost 12.5" — the first two levels of the objective, as planners read them. */
+export function formatObjective(objective: PlanObjective): string {
+  const unresolved = objective.unresolved === 0
+    ? 'nothing unresolved'
+    : `${objective.unresolved} unresolved (weight ${formatCost(objective.unresolvedWeight)})`;
+  return `${unresolved} · move cost ${formatCost(objective.moveCost)}`;
+}
+
+/** "Islands · seed 7 · 40 candidates · 20 s · back after · 2 pinned · 1 site left out". */
+export function settingsSummary(settings: PlanSettings): string {
+  const parts = [
+    settings.mode === 'islands' ? 'Islands' : 'Serial',
+    `seed ${settings.seed}`,
+    `${settings.population} candidates`,
+    `${settings.timeLimitSeconds} s`,
+    settings.afterWindow === 'return' ? 'back after' : 'kept after',
+  ];
+  if (settings.pinned.length > 0) parts.push(`${settings.pinned.length} pinned`);
+  if (settings.excludedSites.length > 0) parts.push(`${settings.excludedSites.length} ${settings.excludedSites.length === 1 ? 'site' : 'sites'} left out`);
+  return parts.join(' · ');
+}

@@ -1,0 +1,41 @@
+// Old and new positions on the network map: today's paths in one tone, the plan's in another, with a legend.
+import { useMemo } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
+import type { PlanSlice } from '@/shared/plans';
+import { useNetworkMapQuery } from '@/hooks/queries/network-map';
+import { NetworkMap } from '@/components/map/network-map';
+import { planMapElements } from '@/components/plans/plan-review-data';
+import { colors, space, type } from '@/constants/theme';
+
+/** Tall enough for the coast and the legend on a phone, short enough to scroll past. */
+const MAP_HEIGHT_PX = 420;
+const TONE_WORDS = { placement: 'Before (today)', alternative: 'After (planned)' } as const;
+
+type Props = { slices: readonly PlanSlice[]; selectedSlice: string | null };
+
+export function PlanMap({ slices, selectedSlice }: Props) {
+  const map = useNetworkMapQuery();
+  const elements = useMemo(() => planMapElements(slices, selectedSlice), [slices, selectedSlice]);
+  // The plan's new positions are drawn on top: where old and new share a span, it reads as kept.
+  const after = useMemo(() => ({ ...elements.after, tone: 'alternative' as const }), [elements]);
+  const before = useMemo(() => ({ ...elements.before, tone: 'placement' as const }), [elements]);
+  if (map.isError) return <Text style={styles.muted}>The map could not be loaded: {map.error.message}</Text>;
+  if (!map.data) return <Text style={styles.muted}>Loading the map…</Text>;
+  const chosen = selectedSlice ? slices.find((s) => s.slice === selectedSlice)?.name ?? selectedSlice : null;
+  return (
+    <View style={styles.box} testID="plan-map">
+      <View style={styles.frame}>
+        <NetworkMap data={map.data} highlight={after} secondaryHighlight={before} toneLabels={TONE_WORDS} />
+      </View>
+      <Text style={styles.muted} testID="plan-map-caption">
+        {chosen ? `${chosen}: its whole placement before and after the move.` : 'Every change in the plan: sites and paths left, and where they go.'}
+      </Text>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: space.xs },
+  frame: { height: MAP_HEIGHT_PX },
+  muted: { ...type.caption, color: colors.inkMuted },
+});

@@ -1,0 +1,103 @@
+// The "new run" form: how the re-mapper searches, what happens after the window, what it must not touch.
+import { useState } from 'react';
+import { StyleSheet, Text, View } from 'react-native';
+import type { PlanSettings } from '@/shared/plans';
+import { usePlanRunMutation } from '@/hooks/queries/plans';
+import { Button } from '@/components/button';
+import { TextField } from '@/components/text-field';
+import { ChoiceChips } from '@/components/windows/choice-chips';
+import { PickChips, type PickOption } from '@/components/plans/pick-chips';
+import {
+  errorsFromApi, formFromSettings, settingsFromForm, type PlanFormErrors, type PlanFormState,
+} from '@/components/plans/plan-form-state';
+import { colors, space, type } from '@/constants/theme';
+
+type Props = {
+  windowId: string;
+  /** pre-filled from an earlier run ("Adjust and re-run"); the contract's defaults otherwise */
+  initial?: PlanSettings;
+  functionOptions: readonly PickOption[];
+  siteOptions: readonly PickOption[];
+  onQueued: (planId: string) => void;
+  onClose?: () => void;
+};
+
+const MODES = [
+  { value: 'serial', label: 'One thread' },
+  { value: 'islands', label: 'Islands (parallel)' },
+] as const;
+const AFTER = [
+  { value: 'return', label: 'Move back afterwards' },
+  { value: 'keep', label: 'Keep the new places' },
+] as const;
+
+export function PlanRunForm({ windowId, initial, functionOptions, siteOptions, onQueued, onClose }: Props) {
+  const [form, setForm] = useState<PlanFormState>(() => formFromSettings(initial));
+  const [localErrors, setLocalErrors] = useState<PlanFormErrors>({});
+  const run = usePlanRunMutation(windowId);
+  const errors: PlanFormErrors = { ...errorsFromApi(run.error), ...localErrors };
+  const set = <K extends keyof PlanFormState>(key: K, value: PlanFormState[K]) => {
+    setForm((f) => ({ ...f, [key]: value }));
+    setLocalErrors((e) => ({ ...e, [key]: undefined }));
+  };
+  const submit = () => {
+    const parsed = settingsFromForm(form);
+    if ('errors' in parsed) return setLocalErrors(parsed.errors);
+    setLocalErrors({});
+    run.mutate(parsed.settings, { onSuccess: ({ plan }) => onQueued(plan.id) });
+  };
+  return (
+    <View style={styles.form} testID="plan-form">
+      <Text style={styles.label}>Search</Text>
+      <ChoiceChips label="Search" choices={MODES} value={form.mode} onChange={(v) => v && set('mode', v as PlanFormState['mode'])} testID="plan-form-mode" />
+      {errors.mode ? <Text style={styles.error}>{errors.mode}</Text> : null}
+      <View style={styles.numbers}>
+        <View style={styles.number}>
+          <TextField label="Time limit (s)" value={form.timeLimitSeconds} onChangeText={(v) => set('timeLimitSeconds', v)} keyboardType="numeric" error={errors.timeLimitSeconds} testID="plan-form-time-limit" />
+        </View>
+        <View style={styles.number}>
+          <TextField label="Candidates" value={form.population} onChangeText={(v) => set('population', v)} keyboardType="numeric" error={errors.population} testID="plan-form-population" />
+        </View>
+        <View style={styles.number}>
+          <TextField label="Seed" value={form.seed} onChangeText={(v) => set('seed', v)} keyboardType="numeric" error={errors.seed} testID="plan-form-seed" />
+        </View>
+      </View>
+      <Text style={styles.hint}>The same seed and settings give the same plan. More candidates search wider but take longer per round.</Text>
+      <Text style={styles.label}>After the window</Text>
+      <ChoiceChips label="After the window" choices={AFTER} value={form.afterWindow} onChange={(v) => v && set('afterWindow', v as PlanFormState['afterWindow'])} testID="plan-form-after" />
+      <PickChips
+        label="Keep where they are"
+        hint="Functions that must stay on their current site; their slices can only be rerouted."
+        options={functionOptions}
+        picked={form.pinned}
+        onChange={(v) => set('pinned', v)}
+        error={errors.pinned}
+        testID="plan-form-pinned"
+      />
+      <PickChips
+        label="Sites to leave out"
+        hint="No function will be moved onto these sites."
+        options={siteOptions}
+        picked={form.excludedSites}
+        onChange={(v) => set('excludedSites', v)}
+        error={errors.excludedSites}
+        testID="plan-form-excluded"
+      />
+      {errors.form ? <Text style={styles.error} role="alert" testID="plan-form-error">{errors.form}</Text> : null}
+      <View style={styles.actions}>
+        <Button label="Start run" onPress={submit} busy={run.isPending} testID="plan-form-submit" />
+        {onClose ? <Button label="Close" variant="quiet" onPress={onClose} testID="plan-form-close" /> : null}
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.md },
+  label: { ...type.label, color: colors.ink },
+  hint: { ...type.caption, color: colors.inkMuted },
+  numbers: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  number: { flexGrow: 1, flexBasis: 100 },
+  error: { ...type.caption, color: colors.danger },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+});

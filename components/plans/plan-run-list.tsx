@@ -1,0 +1,62 @@
+// The runs of a window, newest first: state, when, how it came out and with which settings, for comparison.
+import { Pressable, StyleSheet, Text, View } from 'react-native';
+import type { PlanListItem } from '@/shared/plans';
+import { formatInstant } from '@/components/time';
+import { formatCost, settingsSummary } from '@/components/plans/plan-format';
+import { PlanMarks, PlanStatusPill } from '@/components/plans/plan-status-pill';
+import { colors, radii, space, type } from '@/constants/theme';
+
+type Props = { plans: readonly PlanListItem[]; timeZone: string; selectedId?: string | null; onOpen: (planId: string) => void };
+
+function totalsLine(plan: PlanListItem): string {
+  if (plan.totals) {
+    const t = plan.totals;
+    return `${t.moved} moved · ${t.rerouted} rerouted · ${t.unresolved} unresolved · move cost ${formatCost(t.moveCost)}`;
+  }
+  if (plan.status === 'failed') return plan.error ?? 'The run failed.';
+  if (plan.status === 'cancelled') return plan.error ?? 'Cancelled before it finished.';
+  if (plan.progress) return `Round ${plan.progress.generation}…`;
+  return 'Not started yet.';
+}
+
+/** Newest first; the server's order is not relied on. */
+export function sortRuns(plans: readonly PlanListItem[]): PlanListItem[] {
+  return [...plans].sort((a, b) => b.createdAt.localeCompare(a.createdAt));
+}
+
+export function PlanRunList({ plans, timeZone, selectedId = null, onOpen }: Props) {
+  return (
+    <View style={styles.list} testID="plan-runs">
+      {sortRuns(plans).map((plan) => (
+        <Pressable
+          key={plan.id}
+          role="link"
+          accessibilityLabel={`Run of ${formatInstant(plan.createdAt, timeZone)}`}
+          onPress={() => onOpen(plan.id)}
+          style={({ pressed }) => [styles.row, plan.id === selectedId && styles.selected, pressed && styles.pressed]}
+          testID={`plan-row-${plan.id}`}
+        >
+          <View style={styles.head}>
+            <PlanStatusPill status={plan.status} testID={`plan-row-status-${plan.id}`} />
+            <PlanMarks accepted={plan.accepted} stale={plan.stale} />
+          </View>
+          <Text style={styles.when}>{formatInstant(plan.createdAt, timeZone)}</Text>
+          <Text style={plan.status === 'failed' ? styles.error : styles.body}>{totalsLine(plan)}</Text>
+          <Text style={styles.muted}>{settingsSummary(plan.settings)}</Text>
+        </Pressable>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  list: { gap: space.sm },
+  row: { gap: space.xs, padding: space.md, borderRadius: radii.md, borderWidth: 1, borderColor: colors.border, backgroundColor: colors.surface },
+  selected: { borderColor: colors.primary, borderWidth: 2 },
+  pressed: { backgroundColor: colors.primarySoft },
+  head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
+  when: { ...type.bodyStrong, color: colors.ink },
+  body: { ...type.body, color: colors.ink },
+  muted: { ...type.caption, color: colors.inkMuted },
+  error: { ...type.body, color: colors.danger },
+});

@@ -1,0 +1,45 @@
+// The plan at a glance: how many slices move, are rerouted, stay or are left unresolved, and what the moves cost.
+import { StyleSheet, Text, View } from 'react-native';
+import type { PlanReview } from '@/shared/plans';
+import { formatCost, formatDurationMs } from '@/components/plans/plan-format';
+import { colors, radii, space, type } from '@/constants/theme';
+
+export function PlanTotals({ review }: { review: PlanReview }) {
+  const t = review.totals;
+  const tiles = [
+    { key: 'moved', label: 'Moved', value: String(t.moved) },
+    { key: 'rerouted', label: 'Rerouted', value: String(t.rerouted) },
+    { key: 'stays', label: 'Stay', value: String(t.stays) },
+    { key: 'unresolved', label: 'Unresolved', value: String(t.unresolved), alarm: t.unresolved > 0 },
+    { key: 'move-cost', label: 'Move cost', value: formatCost(t.moveCost) },
+  ];
+  return (
+    <View style={styles.box} testID="plan-totals">
+      <View style={styles.tiles}>
+        {tiles.map((tile) => (
+          <View key={tile.key} style={styles.tile}>
+            <Text style={[styles.value, tile.alarm && styles.alarm]} testID={`plan-total-${tile.key}`}>{tile.value}</Text>
+            <Text style={styles.label}>{tile.label}</Text>
+          </View>
+        ))}
+      </View>
+      <Text style={styles.muted}>
+        {review.affected.length} affected {review.affected.length === 1 ? 'slice' : 'slices'} · search took {formatDurationMs(review.computeMs)}
+        {review.reservedFor.length > 0 ? ` · capacity held for ${review.reservedFor.length} overlapping ${review.reservedFor.length === 1 ? 'window' : 'windows'}` : ''}
+      </Text>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { gap: space.sm },
+  tiles: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  tile: {
+    flexGrow: 1, flexBasis: 90, padding: space.md, borderRadius: radii.md, backgroundColor: colors.surface,
+    borderWidth: 1, borderColor: colors.border, gap: space.xxs,
+  },
+  value: { ...type.figure, color: colors.abyss },
+  alarm: { color: colors.danger },
+  label: { ...type.label, color: colors.inkMuted },
+  muted: { ...type.caption, color: colors.inkMuted },
+});
