@@ -1,0 +1,55 @@
+// Mail worker: sends QUEUES.mail jobs with nodemailer and records each notice's sending state.
+// pg-boss retries a failed job (retryLimit, backoff: set on the queue in server/jobs/boss.ts); when the
+// retries are used up the job lands in QUEUES.mailDead, whose handler marks the notice `failed`.
+import type PgBoss from 'pg-boss';
+import type { Db } from '../../db/client';
+import type { ServerConfig } from '../env';
+import { QUEUES, type MailJob } from '../jobs/queue';
+import { composeMail } from './compose';
+import { markNoticeAttemptFailed, markNoticeFailed, markNoticeSent } from './notice-state';
+import { createMailTransport } from './transport';
+
+export type MailWorkerDeps = {
+  db: Db;
+  config: Pick<ServerConfig, 'smtp' | 'mailFrom'>;
+  /** the in-process sink's actual port (config.smtp.sinkPort may be 0) */
+  sinkPort?: number;
+  /** how often an idle worker looks for jobs; pg-boss's default is 2 s */
+  pollingIntervalSeconds?: number;
+  now?: () => Date;
+};
+
+/** Registers the workers for QUEUES.mail and QUEUES.mailDead; returns their worker ids. */
+export async function registerMailWorker(boss: PgBoss, deps: MailWorkerDeps): Promise<string[]> {
+  const transport = createMailTransport(deps.config, { sinkPort: deps.sinkPort });
+  const now = deps.now ?? (() => new Date());
+  const options = { pollingIntervalSeconds: deps.pollingIntervalSeconds ?? 2 };
+
+  const sendId = await boss.work<MailJob>(QUEUES.mail, options, async (jobs) => {
+    for (const job of jobs) {
+      const mail = job.data;
+      try {
+        await transport.sendMail(composeMail(mail, deps.config.mailFrom));
+      } catch (err) {
+        if (mail.noticeId) await markNoticeAttemptFailed(deps.db, mail.noticeId, readableMailError(err), now());
+        throw err; // pg-boss retries it
+      }
+      if (mail.noticeId) await markNoticeSent(deps.db, mail.noticeId, now());
+    }
+  });
+
+  const deadId = await boss.work<MailJob>(QUEUES.mailDead, options, async (jobs) => {
+    for (const job of jobs) {
+      if (job.data.noticeId) await markNoticeFailed(deps.db, job.data.noticeId, now());
+    }
+  });
+  return [sendId, deadId];
+}
+
+/** One line a person can act on: nodemailer's error code, the server's reply, or the message. */
+export function readableMailError(err: unknown): string {
+  if (!(err instanceof Error)) return String(err).slice(0, 500);
+  const { code, response } = err as Error & { code?: string; response?: string };
+  const detail = response && !err.message.includes(response) ? `${err.message} (${response})` : err.message;
+  return (code ? `${code}: ${detail}` : detail).slice(0, 500);
+}
