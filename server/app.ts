@@ -29,6 +29,8 @@ import { sitesRouter } from './routes/sites';
 import { slicesRouter } from './routes/slices';
 import { spansRouter } from './routes/spans';
 import { tenantsRouter } from './routes/tenants';
+import { outboxRouter } from './routes/outbox';
+import { noticesRouter } from './routes/notices';
 import { otpRouter } from './routes/otp';
 import { signoffRouter, signoffSubmitRouter } from './routes/signoff';
 import { plansRouter } from './routes/plans';
@@ -72,7 +74,9 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   api.use('/slices', slicesRouter(deps));
   api.use('/network', networkRouter(deps));
   api.use('/export', exportRouter(deps));
+  api.use('/outbox', outboxRouter(deps));
   api.use(plansRouter(deps));
+  api.use(noticesRouter(deps));
   api.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.originalUrl.split('?')[0])));
   return api;
 }

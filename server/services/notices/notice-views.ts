@@ -1,0 +1,84 @@
+// Read side of notices: one notice for its tenant (or staff), a window's notices for staff, the tenant portal.
+import { and, asc, eq, gt, inArray, ne } from 'drizzle-orm';
+import { notices, tenants, users, windows } from '../../../db/schema';
+import {
+  DEFAULT_TENANT_TIME_ZONE, noticeContentSchema, type Notice, type NoticeStatusRow, type PortalWork,
+} from '../../../shared/notices';
+import { selectWindowRows, type Queryable } from '../../queries/windows/window-rows';
+import { summaryOf } from './compose-notice';
+import { NoticeNotFoundError } from './errors';
+import { loadTenants } from './notice-inputs';
+
+type NoticeRow = typeof notices.$inferSelect;
+
+function toNotice(row: NoticeRow, acknowledgedByName: string | null): Notice {
+  return {
+    id: row.id, windowId: row.windowId, tenantId: row.tenantId, status: row.status, method: row.method,
+    sequence: row.sequence, subject: row.subject, content: noticeContentSchema.parse(row.content),
+    sentAt: row.sentAt?.toISOString() ?? null, acknowledgedAt: row.acknowledgedAt?.toISOString() ?? null,
+    acknowledgedByName, updatedAt: row.updatedAt.toISOString(),
+  };
+}
+
+async function noticesWithAckNames(db: Queryable, rows: NoticeRow[]): Promise<Notice[]> {
+  const ids = [...new Set(rows.map((r) => r.acknowledgedBy).filter((x): x is string => !!x))];
+  const names = ids.length === 0 ? [] : await db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, ids));
+  const byId = new Map(names.map((u) => [u.id, u.name]));
+  return rows.map((r) => toNotice(r, r.acknowledgedBy ? byId.get(r.acknowledgedBy) ?? null : null));
+}
+
+/**
+ * The notice row as `scopeTenant` may see it: another tenant's notice, or one still blocked (never sent to the
+ * tenant), is "not found" for a tenant user — the same answer as an id that does not exist.
+ */
+export async function findVisibleNotice(db: Queryable, id: string, scopeTenant: string | null): Promise<NoticeRow> {
+  const [row] = await db.select().from(notices).where(eq(notices.id, id));
+  if (!row) throw new NoticeNotFoundError(id);
+  if (scopeTenant !== null && (row.tenantId !== scopeTenant || row.status === 'blocked')) throw new NoticeNotFoundError(id);
+  return row;
+}
+
+export async function noticeView(db: Queryable, id: string, scopeTenant: string | null): Promise<Notice> {
+  const [notice] = await noticesWithAckNames(db, [await findVisibleNotice(db, id, scopeTenant)]);
+  return notice;
+}
+
+export async function windowNoticeRows(db: Queryable, windowId: string): Promise<NoticeStatusRow[]> {
+  const rows = await db.select({ n: notices, tenantName: tenants.name }).from(notices)
+    .innerJoin(tenants, eq(tenants.id, notices.tenantId))
+    .where(eq(notices.windowId, windowId)).orderBy(asc(tenants.name));
+  const recipients = await loadTenants(db, rows.map((r) => r.n.tenantId));
+  return rows.map(({ n, tenantName }) => ({
+    id: n.id, tenantId: n.tenantId, tenantName, status: n.status, method: n.method, sequence: n.sequence,
+    recipients: recipients.get(n.tenantId)?.recipients ?? [], attempts: n.attempts, lastError: n.lastError,
+    sentAt: n.sentAt?.toISOString() ?? null, acknowledgedAt: n.acknowledgedAt?.toISOString() ?? null,
+    leadDays: noticeContentSchema.parse(n.content).leadDays, leadOverrideReason: n.leadOverrideReason,
+    updatedAt: n.updatedAt.toISOString(),
+  }));
+}
+
+/** Upcoming work on the tenant's slices (not yet over), each with the notice the tenant was sent, if any. */
+export async function portalWork(db: Queryable, tenantId: string, now: Date): Promise<PortalWork> {
+  const touching = await selectWindowRows(db, { from: now, scopeTenant: tenantId });
+  const sent = await db.select().from(notices).innerJoin(windows, eq(windows.id, notices.windowId))
+    .where(and(eq(notices.tenantId, tenantId), ne(notices.status, 'blocked'), gt(windows.endsAt, now)));
+  const byWindow = new Map((await noticesWithAckNames(db, sent.map((r) => r.notices))).map((n) => [n.windowId, n]));
+  const items = new Map<string, PortalWork['items'][number]>();
+  for (const w of touching) {
+    items.set(w.id, {
+      windowId: w.id, summary: summaryOf(w.workType), startsAt: w.startsAt.toISOString(), endsAt: w.endsAt.toISOString(),
+      critical: !!w.touchesCritical, notice: byWindow.get(w.id) ?? null,
+    });
+  }
+  // A withdrawn window drops out of the touching list, but its cancellation is still news to the tenant.
+  for (const { windows: w } of sent) {
+    if (items.has(w.id)) continue;
+    const notice = byWindow.get(w.id)!;
+    items.set(w.id, {
+      windowId: w.id, summary: summaryOf(w.workType), startsAt: w.startsAt.toISOString(), endsAt: w.endsAt.toISOString(),
+      critical: notice.content.slices.some((s) => s.critical), notice,
+    });
+  }
+  const list = [...items.values()].sort((a, b) => a.startsAt.localeCompare(b.startsAt) || a.windowId.localeCompare(b.windowId));
+  return { timeZone: DEFAULT_TENANT_TIME_ZONE, items: list };
+}
