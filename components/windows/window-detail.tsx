@@ -1,4 +1,5 @@
 // One window: when (in the viewer's zone, named), where it stands, what it takes out, its MOP, conflicts and actions.
+import type { ReactNode } from 'react';
 import { Linking, ScrollView, StyleSheet, Text, View } from 'react-native';
 import type { Me } from '@/shared/api';
 import type { Window } from '@/shared/windows';
@@ -26,6 +27,8 @@ type Props = {
   onOpenImpact: () => void;
   onOpenWindow: (id: string) => void;
   onReload: () => void;
+  /** Blocks other areas add below the actions (move plans, sign-off), each self-contained. */
+  children?: ReactNode;
 };
 
 function Conflicts({ window, timeZone, onOpenWindow }: Pick<Props, 'window' | 'timeZone' | 'onOpenWindow'>) {
@@ -35,7 +38,7 @@ function Conflicts({ window, timeZone, onOpenWindow }: Pick<Props, 'window' | 't
   return <ConflictsList conflicts={conflicts.data.conflicts} timeZone={timeZone} onOpenWindow={onOpenWindow} />;
 }
 
-export function WindowDetail({ window: w, me, timeZone, flash, onEdit, onOpenImpact, onOpenWindow, onReload }: Props) {
+export function WindowDetail({ window: w, me, timeZone, flash, onEdit, onOpenImpact, onOpenWindow, onReload, children }: Props) {
   const assess = useWindowAssessMutation(w.id);
   const transition = useWindowTransitionMutation(w.id);
   const actionError = assess.error ?? transition.error;
@@ -66,6 +69,7 @@ export function WindowDetail({ window: w, me, timeZone, flash, onEdit, onOpenImp
           onAssess={() => assess.mutate(w.version, { onSuccess: onOpenImpact })}
           onWithdraw={() => transition.mutate({ to: 'withdrawn', version: w.version })}
         />
+        {children}
         <Section title="Taken out">
           <WindowElementsList elements={w.elements} />
         </Section>

@@ -25,9 +25,11 @@ export function isPlanActive(status: PlanRunStatus): boolean {
   return status === 'queued' || status === 'running';
 }
 
-export function useWindowPlansQuery(windowId: string) {
+/** `enabled` false for viewers who may not list runs (tenants), so no refused request is made. */
+export function useWindowPlansQuery(windowId: string, enabled = true) {
   return useQuery({
     queryKey: windowPlansKey(windowId),
+    enabled,
     queryFn: () => apiFetch(windowPlansPath(windowId), planListResponseSchema),
     // The list shows each run's state; keep it moving while any run computes, then stop asking.
     refetchInterval: (query) => (query.state.data?.plans.some((p) => isPlanActive(p.status)) ? PLAN_POLL_INTERVAL_MS : false),

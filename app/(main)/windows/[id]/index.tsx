@@ -6,6 +6,7 @@ import { ErrorState, LoadingState } from '@/components/screen-states';
 import { viewerTimeZone } from '@/components/time';
 import { detailHref, flashFromParams } from '@/components/windows/form-page';
 import { WindowDetail } from '@/components/windows/window-detail';
+import { WindowPlansEntry } from '@/components/plans/window-plans-entry';
 
 export default function WindowScreen() {
   const params = useLocalSearchParams<{ id: string; saved?: string; reverted?: string; mop?: string }>();
@@ -24,6 +25,13 @@ export default function WindowScreen() {
       onOpenImpact={() => router.push(`/windows/${encodeURIComponent(params.id)}/impact`)}
       onOpenWindow={(id) => router.push(detailHref({ id }))}
       onReload={() => void window.refetch()}
-    />
+    >
+      <WindowPlansEntry
+        windowId={params.id}
+        me={me.data}
+        onOpenPlans={() => router.push(`/windows/${encodeURIComponent(params.id)}/plans`)}
+        onOpenPlan={(planId) => router.push(`/windows/${encodeURIComponent(params.id)}/plans/${encodeURIComponent(planId)}`)}
+      />
+    </WindowDetail>
   );
 }
