@@ -47,16 +47,20 @@ export function toSlicePlan(s: PlanSlice): SlicePlan {
   return { slice: s.slice, outcome: s.outcome, sites: { ...(s.after?.sites ?? {}) }, paths: { ...(s.after?.paths ?? {}) } };
 }
 
-/** Throws NETWORK_CHANGED or PLAN_NO_LONGER_FITS with the reason; returns the windows whose plans were reserved. */
-export async function checkStillFits(db: Queryable, windowId: string, review: PlanReview): Promise<string[]> {
-  const { scenario, inventory } = await loadInventory(db);
+/**
+ * Throws NETWORK_CHANGED or PLAN_NO_LONGER_FITS with the reason; returns the windows whose plans were reserved.
+ * The inventory is read through `pool`: its tables are read in parallel, which one transaction's connection
+ * cannot do; under READ COMMITTED that sees the same committed rows the transaction would.
+ */
+export async function checkStillFits(db: { tx: Queryable; pool: Queryable }, windowId: string, review: PlanReview): Promise<string[]> {
+  const { scenario, inventory } = await loadInventory(db.pool);
   const changed = changedSlices(scenario, review.slices);
   if (changed.length > 0) {
     throw new PlanNotAcceptableError('NETWORK_CHANGED',
       `The placements of these slices changed after the run: ${changed.join(', ')}. Run the plan again.`);
   }
-  const spec = windowSpecOf(await loadWindow(db, windowId, null));
-  const { reservations, reservedFor } = await reservationsFor(db, windowId, inventory);
+  const spec = windowSpecOf(await loadWindow(db.tx, windowId, null));
+  const { reservations, reservedFor } = await reservationsFor(db.tx, windowId, inventory);
   const verdict = verifyPlan(inventory, spec, { affected: review.affected, slices: review.slices.map(toSlicePlan) }, reservations);
   if (!verdict.ok) {
     const listed = verdict.violations.slice(0, LISTED_VIOLATIONS).map((v) => (v.slice ? `${v.slice}: ${v.message}` : v.message));

@@ -31,7 +31,7 @@ export async function acceptPlan(deps: { db: Db; now: Date }, planId: string, bo
     if (!PLANNABLE.includes(w.status)) throw new WindowNotPlannableError(w.status);
     const review = planReviewSchema.parse(row.result);
     const outageAccepted = checkOutageAccepted(review, body.outageAccepted);
-    const reservedFor = await checkStillFits(tx, row.windowId, review);
+    const reservedFor = await checkStillFits({ tx, pool: db }, row.windowId, review);
     await markPlanAccepted(tx, planId, { userId: user.id, outageAccepted, now });
     await setWindowStatus(tx, {
       windowId: row.windowId, from: PLANNABLE, to: 'planned', actorId: user.id, action: 'plan.accept', now,
