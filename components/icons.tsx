@@ -125,3 +125,14 @@ export function MoreIcon({ size = 24, color = colors.ink }: IconProps) {
     </Svg>
   );
 }
+
+/** Outbox: an envelope with its flap open and a letter leaving it. */
+export function OutboxIcon({ size = 24, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Path d="M4 10 V18.5 A1.5 1.5 0 0 0 5.5 20 H18.5 A1.5 1.5 0 0 0 20 18.5 V10" stroke={color} strokeWidth={1.8} strokeLinejoin="round" />
+      <Path d="M4 10 L12 15 L20 10" stroke={color} strokeWidth={1.8} strokeLinecap="round" strokeLinejoin="round" />
+      <Path d="M12 11 V3.5 M9 6.5 L12 3.5 L15 6.5" stroke={color} strokeWidth={1.8} strokeLinecap="round" strokeLinejoin="round" />
+    </Svg>
+  );
+}

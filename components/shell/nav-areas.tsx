@@ -2,7 +2,7 @@
 import type { ComponentType } from 'react';
 import type { Href } from 'expo-router';
 import type { RoleName } from '@/shared/api';
-import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, OverviewIcon, SlicesIcon } from '@/components/icons';
+import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, OutboxIcon, OverviewIcon, SlicesIcon } from '@/components/icons';
 
 export type NavArea = {
   key: string;
@@ -36,6 +36,10 @@ export const NAV_AREAS: readonly NavArea[] = [
   {
     key: 'imports', label: 'Imports', href: '/imports', matches: (pathname) => pathname.startsWith('/imports'),
     Icon: ImportIcon, roles: ['admin', 'planner'],
+  },
+  {
+    key: 'outbox', label: 'Outbox', href: '/outbox', matches: (pathname) => pathname.startsWith('/outbox'),
+    Icon: OutboxIcon, roles: ['admin'],
   },
 ];
 

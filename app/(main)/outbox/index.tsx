@@ -1,0 +1,6 @@
+// Outbox with no message open (seen on wide screens only; phones show the list).
+import { DetailPlaceholder } from '@/components/inventory/detail-placeholder';
+
+export default function OutboxIndexScreen() {
+  return <DetailPlaceholder title="Pick a message" hint="Its headers, text, attachments and calendar invitation show here." />;
+}

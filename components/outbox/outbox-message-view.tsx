@@ -1,0 +1,64 @@
+// One received message: headers, the invitation (when there is one), the text body, attachments, raw download.
+import { Linking, Pressable, StyleSheet, Text, View } from 'react-native';
+import type { OutboxMessage } from '@/shared/outbox';
+import { outboxRawPath } from '@/hooks/queries/outbox';
+import { DetailFrame, Facts, Note, Section } from '@/components/inventory/detail-frame';
+import { formatInstant, viewerTimeZone } from '@/components/time';
+import { colors, radii, space, type } from '@/constants/theme';
+import { formatSizeBytes } from './outbox-format';
+import { OutboxInvitation } from './outbox-invitation';
+
+export function OutboxMessageView({ message }: { message: OutboxMessage }) {
+  const zone = viewerTimeZone();
+  return (
+    <DetailFrame
+      kicker={`Message ${message.id} · ${formatSizeBytes(message.sizeBytes)}`}
+      title={message.subject ?? '(no subject)'}
+      backHref="/outbox"
+      backLabel="Outbox"
+      testID="outbox-message"
+    >
+      <Facts
+        items={[
+          { label: 'From', value: message.from ?? message.envelope.from ?? '—' },
+          { label: 'To', value: message.to ?? message.envelope.to.join(', ') },
+          ...(message.cc ? [{ label: 'Cc', value: message.cc }] : []),
+          { label: 'Sent', value: message.date ? formatInstant(message.date, zone) : '—' },
+          { label: 'Received', value: formatInstant(message.receivedAt, zone) },
+        ]}
+      />
+      {message.calendar ? (
+        <Section title="Calendar invitation" testID="outbox-calendar">
+          <OutboxInvitation calendar={message.calendar} viewerZone={zone} />
+        </Section>
+      ) : null}
+      <Section title="Text">
+        <View style={styles.body}>
+          <Text style={styles.bodyText} selectable testID="outbox-text">
+            {message.text?.trimEnd() || '(no plain-text body)'}
+          </Text>
+        </View>
+        {message.hasHtml ? <Note>The message also has an HTML version, not shown here.</Note> : null}
+      </Section>
+      <Section title="Attachments">
+        {message.attachments.length === 0 ? <Note>None.</Note> : null}
+        {message.attachments.map((a, i) => (
+          <Text key={`${a.filename}-${i}`} style={styles.attachment}>
+            {`${a.filename ?? '(unnamed)'} · ${a.contentType} · ${formatSizeBytes(a.sizeBytes)}`}
+          </Text>
+        ))}
+      </Section>
+      <Pressable role="link" testID="outbox-raw" onPress={() => Linking.openURL(outboxRawPath(message.id))} style={styles.raw}>
+        <Text style={styles.rawText}>Download the raw message (.eml)</Text>
+      </Pressable>
+    </DetailFrame>
+  );
+}
+
+const styles = StyleSheet.create({
+  body: { backgroundColor: colors.surface, borderColor: colors.border, borderWidth: 1, borderRadius: radii.md, padding: space.md },
+  bodyText: { ...type.body, color: colors.ink },
+  attachment: { ...type.body, color: colors.ink },
+  raw: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
+  rawText: { ...type.bodyStrong, color: colors.primary },
+});
