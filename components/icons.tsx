@@ -136,3 +136,14 @@ export function OutboxIcon({ size = 24, color = colors.ink }: IconProps) {
     </Svg>
   );
 }
+
+/** Sign-off: a seal with a tick, the change board's mark on a plan. */
+export function SignoffIcon({ size = 24, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Circle cx={12} cy={10} r={6.5} stroke={color} strokeWidth={1.8} />
+      <Path d="M9 10 L11.2 12.2 L15 8.2" stroke={color} strokeWidth={1.8} strokeLinecap="round" strokeLinejoin="round" />
+      <Path d="M8.5 15.5 L7 21 L12 19 L17 21 L15.5 15.5" stroke={color} strokeWidth={1.8} strokeLinejoin="round" />
+    </Svg>
+  );
+}

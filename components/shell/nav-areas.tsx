@@ -2,7 +2,7 @@
 import type { ComponentType } from 'react';
 import type { Href } from 'expo-router';
 import type { RoleName } from '@/shared/api';
-import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, OutboxIcon, OverviewIcon, SlicesIcon } from '@/components/icons';
+import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, OutboxIcon, OverviewIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
 
 export type NavArea = {
   key: string;
@@ -40,6 +40,11 @@ export const NAV_AREAS: readonly NavArea[] = [
   {
     key: 'outbox', label: 'Outbox', href: '/outbox', matches: (pathname) => pathname.startsWith('/outbox'),
     Icon: OutboxIcon, roles: ['admin'],
+  },
+  {
+    key: 'sign-off', label: 'Sign-off', href: '/sign-off', matches: (pathname) => pathname.startsWith('/sign-off') || pathname.startsWith('/security'),
+    // Approvers decide; admins read the queue and set the sign-off policy.
+    Icon: SignoffIcon, roles: ['approver', 'admin'],
   },
 ];
 
