@@ -35,7 +35,7 @@ function listFilter(req: Request): WindowFilter {
   };
 }
 
-export function windowsRouter({ db, now }: RouteDeps): Router {
+export function windowsRouter({ db, now, jobs, config }: RouteDeps): Router {
   const router = express.Router();
   const scope = (req: Request) => tenantScopeOf(req.user!);
   const mutation = async (id: string, reverted: boolean) => {
@@ -58,7 +58,7 @@ export function windowsRouter({ db, now }: RouteDeps): Router {
     res.json(await mutation(idOf(req), reverted));
   });
   router.post('/:id/transition', booking, async (req, res) => {
-    await transitionWindow(db, idOf(req), windowTransitionSchema.parse(req.body), req.user!, now());
+    await transitionWindow(db, idOf(req), windowTransitionSchema.parse(req.body), req.user!, now(), { jobs, config });
     res.json(await mutation(idOf(req), false));
   });
   router.post('/:id/assess', booking, async (req, res) => {

@@ -57,11 +57,10 @@ async function missingSlices(db: Queryable, affected: string[], listed: Set<stri
 
 export async function loadTenants(db: Queryable, ids: string[]): Promise<Map<string, NoticeTenant>> {
   const list = ids.length > 0 ? ids : [''];
-  const [rows, tenantUsers, policy] = await Promise.all([
-    db.select().from(tenants).where(inArray(tenants.id, list)),
-    db.select({ tenantId: users.tenantId, email: users.email }).from(users).where(inArray(users.tenantId, list)),
-    getPolicies(db),
-  ]);
+  // One after another: inside a transaction there is one connection (pg refuses overlapping queries on it).
+  const rows = await db.select().from(tenants).where(inArray(tenants.id, list));
+  const tenantUsers = await db.select({ tenantId: users.tenantId, email: users.email }).from(users).where(inArray(users.tenantId, list));
+  const policy = await getPolicies(db);
   const out = new Map<string, NoticeTenant>();
   for (const t of rows) {
     const emails = [...t.contacts.map((c) => c.email), ...tenantUsers.filter((u) => u.tenantId === t.id).map((u) => u.email)];
@@ -76,12 +75,12 @@ async function loadLookups(db: Queryable, planSlices: PlanSlice[]): Promise<Noti
   const siteIds = planSlices.flatMap((s) => s.moves.flatMap((m) => [m.from, m.to]));
   const spanIds = planSlices.flatMap((s) => s.reroutes.flatMap((r) => [...r.from, ...r.to]));
   const any = (xs: string[]) => (xs.length > 0 ? xs : ['']);
-  const [siteRows, spanRows, fnRows, tieRows] = await Promise.all([
-    db.select({ id: sites.id, lat: sites.lat, lon: sites.lon }).from(sites).where(inArray(sites.id, any(siteIds))),
-    db.select({ id: spans.id, latencyMs: spans.latencyMs, lengthKm: spans.lengthKm }).from(spans).where(inArray(spans.id, any(spanIds))),
-    db.select({ id: sliceFunctions.id, name: sliceFunctions.name }).from(sliceFunctions).where(inArray(sliceFunctions.sliceId, any(sliceIds))),
-    db.select().from(sliceTies).where(inArray(sliceTies.sliceId, any(sliceIds))),
-  ]);
+  const siteRows = await db.select({ id: sites.id, lat: sites.lat, lon: sites.lon }).from(sites).where(inArray(sites.id, any(siteIds)));
+  const spanRows = await db.select({ id: spans.id, latencyMs: spans.latencyMs, lengthKm: spans.lengthKm })
+    .from(spans).where(inArray(spans.id, any(spanIds)));
+  const fnRows = await db.select({ id: sliceFunctions.id, name: sliceFunctions.name })
+    .from(sliceFunctions).where(inArray(sliceFunctions.sliceId, any(sliceIds)));
+  const tieRows = await db.select().from(sliceTies).where(inArray(sliceTies.sliceId, any(sliceIds)));
   return {
     sites: new Map(siteRows.map((s) => [s.id, { lat: s.lat, lon: s.lon }])),
     spanLatencyMs: new Map(spanRows.map((s) => [s.id, s.latencyMs ?? s.lengthKm * FIBRE_MS_PER_KM])),
@@ -96,6 +95,7 @@ export async function loadWindowNoticeInputs(db: Queryable, windowId: string): P
   const planSlices = [...review.slices, ...await missingSlices(db, review.affected, new Set(review.slices.map((s) => s.slice)))];
   const slicesByTenant = new Map<string, PlanSlice[]>();
   for (const s of planSlices) slicesByTenant.set(s.tenantId, [...(slicesByTenant.get(s.tenantId) ?? []), s]);
-  const [tenantMap, lookups] = await Promise.all([loadTenants(db, [...slicesByTenant.keys()]), loadLookups(db, planSlices)]);
+  const tenantMap = await loadTenants(db, [...slicesByTenant.keys()]);
+  const lookups = await loadLookups(db, planSlices);
   return { window: w, slicesByTenant, tenants: tenantMap, lookups, outageAccepted, afterWindow };
 }

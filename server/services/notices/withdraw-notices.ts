@@ -9,6 +9,8 @@ import { loadTenants } from './notice-inputs';
 import { queueNoticeMail, storeNoticeVersion, type NoticeDeps } from './notice-version';
 
 type NoticeRow = typeof notices.$inferSelect;
+/** What a caller outside the notices service passes for sending (the time comes with the change). */
+export type NoticeMailDeps = Omit<NoticeDeps, 'now'>;
 
 /** Sends (or, for a notice that never went out, only records) the cancellation of one notice. */
 export async function cancelNotice(tx: Queryable, deps: NoticeDeps, row: NoticeRow, actorId: string | null): Promise<'queued' | 'recorded' | 'failed'> {
