@@ -7,6 +7,7 @@ import { viewerTimeZone } from '@/components/time';
 import { detailHref, flashFromParams } from '@/components/windows/form-page';
 import { WindowDetail } from '@/components/windows/window-detail';
 import { WindowPlansEntry } from '@/components/plans/window-plans-entry';
+import { SubmitForSignoff } from '@/components/signoff/submit-for-signoff';
 
 export default function WindowScreen() {
   const params = useLocalSearchParams<{ id: string; saved?: string; reverted?: string; mop?: string }>();
@@ -32,6 +33,7 @@ export default function WindowScreen() {
         onOpenPlans={() => router.push(`/windows/${encodeURIComponent(params.id)}/plans`)}
         onOpenPlan={(planId) => router.push(`/windows/${encodeURIComponent(params.id)}/plans/${encodeURIComponent(planId)}`)}
       />
+      <SubmitForSignoff window={window.data} me={me.data} onOpenSignoff={() => router.push(`/sign-off/${encodeURIComponent(params.id)}`)} />
     </WindowDetail>
   );
 }

@@ -1,0 +1,28 @@
+// One window's sign-off: the phone-sized summary, the decision, and the decisions so far.
+import { useLocalSearchParams, useRouter, type Href } from 'expo-router';
+import { useOtpStatusQuery, useSignoffDecisionMutation, useSignoffSummaryQuery } from '@/hooks/queries/signoff';
+import { ErrorState, LoadingState } from '@/components/screen-states';
+import { SignoffSummaryView } from '@/components/signoff/signoff-summary-view';
+import { viewerTimeZone } from '@/components/time';
+
+export default function SignoffWindowScreen() {
+  const { windowId } = useLocalSearchParams<{ windowId: string }>();
+  const router = useRouter();
+  const summary = useSignoffSummaryQuery(windowId);
+  const decision = useSignoffDecisionMutation(windowId);
+  const otp = useOtpStatusQuery();
+  if (summary.isError && !summary.data) return <ErrorState message={summary.error.message} onRetry={() => summary.refetch()} />;
+  if (!summary.data) return <LoadingState label="Loading the plan summary…" />;
+  return (
+    <SignoffSummaryView
+      summary={summary.data}
+      timeZone={viewerTimeZone()}
+      codeEnrolled={otp.data?.enrolled ?? false}
+      deciding={decision.isPending}
+      decisionError={decision.error}
+      onDecide={(body) => decision.mutate(body)}
+      onOpenPlan={(href) => router.push(href as Href)}
+      onEnrol={() => router.push('/security')}
+    />
+  );
+}

@@ -1,0 +1,63 @@
+// The approver's queue: windows in review, soonest first, each with its risk, approvals so far and my state.
+import type { ReactNode } from 'react';
+import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+import type { SignoffQueueItem } from '@/shared/signoff';
+import { formatWindowRange } from '@/components/time';
+import { RiskPill } from '@/components/signoff/risk-pill';
+import { quorumSentence } from '@/components/signoff/signoff-words';
+import { colors, CONTENT_MAX_WIDTH_PX, radii, space, type } from '@/constants/theme';
+
+type Props = { items: SignoffQueueItem[]; timeZone: string; onOpen: (windowId: string) => void; footer?: ReactNode };
+
+function myLine(item: SignoffQueueItem): string {
+  if (item.me.decided) return 'You have decided';
+  if (item.me.blocked === 'self') return 'Your own work: another approver decides';
+  return 'Waiting for your decision';
+}
+
+function QueueRow({ item, timeZone, onOpen }: { item: SignoffQueueItem; timeZone: string; onOpen: (id: string) => void }) {
+  const waiting = !item.me.decided && item.me.blocked === null;
+  return (
+    <Pressable
+      role="link" accessibilityLabel={`${item.title}, ${myLine(item)}`}
+      testID={`signoff-queue-item-${item.windowId}`} onPress={() => onOpen(item.windowId)}
+      style={({ pressed }) => [styles.row, pressed && styles.pressed]}
+    >
+      <View style={styles.top}>
+        <Text style={styles.title}>{item.title}</Text>
+        <RiskPill risk={item.riskClass} />
+      </View>
+      <Text style={styles.body}>{formatWindowRange(item.startsAt, item.endsAt, timeZone)}</Text>
+      <Text style={styles.meta}>
+        {quorumSentence(item.approvals, item.quorum)}{item.critical ? ' · critical service' : ''}{item.workType ? ` · ${item.workType}` : ''}
+      </Text>
+      <Text style={[styles.meta, waiting && styles.waiting]}>{myLine(item)}</Text>
+    </Pressable>
+  );
+}
+
+export function SignoffQueueList({ items, timeZone, onOpen, footer }: Props) {
+  return (
+    <ScrollView contentContainerStyle={styles.page}>
+      <View style={styles.column}>
+        <Text style={styles.heading} role="heading" aria-level={1}>Sign-off</Text>
+        <Text style={styles.meta}>{items.length} window{items.length === 1 ? '' : 's'} in review · times in {timeZone}</Text>
+        {items.map((item) => <QueueRow key={item.windowId} item={item} timeZone={timeZone} onOpen={onOpen} />)}
+        {footer}
+      </View>
+    </ScrollView>
+  );
+}
+
+const styles = StyleSheet.create({
+  page: { padding: space.lg, alignItems: 'center' },
+  column: { width: '100%', maxWidth: CONTENT_MAX_WIDTH_PX * 0.6, gap: space.md },
+  heading: { ...type.title, color: colors.abyss },
+  row: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, padding: space.lg, gap: space.xs },
+  pressed: { backgroundColor: colors.primarySoft },
+  top: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-start', gap: space.sm },
+  title: { ...type.heading, color: colors.ink, flexShrink: 1 },
+  body: { ...type.body, color: colors.ink },
+  meta: { ...type.caption, color: colors.inkMuted },
+  waiting: { ...type.label, color: colors.primary },
+});

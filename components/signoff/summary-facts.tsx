@@ -1,0 +1,67 @@
+// The facts of a plan an approver weighs: who is moved, what stays unresolved, and the highest risks.
+import { StyleSheet, Text, View } from 'react-native';
+import type { SignoffSummary } from '@/shared/signoff';
+import { Section } from '@/components/windows/section';
+import { RiskPill } from '@/components/signoff/risk-pill';
+import { percent, quorumSentence } from '@/components/signoff/signoff-words';
+import { colors, space, type } from '@/constants/theme';
+
+export function MovesFacts({ summary: s }: { summary: SignoffSummary }) {
+  const tenants = s.tenants.length;
+  return (
+    <Section title="Who is moved" testID="signoff-moves">
+      <Text style={styles.lead} testID="signoff-moves-lead">
+        {s.totals.moving} of {s.totals.affected} affected slice{s.totals.affected === 1 ? '' : 's'} move, for {tenants} tenant{tenants === 1 ? '' : 's'}
+        {s.totals.stays ? ` · ${s.totals.stays} stay put` : ''}
+      </Text>
+      {s.tenants.map((t) => (
+        <View key={t.id} style={styles.line} testID={`signoff-tenant-${t.id}`}>
+          <Text style={styles.body}>{t.name}</Text>
+          <Text style={styles.figure}>{t.moving} of {t.affected} move</Text>
+        </View>
+      ))}
+    </Section>
+  );
+}
+
+export function UnresolvedFacts({ summary: s }: { summary: SignoffSummary }) {
+  if (s.unresolved.length === 0) return null;
+  return (
+    <Section title={`Unresolved (${s.unresolved.length})`} testID="signoff-unresolved">
+      {s.unresolved.map((u) => (
+        <View key={u.slice} style={styles.item}>
+          <Text style={styles.strong}>{u.name} · {u.tenantName}</Text>
+          {u.reason ? <Text style={styles.muted}>{u.reason}</Text> : null}
+          <Text style={u.outageAccepted ? styles.muted : styles.danger}>
+            {u.outageAccepted ? 'The planner accepted an outage for this slice.' : 'No decision recorded for this slice.'}
+          </Text>
+        </View>
+      ))}
+    </Section>
+  );
+}
+
+export function RiskFacts({ summary: s }: { summary: SignoffSummary }) {
+  return (
+    <Section title="Risk" aside={<RiskPill risk={s.riskClass} testID="signoff-risk" />} testID="signoff-risk-section">
+      <Text style={styles.body} testID="signoff-quorum">{quorumSentence(s.approvals, s.quorum)} ({s.riskClass === 'high' ? 'critical service, high risk or unresolved slices' : 'no critical service or high risk'})</Text>
+      {s.highestRisks.map((r) => (
+        <View key={r.slice} style={styles.line}>
+          <Text style={styles.body}>{r.name}{r.unprotected ? ' (no backup path)' : ''}</Text>
+          <Text style={styles.figure}>{r.severity} · {percent(r.failureProbability)}</Text>
+        </View>
+      ))}
+    </Section>
+  );
+}
+
+const styles = StyleSheet.create({
+  lead: { ...type.bodyStrong, color: colors.ink },
+  line: { flexDirection: 'row', justifyContent: 'space-between', gap: space.sm, flexWrap: 'wrap' },
+  item: { gap: space.xxs },
+  body: { ...type.body, color: colors.ink, flexShrink: 1 },
+  strong: { ...type.bodyStrong, color: colors.ink },
+  figure: { ...type.label, color: colors.inkMuted },
+  muted: { ...type.caption, color: colors.inkMuted },
+  danger: { ...type.caption, color: colors.danger },
+});
