@@ -70,6 +70,8 @@ test('a draft window, or one without its impact, cannot be planned (409)', async
 });
 
 test('when the queue does not take the run the answer is 503 and the run is failed with the reason, not left queued', async () => {
+  const ids = async () => (await ctx.pool.query('select id from plans where window_id = $1', [windowId])).rows.map((r) => r.id as string);
+  const earlier = new Set(await ids());
   ctx.queue.state.failing = true;
   try {
     const res = await (await ctx.as('planner'))('post', `/api/windows/${windowId}/plans`).send({});
@@ -78,7 +80,9 @@ test('when the queue does not take the run the answer is 503 and the run is fail
   } finally {
     ctx.queue.state.failing = false;
   }
-  const { rows } = await ctx.pool.query(`select status, error, finished_at from plans where window_id = $1 order by created_at desc limit 1`, [windowId]);
+  const added = (await ids()).filter((x) => !earlier.has(x));
+  expect(added).toHaveLength(1);
+  const { rows } = await ctx.pool.query('select status, error, finished_at from plans where id = $1', [added[0]]);
   expect(rows[0].status).toBe('failed');
   expect(rows[0].error).toContain('connection refused');
   expect(rows[0].finished_at).not.toBeNull();
