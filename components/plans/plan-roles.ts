@@ -4,6 +4,11 @@ import type { WindowStatus } from '@/shared/windows';
 
 type Roles = readonly Me['roles'][number][];
 
+/** Who may read runs (the API's plan readers); engineers and tenants are refused, so they see no entry. */
+export function canReadPlans(roles: Roles): boolean {
+  return roles.some((role) => role === 'planner' || role === 'approver' || role === 'admin');
+}
+
 /** Only planners run, cancel and accept plans. */
 export function canPlan(roles: Roles): boolean {
   return roles.includes('planner');

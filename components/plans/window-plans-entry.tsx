@@ -3,17 +3,17 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { Me } from '@/shared/api';
 import { useWindowPlansQuery } from '@/hooks/queries/plans';
 import { Button } from '@/components/button';
-import { isStaff } from '@/components/calendar/roles';
 import { formatCost } from '@/components/plans/plan-format';
+import { canReadPlans } from '@/components/plans/plan-roles';
 import { Section } from '@/components/windows/section';
 import { colors, space, type } from '@/constants/theme';
 
 type Props = { windowId: string; me: Me; onOpenPlans: () => void; onOpenPlan: (planId: string) => void };
 
 export function WindowPlansEntry({ windowId, me, onOpenPlans, onOpenPlan }: Props) {
-  const staff = isStaff(me.roles);
-  const plans = useWindowPlansQuery(windowId, staff);
-  if (!staff) return null;
+  const reader = canReadPlans(me.roles);
+  const plans = useWindowPlansQuery(windowId, reader);
+  if (!reader) return null;
   const accepted = plans.data?.plans.find((p) => p.accepted) ?? null;
   const count = plans.data?.plans.length ?? 0;
   let summary: string;
