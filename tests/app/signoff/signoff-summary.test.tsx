@@ -1,0 +1,81 @@
+// Sign-off summary on a phone: the facts an approver weighs, the caution for critical services, and a decision that
+// needs a comment and (by policy) a one-time code; server refusals land beside the right field.
+import { fireEvent, screen, waitFor } from '@testing-library/react-native';
+import { SignoffSummaryView } from '@/components/signoff/signoff-summary-view';
+import { useSignoffDecisionMutation } from '@/hooks/queries/signoff';
+import type { SignoffSummary } from '@/shared/signoff';
+import { clearQueries, renderWithQueries, routedFetch } from '../window-test-kit';
+import { summaryFixture } from './signoff-fixtures';
+
+afterEach(clearQueries);
+
+function Harness({ summary, onOpenPlan }: { summary: SignoffSummary; onOpenPlan: (href: string) => void }) {
+  const decision = useSignoffDecisionMutation(summary.window.id);
+  return (
+    <SignoffSummaryView
+      summary={summary} timeZone="Europe/Oslo" codeEnrolled deciding={decision.isPending} decisionError={decision.error}
+      onDecide={(body) => decision.mutate(body)} onOpenPlan={onOpenPlan} onEnrol={jest.fn()}
+    />
+  );
+}
+
+const render = (summary = summaryFixture(), onOpenPlan = jest.fn()) => {
+  renderWithQueries(<Harness summary={summary} onOpenPlan={onOpenPlan} />);
+  return { onOpenPlan };
+};
+
+test('shows what, when (viewer zone), who moves, unresolved slices, risk with the quorum, the caution and earlier decisions', () => {
+  const { onOpenPlan } = render();
+  expect(screen.getByTestId('signoff-title')).toHaveTextContent('Fibre splice, Gullhaven ring');
+  // 21:00 UTC is 22:00 in Oslo in January (CET).
+  expect(screen.getByTestId('signoff-when')).toHaveTextContent(/22:00/);
+  expect(screen.getByTestId('signoff-moves-lead')).toHaveTextContent('3 of 4 affected slices move, for 2 tenants');
+  expect(screen.getByTestId('signoff-tenant-t-2')).toHaveTextContent('Marsh Water1 of 2 move');
+  expect(screen.getByTestId('signoff-unresolved')).toHaveTextContent(/Pump telemetry · Marsh Water/);
+  expect(screen.getByTestId('signoff-risk')).toHaveTextContent('High risk');
+  expect(screen.getByTestId('signoff-quorum')).toHaveTextContent(/^1 of 2 approvals/);
+  expect(screen.getByTestId('signoff-critical-caution')).toBeTruthy();
+  expect(screen.getByTestId('signoff-decision-1-u-ap2')).toHaveTextContent(/Approved by Jonas Weller.*confirmed with a code.*Checked the ring capacity/);
+  fireEvent.press(screen.getByTestId('signoff-open-plan'));
+  expect(onOpenPlan).toHaveBeenCalledWith('/windows/w-1/plans/pl-1');
+});
+
+test('no caution when no critical slice is touched', () => {
+  render(summaryFixture({ criticalSlices: 0, riskClass: 'low' }));
+  expect(screen.queryByTestId('signoff-critical-caution')).toBeNull();
+  expect(screen.getByTestId('signoff-risk')).toHaveTextContent('Low risk');
+});
+
+test('a decision needs a comment and the code before anything is sent; then it posts both', async () => {
+  const { calls } = routedFetch([
+    { method: 'POST', path: /^\/api\/signoff\/w-1\/decision$/, reply: () => ({ status: 200, body: { status: 'cleared', approvals: 2, quorum: 2, notices: { queued: 2, blocked: 0 } } }) },
+  ]);
+  render();
+  fireEvent.press(screen.getByTestId('signoff-approve'));
+  expect(screen.getByTestId('signoff-comment-error')).toHaveTextContent(/comment/);
+  expect(screen.getByTestId('signoff-code-error')).toHaveTextContent(/6 digits/);
+  expect(calls).toHaveLength(0);
+  fireEvent.changeText(screen.getByTestId('signoff-comment'), '  Ring has the headroom.  ');
+  fireEvent.changeText(screen.getByTestId('signoff-code'), '287082');
+  fireEvent.press(screen.getByTestId('signoff-approve'));
+  await waitFor(() => expect(calls).toHaveLength(1));
+  expect(calls[0].body).toEqual({ decision: 'approve', comment: 'Ring has the headroom.', code: '287082' });
+});
+
+test('a replayed code is refused beside the code field; a send-back goes with its comment', async () => {
+  const { calls } = routedFetch([
+    { method: 'POST', path: /^\/api\/signoff\/w-1\/decision$/, reply: () => ({ status: 403, body: { error: { code: 'CODE_REPLAYED', message: 'That code was already used.' } } }) },
+  ]);
+  render();
+  fireEvent.changeText(screen.getByTestId('signoff-comment'), 'Move it to the weekend.');
+  fireEvent.changeText(screen.getByTestId('signoff-code'), '123456');
+  fireEvent.press(screen.getByTestId('signoff-send-back'));
+  expect(await screen.findByTestId('signoff-code-error')).toHaveTextContent('That code was already used.');
+  expect(calls[0].body).toEqual({ decision: 'send-back', comment: 'Move it to the weekend.', code: '123456' });
+});
+
+test('an approver whose own work it is sees why, and no decision form', () => {
+  render(summaryFixture({ me: { decided: false, blocked: 'self' } }));
+  expect(screen.getByTestId('signoff-blocked')).toHaveTextContent(/another approver decides/);
+  expect(screen.queryByTestId('signoff-approve')).toBeNull();
+});
