@@ -2,10 +2,11 @@
 import { Linking, Pressable, StyleSheet, Text, View } from 'react-native';
 import type { OutboxMessage } from '@/shared/outbox';
 import { outboxRawPath } from '@/hooks/queries/outbox';
-import { DetailFrame, Facts, Note, Section } from '@/components/inventory/detail-frame';
+import { DetailFrame, Note, Section } from '@/components/inventory/detail-frame';
 import { formatInstant, viewerTimeZone } from '@/components/time';
 import { colors, radii, space, type } from '@/constants/theme';
 import { formatSizeBytes } from './outbox-format';
+import { OutboxHeaders } from './outbox-headers';
 import { OutboxInvitation } from './outbox-invitation';
 
 export function OutboxMessageView({ message }: { message: OutboxMessage }) {
@@ -18,8 +19,8 @@ export function OutboxMessageView({ message }: { message: OutboxMessage }) {
       backLabel="Outbox"
       testID="outbox-message"
     >
-      <Facts
-        items={[
+      <OutboxHeaders
+        rows={[
           { label: 'From', value: message.from ?? message.envelope.from ?? '—' },
           { label: 'To', value: message.to ?? message.envelope.to.join(', ') },
           ...(message.cc ? [{ label: 'Cc', value: message.cc }] : []),

@@ -21,7 +21,11 @@ export function OutboxRow({ message, selected, viewerZone, onOpen }: Props) {
         <Text style={styles.subject} numberOfLines={1}>
           {message.subject ?? '(no subject)'}
         </Text>
-        {message.hasCalendar ? <Badge label="Invitation" tone="primary" /> : null}
+        {message.hasCalendar ? (
+          <View style={styles.badge}>
+            <Badge label="Invitation" tone="primary" />
+          </View>
+        ) : null}
       </View>
       <Text style={styles.meta} numberOfLines={1}>{`To ${recipientsLine(message.to)}`}</Text>
       <Text style={styles.meta}>{`${formatInstant(message.receivedAt, viewerZone)} · ${formatSizeBytes(message.sizeBytes)}`}</Text>
@@ -44,5 +48,6 @@ const styles = StyleSheet.create({
   pressed: { backgroundColor: colors.surfaceSunken },
   top: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   subject: { ...type.bodyStrong, color: colors.ink, flexShrink: 1 },
+  badge: { flexShrink: 0 },
   meta: { ...type.caption, color: colors.inkMuted },
 });
