@@ -1,8 +1,12 @@
 // Background services the server process runs besides HTTP: the job queue (pg-boss), its workers when
 // WORKER_IN_PROCESS is on, and the local SMTP sink when SMTP_URL=sink. `npm run worker` uses startWorkers alone.
 // OWNERS (this session): plan queue/worker = helper A1; SMTP sink + mail worker = helper B1.
+import type PgBoss from 'pg-boss';
 import type { Db } from '../db/client';
 import type { ServerConfig } from './env';
+import { createJobQueue } from './jobs/boss-queue';
+import { startBoss } from './jobs/boss';
+import { registerPlanWorker } from './jobs/plan-worker';
 import type { JobQueue } from './jobs/queue';
 
 export interface Background {
@@ -11,6 +15,57 @@ export interface Background {
   stop(): Promise<void>;
 }
 
-export async function startBackground(_deps: { db: Db; config: ServerConfig }): Promise<Background> {
-  throw new Error('not wired yet: helper A1 starts pg-boss here, helper B1 the SMTP sink and mail worker');
+export type BackgroundDeps = { db: Db; config: ServerConfig; log?: (line: string) => void };
+
+/** How long stop() lets pg-boss finish its own bookkeeping (running plan threads are stopped before). */
+const BOSS_STOP_TIMEOUT_MS = 10_000;
+
+type Stopper = () => Promise<void>;
+
+/** The job handlers of this process; each returns its stop function. */
+async function registerWorkers(boss: PgBoss, deps: BackgroundDeps): Promise<Stopper[]> {
+  const plans = await registerPlanWorker(boss, { db: deps.db, log: deps.log });
+  const stoppers: Stopper[] = [() => plans.stop()];
+  // ── mail worker (helper B1): registerMailWorker(boss, { db, config, … }) here; push its stop onto `stoppers`.
+  return stoppers;
+}
+
+/** Stops in order: workers first (a running plan goes back to the queue), then pg-boss; runs once. */
+function stopOnce(boss: PgBoss, stoppers: Stopper[]): () => Promise<void> {
+  let stopping: Promise<void> | null = null;
+  return () => {
+    stopping ??= (async () => {
+      for (const stop of stoppers) await stop().catch(() => undefined);
+      await boss.stop({ graceful: true, timeout: BOSS_STOP_TIMEOUT_MS });
+    })();
+    return stopping;
+  };
+}
+
+/** For the API process: the queue routes send to, plus the workers when config.workerInProcess. */
+export async function startBackground(deps: BackgroundDeps): Promise<Background> {
+  const boss = await startBoss(deps.config, { log: deps.log });
+  const stoppers: Stopper[] = [];
+  try {
+    // ── SMTP sink (helper B1): when config.smtp.mode === 'sink', start it here and push its stop onto `stoppers`
+    //    (before the workers, so the mail worker can be given the sink's port).
+    if (deps.config.workerInProcess) stoppers.unshift(...(await registerWorkers(boss, deps)));
+  } catch (err) {
+    await stopOnce(boss, stoppers)();
+    throw err;
+  }
+  return { jobs: createJobQueue(boss), stop: stopOnce(boss, stoppers) };
+}
+
+/** For `npm run worker`: the same job handlers, with no HTTP. */
+export async function startWorkers(deps: BackgroundDeps): Promise<Background> {
+  const boss = await startBoss(deps.config, { log: deps.log });
+  let stoppers: Stopper[] = [];
+  try {
+    stoppers = await registerWorkers(boss, deps);
+  } catch (err) {
+    await stopOnce(boss, stoppers)();
+    throw err;
+  }
+  return { jobs: createJobQueue(boss), stop: stopOnce(boss, stoppers) };
 }

@@ -1,0 +1,26 @@
+// The JobQueue routes and services use, on pg-boss.
+import type PgBoss from 'pg-boss';
+import { QUEUES, type JobQueue, type MailJob } from './queue';
+
+export type PlanRunJobData = { planId: string };
+
+export function createJobQueue(boss: PgBoss): JobQueue {
+  return {
+    async sendPlanRun(planId, { expireInSeconds }) {
+      const data: PlanRunJobData = { planId };
+      const id = await boss.send(QUEUES.planRun, data, { expireInSeconds: Math.max(1, Math.ceil(expireInSeconds)) });
+      // send() answers null only for throttled/singleton sends, which plan runs never use.
+      if (!id) throw new Error(`the job queue did not accept plan run ${planId}`);
+      return id;
+    },
+    async cancelPlanRun(jobId) {
+      // A running job is not interrupted by this: the worker sees the plan row's `cancelled` status and stops.
+      await boss.cancel(QUEUES.planRun, jobId);
+    },
+    async sendMail(job: MailJob) {
+      const id = await boss.send(QUEUES.mail, job);
+      if (!id) throw new Error(`the job queue did not accept the mail "${job.subject}"`);
+      return id;
+    },
+  };
+}

@@ -1,0 +1,65 @@
+// The plan-run worker's reads and writes of `plans` rows. Every write after pick-up is guarded by the attempt
+// number and `running`, so a cancelled run is never overwritten and a superseded attempt cannot write.
+import { and, eq, inArray, sql } from 'drizzle-orm';
+import type { Db } from '../../db/client';
+import { plans } from '../../db/schema';
+import type { PlanProgress, PlanReview } from '../../shared/plans';
+
+export async function selectPlanForRun(db: Db, id: string) {
+  const [row] = await db.select({
+    id: plans.id, windowId: plans.windowId, windowVersion: plans.windowVersion, status: plans.status,
+    settings: plans.settings, createdAt: plans.createdAt, attempts: plans.attempts,
+  }).from(plans).where(eq(plans.id, id));
+  return row ?? null;
+}
+export type PlanRunRow = NonNullable<Awaited<ReturnType<typeof selectPlanForRun>>>;
+
+/** Takes the run: `running`, one more attempt. Null when it is no longer queued or running (cancelled, gone). */
+export async function markRunning(db: Db, id: string, now: Date, progress: PlanProgress): Promise<number | null> {
+  const [row] = await db.update(plans).set({
+    status: 'running', attempts: sqlIncrement(), startedAt: now, progress, error: null, finishedAt: null,
+  }).where(and(eq(plans.id, id), inArray(plans.status, ['queued', 'running'])))
+    .returning({ attempts: plans.attempts });
+  return row?.attempts ?? null;
+}
+
+function sqlIncrement() {
+  // drizzle has no increment helper; the expression keeps it one atomic UPDATE.
+  return sql`${plans.attempts} + 1`;
+}
+
+const ownedBy = (id: string, attempt: number) =>
+  and(eq(plans.id, id), eq(plans.status, 'running'), eq(plans.attempts, attempt));
+
+/** False when the run is no longer this attempt's (cancelled, or taken over after an expiry). */
+export async function writeProgress(db: Db, id: string, attempt: number, progress: PlanProgress): Promise<boolean> {
+  const rows = await db.update(plans).set({ progress }).where(ownedBy(id, attempt)).returning({ id: plans.id });
+  return rows.length > 0;
+}
+
+export async function readRunState(db: Db, id: string): Promise<{ status: string; attempts: number } | null> {
+  const [row] = await db.select({ status: plans.status, attempts: plans.attempts }).from(plans).where(eq(plans.id, id));
+  return row ?? null;
+}
+
+export async function finishDone(
+  db: Db, id: string, attempt: number, out: { review: PlanReview; progress: PlanProgress; now: Date },
+): Promise<boolean> {
+  const rows = await db.update(plans).set({ status: 'done', result: out.review, progress: out.progress, finishedAt: out.now })
+    .where(ownedBy(id, attempt)).returning({ id: plans.id });
+  return rows.length > 0;
+}
+
+/** With an attempt: only that attempt's run. Without (the dead-letter handler): any run still queued or running. */
+export async function finishFailed(db: Db, id: string, attempt: number | null, error: string, now: Date): Promise<boolean> {
+  const where = attempt === null
+    ? and(eq(plans.id, id), inArray(plans.status, ['queued', 'running']))
+    : ownedBy(id, attempt);
+  const rows = await db.update(plans).set({ status: 'failed', error, finishedAt: now }).where(where).returning({ id: plans.id });
+  return rows.length > 0;
+}
+
+/** Back to `queued` while the queue retries the job (a shutdown, or an error that may not happen again). */
+export async function requeue(db: Db, id: string, attempt: number): Promise<void> {
+  await db.update(plans).set({ status: 'queued', progress: null }).where(ownedBy(id, attempt));
+}

@@ -1,0 +1,56 @@
+// Everything a plan run computes on, read from the database: settings, the current inventory with the window,
+// and what overlapping accepted plans reserve. Problems that a retry cannot fix are RunRefusedError.
+import type { Db } from '../../db/client';
+import { planSettingsSchema } from '../../shared/plans';
+import type { ScenarioWindow } from '../../shared/scenario';
+import { loadScenario } from '../services/inventory/load-scenario';
+import { reservationsFor } from '../services/plans/reservations';
+import { WindowNotFoundError } from '../services/windows/errors';
+import { loadWindow, type LoadedWindow } from '../services/windows/window-view';
+import type { PlanRunRow } from './plan-rows';
+import type { PlanThreadInput } from './plan-thread-protocol';
+
+/** The run cannot succeed as requested; its message is shown to the planner as the run's error. */
+export class RunRefusedError extends Error {}
+
+/** The window as the scenario format writes it, which is what computePlan looks the window up in. */
+export function scenarioWindowOf(w: LoadedWindow): ScenarioWindow {
+  const down = (kind: 'site' | 'span') => w.elements.filter((e) => e.kind === kind && e.effect === 'down').map((e) => e.id);
+  return {
+    id: w.id, title: w.title, start: w.startsAt.toISOString(), end: w.endsAt.toISOString(),
+    down: { sites: down('site'), spans: down('span') },
+    reduced: w.elements.filter((e) => e.effect === 'reduced').map((e) =>
+      (e.kind === 'site' ? { site: e.id, fraction: e.fraction ?? 1 } : { span: e.id, fraction: e.fraction ?? 1 })),
+    ...(w.workType ? { workType: w.workType } : {}),
+  };
+}
+
+async function loadCurrentWindow(db: Db, plan: PlanRunRow): Promise<LoadedWindow> {
+  let w: LoadedWindow;
+  try {
+    w = await loadWindow(db, plan.windowId, null);
+  } catch (err) {
+    if (err instanceof WindowNotFoundError) throw new RunRefusedError('The window no longer exists.');
+    throw err;
+  }
+  if (w.version !== plan.windowVersion) {
+    throw new RunRefusedError(
+      `The window was edited after this run was requested (version ${plan.windowVersion}, now ${w.version}); run the plan again.`,
+    );
+  }
+  return w;
+}
+
+export async function loadPlanInput(db: Db, plan: PlanRunRow): Promise<PlanThreadInput> {
+  const settings = planSettingsSchema.safeParse(plan.settings);
+  if (!settings.success) {
+    throw new RunRefusedError(`The run's settings are not valid: ${settings.error.issues.map((i) => i.message).join('; ')}`);
+  }
+  const w = await loadCurrentWindow(db, plan);
+  const scenario = await loadScenario(db);
+  const { reservations, reservedFor } = await reservationsFor(db, w.id);
+  return {
+    scenario: { ...scenario, windows: [scenarioWindowOf(w)] },
+    windowId: w.id, settings: settings.data, reservations, reservedFor,
+  };
+}
