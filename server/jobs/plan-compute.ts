@@ -1,7 +1,6 @@
 // One plan run's computation, without the database: the DE re-mapper (serial or islands), the greedy and — on
 // small windows — the exact reference for the same window, and the review built from them. A1's worker runs it
 // in a worker thread and stores what it returns; progress goes out through the callback.
-import { exactSolver } from '../../planner/exact/exact-plan';
 import { InvalidOptionError } from '../../planner/errors';
 import { buildInventory, compileWindow } from '../../planner/model/build-inventory';
 import type { Inventory, PlanResult, Reservation, WindowSpec } from '../../planner/model/types';
@@ -67,7 +66,7 @@ export async function computePlan(input: PlanComputeInput, onProgress: PlanProgr
   });
   emit('references');
   const greedy: ReferenceResult = await greedyReference(inv, window, baseOptions(input));
-  const exact: ReferenceResult = await exactReference(inv, window, result, { ...baseOptions(input), exact: exactSolver });
+  const exact: ReferenceResult = await exactReference(inv, window, result, baseOptions(input));
   emit('finishing');
   const names = new Map(input.scenario.slices.map((s) => [s.id, s.name]));
   return buildReview(inv, window, result, {
