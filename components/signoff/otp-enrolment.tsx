@@ -10,6 +10,9 @@ import { colors, radii, space, type } from '@/constants/theme';
 /** Big enough for a phone camera held at arm's length across a desk. */
 const QR_SIZE_PX = 220;
 
+/** Blocks of four, as authenticator apps print keys; they ignore the spaces when it is typed in. */
+export const groupKey = (keyBase32: string) => keyBase32.replace(/(.{4})(?=.)/g, '$1 ');
+
 type Props = {
   status: OtpStatus;
   enrolment: OtpEnrolment | null;
@@ -42,7 +45,7 @@ function Pending({ enrolment, confirming, onConfirm }: { enrolment: OtpEnrolment
         <SvgXml xml={enrolment.qrSvg} width={QR_SIZE_PX} height={QR_SIZE_PX} />
       </View>
       <Text style={styles.label}>Key</Text>
-      <Text style={styles.key} selectable testID="otp-key">{enrolment.keyBase32}</Text>
+      <Text style={styles.key} selectable testID="otp-key">{groupKey(enrolment.keyBase32)}</Text>
       <Text style={styles.muted}>Time-based, 6 digits, every 30 seconds (SHA-1): the usual defaults.</Text>
       <Text style={styles.body}>2. Enter the code the app shows now.</Text>
       <CodeEntry label="Code from the app" action="Confirm" busy={confirming} onSubmit={onConfirm} testID="otp-confirm" />

@@ -92,7 +92,7 @@ async function enrol(page: Page): Promise<string> {
   await page.goto(`${BASE_URL}/security`);
   await page.getByTestId('otp-start').click();
   await page.getByTestId('otp-qr').locator('svg').first().waitFor({ timeout: 30_000 });
-  const key = (await page.getByTestId('otp-key').innerText()).trim();
+  const key = (await page.getByTestId('otp-key').innerText()).replace(/\s+/g, '');
   await page.screenshot({ path: path.join(SHOTS, 'signoff-enrol-phone.png'), fullPage: true });
   await page.getByTestId('otp-confirm-code').fill(totp(key, Date.now()));
   await page.getByTestId('otp-confirm-submit').click();
@@ -149,6 +149,7 @@ test('an approver enrols for one-time codes, opens the queue on a phone and appr
   await page.getByTestId('signoff-approve').click();
   await page.getByTestId(`signoff-decision-1-${APPROVER_ID}`).waitFor({ timeout: 30_000 });
   expect(await page.getByTestId(`signoff-decision-1-${APPROVER_ID}`).innerText()).toContain('confirmed with a code');
+  expect(await page.getByTestId('signoff-blocked').innerText()).toContain('You have decided');
   expect(await page.getByTestId('signoff-status').innerText()).toMatch(/Cleared|Notified/);
   await page.screenshot({ path: path.join(SHOTS, 'signoff-approved-phone.png'), fullPage: true });
 

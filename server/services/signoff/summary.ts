@@ -17,9 +17,10 @@ type My = SignoffSummary['me'];
 
 async function myState(db: Queryable, ctx: SignoffContext, user: Me): Promise<My> {
   const decided = await hasDecided(db, ctx.window.id, ctx.window.reviewRound, user.id);
+  // Having decided says more to the approver than the window having moved on since.
   const blocked: My['blocked'] = !user.roles.includes('approver') ? 'role'
-    : ctx.window.status !== 'in-review' ? 'closed'
-      : decided ? 'decided'
+    : decided ? 'decided'
+      : ctx.window.status !== 'in-review' ? 'closed'
         : isOwnWork(user.id, ctx) ? 'self' : null;
   return { decided, blocked };
 }

@@ -147,3 +147,34 @@ test('roles: only planners submit, only approvers decide, tenants get 404 on eve
   expect((await (await ctx.as('engineer'))('get', '/api/signoff/queue')).status).toBe(403);
   expect(await windowStatus(ctx, windowId)).toBe('in-review');
 });
+
+test('the summary and the queue: tenants and moving slices from the plan, unresolved slices, risks, links, decisions so far', async () => {
+  const { windowId, planId, review } = await insertPlannedWindow(ctx, { key: 'summary', critical: true, unresolved: true, severity: 'critical' });
+  await submit(windowId);
+  const approver = await ctx.as('approver');
+  await approver('post', `/api/signoff/${windowId}/decision`).send(approve('First look: fine.'));
+  const res = await (await ctx.as('approver2'))('get', `/api/signoff/${windowId}`);
+  expect(res.status).toBe(200);
+  const s = res.body;
+  expect(s.window).toMatchObject({ id: windowId, status: 'in-review', round: 1, workType: 'fibre splice', owner: { id: ctx.users.engineer.id } });
+  expect(s.window.elements).toEqual([{ kind: 'site', id: `${ctx.prefix}-A`, name: 'Site A', effect: 'down', fraction: null }]);
+  expect(s.plan).toMatchObject({ id: planId, href: `/windows/${windowId}/plans/${planId}`, acceptedBy: { id: ctx.users.planner.id } });
+  // Own tenant: s1 moves, s3 stays, s4 unresolved; the other tenant: s2 moves.
+  expect(s.tenants.map((t: { id: string; affected: number; moving: number }) => [t.id, t.affected, t.moving]).sort())
+    .toEqual([[`${ctx.prefix}-other`, 1, 1], [ctx.tenantId, 3, 1]].sort());
+  expect(s.totals).toEqual({ affected: 4, moving: 2, stays: 1, unresolved: 1 });
+  expect(s.unresolved).toEqual([expect.objectContaining({ slice: review.slices[3].slice, outageAccepted: true })]);
+  expect(s.riskClass).toBe('high');
+  expect(s.highestRisks[0]).toMatchObject({ slice: review.slices[0].slice, severity: 'critical' });
+  expect(s.criticalSlices).toBe(1);
+  expect(s.mop).toBeNull();
+  expect([s.quorum, s.approvals, s.requireCode]).toEqual([2, 1, false]);
+  expect(s.decisions).toEqual([expect.objectContaining({ round: 1, approver: { id: ctx.users.approver.id, name: `User ${ctx.users.approver.id}` }, decision: 'approve', comment: 'First look: fine.' })]);
+  expect(s.me).toEqual({ decided: false, blocked: null });
+
+  const queue = (await approver('get', '/api/signoff/queue')).body;
+  const item = queue.windows.find((w: { windowId: string }) => w.windowId === windowId);
+  expect(item).toMatchObject({ riskClass: 'high', critical: true, quorum: 2, approvals: 1, me: { decided: true, blocked: 'decided' } });
+  const adminQueue = (await (await ctx.as('admin'))('get', '/api/signoff/queue')).body;
+  expect(adminQueue.windows.find((w: { windowId: string }) => w.windowId === windowId).me.blocked).toBe('role');
+});
