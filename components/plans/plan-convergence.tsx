@@ -39,7 +39,6 @@ export function PlanConvergence({ trace }: { trace: PlanReview['trace'] }) {
         hideDataPoints
         disableScroll
         yAxisTextStyle={styles.axisText}
-        xAxisLabelTextStyle={styles.axisText}
         rulesColor={colors.border}
         xAxisColor={colors.border}
         yAxisColor={MOVE_COST_COLOUR}
@@ -48,7 +47,9 @@ export function PlanConvergence({ trace }: { trace: PlanReview['trace'] }) {
         <Key colour={MOVE_COST_COLOUR} label="Move cost (left axis)" />
         <Key colour={UNRESOLVED_COLOUR} label="Unresolved weight (right axis)" />
       </View>
-      <Text style={styles.muted}>Rounds of the search along the bottom; {last.evaluations} plans tried in all.</Text>
+      <Text style={styles.muted} testID="plan-convergence-caption">
+        Rounds {trace[0].generation} to {last.generation} of the search along the bottom; {last.evaluations} plans tried in all.
+      </Text>
     </View>
   );
 }

@@ -30,7 +30,7 @@ export function planMapElements(slices: readonly PlanSlice[], selectedSlice: str
   return { before: asElements(before), after: asElements(after) };
 }
 
-export type ChartPoint = { value: number; label?: string };
+export type ChartPoint = { value: number };
 
 /** At most this many points reach the chart: a long run's every generation would only blur the line. */
 export const CHART_MAX_POINTS = 40;
@@ -41,10 +41,9 @@ export function convergenceSeries(trace: PlanReview['trace'], maxPoints = CHART_
   const step = Math.max(1, Math.ceil(trace.length / maxPoints));
   const picked = trace.filter((_, i) => i % step === 0);
   if (picked[picked.length - 1] !== trace[trace.length - 1]) picked.push(trace[trace.length - 1]);
-  const labelEvery = Math.max(1, Math.ceil(picked.length / 5));
-  const label = (i: number, generation: number) => (i % labelEvery === 0 || i === picked.length - 1 ? String(generation) : undefined);
+  // No per-point labels: at phone widths the chart cuts them to a character; the caption gives the range instead.
   return {
-    moveCost: picked.map((p, i) => ({ value: p.best.moveCost, label: label(i, p.generation) })),
+    moveCost: picked.map((p) => ({ value: p.best.moveCost })),
     unresolved: picked.map((p) => ({ value: p.best.unresolvedWeight })),
   };
 }

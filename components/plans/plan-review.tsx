@@ -38,9 +38,9 @@ export function PlanReviewView({ plan, review, canAct, wide, onAdjust, onResched
       <PlanSliceOutcomes slices={review.slices} names={names} selected={selected} onSelect={setSelected} />
     </Section>
   );
-  const mapAndQuality = (
+  const map = <Section title="Map"><PlanMap slices={review.slices} selectedSlice={selected} /></Section>;
+  const quality = (
     <>
-      <Section title="Map"><PlanMap slices={review.slices} selectedSlice={selected} /></Section>
       <Section title="How the search went"><PlanConvergence trace={review.trace} /></Section>
       <Section title="Compared with the references"><PlanReferences review={review} /></Section>
     </>
@@ -75,10 +75,11 @@ export function PlanReviewView({ plan, review, canAct, wide, onAdjust, onResched
       {wide ? (
         <View style={styles.columns}>
           <View style={styles.column}>{outcomes}{stepsAndRisk}</View>
-          <View style={styles.column}>{mapAndQuality}</View>
+          <View style={styles.column}>{map}{quality}</View>
         </View>
       ) : (
-        <>{outcomes}{mapAndQuality}{stepsAndRisk}</>
+        // Phones: the map first, so the change reads at a glance before the long per-slice list.
+        <>{map}{outcomes}{quality}{stepsAndRisk}</>
       )}
     </View>
   );
