@@ -12,4 +12,4 @@ export function QueueFooter({ isAdmin, onOpenCodes, onOpenPolicy }: { isAdmin: b
   );
 }
 
-const styles = StyleSheet.create({ row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, paddingTop: space.md } });
+const styles = StyleSheet.create({ row: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'center', gap: space.sm, padding: space.lg } });
