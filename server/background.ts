@@ -8,6 +8,8 @@ import { createJobQueue } from './jobs/boss-queue';
 import { startBoss } from './jobs/boss';
 import { registerPlanWorker } from './jobs/plan-worker';
 import type { JobQueue } from './jobs/queue';
+import { startSinkIfConfigured } from './mail/start-sink';
+import { registerMailWorker } from './mail/worker';
 
 export interface Background {
   jobs: JobQueue;
@@ -23,10 +25,12 @@ const BOSS_STOP_TIMEOUT_MS = 10_000;
 type Stopper = () => Promise<void>;
 
 /** The job handlers of this process; each returns its stop function. */
-async function registerWorkers(boss: PgBoss, deps: BackgroundDeps): Promise<Stopper[]> {
+async function registerWorkers(boss: PgBoss, deps: BackgroundDeps, sinkPort?: number): Promise<Stopper[]> {
   const plans = await registerPlanWorker(boss, { db: deps.db, log: deps.log });
   const stoppers: Stopper[] = [() => plans.stop()];
-  // ── mail worker (helper B1): registerMailWorker(boss, { db, config, … }) here; push its stop onto `stoppers`.
+  // Mail (helper B1): to the in-process sink's actual port when there is one, else as configured.
+  const mail = await registerMailWorker(boss, { db: deps.db, config: deps.config, sinkPort });
+  stoppers.push(() => mail.stop());
   return stoppers;
 }
 
@@ -47,9 +51,10 @@ export async function startBackground(deps: BackgroundDeps): Promise<Background>
   const boss = await startBoss(deps.config, { log: deps.log });
   const stoppers: Stopper[] = [];
   try {
-    // ── SMTP sink (helper B1): when config.smtp.mode === 'sink', start it here and push its stop onto `stoppers`
-    //    (before the workers, so the mail worker can be given the sink's port).
-    if (deps.config.workerInProcess) stoppers.unshift(...(await registerWorkers(boss, deps)));
+    // SMTP sink (helper B1): before the workers, so the mail worker is given the port the sink got.
+    const sink = await startSinkIfConfigured(deps.config, deps.db, deps.log);
+    if (sink) stoppers.push(() => sink.stop());
+    if (deps.config.workerInProcess) stoppers.unshift(...(await registerWorkers(boss, deps, sink?.port)));
   } catch (err) {
     await stopOnce(boss, stoppers)();
     throw err;

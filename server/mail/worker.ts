@@ -19,8 +19,14 @@ export type MailWorkerDeps = {
   now?: () => Date;
 };
 
-/** Registers the workers for QUEUES.mail and QUEUES.mailDead; returns their worker ids. */
-export async function registerMailWorker(boss: PgBoss, deps: MailWorkerDeps): Promise<string[]> {
+export interface MailWorker {
+  workerIds: string[];
+  /** stops taking mail jobs (a send in progress finishes) and closes the transport */
+  stop(): Promise<void>;
+}
+
+/** Registers the workers for QUEUES.mail and QUEUES.mailDead. */
+export async function registerMailWorker(boss: PgBoss, deps: MailWorkerDeps): Promise<MailWorker> {
   const transport = createMailTransport(deps.config, { sinkPort: deps.sinkPort });
   const now = deps.now ?? (() => new Date());
   const options = { pollingIntervalSeconds: deps.pollingIntervalSeconds ?? 2 };
@@ -43,7 +49,13 @@ export async function registerMailWorker(boss: PgBoss, deps: MailWorkerDeps): Pr
       if (job.data.noticeId) await markNoticeFailed(deps.db, job.data.noticeId, now());
     }
   });
-  return [sendId, deadId];
+  return {
+    workerIds: [sendId, deadId],
+    async stop() {
+      for (const id of [sendId, deadId]) await boss.offWork({ id }).catch(() => undefined);
+      transport.close();
+    },
+  };
 }
 
 /** One line a person can act on: nodemailer's error code, the server's reply, or the message. */
