@@ -147,3 +147,14 @@ export function SignoffIcon({ size = 24, color = colors.ink }: IconProps) {
     </Svg>
   );
 }
+
+/** Notices: a folded letter with a bell-shaped mark, what a tenant is told about planned work. */
+export function NoticeIcon({ size = 24, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Rect x={3.5} y={5} width={17} height={14} rx={1.8} stroke={color} strokeWidth={1.8} />
+      <Path d="M12 8.5 C10 8.5, 9.2 10, 9.2 11.5 V13.5 L8 15 H16 L14.8 13.5 V11.5 C14.8 10, 14 8.5, 12 8.5 Z" stroke={color} strokeWidth={1.6} strokeLinejoin="round" />
+      <Path d="M11 16.6 H13" stroke={color} strokeWidth={1.6} strokeLinecap="round" />
+    </Svg>
+  );
+}

@@ -2,7 +2,7 @@
 import type { ComponentType } from 'react';
 import type { Href } from 'expo-router';
 import type { RoleName } from '@/shared/api';
-import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, OutboxIcon, OverviewIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
+import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, NoticeIcon, OutboxIcon, OverviewIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
 
 export type NavArea = {
   key: string;
@@ -45,6 +45,11 @@ export const NAV_AREAS: readonly NavArea[] = [
     key: 'sign-off', label: 'Sign-off', href: '/sign-off', matches: (pathname) => pathname.startsWith('/sign-off') || pathname.startsWith('/security'),
     // Approvers decide; admins read the queue and set the sign-off policy.
     Icon: SignoffIcon, roles: ['approver', 'admin'],
+  },
+  {
+    key: 'notices', label: 'Notices', href: '/notices', matches: (pathname) => pathname.startsWith('/notices'),
+    // The tenant portal; staff follow notices on each window's page.
+    Icon: NoticeIcon, roles: ['tenant'],
   },
 ];
 

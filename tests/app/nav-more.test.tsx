@@ -70,10 +70,12 @@ test('More reads as selected while inside an area it holds, and the backdrop clo
   expect(mockPush).not.toHaveBeenCalled();
 });
 
-test('a tenant user has five areas: all fit the bar and there is no More', () => {
+test('a tenant user has six areas: Notices takes a place in the bar, the rest wait behind More', () => {
   renderShell(tenant);
-  expect(tabKeys()).toHaveLength(5);
-  expect(screen.queryByTestId('nav-more')).toBeNull();
+  expect(tabKeys()).toEqual(['nav-overview', 'nav-notices', 'nav-calendar', 'nav-network', 'nav-more']);
+  fireEvent.press(screen.getByTestId('nav-more'));
+  const sheet = screen.getByTestId('nav-more-sheet');
+  for (const key of ['map', 'slices']) expect(within(sheet).getByTestId(`nav-${key}`)).toBeTruthy();
 });
 
 test('the side rail on a wide screen keeps every area and has no More', () => {

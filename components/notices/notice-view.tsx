@@ -1,0 +1,91 @@
+// A notice as its tenant reads it: what, when (tenant's zone and UTC), effect, each slice's moves, contact,
+// the acknowledgement, and the invitation to add to a calendar again.
+import { Linking, StyleSheet, Text, View } from 'react-native';
+import type { Notice } from '@/shared/notices';
+import { Button } from '@/components/button';
+import { CriticalCaution } from '@/components/critical-caution';
+import { Badge } from '@/components/inventory/badges';
+import { DetailFrame, Facts, Note, Section } from '@/components/inventory/detail-frame';
+import { formatInstant } from '@/components/time';
+import { colors, radii, space, type } from '@/constants/theme';
+import { canAcknowledge, EFFECT_LABEL } from './notice-format';
+import { NoticeSliceCard } from './notice-slice-card';
+
+type Props = {
+  notice: Notice;
+  icsHref: string;
+  onAcknowledge: () => void;
+  acknowledging: boolean;
+  error: string | null;
+};
+
+function Acknowledgement({ notice, onAcknowledge, acknowledging, error }: Omit<Props, 'icsHref'>) {
+  if (notice.content.cancelled) return <Note>This work was withdrawn; there is nothing to acknowledge.</Note>;
+  if (notice.acknowledgedAt) {
+    const who = notice.acknowledgedByName ? ` by ${notice.acknowledgedByName}` : '';
+    return <Text style={styles.acked} testID="notice-acknowledged">{`Acknowledged${who} on ${formatInstant(notice.acknowledgedAt, notice.content.timeZone)}`}</Text>;
+  }
+  return (
+    <View style={styles.ackBox}>
+      <Button label="Acknowledge this notice" onPress={onAcknowledge} busy={acknowledging} disabled={!canAcknowledge(notice)} testID="notice-acknowledge" />
+      {error ? <Text style={styles.error} role="alert">{error}</Text> : null}
+    </View>
+  );
+}
+
+export function NoticeView(props: Props) {
+  const { notice, icsHref } = props;
+  const c = notice.content;
+  const critical = c.slices.some((s) => s.critical);
+  return (
+    <DetailFrame
+      kicker={notice.sequence > 0 ? `Notice · update ${notice.sequence}` : 'Notice'}
+      title={c.cancelled ? `Cancelled: ${c.summary}` : c.summary}
+      backHref="/notices"
+      backLabel="Planned work"
+      testID="notice-view"
+      badges={<Badge label={c.cancelled ? 'Cancelled' : EFFECT_LABEL[c.effect]} tone={c.effect === 'interruption' && !c.cancelled ? 'danger' : 'primary'} />}
+    >
+      <Facts items={[{ label: 'When (your zone)', value: c.whenLocal }, { label: 'When (UTC)', value: c.whenUtc }]} />
+      {c.cancelled ? null : (
+        <>
+          <Text style={[styles.effect, c.effect === 'interruption' && styles.interruption]} testID="notice-effect">{c.effectText}</Text>
+          {critical ? (
+            <CriticalCaution testID="notice-critical-caution" title="Critical services are affected"
+              lead="Some of the slices below carry critical services. Before the work:" />
+          ) : null}
+          <Section title="Your slices" testID="notice-slices">
+            {c.slices.map((s) => <NoticeSliceCard key={s.slice} slice={s} />)}
+            <Note>{c.afterWork}</Note>
+          </Section>
+        </>
+      )}
+      {c.leadOverrideReason ? (
+        <View style={styles.override} testID="notice-override">
+          <Text style={styles.overrideText}>{`Sent with less than the agreed ${c.leadDays} days of notice. Reason: ${c.leadOverrideReason}`}</Text>
+        </View>
+      ) : null}
+      <Section title="Acknowledgement">
+        <Acknowledgement {...props} />
+      </Section>
+      <Section title="Calendar">
+        <Button label={c.cancelled ? 'Download the cancellation (.ics)' : 'Add to calendar (.ics)'} variant="quiet"
+          onPress={() => void Linking.openURL(icsHref)} testID="notice-ics" />
+      </Section>
+      <Section title="Questions">
+        <Text style={styles.contact} selectable>{`${c.contact.name}: ${c.contact.email}`}</Text>
+      </Section>
+    </DetailFrame>
+  );
+}
+
+const styles = StyleSheet.create({
+  effect: { ...type.bodyStrong, color: colors.ink },
+  interruption: { color: colors.danger },
+  ackBox: { gap: space.sm, alignItems: 'flex-start' },
+  acked: { ...type.bodyStrong, color: colors.primary },
+  error: { ...type.body, color: colors.danger },
+  override: { padding: space.md, borderRadius: radii.md, backgroundColor: colors.dangerSoft },
+  overrideText: { ...type.body, color: colors.ink },
+  contact: { ...type.body, color: colors.ink },
+});

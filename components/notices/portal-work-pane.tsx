@@ -1,0 +1,45 @@
+// The tenant portal's list side: a title, the zone times are shown in, then the list or its state.
+import type { ReactNode } from 'react';
+import { ScrollView, StyleSheet, Text, View } from 'react-native';
+import type { PortalWork } from '@/shared/notices';
+import { zoneName } from '@/components/time';
+import { colors, space, type } from '@/constants/theme';
+import { PortalWorkRow } from './portal-work-row';
+
+export function PortalWorkPane({ children }: { children: ReactNode }) {
+  return (
+    <View style={styles.pane} testID="notices-pane">
+      <Text style={styles.title} role="heading" aria-level={1}>Planned work</Text>
+      <Text style={styles.hint}>Maintenance that touches your slices, and the notices we sent you about it.</Text>
+      <View style={styles.body}>{children}</View>
+    </View>
+  );
+}
+
+type ListProps = { work: PortalWork; selectedId: string | null; onOpen: (noticeId: string) => void };
+
+export function PortalWorkList({ work, selectedId, onOpen }: ListProps) {
+  return (
+    <ScrollView contentContainerStyle={styles.list} testID="notices-list">
+      <Text style={styles.zone}>{`Times in ${zoneName(new Date(), work.timeZone)}, the network's zone`}</Text>
+      {work.items.map((item) => (
+        <PortalWorkRow key={item.windowId} item={item} timeZone={work.timeZone} selected={item.notice?.id === selectedId} onOpen={onOpen} />
+      ))}
+    </ScrollView>
+  );
+}
+
+/** The notice id in a portal path (/notices/ntc-…), or null on the list itself. */
+export function noticeIdFromPath(pathname: string): string | null {
+  const match = /^\/notices\/([^/]+)/.exec(pathname);
+  return match ? decodeURIComponent(match[1]) : null;
+}
+
+const styles = StyleSheet.create({
+  pane: { flex: 1, gap: space.sm, padding: space.md },
+  title: { ...type.display, color: colors.abyss },
+  hint: { ...type.body, color: colors.inkMuted },
+  body: { flex: 1 },
+  list: { gap: space.sm, paddingBottom: space.xl },
+  zone: { ...type.caption, color: colors.inkMuted },
+});
