@@ -45,6 +45,9 @@ export function PickChips({ label, hint, options, picked, onChange, testID, erro
         />
       ) : null}
       {options.length === 0 ? <Text style={styles.hint}>Nothing to choose from.</Text> : null}
+      {filter.trim() === '' && shown.length < options.length ? (
+        <Text style={styles.hint}>Showing {shown.length} of {options.length}; type to find the others.</Text>
+      ) : null}
       <View style={styles.row}>
         {shown.map((option) => {
           const on = picked.includes(option.id);

@@ -1,0 +1,55 @@
+// Pure helpers of the plan screens: paths read as the sites they pass, what the map draws, the chart's thinning,
+// the form's options, and when a plan may be accepted.
+import { elementNames, siteChain } from '@/components/plans/use-element-names';
+import { convergenceSeries, formatGap, outagesAllTicked, planMapElements } from '@/components/plans/plan-review-data';
+import { functionOptionsFrom } from '@/components/plans/use-run-options';
+import { settingsSummary } from '@/components/plans/plan-format';
+import { networkMap, objective, plan, review, slices } from './plan-fixtures';
+
+test('a path reads as the sites it passes in order, whichever way its spans are stored', () => {
+  const names = elementNames(networkMap as Parameters<typeof elementNames>[0]);
+  expect(names.path(['sp-2', 'sp-3'])).toBe('Aldmouth → Brackwell → Corran');
+  expect(names.path(['sp-3', 'sp-2'])).toBe('Corran → Brackwell → Aldmouth');
+  expect(names.path(['sp-1', 'sp-4'])).toBe('Aldmouth → Corran → Dunsey');
+  expect(names.path([])).toBe('(inside one site)');
+  // Unknown spans fall back to their ids rather than inventing a route.
+  expect(names.path(['sp-1', 'sp-99'])).toBe('Aldmouth – Corran, sp-99');
+  expect(siteChain([{ a: 'x', b: 'y' }, { a: 'p', b: 'q' }])).toBeNull();
+  expect(names.site('nowhere')).toBe('nowhere');
+});
+
+test('the map shows only what changes, or one slice’s whole placement when it is chosen', () => {
+  const all = planMapElements(slices, null);
+  expect(new Set(all.before.sites)).toEqual(new Set(['edge-a']));
+  expect(new Set(all.after.sites)).toEqual(new Set(['agg-b']));
+  expect(new Set(all.before.spans)).toEqual(new Set(['sp-1']));
+  expect(new Set(all.after.spans)).toEqual(new Set(['sp-2', 'sp-3', 'sp-4']));
+  const one = planMapElements(slices, 'sl-port');
+  expect(one.after.spans.sort()).toEqual(['sp-2', 'sp-3']);
+  expect(planMapElements(slices, 'sl-plc').after).toEqual({ sites: [], spans: [] });
+});
+
+test('the convergence series is thinned to at most the limit and always ends on the last generation', () => {
+  const trace = Array.from({ length: 101 }, (_, g) => ({ generation: g, evaluations: g * 10, feasible: true, best: objective({ moveCost: 200 - g, unresolvedWeight: g < 50 ? 3 : 0 }) }));
+  const series = convergenceSeries(trace, 40);
+  expect(series.moveCost.length).toBeLessThanOrEqual(41);
+  expect(series.moveCost[0].value).toBe(200);
+  expect(series.moveCost[series.moveCost.length - 1].value).toBe(100);
+  expect(series.unresolved[series.unresolved.length - 1].value).toBe(0);
+  expect(convergenceSeries([])).toEqual({ moveCost: [], unresolved: [] });
+});
+
+test('accepting needs every unresolved slice ticked; gaps read as percentages', () => {
+  expect(outagesAllTicked(review(), [])).toBe(false);
+  expect(outagesAllTicked(review(), ['sl-plc'])).toBe(true);
+  expect(outagesAllTicked(review({ slices: slices.filter((s) => s.outcome !== 'unresolved') }), [])).toBe(true);
+  expect(formatGap(0.042)).toBe('4.2 %');
+  expect(formatGap(0.0012)).toBe('0.12 %');
+  expect(formatGap(null)).toBeNull();
+});
+
+test('function options name the site each function sits on; the settings summary is one line', () => {
+  const options = functionOptionsFrom([{ slice: 's', sites: { 'f-2': 'agg-b', 'f-1': 'edge-a' } }], (id) => id.toUpperCase());
+  expect(options).toEqual([{ id: 'f-1', label: 'f-1 · EDGE-A' }, { id: 'f-2', label: 'f-2 · AGG-B' }]);
+  expect(settingsSummary(plan().settings)).toBe('Serial · seed 7 · 40 candidates · 20 s · back after · 1 site left out');
+});
