@@ -55,9 +55,13 @@ export async function startMailSink(
   });
   server.on('error', (err) => log('server error', err));
   const address = await new Promise<AddressInfo>((resolve, reject) => {
-    server.server.once('error', reject);
+    const failed = (err: NodeJS.ErrnoException) => reject(err.code === 'EADDRINUSE'
+      ? new Error(`SMTP sink: port ${requestedPort} on ${SINK_HOST} is in use (another Slackwater running?). `
+        + 'Set SMTP_SINK_PORT to a free port, or 0 for any free port.')
+      : err);
+    server.server.once('error', failed);
     server.listen(requestedPort, SINK_HOST, () => {
-      server.server.off('error', reject);
+      server.server.off('error', failed);
       resolve(server.server.address() as AddressInfo);
     });
   });

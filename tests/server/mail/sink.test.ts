@@ -63,3 +63,8 @@ test('a message over the size limit is refused with 552 and not stored', async (
 test('the sink is bound to loopback only', () => {
   expect(sink.host).toBe('127.0.0.1');
 });
+
+test('a port already in use fails with a message that names SMTP_SINK_PORT', async () => {
+  const taken = { smtp: { mode: 'sink' as const, sinkPort: sink.port } };
+  await expect(startMailSink(taken, db, { log: () => undefined })).rejects.toThrow(/port \d+ on 127\.0\.0\.1 is in use.*SMTP_SINK_PORT/);
+});
