@@ -13,6 +13,8 @@ type Props = {
   onChange: (picked: string[]) => void;
   testID: string;
   error?: string;
+  /** the options are still being fetched */
+  loading?: boolean;
 };
 
 /** Past this many options a filter field appears, so a phone never scrolls through every site. */
@@ -20,7 +22,7 @@ const FILTER_FROM_OPTIONS = 12;
 /** Chips shown while nothing is typed; the picked ones always show. */
 const UNFILTERED_SHOWN = 12;
 
-export function PickChips({ label, hint, options, picked, onChange, testID, error }: Props) {
+export function PickChips({ label, hint, options, picked, onChange, testID, error, loading = false }: Props) {
   const [filter, setFilter] = useState('');
   const shown = useMemo(() => {
     const needle = filter.trim().toLowerCase();
@@ -44,7 +46,7 @@ export function PickChips({ label, hint, options, picked, onChange, testID, erro
           style={styles.filter}
         />
       ) : null}
-      {options.length === 0 ? <Text style={styles.hint}>Nothing to choose from.</Text> : null}
+      {options.length === 0 ? <Text style={styles.hint}>{loading ? 'Loading the choices…' : 'Nothing to choose from.'}</Text> : null}
       {filter.trim() === '' && shown.length < options.length ? (
         <Text style={styles.hint}>Showing {shown.length} of {options.length}; type to find the others.</Text>
       ) : null}

@@ -7,6 +7,7 @@ import { Button } from '@/components/button';
 import { TextField } from '@/components/text-field';
 import { ChoiceChips } from '@/components/windows/choice-chips';
 import { PickChips, type PickOption } from '@/components/plans/pick-chips';
+import type { RunOptions } from '@/components/plans/use-run-options';
 import {
   errorsFromApi, formFromSettings, settingsFromForm, type PlanFormErrors, type PlanFormState,
 } from '@/components/plans/plan-form-state';
@@ -18,6 +19,7 @@ type Props = {
   initial?: PlanSettings;
   functionOptions: readonly PickOption[];
   siteOptions: readonly PickOption[];
+  loading?: Pick<RunOptions, 'loadingFunctions' | 'loadingSites'>;
   onQueued: (planId: string) => void;
   onClose?: () => void;
 };
@@ -31,7 +33,7 @@ const AFTER = [
   { value: 'keep', label: 'Keep the new places' },
 ] as const;
 
-export function PlanRunForm({ windowId, initial, functionOptions, siteOptions, onQueued, onClose }: Props) {
+export function PlanRunForm({ windowId, initial, functionOptions, siteOptions, loading, onQueued, onClose }: Props) {
   const [form, setForm] = useState<PlanFormState>(() => formFromSettings(initial));
   const [localErrors, setLocalErrors] = useState<PlanFormErrors>({});
   const run = usePlanRunMutation(windowId);
@@ -72,6 +74,7 @@ export function PlanRunForm({ windowId, initial, functionOptions, siteOptions, o
         picked={form.pinned}
         onChange={(v) => set('pinned', v)}
         error={errors.pinned}
+        loading={loading?.loadingFunctions}
         testID="plan-form-pinned"
       />
       <PickChips
@@ -81,6 +84,7 @@ export function PlanRunForm({ windowId, initial, functionOptions, siteOptions, o
         picked={form.excludedSites}
         onChange={(v) => set('excludedSites', v)}
         error={errors.excludedSites}
+        loading={loading?.loadingSites}
         testID="plan-form-excluded"
       />
       {errors.form ? <Text style={styles.error} role="alert" testID="plan-form-error">{errors.form}</Text> : null}

@@ -40,6 +40,7 @@ function NewRun({ window: w, me, adjustFrom, onOpenPlan, startOpen }: Pick<Props
         initial={adjustFrom}
         functionOptions={options.functionOptions}
         siteOptions={options.siteOptions}
+        loading={options}
         onQueued={onOpenPlan}
         onClose={startOpen ? undefined : () => setOpen(false)}
       />

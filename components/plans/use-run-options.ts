@@ -16,7 +16,9 @@ export function functionOptionsFrom(placements: readonly Placement[], siteName: 
   return options.sort((a, b) => a.id.localeCompare(b.id));
 }
 
-export function useRunOptions(windowId: string): { functionOptions: PickOption[]; siteOptions: PickOption[] } {
+export type RunOptions = { functionOptions: PickOption[]; siteOptions: PickOption[]; loadingFunctions: boolean; loadingSites: boolean };
+
+export function useRunOptions(windowId: string): RunOptions {
   const impact = useWindowImpactQuery(windowId);
   const map = useNetworkMapQuery();
   return useMemo(() => {
@@ -24,6 +26,11 @@ export function useRunOptions(windowId: string): { functionOptions: PickOption[]
     const siteOptions = [...(map.data?.sites ?? [])]
       .sort((a, b) => a.name.localeCompare(b.name))
       .map((s) => ({ id: s.id, label: s.name }));
-    return { functionOptions: functionOptionsFrom(impact.data?.currentPaths ?? [], names.site), siteOptions };
-  }, [impact.data, map.data]);
+    return {
+      functionOptions: functionOptionsFrom(impact.data?.currentPaths ?? [], names.site),
+      siteOptions,
+      loadingFunctions: impact.isPending,
+      loadingSites: map.isPending,
+    };
+  }, [impact.data, impact.isPending, map.data, map.isPending]);
 }
