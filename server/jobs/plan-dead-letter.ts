@@ -28,6 +28,7 @@ export async function markDeadRun(db: Db, job: { data: { planId?: string }; outp
   if (!planId) return;
   const state = await readRunState(db, planId);
   if (!state) return;
-  const reason = deadRunReason(job.output, state.attempts);
+  // A worker can die between taking the job and marking the row, so the row may count fewer attempts.
+  const reason = deadRunReason(job.output, Math.max(1, state.attempts));
   if (await finishFailed(db, planId, null, reason, new Date())) log(`plan run ${planId}: failed for good (${reason})`);
 }
