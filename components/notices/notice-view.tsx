@@ -5,7 +5,7 @@ import type { Notice } from '@/shared/notices';
 import { Button } from '@/components/button';
 import { CriticalCaution } from '@/components/critical-caution';
 import { Badge } from '@/components/inventory/badges';
-import { DetailFrame, Facts, Note, Section } from '@/components/inventory/detail-frame';
+import { DetailFrame, Note, Section } from '@/components/inventory/detail-frame';
 import { formatInstant } from '@/components/time';
 import { colors, radii, space, type } from '@/constants/theme';
 import { canAcknowledge, EFFECT_LABEL } from './notice-format';
@@ -46,7 +46,12 @@ export function NoticeView(props: Props) {
       testID="notice-view"
       badges={<Badge label={c.cancelled ? 'Cancelled' : EFFECT_LABEL[c.effect]} tone={c.effect === 'interruption' && !c.cancelled ? 'danger' : 'primary'} />}
     >
-      <Facts items={[{ label: 'When (your zone)', value: c.whenLocal }, { label: 'When (UTC)', value: c.whenUtc }]} />
+      <View style={styles.when} testID="notice-when">
+        <Text style={styles.whenLabel}>When (your zone)</Text>
+        <Text style={styles.whenValue}>{c.whenLocal}</Text>
+        <Text style={styles.whenLabel}>When (UTC)</Text>
+        <Text style={styles.whenValue}>{c.whenUtc}</Text>
+      </View>
       {c.cancelled ? null : (
         <>
           <Text style={[styles.effect, c.effect === 'interruption' && styles.interruption]} testID="notice-effect">{c.effectText}</Text>
@@ -80,6 +85,9 @@ export function NoticeView(props: Props) {
 }
 
 const styles = StyleSheet.create({
+  when: { gap: space.xxs, padding: space.md, borderRadius: radii.lg, backgroundColor: colors.tide },
+  whenLabel: { ...type.caption, color: colors.inkMuted },
+  whenValue: { ...type.bodyStrong, color: colors.ink, marginBottom: space.xs },
   effect: { ...type.bodyStrong, color: colors.ink },
   interruption: { color: colors.danger },
   ackBox: { gap: space.sm, alignItems: 'flex-start' },

@@ -15,7 +15,9 @@ export function PortalWorkRow({ item, timeZone, selected, onOpen }: Props) {
     <>
       <View style={styles.top}>
         <Text style={styles.summary}>{item.summary}</Text>
-        <Badge label={state.label} tone={state.tone} testID={`work-state-${item.windowId}`} />
+        <View style={styles.state}>
+          <Badge label={state.label} tone={state.tone} testID={`work-state-${item.windowId}`} />
+        </View>
       </View>
       <Text style={styles.when}>{formatWindowRange(item.startsAt, item.endsAt, timeZone)}</Text>
       <View style={styles.badges}>
@@ -48,6 +50,8 @@ const styles = StyleSheet.create({
   pressed: { backgroundColor: colors.surfaceSunken },
   top: { flexDirection: 'row', alignItems: 'flex-start', justifyContent: 'space-between', gap: space.sm },
   summary: { ...type.bodyStrong, color: colors.ink, flexShrink: 1 },
+  // The state keeps its width; the summary wraps instead.
+  state: { flexShrink: 0 },
   when: { ...type.body, color: colors.ink },
   badges: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
   hint: { ...type.caption, color: colors.inkMuted },

@@ -37,7 +37,7 @@ export function WindowNoticeRow({ row, roles, timeZone, busy, onResend, onOverri
     <View style={styles.row} testID={`window-notice-${row.tenantId}`}>
       <View style={styles.top}>
         <Text style={styles.tenant}>{row.tenantName}</Text>
-        <Badge label={state.label} tone={state.tone} />
+        <View style={styles.state}><Badge label={state.label} tone={state.tone} /></View>
       </View>
       <Text style={styles.meta}>{facts(row, timeZone).join(' · ')}</Text>
       {row.lastError ? <Text style={styles.error}>{`Last error: ${row.lastError}`}</Text> : null}
@@ -57,7 +57,8 @@ export function WindowNoticeRow({ row, roles, timeZone, busy, onResend, onOverri
 const styles = StyleSheet.create({
   row: { gap: space.xs, padding: space.md, borderRadius: radii.md, backgroundColor: colors.tide },
   top: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.sm },
-  tenant: { ...type.bodyStrong, color: colors.ink },
+  tenant: { ...type.bodyStrong, color: colors.ink, flexShrink: 1 },
+  state: { flexShrink: 0 },
   meta: { ...type.caption, color: colors.inkMuted },
   error: { ...type.caption, color: colors.danger },
   override: { gap: space.sm },

@@ -25,7 +25,7 @@ function overallEffect(slices: NoticeSlice[]): { effect: NoticeEffect; effectTex
   const text: Record<NoticeEffect, string> = {
     none: 'No interruption expected: none of your slices moves.',
     hitless: 'No interruption expected: every move is made before the old placement is released (make-before-break).',
-    interruption: `${interrupted} of your slices will be interrupted for the duration of the work; the others are moved without interruption.`,
+    interruption: `${interrupted} of your slices will be interrupted for the duration of the work; the others keep running without interruption.`,
   };
   return { effect, effectText: text[effect] };
 }

@@ -17,8 +17,9 @@ function km(value: number): string {
   return value >= 10 ? `${Math.round(value)} km` : `${value.toFixed(1)} km`;
 }
 
+/** Two decimals below 1 ms, where one would round short paths to "0.0 ms". */
 function ms(value: number): string {
-  return `${value.toFixed(1)} ms`;
+  return `${value.toFixed(value < 1 ? 2 : 1)} ms`;
 }
 
 function fnName(id: string, look: NoticeLookups): string {
@@ -43,7 +44,9 @@ function rerouteLine(r: PlanSlice['reroutes'][number], look: NoticeLookups): str
   const link = tie ? `The link between ${fnName(tie.from, look)} and ${fnName(tie.to, look)}` : 'One of its links';
   const latency = `latency ${ms(pathLatencyMs(r.from, look))} → ${ms(pathLatencyMs(r.to, look))}`;
   const budget = tie ? `, within its ${ms(tie.maxLatencyMs)} budget` : '';
-  return `${link} is rerouted on a different path; ${latency}${budget}.`;
+  // Both ends now on one site: the link no longer crosses the network at all.
+  const how = r.to.length === 0 ? 'no longer crosses the network (both ends share a site)' : 'is rerouted on a different path';
+  return `${link} ${how}; ${latency}${budget}.`;
 }
 
 function staysLines(s: PlanSlice): string[] {
