@@ -14,6 +14,8 @@ export type TestJobs = {
   jobs: JobQueue;
   boss: PgBoss;
   schema: string;
+  /** the plan worker when `workers` was asked for (stop() it alone to simulate a worker's shutdown) */
+  worker: PlanWorker | null;
   /** stops the worker and pg-boss and drops the schema */
   stop(): Promise<void>;
 };
@@ -49,7 +51,7 @@ export async function startTestJobs(config: ServerConfig, opts: TestJobsOptions 
     })();
     return stopped;
   };
-  return { jobs: createJobQueue(boss), boss, schema, stop };
+  return { jobs: createJobQueue(boss), boss, schema, worker, stop };
 }
 
 async function dropSchema(url: string, schema: string): Promise<void> {

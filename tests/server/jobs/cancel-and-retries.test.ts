@@ -111,3 +111,32 @@ describe('retries used up', () => {
       expect(row.error).toBe('The worker stopped responding once; the run was given up.');
     }));
 });
+
+describe('shutdown', () => {
+  test('stopping a worker mid-run hands the run back to the queue for a retry', async () => {
+    const config = await demoConfig();
+    const h = createDb(config.databaseUrl, { max: 2 });
+    const jobs = await startTestJobs(config, { workers: true, computeModule: fixture('endless-compute.ts') });
+    try {
+      const planId = await insertQueuedPlan(h.db, WINDOW, { timeLimitSeconds: 1 });
+      const jobId = await jobs.jobs.sendPlanRun(planId, { expireInSeconds: 120 });
+      await waitFor('the run to be computing', async () =>
+        ((await readPlan(h.db, planId)).progress as { generation?: number } | null)?.generation ? true : undefined);
+      const stopStartedAt = Date.now();
+      await jobs.worker!.stop();
+      expect(Date.now() - stopStartedAt).toBeLessThan(5000);
+      const row = await readPlan(h.db, planId);
+      expect(row.status).toBe('queued');
+      expect(row.progress).toBeNull();
+      expect(row.attempts).toBe(1);
+      const job = await waitFor('the job to wait for its retry', async () => {
+        const j = await jobs.boss.getJobById(QUEUES.planRun, jobId);
+        return j?.state === 'retry' ? j : undefined;
+      }, 5000);
+      expect((job.output as { message?: string }).message).toBe('the worker shut down during the run');
+    } finally {
+      await jobs.stop();
+      await h.pool.end();
+    }
+  });
+});
