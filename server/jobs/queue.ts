@@ -10,6 +10,11 @@ export interface MailJob {
   calendar?: { method: 'REQUEST' | 'CANCEL'; content: string; filename: string };
   /** set for tenant notices: the worker records sending state and errors on this row */
   noticeId?: string;
+  /**
+   * The notice version this mail carries (notices.sequence). Notices are queued inside the transaction that
+   * writes them, so the worker sends only once that version is committed, and never a superseded one.
+   */
+  noticeSequence?: number;
 }
 
 export interface JobQueue {

@@ -6,7 +6,7 @@ import type { Db } from '../../db/client';
 import type { ServerConfig } from '../env';
 import { QUEUES, type MailJob } from '../jobs/queue';
 import { composeMail } from './compose';
-import { markNoticeAttemptFailed, markNoticeFailed, markNoticeSent } from './notice-state';
+import { markNoticeAttemptFailed, markNoticeFailed, markNoticeSent, noticeVersionState } from './notice-state';
 import { createMailTransport } from './transport';
 
 export type MailWorkerDeps = {
@@ -32,21 +32,27 @@ export async function registerMailWorker(boss: PgBoss, deps: MailWorkerDeps): Pr
   const options = { pollingIntervalSeconds: deps.pollingIntervalSeconds ?? 2 };
 
   const sendId = await boss.work<MailJob>(QUEUES.mail, options, async (jobs) => {
-    for (const job of jobs) {
-      const mail = job.data;
-      try {
-        await transport.sendMail(composeMail(mail, deps.config.mailFrom));
-      } catch (err) {
-        if (mail.noticeId) await markNoticeAttemptFailed(deps.db, mail.noticeId, readableMailError(err), now());
-        throw err; // pg-boss retries it
-      }
-      if (mail.noticeId) await markNoticeSent(deps.db, mail.noticeId, now());
-    }
+    for (const job of jobs) await sendOne(job.data);
   });
+
+  async function sendOne(mail: MailJob): Promise<void> {
+    if (mail.noticeId) {
+      const state = await noticeVersionState(deps.db, mail.noticeId, mail.noticeSequence);
+      if (state === 'superseded') return;
+      if (state === 'wait') throw new Error(`notice ${mail.noticeId} version ${mail.noticeSequence} is not committed yet`);
+    }
+    try {
+      await transport.sendMail(composeMail(mail, deps.config.mailFrom));
+    } catch (err) {
+      if (mail.noticeId) await markNoticeAttemptFailed(deps.db, mail.noticeId, mail.noticeSequence, readableMailError(err), now());
+      throw err; // pg-boss retries it
+    }
+    if (mail.noticeId) await markNoticeSent(deps.db, mail.noticeId, mail.noticeSequence, now());
+  }
 
   const deadId = await boss.work<MailJob>(QUEUES.mailDead, options, async (jobs) => {
     for (const job of jobs) {
-      if (job.data.noticeId) await markNoticeFailed(deps.db, job.data.noticeId, now());
+      if (job.data.noticeId) await markNoticeFailed(deps.db, job.data.noticeId, job.data.noticeSequence, now());
     }
   });
   return {

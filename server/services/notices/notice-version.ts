@@ -48,7 +48,7 @@ export async function queueNoticeMail(tx: Queryable, deps: NoticeDeps, v: Notice
     return 'failed';
   }
   await deps.jobs.sendMail({
-    to: v.recipients, subject: r.subject, text: r.body, noticeId: v.id,
+    to: v.recipients, subject: r.subject, text: r.body, noticeId: v.id, noticeSequence: v.sequence,
     calendar: { method: v.method, content: r.ics, filename: v.method === 'CANCEL' ? 'cancellation.ics' : 'invitation.ics' },
   });
   return 'queued';

@@ -104,3 +104,25 @@ test('readableMailError names the code and the server reply', () => {
   expect(readableMailError(err)).toBe('EMESSAGE: Message failed (550 5.1.1 mailbox unknown)');
   expect(readableMailError('plain')).toBe('plain');
 });
+
+test('a notice mail waits until its version is committed, and a superseded version is never sent', async () => {
+  const testBoss = await startMailTestBoss(5);
+  bosses.push(testBoss);
+  await registerMailWorker(testBoss.boss, { db, config, sinkPort: sink.port, pollingIntervalSeconds: 0.5 });
+  const noticeId = await insertNotice();
+  // Version 1 queued before it is written (as from a transaction that has not committed yet).
+  const early = uniqueRecipient('worker-early');
+  await testBoss.boss.send(QUEUES.mail, { to: [early], subject: 'Version 1', text: 'v1', noticeId, noticeSequence: 1 } satisfies MailJob);
+  // Version 0 is stale once version 1 lands; it must not go out.
+  const stale = uniqueRecipient('worker-stale');
+  await new Promise((r) => setTimeout(r, 1500));
+  expect(await readSinkMessages(db, { to: early })).toEqual([]);
+  await db.update(notices).set({ sequence: 1 }).where(eq(notices.id, noticeId));
+  await testBoss.boss.send(QUEUES.mail, { to: [stale], subject: 'Version 0', text: 'v0', noticeId, noticeSequence: 0 } satisfies MailJob);
+
+  const notice = await waitFor(() => readNotice(noticeId), (n) => n.status === 'sent');
+  expect(notice.sequence).toBe(1);
+  expect((await readSinkMessages(db, { to: early })).map((m) => m.subject)).toEqual(['Version 1']);
+  await new Promise((r) => setTimeout(r, 1500));
+  expect(await readSinkMessages(db, { to: stale })).toEqual([]);
+});
