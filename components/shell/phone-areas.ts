@@ -4,8 +4,8 @@ import type { NavArea } from '@/components/shell/nav-areas';
 /** Most tabs a 390 px phone bar holds with readable labels (about 78 px each). */
 export const PHONE_MAX_TABS = 5;
 
-/** The areas used most on the move, in the order they take the bar's places (notices: tenants only). */
-const PHONE_FIRST_KEYS: readonly string[] = ['overview', 'notices', 'calendar', 'network', 'map'];
+/** The areas used most on the move, in the order they take the bar's places (sign-off: approvers and admins; notices: tenants only). */
+const PHONE_FIRST_KEYS: readonly string[] = ['overview', 'sign-off', 'notices', 'calendar', 'network', 'map'];
 
 export type PhoneAreas = { tabs: NavArea[]; more: NavArea[] };
 

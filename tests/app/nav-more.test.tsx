@@ -4,7 +4,7 @@ import { fireEvent, render, screen, within } from '@testing-library/react-native
 import { Text } from 'react-native';
 import type { Me } from '@/shared/api';
 import { AppShell } from '@/components/shell/app-shell';
-import { NAV_AREAS } from '@/components/shell/nav-areas';
+import { NAV_AREAS, areasFor } from '@/components/shell/nav-areas';
 
 // Link stands in for expo-router's: pressing its child runs Link's onPress, then "navigates" by recording href.
 const mockPush = jest.fn();
@@ -78,10 +78,13 @@ test('a tenant user has six areas: Notices takes a place in the bar, the rest wa
   for (const key of ['map', 'slices']) expect(within(sheet).getByTestId(`nav-${key}`)).toBeTruthy();
 });
 
-test('the side rail on a wide screen keeps every area and has no More', () => {
+test('the side rail on a wide screen keeps every area the user may open and has no More', () => {
   mockWidthPx = 1280;
   renderShell(planner);
   expect(screen.queryByTestId('bottom-tabs')).toBeNull();
-  for (const { key } of NAV_AREAS) expect(screen.getByTestId(`nav-${key}`)).toBeTruthy();
+  const open = areasFor(planner.roles);
+  for (const { key } of open) expect(screen.getByTestId(`nav-${key}`)).toBeTruthy();
+  // Areas for other roles (e.g. the admin's Outbox) stay out of the planner's rail.
+  for (const { key } of NAV_AREAS.filter((a) => !open.includes(a))) expect(screen.queryByTestId(`nav-${key}`)).toBeNull();
   expect(screen.queryByTestId('nav-more')).toBeNull();
 });

@@ -1,5 +1,5 @@
 // On a phone-sized Chromium the demo approver sets up one-time codes (QR code and key on screen), opens the sign-off
-// queue from the More sheet, reads the one-screen summary and approves with a one-time code; the window is cleared.
+// queue from its tab, reads the one-screen summary and approves with a one-time code; the window is cleared.
 // The window is prepared through the API as the demo planner (book on a site hosting a critical slice, assess,
 // run a plan, accept, submit). The demo has one approver, so the admin sets both quorums to 1 for the test and
 // turns codes on; everything is put back afterwards (policies, the approver's key, the window is withdrawn).
@@ -135,7 +135,7 @@ test('an approver enrols for one-time codes, opens the queue on a phone and appr
   const key = await enrol(page);
 
   await page.goto(BASE_URL);
-  await page.getByTestId('nav-more').click();
+  // Sign-off has a place of its own in an approver's phone tab bar.
   await page.getByTestId('nav-sign-off').click();
   await page.getByTestId(`signoff-queue-item-${windowId}`).click();
   await page.getByTestId('signoff-title').waitFor({ timeout: 30_000 });
