@@ -59,4 +59,5 @@ for _ in $(seq 1 60); do
   sleep 0.5
 done
 # --forceExit: a failed test must not leave jest waiting on a browser it could not close.
-E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" npx jest --ci --forceExit -c jest.e2e.config.js
+# --runInBand: the suites share one demo database and its policies (sign-off quorum, code requirement).
+E2E_BASE_URL="http://127.0.0.1:$E2E_PORT" npx jest --ci --forceExit --runInBand -c jest.e2e.config.js
