@@ -16,6 +16,8 @@ export const DEMO_USERS: readonly DemoUser[] = [
   { id: 'user-demo-engineer', email: 'engineer@demo.test', name: 'Sam Okafor', role: 'engineer' },
   { id: 'user-demo-planner', email: 'planner@demo.test', name: 'Priya Lund', role: 'planner' },
   { id: 'user-demo-approver', email: 'approver@demo.test', name: 'Jonas Weller', role: 'approver' },
+  // A second change-board member: high-risk plans need two approvals by default (policy signoffQuorumHigh).
+  { id: 'user-demo-approver-2', email: 'approver2@demo.test', name: 'Mei Castell', role: 'approver' },
   { id: 'user-demo-tenant', email: 'tenant@demo.test', name: 'Tess Marlow', role: 'tenant' },
 ];
 
