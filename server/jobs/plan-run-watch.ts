@@ -12,15 +12,24 @@ export const WATCH_TICK_MS = 500;
 export type StopReason = 'cancelled' | 'superseded' | 'shutdown' | 'expired';
 export type RunEnd = ThreadOutcome | { kind: 'stopped'; reason: StopReason };
 
-/** The latest progress from the thread, written once per tick whatever the thread's pace. */
+/**
+ * The latest progress from the thread, written once per tick whatever the thread's pace. While the thread sits
+ * in a reference solver it reports nothing (HiGHS runs in one call), so the elapsed time is carried on from
+ * this process's clock: the app's figures keep moving and show the run is alive.
+ */
 export class ProgressBox {
   latest: PlanProgress | null = null;
   private dirty = false;
-  set(p: PlanProgress): void { this.latest = p; this.dirty = true; }
+  private setAtMs = 0;
+  constructor(private readonly nowMs: () => number = Date.now) {}
+  set(p: PlanProgress): void { this.latest = p; this.dirty = true; this.setAtMs = this.nowMs(); }
   take(): PlanProgress | null {
-    if (!this.dirty) return null;
-    this.dirty = false;
-    return this.latest;
+    if (this.dirty) {
+      this.dirty = false;
+      return this.latest;
+    }
+    if (this.latest?.phase !== 'references') return null;
+    return { ...this.latest, elapsedMs: this.latest.elapsedMs + (this.nowMs() - this.setAtMs) };
   }
 }
 
