@@ -68,14 +68,17 @@ export type RecordingQueue = JobQueue & {
   planRuns: { planId: string; expireInSeconds: number; jobId: string }[];
   cancelled: string[];
   mails: MailJob[];
+  /** set it to make sendPlanRun throw like a queue that is down */
+  failing: boolean;
 };
 
 /** A JobQueue that records what was asked of it and runs nothing; job ids are `job-1`, `job-2`, … */
 export function createRecordingQueue(): RecordingQueue {
   let next = 0;
   const q: RecordingQueue = {
-    planRuns: [], cancelled: [], mails: [],
+    planRuns: [], cancelled: [], mails: [], failing: false,
     async sendPlanRun(planId, { expireInSeconds }) {
+      if (q.failing) throw new Error('connection refused');
       const jobId = `job-${++next}`;
       q.planRuns.push({ planId, expireInSeconds, jobId });
       return jobId;

@@ -58,12 +58,17 @@ export async function insertTestUsers(db: Db, prefix: string): Promise<{ tenantI
     noRoles: make('noroles', [], null),
   };
   const passwordHash = await hashPassword(TEST_PASSWORD);
-  for (const user of Object.values(list)) {
-    await db.insert(users).values({ id: user.id, email: user.email, name: `User ${user.id}`, tenantId: user.tenantId });
-    await db.insert(passwordCredentials).values({ userId: user.id, passwordHash });
-    for (const role of user.roles) await db.insert(roleGrants).values({ userId: user.id, role });
-  }
+  for (const user of Object.values(list)) await insertUser(db, { ...user, name: `User ${user.id}` }, passwordHash);
   return { tenantId, users: list };
+}
+
+type NewUser = { id: string; email: string; name: string; roles: RoleName[]; tenantId?: string | null };
+
+/** A user who signs in with TEST_PASSWORD; pass a hash of it to skip hashing again when adding many. */
+export async function insertUser(db: Db, user: NewUser, passwordHash?: string): Promise<void> {
+  await db.insert(users).values({ id: user.id, email: user.email, name: user.name, tenantId: user.tenantId ?? null });
+  await db.insert(passwordCredentials).values({ userId: user.id, passwordHash: passwordHash ?? await hashPassword(TEST_PASSWORD) });
+  for (const role of user.roles) await db.insert(roleGrants).values({ userId: user.id, role });
 }
 
 export function testConfig(overrides: Record<string, string> = {}): ServerConfig {

@@ -7,88 +7,42 @@
 //          \       /
 //             X3
 import { eq } from 'drizzle-orm';
-import pg from 'pg';
-import request from 'supertest';
-import {
-  passwordCredentials, placements, plans, roleGrants, sites, sliceFunctions, sliceTies, slices, spans, tenants, users,
-  windowElements, windows,
-} from '../../../db/schema';
-import { hashPassword } from '../../../server/auth/password';
-import type { JobQueue, MailJob } from '../../../server/jobs/queue';
+import { placements, plans, sites, sliceFunctions, sliceTies, slices, spans, tenants, windowElements, windows } from '../../../db/schema';
 import { planReviewSchema, planSettingsSchema, type PlanSlice } from '../../../shared/plans';
-import { signInAs } from '../helpers/sign-in';
-import { setupTestApp, TEST_PASSWORD, type TestContext } from '../helpers/test-app';
+import { createRecordingQueue, type RecordingQueue } from '../helpers/jobs';
+import { useScratchDatabase } from '../helpers/scratch-database';
+import { signedInRequests, type AsUser } from '../helpers/sign-in';
+import { insertUser, setupTestApp, type TestContext } from '../helpers/test-app';
 
 export const NOW = new Date('2031-05-01T08:00:00Z');
 export const DAY_MS = 86_400_000;
-const DUPLICATE_DATABASE = '42P04';
-const UNIQUE_VIOLATION = '23505';
-
-async function ensureScratchDatabase(): Promise<void> {
-  const base = process.env.TEST_DATABASE_URL;
-  if (!base) throw new Error('TEST_DATABASE_URL is not set');
-  const url = new URL(base);
-  if (url.pathname.endsWith('_notices')) return;
-  const name = `${url.pathname.slice(1)}_notices`;
-  const client = new pg.Client({ connectionString: base });
-  await client.connect();
-  try {
-    await client.query(`create database "${name}"`);
-  } catch (err) {
-    const code = (err as { code?: string }).code;
-    if (code !== DUPLICATE_DATABASE && code !== UNIQUE_VIOLATION) throw err;
-  } finally {
-    await client.end();
-  }
-  url.pathname = `/${name}`;
-  process.env.TEST_DATABASE_URL = url.toString();
-}
-
-/** Records every mail; `failing` makes sendMail throw like a queue that is down. */
-export function recordingMailQueue() {
-  const mails: MailJob[] = [];
-  const jobs: JobQueue = {
-    sendPlanRun: async () => 'plan-job',
-    cancelPlanRun: async () => undefined,
-    sendMail: async (job) => { mails.push(job); return `mail-${mails.length}`; },
-  };
-  return { jobs, mails };
-}
 
 type Role = keyof TestContext['users'] | 'otherTenant';
-type Method = 'get' | 'post';
 
 export type NoticesContext = TestContext & {
-  queue: ReturnType<typeof recordingMailQueue>;
+  /** records every mail; runs nothing */
+  queue: RecordingQueue;
   id: (name: string) => string;
   otherTenantId: string;
   otherTenantUser: { id: string; email: string };
-  as: (role: Role) => Promise<(method: Method, path: string) => request.Test>;
+  as: AsUser<Role>;
 };
 
 async function insertOtherTenantUser(ctx: TestContext, otherTenantId: string) {
   const user = { id: `${ctx.prefix}-other-tenant-user`, email: `other-tenant.${ctx.prefix}@test.example` };
-  await ctx.db.insert(users).values({ ...user, name: 'Other tenant user', tenantId: otherTenantId });
-  await ctx.db.insert(passwordCredentials).values({ userId: user.id, passwordHash: await hashPassword(TEST_PASSWORD) });
-  await ctx.db.insert(roleGrants).values({ userId: user.id, role: 'tenant' });
+  await insertUser(ctx.db, { ...user, name: 'Other tenant user', tenantId: otherTenantId, roles: ['tenant'] });
   return user;
 }
 
 export async function setupNoticesApp(): Promise<NoticesContext> {
-  await ensureScratchDatabase();
+  await useScratchDatabase('notices');
   const ctx = await setupTestApp();
-  const queue = recordingMailQueue();
-  const app = ctx.makeApp({ now: () => NOW, jobs: queue.jobs });
+  const queue = createRecordingQueue();
+  const app = ctx.makeApp({ now: () => NOW, jobs: queue });
   const id = (name: string) => `${ctx.prefix}-${name}`;
   const otherTenantId = await insertNetwork(ctx, id);
   const otherTenantUser = await insertOtherTenantUser(ctx, otherTenantId);
-  const cookies = new Map<string, string>();
-  const as: NoticesContext['as'] = async (role) => {
-    const email = role === 'otherTenant' ? otherTenantUser.email : ctx.users[role].email;
-    if (!cookies.has(role)) cookies.set(role, await signInAs(app, email));
-    const cookie = cookies.get(role)!;
-    return (method, path) => request(app)[method](path).set('Cookie', cookie);
-  };
+  const as: NoticesContext['as'] = signedInRequests(app, (role) => (role === 'otherTenant' ? otherTenantUser.email : ctx.users[role].email));
   return { ...ctx, app, queue, id, otherTenantId, otherTenantUser, as };
 }
 

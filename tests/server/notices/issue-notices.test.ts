@@ -12,7 +12,7 @@ let ctx: NoticesContext;
 beforeAll(async () => { ctx = await setupNoticesApp(); });
 afterAll(async () => { await ctx.close(); });
 
-const deps = () => ({ jobs: ctx.queue.jobs, config: ctx.config, now: NOW });
+const deps = () => ({ jobs: ctx.queue, config: ctx.config, now: NOW });
 const issue = (windowId: string) => ctx.db.transaction((tx) => issueNotices(tx, deps(), windowId, ctx.users.planner.id));
 const rowsOf = (windowId: string) => ctx.db.select().from(notices).where(eq(notices.windowId, windowId));
 const statusOf = async (windowId: string) => (await ctx.db.select({ s: windows.status }).from(windows).where(eq(windows.id, windowId)))[0].s;

@@ -26,7 +26,7 @@ beforeAll(async () => {
   sink = await startMailSink(config, ctx.db);
   testBoss = await startMailTestBoss(1);
   await registerMailWorker(testBoss.boss, { db: ctx.db, config, sinkPort: sink.port, pollingIntervalSeconds: 0.5 });
-  jobs = { ...ctx.queue.jobs, sendMail: async (job: MailJob) => (await testBoss.boss.send(QUEUES.mail, job)) ?? '' };
+  jobs = { ...ctx.queue, sendMail: async (job: MailJob) => (await testBoss.boss.send(QUEUES.mail, job)) ?? '' };
 });
 afterAll(async () => {
   await testBoss.stop();

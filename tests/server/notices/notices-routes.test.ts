@@ -11,7 +11,7 @@ beforeAll(async () => { ctx = await setupNoticesApp(); });
 afterAll(async () => { await ctx.close(); });
 
 const issue = (windowId: string) => ctx.db.transaction((tx) =>
-  issueNotices(tx, { jobs: ctx.queue.jobs, config: ctx.config, now: NOW }, windowId, ctx.users.approver.id));
+  issueNotices(tx, { jobs: ctx.queue, config: ctx.config, now: NOW }, windowId, ctx.users.approver.id));
 const noticeOf = async (windowId: string, tenantId: string) =>
   (await ctx.db.select().from(notices).where(and(eq(notices.windowId, windowId), eq(notices.tenantId, tenantId))))[0];
 const windowStatus = async (id: string) => (await ctx.db.select({ s: windows.status }).from(windows).where(eq(windows.id, id)))[0].s;

@@ -1,92 +1,34 @@
 // Plans API test harness: a scratch database of its own, a recording job queue, a small network whose windows
 // force reroutes over one thin backup span, and finished plan runs computed in the test (no worker).
-import pg from 'pg';
-import request from 'supertest';
 import { plans, placements, sites, sliceFunctions, sliceTies, slices, spans, tenants } from '../../../db/schema';
 import { computePlan } from '../../../server/jobs/plan-compute';
-import type { JobQueue } from '../../../server/jobs/queue';
 import { loadScenario } from '../../../server/services/inventory/load-scenario';
 import { reservationsFor } from '../../../server/services/plans/reservations';
 import { loadWindow } from '../../../server/services/windows/window-view';
 import { planSettingsSchema, type PlanReview, type PlanSettingsInput } from '../../../shared/plans';
 import type { ScenarioWindow } from '../../../shared/scenario';
-import { signInAs } from '../helpers/sign-in';
+import { createRecordingQueue, type RecordingQueue } from '../helpers/jobs';
+import { removePrefixed } from '../helpers/remove-prefixed';
+import { useScratchDatabase } from '../helpers/scratch-database';
+import { signedInRequests, type AsUser } from '../helpers/sign-in';
 import { setupTestApp, type TestContext } from '../helpers/test-app';
 
-const DUPLICATE_DATABASE = '42P04';
-const UNIQUE_VIOLATION = '23505';
-
-/** Plans tests load the whole inventory (assess, accept), so other suites' half-built fixtures must not be in it. */
-async function ensureScratchDatabase(): Promise<void> {
-  const base = process.env.TEST_DATABASE_URL;
-  if (!base) throw new Error('TEST_DATABASE_URL is not set');
-  if (process.env.PLANS_API_TEST_DATABASE_URL) return;
-  const url = new URL(base);
-  const name = `${url.pathname.slice(1)}_plansapi`;
-  const client = new pg.Client({ connectionString: base });
-  await client.connect();
-  try {
-    await client.query(`create database "${name}"`);
-  } catch (err) {
-    const code = (err as { code?: string }).code;
-    if (code !== DUPLICATE_DATABASE && code !== UNIQUE_VIOLATION) throw err;
-  } finally {
-    await client.end();
-  }
-  url.pathname = `/${name}`;
-  process.env.PLANS_API_TEST_DATABASE_URL = url.toString();
-  process.env.TEST_DATABASE_URL = url.toString();
-}
-
-/** Records what the API enqueued; `failing` makes sendPlanRun throw like a queue that is down. */
-export function recordingQueue() {
-  const runs: { planId: string; expireInSeconds: number; jobId: string }[] = [];
-  const cancelled: string[] = [];
-  const state = { failing: false };
-  const jobs: JobQueue = {
-    sendPlanRun: async (planId, { expireInSeconds }) => {
-      if (state.failing) throw new Error('connection refused');
-      const jobId = `job-${runs.length + 1}-${planId}`;
-      runs.push({ planId, expireInSeconds, jobId });
-      return jobId;
-    },
-    cancelPlanRun: async (jobId) => { cancelled.push(jobId); },
-    sendMail: async () => 'mail-job',
-  };
-  return { jobs, runs, cancelled, state };
-}
-
-type Role = keyof TestContext['users'];
-type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';
-
 export type PlansContext = TestContext & {
-  queue: ReturnType<typeof recordingQueue>;
-  as: (role: Role) => Promise<(method: Method, path: string) => request.Test>;
+  /** records what the API enqueued; runs nothing */
+  queue: RecordingQueue;
+  as: AsUser<keyof TestContext['users']>;
   cleanup: () => Promise<void>;
 };
 
+/** Plans tests load the whole inventory (assess, accept), so they run in a scratch database of their own. */
 export async function setupPlansApp(now: Date): Promise<PlansContext> {
-  await ensureScratchDatabase();
+  await useScratchDatabase('plansapi');
   const ctx = await setupTestApp();
-  const queue = recordingQueue();
-  const app = ctx.makeApp({ now: () => now, jobs: queue.jobs });
-  const cookies = new Map<string, string>();
-  const as: PlansContext['as'] = async (role) => {
-    if (!cookies.has(role)) cookies.set(role, await signInAs(app, ctx.users[role].email));
-    const cookie = cookies.get(role)!;
-    return (method, path) => request(app)[method](path).set('Cookie', cookie);
-  };
-  return { ...ctx, app, queue, as, cleanup: () => removePrefixed(ctx.pool, ctx.prefix) };
-}
-
-async function removePrefixed(pool: pg.Pool, prefix: string): Promise<void> {
-  const like = `${prefix}%`;
-  await pool.query(`delete from windows where title like $1 or owner_id like $1`, [like]);
-  await pool.query(`delete from slices where id like $1`, [like]);
-  await pool.query(`delete from spans where id like $1`, [like]);
-  await pool.query(`delete from sites where id like $1`, [like]);
-  await pool.query(`delete from users where id like $1`, [like]);
-  await pool.query(`delete from tenants where id like $1`, [like]);
+  const queue = createRecordingQueue();
+  const app = ctx.makeApp({ now: () => now, jobs: queue });
+  const as: PlansContext['as'] = signedInRequests(app, (role) => ctx.users[role].email);
+  const cleanup = () => removePrefixed(ctx.pool, ctx.prefix, [['windows', ['title', 'owner_id']]]);
+  return { ...ctx, app, queue, as, cleanup };
 }
 
 /**

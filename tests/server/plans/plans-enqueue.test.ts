@@ -29,7 +29,7 @@ test('a planner runs a plan: stored queued with its settings, handed to the queu
   expect(plan).toMatchObject({ windowId, status: 'queued', stale: false, accepted: false, review: null, createdBy: ctx.users.planner.id });
   expect(plan.id).toMatch(/^pl-/);
   expect(plan.settings).toEqual({ mode: 'serial', seed: 7, population: 40, timeLimitSeconds: 5, pinned: [id('h1')], excludedSites: [], afterWindow: 'keep' });
-  const run = ctx.queue.runs.find((r) => r.planId === plan.id);
+  const run = ctx.queue.planRuns.find((r) => r.planId === plan.id);
   expect(run?.expireInSeconds).toBe(planExpireSeconds(plan.settings, ctx.config));
   expect(run?.expireInSeconds).toBe(5 * 3 + 60 + ctx.config.planExpireMarginSeconds);
   const row = (await ctx.pool.query('select job_id, window_version from plans where id = $1', [plan.id])).rows[0];
@@ -72,13 +72,13 @@ test('a draft window, or one without its impact, cannot be planned (409)', async
 test('when the queue does not take the run the answer is 503 and the run is failed with the reason, not left queued', async () => {
   const ids = async () => (await ctx.pool.query('select id from plans where window_id = $1', [windowId])).rows.map((r) => r.id as string);
   const earlier = new Set(await ids());
-  ctx.queue.state.failing = true;
+  ctx.queue.failing = true;
   try {
     const res = await (await ctx.as('planner'))('post', `/api/windows/${windowId}/plans`).send({});
     expect(res.status).toBe(503);
     expect(res.body.error.code).toBe('QUEUE_UNAVAILABLE');
   } finally {
-    ctx.queue.state.failing = false;
+    ctx.queue.failing = false;
   }
   const added = (await ids()).filter((x) => !earlier.has(x));
   expect(added).toHaveLength(1);
@@ -115,7 +115,7 @@ test('cancel: a queued run becomes cancelled by the planner and its job is cance
   const res = await planner('post', `/api/plans/${planId}/cancel`).send({});
   expect(res.status).toBe(200);
   expect(res.body.plan).toMatchObject({ status: 'cancelled', error: `Cancelled by User ${ctx.users.planner.id}` });
-  expect(ctx.queue.cancelled).toContain(ctx.queue.runs.find((r) => r.planId === planId)!.jobId);
+  expect(ctx.queue.cancelled).toContain(ctx.queue.planRuns.find((r) => r.planId === planId)!.jobId);
   const again = await planner('post', `/api/plans/${planId}/cancel`).send({});
   expect(again.status).toBe(409);
   expect(again.body.error.code).toBe('PLAN_NOT_CANCELLABLE');

@@ -1,93 +1,44 @@
 // Sign-off API test harness: a scratch database per test file (policies are global and some files change them),
 // extra approvers, a recording job queue, a settable clock, and planned windows with hand-made accepted plans.
-import pg from 'pg';
-import request from 'supertest';
-import { passwordCredentials, plans, roleGrants, sites, slices, tenants, users, windowElements, windows } from '../../../db/schema';
+import { plans, sites, slices, tenants, windowElements, windows } from '../../../db/schema';
 import { hashPassword } from '../../../server/auth/password';
-import type { JobQueue, MailJob } from '../../../server/jobs/queue';
 import { planReviewSchema, type PlanReview, type PlanSlice } from '../../../shared/plans';
-import { signInAs } from '../helpers/sign-in';
-import { setupTestApp, TEST_PASSWORD, type TestContext } from '../helpers/test-app';
+import { createRecordingQueue, type RecordingQueue } from '../helpers/jobs';
+import { removePrefixed } from '../helpers/remove-prefixed';
+import { useScratchDatabase } from '../helpers/scratch-database';
+import { signedInRequests, type AsUser } from '../helpers/sign-in';
+import { insertUser, setupTestApp, TEST_PASSWORD, type TestContext } from '../helpers/test-app';
 
-const DUPLICATE_DATABASE = '42P04';
-const UNIQUE_VIOLATION = '23505';
-
-async function useScratchDatabase(suffix: string): Promise<void> {
-  const base = process.env.TEST_DATABASE_URL;
-  if (!base) throw new Error('TEST_DATABASE_URL is not set');
-  const url = new URL(base);
-  const name = `${url.pathname.slice(1)}_signoff_${suffix}`;
-  const client = new pg.Client({ connectionString: base });
-  await client.connect();
-  try {
-    await client.query(`create database "${name}"`);
-  } catch (err) {
-    const code = (err as { code?: string }).code;
-    if (code !== DUPLICATE_DATABASE && code !== UNIQUE_VIOLATION) throw err;
-  } finally {
-    await client.end();
-  }
-  url.pathname = `/${name}`;
-  process.env.TEST_DATABASE_URL = url.toString();
-}
-
-/** Records every call; nothing is sent. */
-export function recordingJobs() {
-  const mails: MailJob[] = [];
-  const jobs: JobQueue = {
-    sendPlanRun: async (planId) => `run-${planId}`,
-    cancelPlanRun: async () => undefined,
-    sendMail: async (job) => { mails.push(job); return `mail-${mails.length}`; },
-  };
-  return { jobs, mails };
-}
-
-type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';
 export const EXTRA_APPROVERS = ['approver2', 'approver3'] as const;
 type Who = keyof TestContext['users'] | (typeof EXTRA_APPROVERS)[number];
 
 export type SignoffTestContext = TestContext & {
   clock: { now: Date };
-  recorded: ReturnType<typeof recordingJobs>;
+  /** records every call; nothing is sent */
+  recorded: RecordingQueue;
   userId: (who: Who) => string;
-  as: (who: Who) => Promise<(method: Method, path: string) => request.Test>;
+  as: AsUser<Who>;
   cleanup: () => Promise<void>;
 };
 
 export async function setupSignoffApp(suffix: string, now: Date): Promise<SignoffTestContext> {
-  await useScratchDatabase(suffix);
+  await useScratchDatabase(`signoff_${suffix}`);
   const ctx = await setupTestApp();
   // The database is this file's alone, but it outlives a run: start every run from the default policies.
   await ctx.pool.query(`delete from policies where key like 'signoff%'`);
   const passwordHash = await hashPassword(TEST_PASSWORD);
   for (const key of EXTRA_APPROVERS) {
-    const id = `${ctx.prefix}-${key}`;
-    await ctx.db.insert(users).values({ id, email: `${key}.${ctx.prefix}@test.example`, name: `Approver ${key}` });
-    await ctx.db.insert(passwordCredentials).values({ userId: id, passwordHash });
-    await ctx.db.insert(roleGrants).values({ userId: id, role: 'approver' });
+    const user = { id: `${ctx.prefix}-${key}`, email: `${key}.${ctx.prefix}@test.example`, name: `Approver ${key}` };
+    await insertUser(ctx.db, { ...user, roles: ['approver'] }, passwordHash);
   }
   const clock = { now };
-  const recorded = recordingJobs();
-  const app = ctx.makeApp({ now: () => clock.now, jobs: recorded.jobs });
+  const recorded = createRecordingQueue();
+  const app = ctx.makeApp({ now: () => clock.now, jobs: recorded });
   const emailOf = (who: Who) => (who in ctx.users ? ctx.users[who as keyof TestContext['users']].email : `${who}.${ctx.prefix}@test.example`);
   const userId = (who: Who) => (who in ctx.users ? ctx.users[who as keyof TestContext['users']].id : `${ctx.prefix}-${who}`);
-  const cookies = new Map<string, string>();
-  const as: SignoffTestContext['as'] = async (who) => {
-    if (!cookies.has(who)) cookies.set(who, await signInAs(app, emailOf(who)));
-    const cookie = cookies.get(who)!;
-    return (method, path) => request(app)[method](path).set('Cookie', cookie);
-  };
-  return { ...ctx, app, clock, recorded, userId, as, cleanup: () => removePrefixed(ctx.pool, ctx.prefix) };
-}
-
-async function removePrefixed(pool: pg.Pool, prefix: string): Promise<void> {
-  const like = `${prefix}%`;
-  await pool.query(`delete from signoffs where window_id like $1`, [like]);
-  await pool.query(`delete from windows where id like $1`, [like]);
-  await pool.query(`delete from slices where id like $1`, [like]);
-  await pool.query(`delete from sites where id like $1`, [like]);
-  await pool.query(`delete from users where id like $1`, [like]);
-  await pool.query(`delete from tenants where id like $1`, [like]);
+  const as = signedInRequests(app, emailOf);
+  const cleanup = () => removePrefixed(ctx.pool, ctx.prefix, [['signoffs', ['window_id']], ['windows', ['id']]]);
+  return { ...ctx, app, clock, recorded, userId, as, cleanup };
 }
 
 export type PlanShape = { critical?: boolean; severity?: 'low' | 'medium' | 'high' | 'critical'; unresolved?: boolean };
