@@ -1,30 +1,14 @@
 // A MailJob with an invitation, sent through the sink and read back with mailparser: RFC 6047 (iMIP) shape.
 import ical, { ICalCalendarMethod, ICalEventStatus } from 'ical-generator';
 import { simpleParser } from 'mailparser';
-import type pg from 'pg';
-import type { Db } from '../../../db/client';
-import type { ServerConfig } from '../../../server/env';
 import type { MailJob } from '../../../server/jobs/queue';
 import { composeMail } from '../../../server/mail/compose';
 import { parseSinkMessage } from '../../../server/mail/parse-message';
-import { startMailSink, type MailSink } from '../../../server/mail/sink';
 import { readSinkMessages } from '../../../server/mail/sink-messages';
 import { createMailTransport } from '../../../server/mail/transport';
-import { openMailTestDb, uniqueRecipient } from './mail-test-db';
+import { uniqueRecipient, useMailSink } from './mail-test-db';
 
-let db: Db;
-let pool: pg.Pool;
-let config: ServerConfig;
-let sink: MailSink;
-
-beforeAll(async () => {
-  ({ db, pool, config } = await openMailTestDb());
-  sink = await startMailSink(config, db);
-});
-afterAll(async () => {
-  await sink.stop();
-  await pool.end();
-});
+const fx = useMailSink();
 
 function invitation(method: ICalCalendarMethod, sequence: number): string {
   const calendar = ical({ prodId: '//Slackwater//Test//EN', method });
@@ -41,8 +25,8 @@ function invitation(method: ICalCalendarMethod, sequence: number): string {
 }
 
 async function sendAndRead(job: MailJob) {
-  await createMailTransport(config, { sinkPort: sink.port }).sendMail(composeMail(job, config.mailFrom));
-  const rows = await readSinkMessages(db, { to: job.to[0] });
+  await createMailTransport(fx.config, { sinkPort: fx.sink.port }).sendMail(composeMail(job, fx.config.mailFrom));
+  const rows = await readSinkMessages(fx.db, { to: job.to[0] });
   expect(rows).toHaveLength(1);
   return rows[0];
 }
@@ -52,7 +36,7 @@ test('without a calendar: one text/plain body from MAIL_FROM, no attachments', a
   const row = await sendAndRead({ to: [to], subject: 'Sign-off requested', text: 'Please review window w-1.' });
   const mail = await simpleParser(row.raw);
   expect(mail.text?.trim()).toBe('Please review window w-1.');
-  expect(mail.from?.text).toBe(config.mailFrom.replace(/^(.*) </, '"$1" <'));
+  expect(mail.from?.text).toBe(fx.config.mailFrom.replace(/^(.*) </, '"$1" <'));
   expect(mail.attachments).toHaveLength(0);
 });
 

@@ -31,6 +31,18 @@ export async function setupPlansApp(now: Date): Promise<PlansContext> {
   return { ...ctx, app, queue, as, cleanup };
 }
 
+/** The plans app with the backup network below inserted: what every plans test file starts from. */
+export async function setupPlansNetwork(now: Date): Promise<{ ctx: PlansContext; id: (name: string) => string }> {
+  const ctx = await setupPlansApp(now);
+  const { id } = await insertBackupNetwork(ctx);
+  return { ctx, id };
+}
+
+export async function closePlansApp(ctx: PlansContext): Promise<void> {
+  await ctx.cleanup();
+  await ctx.close();
+}
+
 /**
  *   A ──p1── B        S1 (own tenant, priority 1): f1 on A, f2 on B (both fixed), tie e1 1 Gbit/s over p1
  *   │        │        S2 (other tenant, priority 2): g1 on C, g2 on D (both fixed), tie e2 1 Gbit/s over p2

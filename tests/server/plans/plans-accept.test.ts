@@ -1,21 +1,15 @@
 // Accepting a plan: window → planned with audit; refused (nothing changed) when the plan no longer fits, the
 // placements moved underneath, the window was edited, the run is not finished, or an outage is not named.
 import { planResponseSchema } from '../../../shared/plans';
-import { bookAssessed, insertBackupNetwork, setupPlansApp, storeFinishedPlan, windowRow, type PlansContext } from './helpers';
+import { bookAssessed, closePlansApp, setupPlansNetwork, storeFinishedPlan, windowRow, type PlansContext } from './helpers';
 
 // This file books in October 2027 only.
 const NOW = new Date('2027-03-01T08:00:00Z');
 let ctx: PlansContext;
 let id: (name: string) => string;
 
-beforeAll(async () => {
-  ctx = await setupPlansApp(NOW);
-  ({ id } = await insertBackupNetwork(ctx));
-});
-afterAll(async () => {
-  await ctx.cleanup();
-  await ctx.close();
-});
+beforeAll(async () => ({ ctx, id } = await setupPlansNetwork(NOW)));
+afterAll(() => closePlansApp(ctx));
 
 const day = (d: number) => [`2027-10-${String(d).padStart(2, '0')}T22:00:00Z`, `2027-10-${String(d + 1).padStart(2, '0')}T02:00:00Z`] as const;
 const p1Down = () => [{ kind: 'span' as const, id: id('p1'), effect: 'down' as const }];

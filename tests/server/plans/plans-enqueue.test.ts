@@ -1,7 +1,7 @@
 // Running plans through the API: validation, window states, the queue (and when it is down), reads, cancel, roles.
 import { planExpireSeconds } from '../../../server/services/plans/expire';
 import { planListResponseSchema, planResponseSchema } from '../../../shared/plans';
-import { bookAssessed, insertBackupNetwork, setupPlansApp, storeFinishedPlan, type PlansContext } from './helpers';
+import { bookAssessed, closePlansApp, setupPlansNetwork, storeFinishedPlan, type PlansContext } from './helpers';
 
 // This file books in September 2027 only (other plans files use other months: reservations follow time overlap).
 const NOW = new Date('2027-03-01T08:00:00Z');
@@ -10,14 +10,10 @@ let id: (name: string) => string;
 let windowId: string;
 
 beforeAll(async () => {
-  ctx = await setupPlansApp(NOW);
-  ({ id } = await insertBackupNetwork(ctx));
+  ({ ctx, id } = await setupPlansNetwork(NOW));
   windowId = await bookAssessed(ctx, 'p1 splice', '2027-09-02T22:00:00Z', '2027-09-03T02:00:00Z', [{ kind: 'span', id: id('p1'), effect: 'down' }]);
 });
-afterAll(async () => {
-  await ctx.cleanup();
-  await ctx.close();
-});
+afterAll(() => closePlansApp(ctx));
 
 const planCount = async (w: string) => Number((await ctx.pool.query('select count(*) from plans where window_id = $1', [w])).rows[0].count);
 

@@ -11,21 +11,15 @@ import { reservationsFor } from '../../../server/services/plans/reservations';
 import { windowSpecOf } from '../../../server/services/windows/compute-impact';
 import { loadWindow } from '../../../server/services/windows/window-view';
 import type { PlanReview } from '../../../shared/plans';
-import { bookAssessed, insertBackupNetwork, setupPlansApp, storeFinishedPlan, windowRow, type PlansContext } from './helpers';
+import { bookAssessed, closePlansApp, setupPlansNetwork, storeFinishedPlan, windowRow, type PlansContext } from './helpers';
 
 // This file books in November 2027 only.
 const NOW = new Date('2027-03-01T08:00:00Z');
 let ctx: PlansContext;
 let id: (name: string) => string;
 
-beforeAll(async () => {
-  ctx = await setupPlansApp(NOW);
-  ({ id } = await insertBackupNetwork(ctx));
-});
-afterAll(async () => {
-  await ctx.cleanup();
-  await ctx.close();
-});
+beforeAll(async () => ({ ctx, id } = await setupPlansNetwork(NOW)));
+afterAll(() => closePlansApp(ctx));
 
 /**
  * During the overlap each slice sits where the first plan naming it puts it (null: out of service), else where

@@ -2,21 +2,15 @@
 // finishing with `return` or rolling back restores the ones from before; `keep` leaves the plan's in place.
 import { loadScenario } from '../../../server/services/inventory/load-scenario';
 import type { PlacementView } from '../../../shared/plans';
-import { bookAssessed, insertBackupNetwork, setupPlansApp, storeFinishedPlan, windowRow, type PlansContext } from './helpers';
+import { bookAssessed, closePlansApp, setupPlansNetwork, storeFinishedPlan, windowRow, type PlansContext } from './helpers';
 
 // This file books in December 2027 only.
 const NOW = new Date('2027-03-01T08:00:00Z');
 let ctx: PlansContext;
 let id: (name: string) => string;
 
-beforeAll(async () => {
-  ctx = await setupPlansApp(NOW);
-  ({ id } = await insertBackupNetwork(ctx));
-});
-afterAll(async () => {
-  await ctx.cleanup();
-  await ctx.close();
-});
+beforeAll(async () => ({ ctx, id } = await setupPlansNetwork(NOW)));
+afterAll(() => closePlansApp(ctx));
 
 type Revision = { revision: number; current: boolean; reason: string; sites: Record<string, string>; paths: Record<string, string[]> };
 
