@@ -5,62 +5,28 @@
 // The window starts 23 days ahead, beyond every demo tenant's lead time, so all notices go out and the window is
 // notified. The sign-off policy is set to one approval without a code for the test and put back afterwards;
 // the window is withdrawn at the end (which also sends the cancellations).
-import type { APIRequestContext, APIResponse, Browser, BrowserContext } from 'playwright-core';
+import type { APIRequestContext, Browser, BrowserContext } from 'playwright-core';
 import path from 'node:path';
-import { BASE_URL, DEMO_PASSWORD, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
+import { apiAs as apiAsUser, ok, prepareSubmittedWindow, setSignoffPolicies, slotAhead, withdrawWindow } from './helpers/api';
+import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
 
 const PHONE = { width: 390, height: 844 };
 const TENANT_ID = 't-crannock-logistics';
 const SITE_ID = 'cell-yarrowmouth';
 /** Clear of the windows (4 days) and sign-off (9 days) suites, and beyond the longest demo lead time (21 days). */
 const DAYS_AHEAD = 23;
-const PLAN_TIMEOUT_MS = 90_000;
-const POLICY_KEYS = ['signoffQuorumLow', 'signoffQuorumHigh', 'signoffRequireCode'] as const;
 
 let browser: Browser;
 const contexts: BrowserContext[] = [];
 
-async function apiAs(email: string): Promise<APIRequestContext> {
-  const context = await browser.newContext();
-  contexts.push(context);
-  const res = await context.request.post(`${BASE_URL}/api/auth/sign-in`, { data: { email, password: DEMO_PASSWORD } });
-  if (!res.ok()) throw new Error(`sign-in as ${email}: ${res.status()}`);
-  return context.request;
-}
-
-async function ok(res: Promise<APIResponse>, what: string) {
-  const r = await res;
-  if (!r.ok()) throw new Error(`${what}: ${r.status()} ${await r.text()}`);
-  return r.json();
-}
-
-async function bookAndPlan(planner: APIRequestContext): Promise<{ windowId: string; planId: string; outageAccepted: string[] }> {
-  const start = new Date(Date.now() + DAYS_AHEAD * 86_400_000);
-  start.setUTCHours(2, 0, 0, 0);
-  const booked = await ok(planner.post(`${BASE_URL}/api/windows`, { data: {
-    title: `E2E notices ${Date.now().toString(36)}`, startsAt: start.toISOString(),
-    endsAt: new Date(start.getTime() + 3 * 3_600_000).toISOString(), workType: 'hardware replacement',
-    elements: [{ kind: 'site', id: SITE_ID, effect: 'down' }],
-  } }), 'book');
-  const windowId = booked.window.id as string;
-  await ok(planner.post(`${BASE_URL}/api/windows/${windowId}/assess`, { data: {} }), 'assess');
-  let plan = (await ok(planner.post(`${BASE_URL}/api/windows/${windowId}/plans`, { data: { timeLimitSeconds: 2 } }), 'plan')).plan;
-  const deadline = Date.now() + PLAN_TIMEOUT_MS;
-  while (plan.status !== 'done') {
-    if (['failed', 'cancelled'].includes(plan.status) || Date.now() > deadline) throw new Error(`plan run ${plan.status}: ${plan.error}`);
-    await new Promise((resolve) => setTimeout(resolve, 1000));
-    plan = (await ok(planner.get(`${BASE_URL}/api/plans/${plan.id}`), 'plan read')).plan;
-  }
-  const outageAccepted = plan.review.slices.filter((s: { outcome: string }) => s.outcome === 'unresolved').map((s: { slice: string }) => s.slice);
-  return { windowId, planId: plan.id, outageAccepted };
-}
+const apiAs = (email: string) => apiAsUser(browser, email, contexts);
 
 /** Planned → in review → cleared (→ notified); returns the window id. */
 async function prepareNotifiedWindow(): Promise<string> {
-  const planner = await apiAs('planner@demo.test');
-  const { windowId, planId, outageAccepted } = await bookAndPlan(planner);
-  await ok(planner.post(`${BASE_URL}/api/plans/${planId}/accept`, { data: { outageAccepted } }), 'accept');
-  await ok(planner.post(`${BASE_URL}/api/windows/${windowId}/submit`, { data: {} }), 'submit');
+  const windowId = await prepareSubmittedWindow(await apiAs('planner@demo.test'), {
+    title: `E2E notices ${Date.now().toString(36)}`, ...slotAhead(DAYS_AHEAD, 2), workType: 'hardware replacement',
+    elements: [{ kind: 'site', id: SITE_ID, effect: 'down' }],
+  });
   const approver = await apiAs('approver@demo.test');
   await ok(approver.post(`${BASE_URL}/api/signoff/${windowId}/decision`, {
     data: { decision: 'approve', comment: 'Moves checked; the tenant is owed its notice.' },
@@ -78,18 +44,13 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   if (savedPolicies) await admin.patch(`${BASE_URL}/api/policies`, { data: savedPolicies }).catch(() => undefined);
-  if (windowId) {
-    const w = await (await admin.get(`${BASE_URL}/api/windows/${windowId}`)).json();
-    await admin.post(`${BASE_URL}/api/windows/${windowId}/transition`, { data: { to: 'withdrawn', version: w.version } }).catch(() => undefined);
-  }
+  if (windowId) await withdrawWindow(admin, windowId);
   for (const context of contexts) await context.close().catch(() => undefined);
   await browser?.close();
 });
 
 test('the tenant user reads the notice for work on its slices on a phone, downloads the invitation and acknowledges it', async () => {
-  const before = (await ok(admin.get(`${BASE_URL}/api/policies`), 'policies')).policies;
-  savedPolicies = Object.fromEntries(POLICY_KEYS.map((k) => [k, before[k]]));
-  await ok(admin.patch(`${BASE_URL}/api/policies`, { data: { signoffQuorumLow: 1, signoffQuorumHigh: 1, signoffRequireCode: false } }), 'policy');
+  savedPolicies = await setSignoffPolicies(admin, { signoffQuorumLow: 1, signoffQuorumHigh: 1, signoffRequireCode: false });
   windowId = await prepareNotifiedWindow();
   const staffView = await ok(admin.get(`${BASE_URL}/api/windows/${windowId}/notices`), 'window notices');
   const own = staffView.notices.find((n: { tenantId: string }) => n.tenantId === TENANT_ID);

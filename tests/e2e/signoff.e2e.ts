@@ -7,14 +7,13 @@ import type { APIRequestContext, Browser, BrowserContext, Page } from 'playwrigh
 import { createHmac } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
-import { BASE_URL, DEMO_PASSWORD, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
+import { apiAs as apiAsUser, ok, prepareSubmittedWindow, setSignoffPolicies, slotAhead, withdrawWindow } from './helpers/api';
+import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
 
 const PHONE = { width: 390, height: 844 };
 const APPROVER_ID = 'user-demo-approver';
 /** Clear of the windows suite (4 days ahead) and of the demo windows' own dates. */
 const DAYS_AHEAD = 9;
-const PLAN_TIMEOUT_MS = 90_000;
-const SIGNOFF_POLICY_KEYS = ['signoffQuorumLow', 'signoffQuorumHigh', 'signoffRequireCode'] as const;
 
 type Demo = { slices: { id: string; critical?: boolean; functions: { id: string }[] }[]; placements: { slice: string; sites: Record<string, string> }[] };
 const demo = JSON.parse(fs.readFileSync(path.resolve(__dirname, '../../scenarios/demo.json'), 'utf8')) as Demo;
@@ -49,43 +48,14 @@ function totp(keyBase32: string, at: number): string {
 let browser: Browser;
 const contexts: BrowserContext[] = [];
 
-async function apiAs(email: string): Promise<APIRequestContext> {
-  const context = await browser.newContext();
-  contexts.push(context);
-  const res = await context.request.post(`${BASE_URL}/api/auth/sign-in`, { data: { email, password: DEMO_PASSWORD } });
-  if (!res.ok()) throw new Error(`sign-in as ${email}: ${res.status()}`);
-  return context.request;
-}
-
-async function ok(res: Promise<import('playwright-core').APIResponse>, what: string) {
-  const r = await res;
-  if (!r.ok()) throw new Error(`${what}: ${r.status()} ${await r.text()}`);
-  return r.status() === 204 ? null : r.json();
-}
+const apiAs = (email: string) => apiAsUser(browser, email, contexts);
 
 /** Book, assess, plan, accept and submit a window as the planner; returns its id. */
 async function prepareWindow(planner: APIRequestContext): Promise<string> {
-  const start = new Date(Date.now() + DAYS_AHEAD * 86_400_000);
-  start.setUTCHours(1, 0, 0, 0);
-  const booked = await ok(planner.post(`${BASE_URL}/api/windows`, { data: {
-    title: `E2E sign-off ${Date.now().toString(36)}`, startsAt: start.toISOString(),
-    endsAt: new Date(start.getTime() + 3 * 3_600_000).toISOString(), workType: 'power work',
+  return prepareSubmittedWindow(planner, {
+    title: `E2E sign-off ${Date.now().toString(36)}`, ...slotAhead(DAYS_AHEAD, 1), workType: 'power work',
     elements: [{ kind: 'site', id: criticalSite(), effect: 'down' }],
-  } }), 'book');
-  const windowId = booked.window.id as string;
-  await ok(planner.post(`${BASE_URL}/api/windows/${windowId}/assess`, { data: {} }), 'assess');
-  const run = await ok(planner.post(`${BASE_URL}/api/windows/${windowId}/plans`, { data: { timeLimitSeconds: 2 } }), 'plan');
-  const deadline = Date.now() + PLAN_TIMEOUT_MS;
-  let plan = run.plan;
-  while (plan.status !== 'done') {
-    if (['failed', 'cancelled'].includes(plan.status) || Date.now() > deadline) throw new Error(`plan run ${plan.status}: ${plan.error}`);
-    await new Promise((resolve) => setTimeout(resolve, 1000));
-    plan = (await ok(planner.get(`${BASE_URL}/api/plans/${plan.id}`), 'plan read')).plan;
-  }
-  const outageAccepted = plan.review.slices.filter((s: { outcome: string }) => s.outcome === 'unresolved').map((s: { slice: string }) => s.slice);
-  await ok(planner.post(`${BASE_URL}/api/plans/${plan.id}/accept`, { data: { outageAccepted } }), 'accept');
-  await ok(planner.post(`${BASE_URL}/api/windows/${windowId}/submit`, { data: {} }), 'submit');
-  return windowId;
+  });
 }
 
 async function enrol(page: Page): Promise<string> {
@@ -112,20 +82,14 @@ beforeAll(async () => {
 afterAll(async () => {
   if (savedPolicies) await admin.patch(`${BASE_URL}/api/policies`, { data: savedPolicies }).catch(() => undefined);
   await admin?.delete(`${BASE_URL}/api/signoff/otp-keys/${APPROVER_ID}`).catch(() => undefined);
-  if (windowId) {
-    const planner = await apiAs('planner@demo.test');
-    const w = await (await planner.get(`${BASE_URL}/api/windows/${windowId}`)).json();
-    await planner.post(`${BASE_URL}/api/windows/${windowId}/transition`, { data: { to: 'withdrawn', version: w.version } }).catch(() => undefined);
-  }
+  if (windowId) await withdrawWindow(await apiAs('planner@demo.test'), windowId);
   for (const context of contexts) await context.close().catch(() => undefined);
   await browser?.close();
 });
 
 test('an approver enrols for one-time codes, opens the queue on a phone and approves with a code', async () => {
   windowId = await prepareWindow(await apiAs('planner@demo.test'));
-  const before = (await ok(admin.get(`${BASE_URL}/api/policies`), 'policies')).policies;
-  savedPolicies = Object.fromEntries(SIGNOFF_POLICY_KEYS.map((k) => [k, before[k]]));
-  await ok(admin.patch(`${BASE_URL}/api/policies`, { data: { signoffQuorumLow: 1, signoffQuorumHigh: 1, signoffRequireCode: true } }), 'policy');
+  savedPolicies = await setSignoffPolicies(admin, { signoffQuorumLow: 1, signoffQuorumHigh: 1, signoffRequireCode: true });
 
   const context = await browser.newContext({ viewport: PHONE });
   contexts.push(context);
