@@ -1,13 +1,7 @@
 // Domain errors of move plans; each with a fixed code and HTTP status (messages name what to do next).
-import { AppError } from '../../errors';
+import { AppError, domainError } from '../../errors';
 
-export class PlanNotFoundError extends AppError {
-  readonly code = 'PLAN_NOT_FOUND';
-  readonly status = 404;
-  constructor(id: string) {
-    super(`No move plan ${id}.`);
-  }
-}
+export class PlanNotFoundError extends domainError('PLAN_NOT_FOUND', 404, (id: string) => `No move plan ${id}.`) {}
 
 /** Pinned functions or excluded sites that do not exist (the message lists them). */
 export class UnknownPlanInputsError extends AppError {
@@ -23,37 +17,17 @@ export class UnknownPlanInputsError extends AppError {
 }
 
 /** The window is not in a state where plans can be run or accepted. */
-export class WindowNotPlannableError extends AppError {
-  readonly code = 'WINDOW_NOT_PLANNABLE';
-  readonly status = 409;
-  constructor(status: string) {
-    super(`Move plans are made for assessed, planned or returned windows; this one is ${status}.`);
-  }
-}
+export class WindowNotPlannableError extends domainError('WINDOW_NOT_PLANNABLE', 409,
+  (status: string) => `Move plans are made for assessed, planned or returned windows; this one is ${status}.`) {}
 
-export class ImpactNotCurrentError extends AppError {
-  readonly code = 'IMPACT_NOT_CURRENT';
-  readonly status = 409;
-  constructor() {
-    super('The window has no current impact; assess it before planning.');
-  }
-}
+export class ImpactNotCurrentError extends domainError('IMPACT_NOT_CURRENT', 409,
+  () => 'The window has no current impact; assess it before planning.') {}
 
-export class QueueUnavailableError extends AppError {
-  readonly code = 'QUEUE_UNAVAILABLE';
-  readonly status = 503;
-  constructor(reason: string) {
-    super(`The plan run could not be queued (${reason}); try again in a moment.`);
-  }
-}
+export class QueueUnavailableError extends domainError('QUEUE_UNAVAILABLE', 503,
+  (reason: string) => `The plan run could not be queued (${reason}); try again in a moment.`) {}
 
-export class PlanNotCancellableError extends AppError {
-  readonly code = 'PLAN_NOT_CANCELLABLE';
-  readonly status = 409;
-  constructor(status: string) {
-    super(`Only queued or running plans can be cancelled; this one is ${status}.`);
-  }
-}
+export class PlanNotCancellableError extends domainError('PLAN_NOT_CANCELLABLE', 409,
+  (status: string) => `Only queued or running plans can be cancelled; this one is ${status}.`) {}
 
 /** Accepting was refused; `code` says why (PLAN_NOT_DONE, PLAN_STALE, NETWORK_CHANGED, PLAN_NO_LONGER_FITS). */
 export class PlanNotAcceptableError extends AppError {
