@@ -32,6 +32,21 @@ const AFTER = [
   { value: 'return', label: 'Move back afterwards' },
   { value: 'keep', label: 'Keep the new places' },
 ] as const;
+const NUMBERS = [
+  { key: 'timeLimitSeconds', label: 'Time limit (s)', testID: 'plan-form-time-limit' },
+  { key: 'population', label: 'Candidates', testID: 'plan-form-population' },
+  { key: 'seed', label: 'Seed', testID: 'plan-form-seed' },
+] as const;
+const PICKS = [
+  {
+    key: 'pinned', label: 'Keep where they are', loading: 'loadingFunctions', testID: 'plan-form-pinned',
+    hint: 'Functions that must stay on their current site; their slices can only be rerouted.',
+  },
+  {
+    key: 'excludedSites', label: 'Sites to leave out', loading: 'loadingSites', testID: 'plan-form-excluded',
+    hint: 'No function will be moved onto these sites.',
+  },
+] as const;
 
 export function PlanRunForm({ windowId, initial, functionOptions, siteOptions, loading, onQueued, onClose }: Props) {
   const [form, setForm] = useState<PlanFormState>(() => formFromSettings(initial));
@@ -54,39 +69,28 @@ export function PlanRunForm({ windowId, initial, functionOptions, siteOptions, l
       <ChoiceChips label="Search" choices={MODES} value={form.mode} onChange={(v) => v && set('mode', v as PlanFormState['mode'])} testID="plan-form-mode" />
       {errors.mode ? <Text style={styles.error}>{errors.mode}</Text> : null}
       <View style={styles.numbers}>
-        <View style={styles.number}>
-          <TextField label="Time limit (s)" value={form.timeLimitSeconds} onChangeText={(v) => set('timeLimitSeconds', v)} keyboardType="numeric" error={errors.timeLimitSeconds} testID="plan-form-time-limit" />
-        </View>
-        <View style={styles.number}>
-          <TextField label="Candidates" value={form.population} onChangeText={(v) => set('population', v)} keyboardType="numeric" error={errors.population} testID="plan-form-population" />
-        </View>
-        <View style={styles.number}>
-          <TextField label="Seed" value={form.seed} onChangeText={(v) => set('seed', v)} keyboardType="numeric" error={errors.seed} testID="plan-form-seed" />
-        </View>
+        {NUMBERS.map((n) => (
+          <View style={styles.number} key={n.key}>
+            <TextField label={n.label} value={form[n.key]} onChangeText={(v) => set(n.key, v)} keyboardType="numeric" error={errors[n.key]} testID={n.testID} />
+          </View>
+        ))}
       </View>
       <Text style={styles.hint}>The same seed and settings give the same plan. More candidates search wider but take longer per round.</Text>
       <Text style={styles.label}>After the window</Text>
       <ChoiceChips label="After the window" choices={AFTER} value={form.afterWindow} onChange={(v) => v && set('afterWindow', v as PlanFormState['afterWindow'])} testID="plan-form-after" />
-      <PickChips
-        label="Keep where they are"
-        hint="Functions that must stay on their current site; their slices can only be rerouted."
-        options={functionOptions}
-        picked={form.pinned}
-        onChange={(v) => set('pinned', v)}
-        error={errors.pinned}
-        loading={loading?.loadingFunctions}
-        testID="plan-form-pinned"
-      />
-      <PickChips
-        label="Sites to leave out"
-        hint="No function will be moved onto these sites."
-        options={siteOptions}
-        picked={form.excludedSites}
-        onChange={(v) => set('excludedSites', v)}
-        error={errors.excludedSites}
-        loading={loading?.loadingSites}
-        testID="plan-form-excluded"
-      />
+      {PICKS.map((p) => (
+        <PickChips
+          key={p.key}
+          label={p.label}
+          hint={p.hint}
+          options={p.key === 'pinned' ? functionOptions : siteOptions}
+          picked={form[p.key]}
+          onChange={(v) => set(p.key, v)}
+          error={errors[p.key]}
+          loading={loading?.[p.loading]}
+          testID={p.testID}
+        />
+      ))}
       {errors.form ? <Text style={styles.error} role="alert" testID="plan-form-error">{errors.form}</Text> : null}
       <View style={styles.actions}>
         <Button label="Start run" onPress={submit} busy={run.isPending} testID="plan-form-submit" />

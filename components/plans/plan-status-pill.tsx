@@ -1,7 +1,8 @@
 // A run's state as a small pill: quiet while waiting, the primary tone while computing, green when finished.
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, Text } from 'react-native';
 import type { PlanRunStatus } from '@/shared/plans';
 import { PLAN_STATUS_LABELS } from '@/components/plans/plan-format';
+import { StatusPill } from '@/components/status-pill';
 import { calendarColors, colors, radii, space, type } from '@/constants/theme';
 
 const TONES: Record<PlanRunStatus, string> = {
@@ -13,12 +14,7 @@ const TONES: Record<PlanRunStatus, string> = {
 };
 
 export function PlanStatusPill({ status, testID }: { status: PlanRunStatus; testID?: string }) {
-  return (
-    <View style={[styles.pill, { borderColor: TONES[status] }]} testID={testID}>
-      <View style={[styles.dot, { backgroundColor: TONES[status] }]} />
-      <Text style={styles.text}>{PLAN_STATUS_LABELS[status]}</Text>
-    </View>
-  );
+  return <StatusPill label={PLAN_STATUS_LABELS[status]} tone={TONES[status]} testID={testID} />;
 }
 
 /** Marks beside the state: the accepted run, and runs made before the window last changed. */
@@ -32,12 +28,6 @@ export function PlanMarks({ accepted, stale }: { accepted: boolean; stale: boole
 }
 
 const styles = StyleSheet.create({
-  pill: {
-    flexDirection: 'row', alignItems: 'center', gap: space.xs, alignSelf: 'flex-start',
-    borderWidth: 1.5, borderRadius: radii.pill, paddingHorizontal: space.sm, paddingVertical: space.xxs, backgroundColor: colors.surface,
-  },
-  dot: { width: 8, height: 8, borderRadius: radii.pill },
-  text: { ...type.label, color: colors.ink },
   mark: { ...type.label, paddingHorizontal: space.sm, paddingVertical: space.xxs, borderRadius: radii.pill, overflow: 'hidden' },
   accepted: { color: colors.onPrimary, backgroundColor: calendarColors.status.planned },
   stale: { color: calendarColors.critical, backgroundColor: calendarColors.criticalSoft },
