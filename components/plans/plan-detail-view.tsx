@@ -1,5 +1,5 @@
 // One run: its settings, then progress while it computes, the review when done, or why it failed or stopped.
-import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import type { Me } from '@/shared/api';
 import type { Plan } from '@/shared/plans';
 import { usePlanCancelMutation } from '@/hooks/queries/plans';
@@ -9,8 +9,9 @@ import { settingsSummary } from '@/components/plans/plan-format';
 import { PlanProgressView } from '@/components/plans/plan-progress';
 import { PlanReviewView, type PlanLinks } from '@/components/plans/plan-review';
 import { canPlan } from '@/components/plans/plan-roles';
+import { PlanPage } from '@/components/plans/plan-page';
 import { PlanMarks, PlanStatusPill } from '@/components/plans/plan-status-pill';
-import { colors, CONTENT_MAX_WIDTH_PX, radii, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
+import { colors, radii, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
 
 type Props = PlanLinks & { plan: Plan; windowTitle: string; me: Me; timeZone: string; onOpenRuns: () => void };
 
@@ -45,31 +46,21 @@ export function PlanDetailView({ plan, windowTitle, me, timeZone, onOpenRuns, ..
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_LAYOUT_MIN_WIDTH_PX;
   return (
-    <ScrollView contentContainerStyle={styles.page}>
-      <View style={styles.column}>
-        <View style={styles.back}>
-          <Button label="‹ All runs of this window" variant="quiet" onPress={onOpenRuns} testID="plan-back" />
-        </View>
-        <Text style={styles.title} role="heading" aria-level={1}>Move plan: {windowTitle}</Text>
-        <View style={styles.row}>
-          <PlanStatusPill status={plan.status} testID="plan-status" />
-          <PlanMarks accepted={plan.accepted} stale={plan.stale} />
-        </View>
-        <Text style={styles.muted}>Started {formatInstant(plan.createdAt, timeZone)} · {settingsSummary(plan.settings)}</Text>
-        {plan.stale ? (
-          <Text style={styles.warning} testID="plan-stale">The window was changed after this run; its figures may no longer hold and it cannot be accepted.</Text>
-        ) : null}
-        <Body plan={plan} me={me} wide={wide} {...links} />
+    <PlanPage back={{ label: '‹ All runs of this window', onPress: onOpenRuns, testID: 'plan-back' }} title={`Move plan: ${windowTitle}`}>
+      <View style={styles.row}>
+        <PlanStatusPill status={plan.status} testID="plan-status" />
+        <PlanMarks accepted={plan.accepted} stale={plan.stale} />
       </View>
-    </ScrollView>
+      <Text style={styles.muted}>Started {formatInstant(plan.createdAt, timeZone)} · {settingsSummary(plan.settings)}</Text>
+      {plan.stale ? (
+        <Text style={styles.warning} testID="plan-stale">The window was changed after this run; its figures may no longer hold and it cannot be accepted.</Text>
+      ) : null}
+      <Body plan={plan} me={me} wide={wide} {...links} />
+    </PlanPage>
   );
 }
 
 const styles = StyleSheet.create({
-  page: { padding: space.lg, alignItems: 'center' },
-  column: { width: '100%', maxWidth: CONTENT_MAX_WIDTH_PX, gap: space.md },
-  back: { alignSelf: 'flex-start' },
-  title: { ...type.title, color: colors.abyss },
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
   muted: { ...type.caption, color: colors.inkMuted },
   warning: { ...type.bodyStrong, color: colors.warning },

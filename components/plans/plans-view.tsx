@@ -1,18 +1,19 @@
 // A window's move plans: every run for comparison (newest first) and, for planners, the form for a new run.
 import { useState, type ReactNode } from 'react';
-import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
+import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import type { Me } from '@/shared/api';
 import type { PlanListItem, PlanSettings } from '@/shared/plans';
 import type { Window } from '@/shared/windows';
 import { Button } from '@/components/button';
 import { EmptyState } from '@/components/screen-states';
+import { PlanPage } from '@/components/plans/plan-page';
 import { PlanRunForm } from '@/components/plans/plan-run-form';
 import { PlanRunList } from '@/components/plans/plan-run-list';
 import { canPlan, windowTakesRuns } from '@/components/plans/plan-roles';
 import { useRunOptions } from '@/components/plans/use-run-options';
 import { Section } from '@/components/windows/section';
 import { StatusBadge } from '@/components/windows/status-badge';
-import { colors, CONTENT_MAX_WIDTH_PX, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
+import { colors, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
 
 type Props = {
   window: Window;
@@ -56,34 +57,24 @@ export function PlansView({ window: w, me, plans, timeZone, adjustFrom, onOpenPl
     : <PlanRunList plans={plans} timeZone={timeZone} onOpen={onOpenPlan} />;
   const form = <NewRun window={w} me={me} adjustFrom={adjustFrom} onOpenPlan={onOpenPlan} startOpen={wide} />;
   return (
-    <ScrollView contentContainerStyle={styles.page}>
-      <View style={styles.column}>
-        <View style={styles.back}>
-          <Button label="‹ Back to the window" variant="quiet" onPress={onOpenWindow} testID="plans-back" />
+    <PlanPage back={{ label: '‹ Back to the window', onPress: onOpenWindow, testID: 'plans-back' }} title={`Move plans: ${w.title}`}>
+      <StatusBadge status={w.status} testID="plans-window-status" />
+      {wide ? (
+        <View style={styles.columns}>
+          <View style={styles.main}><Section title="Runs">{runs}</Section></View>
+          <View style={styles.side}>{form}</View>
         </View>
-        <Text style={styles.title} role="heading" aria-level={1}>Move plans: {w.title}</Text>
-        <StatusBadge status={w.status} testID="plans-window-status" />
-        {wide ? (
-          <View style={styles.columns}>
-            <View style={styles.main}><Section title="Runs">{runs}</Section></View>
-            <View style={styles.side}>{form}</View>
-          </View>
-        ) : (
-          <>
-            {form}
-            <Section title="Runs">{runs}</Section>
-          </>
-        )}
-      </View>
-    </ScrollView>
+      ) : (
+        <>
+          {form}
+          <Section title="Runs">{runs}</Section>
+        </>
+      )}
+    </PlanPage>
   );
 }
 
 const styles = StyleSheet.create({
-  page: { padding: space.lg, alignItems: 'center' },
-  column: { width: '100%', maxWidth: CONTENT_MAX_WIDTH_PX, gap: space.md },
-  back: { alignSelf: 'flex-start' },
-  title: { ...type.title, color: colors.abyss },
   columns: { flexDirection: 'row', gap: space.md, alignItems: 'flex-start' },
   main: { flex: 1, minWidth: 0 },
   side: { flex: 1, minWidth: 0 },
