@@ -1,7 +1,7 @@
 // The shipped demo scenario seeds completely, and the demo's calendar starts just ahead of the seeding day.
 import fs from 'node:fs';
 import path from 'node:path';
-import { seedDemo } from '../../db/seed';
+import { DEMO_USERS, seedDemo } from '../../db/seed';
 import { countSeededRows } from '../../db/queries/count-seeded-rows';
 import type { Scenario } from '../../shared/scenario';
 import { createScratchDb, type TestDb } from './helpers';
@@ -31,7 +31,7 @@ test('the demo file seeds every site, span, tenant, slice, placement and window,
     ties: demo.slices.reduce((n, s) => n + s.ties.length, 0),
     placements: demo.placements.length,
     windows: (demo.windows ?? []).length,
-    users: 5,
+    users: DEMO_USERS.length,
   });
   await seedDemo(t.db, demo, { now });
   expect(await countSeededRows(t.db)).toEqual(first);
