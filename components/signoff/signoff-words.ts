@@ -29,6 +29,7 @@ export function decisionErrorView(error: unknown): { field: 'code' | 'comment' |
     case 'CODE_REQUIRED':
     case 'CODE_INVALID':
     case 'CODE_REPLAYED':
+    case 'CODE_LOCKED':
       return { field: 'code', message: error.message };
     case 'VALIDATION_FAILED': {
       const onCode = error.details.some((d) => d.path.includes('code'));

@@ -2,6 +2,7 @@
 import express, { type Router } from 'express';
 import { otpConfirmBodySchema, otpEnrolmentSchema, otpStatusSchema } from '../../shared/signoff';
 import { requireRole } from '../auth/guards';
+import { withOtpAttempt } from '../auth/otp-attempts';
 import { confirmOtp, enrolOtp, getOtpStatus, removeOtp, spendOtpCode } from '../auth/otp-keys';
 import { STAFF_ROLES } from '../services/windows/tenant-scope';
 import type { RouteDeps } from './deps';
@@ -19,18 +20,20 @@ export function otpRouter({ db, now }: RouteDeps): Router {
   });
   router.post('/confirm', staff, async (req, res) => {
     const { code } = otpConfirmBodySchema.parse(req.body);
-    res.json(otpStatusSchema.parse(await db.transaction((tx) => confirmOtp(tx, req.user!.id, code, now()))));
+    const at = now();
+    const status = await withOtpAttempt(db, req.user!.id, at, () => db.transaction((tx) => confirmOtp(tx, req.user!.id, code, at)));
+    res.json(otpStatusSchema.parse(status));
   });
   // A confirmed key is removed only with a current code: otherwise a stolen session could swap in its own
   // authenticator. A lost phone is an admin's reset (DELETE /api/signoff/otp-keys/:userId).
   router.delete('/', staff, async (req, res) => {
-    await db.transaction(async (tx) => {
-      const at = now();
+    const at = now();
+    await withOtpAttempt(db, req.user!.id, at, () => db.transaction(async (tx) => {
       if ((await getOtpStatus(tx, req.user!.id)).enrolled) {
         await spendOtpCode(tx, req.user!.id, otpConfirmBodySchema.parse(req.body ?? {}).code, at);
       }
       await removeOtp(tx, req.user!.id, req.user!.id, at);
-    });
+    }));
     res.status(204).end();
   });
   return router;

@@ -4,6 +4,7 @@ import type { SignoffDecisionBody, SignoffDecisionResult } from '../../../shared
 import { signoffs, windows } from '../../../db/schema';
 import { eq } from 'drizzle-orm';
 import { OtpCodeRequiredError } from '../../auth/otp-errors';
+import { withOtpAttempt } from '../../auth/otp-attempts';
 import { spendOtpCode } from '../../auth/otp-keys';
 import { insertAuditEntry } from '../../queries/audit';
 import { getPolicies } from '../../queries/windows/policies';
@@ -54,7 +55,9 @@ async function record(tx: Queryable, deps: SignoffDeps, windowId: string, user: 
 }
 
 export async function decideSignoff(deps: SignoffDeps, windowId: string, user: Me, body: SignoffDecisionBody): Promise<SignoffDecisionResult> {
-  const { ctx, ...result } = await deps.db.transaction((tx) => record(tx, deps, windowId, user, body));
+  const decide = () => deps.db.transaction((tx) => record(tx, deps, windowId, user, body));
+  // A decision carrying a code counts towards the wrong-code limit (the transaction itself rolls back).
+  const { ctx, ...result } = body.code ? await withOtpAttempt(deps.db, user.id, deps.now, decide) : await decide();
   if (result.status === 'returned') {
     // The planner who accepted the plan and the window's owner hear of it, with the approver's words.
     const people = await usersByIds(deps.db, [ctx.plan?.acceptedBy ?? null, ctx.window.ownerId]);

@@ -100,3 +100,25 @@ test('an approver without confirmed codes is told to enrol when the policy is on
   const audit = await ctx.pool.query(`select actor_id from audit_log where action = 'otp.remove' and entity_id = $1`, [ctx.users.approver.id]);
   expect(audit.rows.map((r) => r.actor_id)).toContain(ctx.users.admin.id);
 });
+
+test('wrong codes are audited, and after five within 15 minutes even a right code is refused until the window passes', async () => {
+  later(16 * 60); // clear earlier tests' failures for this user
+  const approver = await ctx.as('approver3');
+  const enrol = await approver('post', '/api/me/otp/enrol');
+  expect(enrol.status).toBe(201);
+  const right = () => codeAt(enrol.body.keyBase32, ctx.clock.now);
+  const wrong = () => String((Number(right()) + 500_000) % 1_000_000).padStart(6, '0');
+  for (let i = 0; i < 5; i += 1) {
+    const res = await approver('post', '/api/me/otp/confirm').send({ code: wrong() });
+    expect([res.status, res.body.error.code]).toEqual([403, 'CODE_INVALID']);
+  }
+  const locked = await approver('post', '/api/me/otp/confirm').send({ code: right() });
+  expect([locked.status, locked.body.error.code]).toEqual([429, 'CODE_LOCKED']);
+  const audited = await ctx.pool.query(
+    "select count(*)::int as n from audit_log where action = 'otp.code-failed' and entity_id = $1 and at > $2",
+    [`${ctx.prefix}-approver3`, new Date(ctx.clock.now.getTime() - 15 * 60_000)],
+  );
+  expect(audited.rows[0].n).toBe(5);
+  later(15 * 60 + 1);
+  expect((await approver('post', '/api/me/otp/confirm').send({ code: right() })).status).toBe(200);
+});
