@@ -20,4 +20,4 @@ export class OtpNotStartedError extends domainError('OTP_NOT_STARTED', 409,
   () => 'There is no enrolment waiting for a code; start the set-up again.') {}
 
 export class OtpLockedError extends domainError('CODE_LOCKED', 429,
-  (minutes: number) => `Too many wrong codes. Codes are refused for up to ${minutes} minutes; an admin can reset your authenticator.`) {}
+  (minutes: number) => `Too many wrong codes. Codes are refused for up to ${minutes} minutes; then try the current code again.`) {}
