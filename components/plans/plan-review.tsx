@@ -1,4 +1,6 @@
-// A finished run: cautions and totals first, then what happens to each slice, the map, quality figures, steps and risk.
+// A finished run. Phones: cautions and totals, the unresolved slices and the decision, then the map and the details.
+// From WIDE_LAYOUT_MIN_WIDTH_PX two columns: on the left what the planner decides on (totals, unresolved slices,
+// Accept / Adjust, per-slice outcomes); on the right the evidence (map, convergence, references, steps, risk).
 import { useMemo, useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { Plan, PlanReview } from '@/shared/plans';
@@ -33,20 +35,32 @@ export function PlanReviewView({ plan, review, canAct, wide, onAdjust, onResched
   const critical = review.slices.filter((s) => s.critical).map((s) => s.name);
   const toggle = (slice: string) => setTicked((t) => (t.includes(slice) ? t.filter((s) => s !== slice) : [...t, slice]));
 
+  const decision = (
+    <>
+      <PlanTotals review={review} />
+      {unresolved.length > 0 ? (
+        <PlanUnresolved
+          slices={unresolved}
+          ticked={ticked}
+          canTick={canAct && !plan.accepted && !plan.stale}
+          onToggle={toggle}
+          onReschedule={onReschedule}
+          onAddCapacity={onAddCapacity}
+        />
+      ) : null}
+      <PlanAcceptBar plan={plan} review={review} canAct={canAct} ticked={ticked} onAdjust={onAdjust} />
+    </>
+  );
   const outcomes = (
     <Section title="What happens to each slice" aside={<Text>{review.slices.length}</Text>}>
       <PlanSliceOutcomes slices={review.slices} names={names} selected={selected} onSelect={setSelected} />
     </Section>
   );
   const map = <Section title="Map"><PlanMap slices={review.slices} selectedSlice={selected} /></Section>;
-  const quality = (
+  const details = (
     <>
       <Section title="How the search went"><PlanConvergence trace={review.trace} /></Section>
       <Section title="Compared with the references"><PlanReferences review={review} /></Section>
-    </>
-  );
-  const stepsAndRisk = (
-    <>
       <Section title="Order of the moves (make before break)"><PlanSteps review={review} names={names} sliceName={sliceName} /></Section>
       <Section title="Risk during the window"><PlanRisk risk={review.risk} sliceName={sliceName} /></Section>
     </>
@@ -60,26 +74,14 @@ export function PlanReviewView({ plan, review, canAct, wide, onAdjust, onResched
           lead={`Critical slices in this plan: ${critical.join(', ')}.`}
         />
       ) : null}
-      <PlanTotals review={review} />
-      {unresolved.length > 0 ? (
-        <PlanUnresolved
-          slices={unresolved}
-          ticked={ticked}
-          canTick={canAct && !plan.accepted && !plan.stale}
-          onToggle={toggle}
-          onReschedule={onReschedule}
-          onAddCapacity={onAddCapacity}
-        />
-      ) : null}
-      <PlanAcceptBar plan={plan} review={review} canAct={canAct} ticked={ticked} onAdjust={onAdjust} />
       {wide ? (
         <View style={styles.columns}>
-          <View style={styles.column}>{outcomes}{stepsAndRisk}</View>
-          <View style={styles.column}>{map}{quality}</View>
+          <View style={styles.column} testID="plan-review-decision">{decision}{outcomes}</View>
+          <View style={styles.column} testID="plan-review-evidence">{map}{details}</View>
         </View>
       ) : (
-        // Phones: the map first, so the change reads at a glance before the long per-slice list.
-        <>{map}{outcomes}{quality}{stepsAndRisk}</>
+        // Phones: the map before the long per-slice list, so the change reads at a glance.
+        <>{decision}{map}{outcomes}{details}</>
       )}
     </View>
   );
@@ -87,6 +89,6 @@ export function PlanReviewView({ plan, review, canAct, wide, onAdjust, onResched
 
 const styles = StyleSheet.create({
   body: { gap: space.md },
-  columns: { flexDirection: 'row', gap: space.md, alignItems: 'flex-start' },
+  columns: { flexDirection: 'row', gap: space.lg, alignItems: 'flex-start' },
   column: { flex: 1, minWidth: 0, gap: space.md },
 });

@@ -34,8 +34,9 @@ export function PlanTotals({ review }: { review: PlanReview }) {
 const styles = StyleSheet.create({
   box: { gap: space.sm },
   tiles: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  // Three to a row, whatever the width: a phone and the wide screen's left column both read as 3 + 2 tiles.
   tile: {
-    flexGrow: 1, flexBasis: 90, padding: space.md, borderRadius: radii.md, backgroundColor: colors.surface,
+    flexGrow: 1, flexBasis: '30%', minWidth: 90, padding: space.md, borderRadius: radii.md, backgroundColor: colors.surface,
     borderWidth: 1, borderColor: colors.border, gap: space.xxs,
   },
   value: { ...type.figure, color: colors.abyss },

@@ -2,6 +2,7 @@
 // "Accept plan" held back until every unresolved slice's outage is ticked; a refusal shows the server's reason.
 import { act, fireEvent, screen, waitFor, within } from '@testing-library/react-native';
 import { PlanDetailView } from '@/components/plans/plan-detail-view';
+import { PlanReviewView } from '@/components/plans/plan-review';
 import { clearQueries, renderWithQueries, routedFetch, type Reply } from '../window-test-kit';
 import { approver, networkMap, plan, planner } from './plan-fixtures';
 
@@ -94,4 +95,26 @@ test('failed runs show their error and stale runs say the window changed', () =>
   show(undefined, planner, plan({ status: 'failed', review: null, error: 'The worker stopped three times.', stale: true }));
   expect(screen.getByTestId('plan-failed')).toHaveTextContent(/The worker stopped three times\./);
   expect(screen.getByTestId('plan-stale')).toHaveTextContent(/window was changed/);
+});
+
+test('on a wide screen the decision sits on the left and the evidence on the right; a phone has one column', async () => {
+  routedFetch([{ method: 'GET', path: /\/api\/network\/map$/, reply: () => ({ status: 200, body: networkMap }) }]);
+  const p = plan();
+  const view = (wide: boolean) => <PlanReviewView plan={p} review={p.review!} canAct wide={wide} {...links} />;
+  const { rerender } = renderWithQueries(view(true));
+  const decision = within(screen.getByTestId('plan-review-decision'));
+  const evidence = within(screen.getByTestId('plan-review-evidence'));
+  await waitFor(() => expect(evidence.getByTestId('plan-map')).toBeTruthy());
+  for (const id of ['plan-totals', 'plan-unresolved', 'plan-outage-sl-plc', 'plan-accept', 'plan-adjust', 'plan-slices']) {
+    expect(decision.getByTestId(id)).toBeTruthy();
+    expect(evidence.queryByTestId(id)).toBeNull();
+  }
+  for (const id of ['plan-map', 'plan-convergence', 'plan-references', 'plan-steps', 'plan-risk']) {
+    expect(evidence.getByTestId(id)).toBeTruthy();
+    expect(decision.queryByTestId(id)).toBeNull();
+  }
+  rerender(view(false));
+  expect(screen.queryByTestId('plan-review-decision')).toBeNull();
+  expect(screen.getByTestId('plan-accept')).toBeTruthy();
+  expect(screen.getByTestId('plan-map')).toBeTruthy();
 });
