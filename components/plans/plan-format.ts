@@ -37,6 +37,20 @@ export function progressFraction(progress: Pick<PlanProgress, 'elapsedMs' | 'tim
   return Math.min(1, Math.max(0, progress.elapsedMs / progress.timeLimitMs));
 }
 
+/**
+ * The Time figure. While searching: "5.0 s of 20.0 s", or "21.2 s (limit 20.0 s)" once a round runs past the limit.
+ * The server's clock stops when the search ends, so during the references it says when the search ended, not "now".
+ */
+export function elapsedFigure(progress: Pick<PlanProgress, 'elapsedMs' | 'phase'> | null, limitMs: number): string {
+  const elapsed = formatDurationMs(progress?.elapsedMs ?? 0);
+  const limit = formatDurationMs(limitMs);
+  if (progress && (progress.phase === 'references' || progress.phase === 'finishing')) {
+    return `search ended at ${elapsed} (limit ${limit})`;
+  }
+  if (progress && progress.elapsedMs > limitMs) return `${elapsed} (limit ${limit})`;
+  return `${elapsed} of ${limit}`;
+}
+
 export const PHASE_LABELS: Record<PlanProgress['phase'], string> = {
   preparing: 'Preparing the network',
   searching: 'Searching for placements',
@@ -52,16 +66,23 @@ export function formatObjective(objective: PlanObjective): string {
   return `${unresolved} · move cost ${formatCost(objective.moveCost)}`;
 }
 
-/** "Islands · seed 7 · 40 candidates · 20 s · back after · 2 pinned · 1 site left out". */
+/** Words for the run form's choices, so the summary reads like the form the planner filled in. */
+const MODE_WORDS: Record<PlanSettings['mode'], string> = { serial: 'One thread', islands: 'Islands (parallel)' };
+const AFTER_WORDS: Record<PlanSettings['afterWindow'], string> = {
+  return: 'moves back after the window',
+  keep: 'keeps the new placement after the window',
+};
+
+/** "One thread · seed 7 · 40 candidates · 20 s limit · moves back after the window · 2 functions kept in place · 1 site left out". */
 export function settingsSummary(settings: PlanSettings): string {
   const parts = [
-    settings.mode === 'islands' ? 'Islands' : 'Serial',
+    MODE_WORDS[settings.mode],
     `seed ${settings.seed}`,
     `${settings.population} candidates`,
-    `${settings.timeLimitSeconds} s`,
-    settings.afterWindow === 'return' ? 'back after' : 'kept after',
+    `${settings.timeLimitSeconds} s limit`,
+    AFTER_WORDS[settings.afterWindow],
   ];
-  if (settings.pinned.length > 0) parts.push(`${settings.pinned.length} pinned`);
+  if (settings.pinned.length > 0) parts.push(`${settings.pinned.length} ${settings.pinned.length === 1 ? 'function' : 'functions'} kept in place`);
   if (settings.excludedSites.length > 0) parts.push(`${settings.excludedSites.length} ${settings.excludedSites.length === 1 ? 'site' : 'sites'} left out`);
   return parts.join(' · ');
 }

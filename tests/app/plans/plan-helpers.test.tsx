@@ -51,5 +51,7 @@ test('accepting needs every unresolved slice ticked; gaps read as percentages', 
 test('function options name the site each function sits on; the settings summary is one line', () => {
   const options = functionOptionsFrom([{ slice: 's', sites: { 'f-2': 'agg-b', 'f-1': 'edge-a' } }], (id) => id.toUpperCase());
   expect(options).toEqual([{ id: 'f-1', label: 'f-1 · EDGE-A' }, { id: 'f-2', label: 'f-2 · AGG-B' }]);
-  expect(settingsSummary(plan().settings)).toBe('Serial · seed 7 · 40 candidates · 20 s · back after · 1 site left out');
+  expect(settingsSummary(plan().settings)).toBe('One thread · seed 7 · 40 candidates · 20 s limit · moves back after the window · 1 site left out');
+  const kept = { ...plan().settings, mode: 'islands' as const, afterWindow: 'keep' as const, pinned: ['f-1', 'f-2'], excludedSites: [] };
+  expect(settingsSummary(kept)).toBe('Islands (parallel) · seed 7 · 40 candidates · 20 s limit · keeps the new placement after the window · 2 functions kept in place');
 });
