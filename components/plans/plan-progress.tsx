@@ -2,7 +2,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { Plan } from '@/shared/plans';
 import { Button } from '@/components/button';
-import { formatDurationMs, formatObjective, PHASE_LABELS, progressFraction } from '@/components/plans/plan-format';
+import { elapsedFigure, formatObjective, PHASE_LABELS, progressFraction } from '@/components/plans/plan-format';
 import { colors, radii, space, type } from '@/constants/theme';
 
 type Props = { plan: Plan; canCancel: boolean; cancelling: boolean; cancelError: string | null; onCancel: () => void };
@@ -23,14 +23,14 @@ export function PlanProgressView({ plan, canCancel, cancelling, cancelError, onC
         aria-valuemin={0}
         aria-valuemax={100}
         aria-valuenow={percent}
-        aria-label="Share of the time limit used"
+        aria-label="Search progress against its time limit"
         testID="plan-progress-bar"
       >
         <View style={[styles.fill, { width: `${percent}%` }]} testID="plan-progress-fill" />
       </View>
       <View style={styles.figures}>
         <Figure label="Round" value={progress ? String(progress.generation) : '–'} testID="plan-progress-generation" />
-        <Figure label="Time" value={`${formatDurationMs(progress?.elapsedMs ?? 0)} of ${formatDurationMs(limitMs)}`} testID="plan-progress-elapsed" />
+        <Figure label="Time" value={elapsedFigure(progress, limitMs)} testID="plan-progress-elapsed" />
         <Figure label="Plans tried" value={progress ? String(progress.evaluations) : '–'} testID="plan-progress-evaluations" />
       </View>
       <Text style={styles.body} testID="plan-progress-best">

@@ -1,7 +1,7 @@
 // Progress of a running plan: the bar follows elapsed / time limit, and the round, best plan and time are shown.
 import { fireEvent, screen } from '@testing-library/react-native';
 import { PlanProgressView } from '@/components/plans/plan-progress';
-import { formatDurationMs, progressFraction } from '@/components/plans/plan-format';
+import { elapsedFigure, formatDurationMs, progressFraction } from '@/components/plans/plan-format';
 import { clearQueries, renderWithQueries } from '../window-test-kit';
 import { objective, plan } from './plan-fixtures';
 
@@ -41,4 +41,15 @@ test('the bar never passes full, and stays full while the references run after t
   expect(progressFraction({ phase: 'references', elapsedMs: 1_000, timeLimitMs: 20_000 })).toBe(1);
   expect(progressFraction({ phase: 'preparing', elapsedMs: 0, timeLimitMs: 0 })).toBe(0);
   expect([850, 12_400, 185_000].map(formatDurationMs)).toEqual(['850 ms', '12.4 s', '3 min 05 s']);
+});
+
+test('the time never claims more than the server knows: past the limit it says so, during the references it stops', () => {
+  expect(elapsedFigure({ phase: 'searching', elapsedMs: 21_200 }, 20_000)).toBe('21.2 s (limit 20.0 s)');
+  expect(elapsedFigure({ phase: 'references', elapsedMs: 12_300 }, 10_000)).toBe('search ended at 12.3 s (limit 10.0 s)');
+  expect(elapsedFigure({ phase: 'finishing', elapsedMs: 3_100 }, 20_000)).toBe('search ended at 3.1 s (limit 20.0 s)');
+  expect(elapsedFigure(null, 20_000)).toBe('0 ms of 20.0 s');
+  const refs = plan({ status: 'running', review: null, progress: { ...running.progress!, phase: 'references', elapsedMs: 12_300, timeLimitMs: 10_000 } });
+  renderWithQueries(<PlanProgressView plan={refs} canCancel={false} cancelling={false} cancelError={null} onCancel={() => {}} />);
+  expect(screen.getByTestId('plan-progress-elapsed')).toHaveTextContent('search ended at 12.3 s (limit 10.0 s)');
+  expect(screen.getByTestId('plan-progress-elapsed')).not.toHaveTextContent(/ of /);
 });
