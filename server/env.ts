@@ -24,6 +24,8 @@ const envSchema = z.object({
   WORKER_IN_PROCESS: z.enum(['true', 'false']).default('true'),
   /** How long past its time limit a plan run may hold its job before the queue assumes the worker died. */
   PLAN_EXPIRE_MARGIN_SECONDS: z.coerce.number().int().min(1).default(120),
+  /** A running plan whose worker has not written a heartbeat for this long is handed to another worker. */
+  PLAN_HEARTBEAT_STALE_SECONDS: z.coerce.number().int().min(5).default(30),
   /** How often the queue looks for expired jobs (pg-boss maintenance), in seconds. */
   JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(30),
   /** PostgreSQL schema of the job queue's tables; every API process and worker sharing a queue uses the same one. */
@@ -51,6 +53,7 @@ export type ServerConfig = {
   importMaxBytes: number;
   workerInProcess: boolean;
   planExpireMarginSeconds: number;
+  planHeartbeatStaleSeconds: number;
   jobMaintenanceSeconds: number;
   jobSchema: string;
   smtp: { mode: 'sink'; sinkPort: number } | { mode: 'relay'; url: string };
@@ -82,6 +85,7 @@ export function parseEnv(source: Record<string, string | undefined> = process.en
     importMaxBytes: env.IMPORT_MAX_BYTES,
     workerInProcess: env.WORKER_IN_PROCESS === 'true',
     planExpireMarginSeconds: env.PLAN_EXPIRE_MARGIN_SECONDS,
+    planHeartbeatStaleSeconds: env.PLAN_HEARTBEAT_STALE_SECONDS,
     jobMaintenanceSeconds: env.JOB_MAINTENANCE_SECONDS,
     jobSchema: env.JOB_SCHEMA,
     smtp: env.SMTP_URL === 'sink' ? { mode: 'sink', sinkPort: env.SMTP_SINK_PORT } : { mode: 'relay', url: env.SMTP_URL },

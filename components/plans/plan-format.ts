@@ -38,14 +38,15 @@ export function progressFraction(progress: Pick<PlanProgress, 'elapsedMs' | 'tim
 }
 
 /**
- * The Time figure. While searching: "5.0 s of 20.0 s", or "21.2 s (limit 20.0 s)" once a round runs past the limit.
- * The server's clock stops when the search ends, so during the references it says when the search ended, not "now".
+ * Time used by the run so far. While searching: "5.0 s of 20.0 s", or "21.2 s (limit 20.0 s)" once a round runs
+ * past the limit. After the search (references, write-up) the server keeps the clock moving, so the
+ * figure is the whole run's time and the search's limit is named beside it rather than as a share.
  */
 export function elapsedFigure(progress: Pick<PlanProgress, 'elapsedMs' | 'phase'> | null, limitMs: number): string {
   const elapsed = formatDurationMs(progress?.elapsedMs ?? 0);
   const limit = formatDurationMs(limitMs);
   if (progress && (progress.phase === 'references' || progress.phase === 'finishing')) {
-    return `search ended at ${elapsed} (limit ${limit})`;
+    return `${elapsed} in all (search limit ${limit})`;
   }
   if (progress && progress.elapsedMs > limitMs) return `${elapsed} (limit ${limit})`;
   return `${elapsed} of ${limit}`;

@@ -29,6 +29,8 @@ export const plans = pgTable(
     createdBy: text('created_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     startedAt: timestamp('started_at', { withTimezone: true }),
+    /** the running attempt's last sign of life (database clock); a stale one means its worker died */
+    heartbeatAt: timestamp('heartbeat_at', { withTimezone: true }),
     finishedAt: timestamp('finished_at', { withTimezone: true }),
     /** slices the planner accepted an outage for when accepting a plan that leaves them unresolved */
     outageAccepted: text('outage_accepted').array(),

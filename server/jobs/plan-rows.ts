@@ -17,7 +17,7 @@ export type PlanRunRow = NonNullable<Awaited<ReturnType<typeof selectPlanForRun>
 /** Takes the run: `running`, one more attempt. Null when it is no longer queued or running (cancelled, gone). */
 export async function markRunning(db: Db, id: string, now: Date, progress: PlanProgress): Promise<number | null> {
   const [row] = await db.update(plans).set({
-    status: 'running', attempts: sqlIncrement(), startedAt: now, progress, error: null, finishedAt: null,
+    status: 'running', attempts: sqlIncrement(), startedAt: now, heartbeatAt: sql`now()`, progress, error: null, finishedAt: null,
   }).where(and(eq(plans.id, id), inArray(plans.status, ['queued', 'running'])))
     .returning({ attempts: plans.attempts });
   return row?.attempts ?? null;
@@ -31,9 +31,13 @@ function sqlIncrement() {
 const ownedBy = (id: string, attempt: number) =>
   and(eq(plans.id, id), eq(plans.status, 'running'), eq(plans.attempts, attempt));
 
-/** False when the run is no longer this attempt's (cancelled, or taken over after an expiry). */
-export async function writeProgress(db: Db, id: string, attempt: number, progress: PlanProgress): Promise<boolean> {
-  const rows = await db.update(plans).set({ progress }).where(ownedBy(id, attempt)).returning({ id: plans.id });
+/**
+ * The attempt's heartbeat (on the database's clock, so workers on other machines compare alike), with new
+ * progress when there is some. False when the run is no longer this attempt's (cancelled, or taken over).
+ */
+export async function beat(db: Db, id: string, attempt: number, progress: PlanProgress | null): Promise<boolean> {
+  const rows = await db.update(plans).set({ heartbeatAt: sql`now()`, ...(progress ? { progress } : {}) })
+    .where(ownedBy(id, attempt)).returning({ id: plans.id });
   return rows.length > 0;
 }
 

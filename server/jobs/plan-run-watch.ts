@@ -1,9 +1,9 @@
-// Watches a plan run's thread from the hosting process: writes progress at most twice a second, checks the
-// row at least every second (a planner's cancel, another worker taking over) and enforces the job's expiry.
+// Watches a plan run's thread from the hosting process: writes a heartbeat and progress at most twice a second,
+// checks the row at least every second (a planner's cancel, another worker taking over) and enforces the job's expiry.
 import { setTimeout as delay } from 'node:timers/promises';
 import type { Db } from '../../db/client';
 import type { PlanProgress } from '../../shared/plans';
-import { readRunState, writeProgress } from './plan-rows';
+import { beat, readRunState } from './plan-rows';
 import type { PlanThread, ThreadOutcome } from './plan-thread';
 
 /** WARNING: one tick both throttles progress writes (≤ 2/s) and bounds how late a cancel is seen (≤ 0.5 s + query). */
@@ -46,8 +46,7 @@ export type WatchOptions = {
 };
 
 async function stillOurs(o: WatchOptions): Promise<StopReason | null> {
-  const p = o.progress.take();
-  if (p && await writeProgress(o.db, o.planId, o.attempt, p)) return null;
+  if (await beat(o.db, o.planId, o.attempt, o.progress.take())) return null;
   const state = await readRunState(o.db, o.planId);
   if (state?.status === 'running' && state.attempts === o.attempt) return null;
   return state?.status === 'cancelled' ? 'cancelled' : 'superseded';

@@ -4,6 +4,7 @@ import type { Db } from '../../db/client';
 import type { PlanRunJobData } from './boss-queue';
 import { markDeadRun } from './plan-dead-letter';
 import { runPlanJob } from './plan-run-handler';
+import { startSweeper } from './plan-sweeper';
 import type { StopReason } from './plan-run-watch';
 import { QUEUES } from './queue';
 
@@ -13,6 +14,8 @@ export type PlanWorkerOptions = {
   computeModule?: string;
   /** how often an idle worker asks for a job (pg-boss polling; minimum 0.5) */
   pollingIntervalSeconds?: number;
+  /** a run without a heartbeat for this long is handed back to the queue (default 30 s) */
+  heartbeatStaleSeconds?: number;
 };
 
 export interface PlanWorker {
@@ -51,9 +54,13 @@ export async function registerPlanWorker(boss: PgBoss, opts: PlanWorkerOptions):
   await boss.work<{ planId?: string }>(QUEUES.planRunDead, { pollingIntervalSeconds, includeMetadata: true }, async (jobs) => {
     for (const job of jobs) await markDeadRun(opts.db, job, log);
   });
+  const staleSeconds = opts.heartbeatStaleSeconds ?? 30;
+  // Heartbeats are written every half second; sweeping at a third of the stale time keeps recovery prompt.
+  const stopSweeper = startSweeper(opts.db, boss, { staleSeconds, everySeconds: Math.max(1, Math.floor(staleSeconds / 3)), log });
   return {
     async stop() {
       stopping = true;
+      stopSweeper();
       await boss.offWork(QUEUES.planRun);
       await boss.offWork(QUEUES.planRunDead);
       for (const stop of stoppers) stop('shutdown');

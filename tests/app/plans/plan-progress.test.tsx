@@ -45,11 +45,11 @@ test('the bar never passes full, and stays full while the references run after t
 
 test('the time never claims more than the server knows: past the limit it says so, during the references it stops', () => {
   expect(elapsedFigure({ phase: 'searching', elapsedMs: 21_200 }, 20_000)).toBe('21.2 s (limit 20.0 s)');
-  expect(elapsedFigure({ phase: 'references', elapsedMs: 12_300 }, 10_000)).toBe('search ended at 12.3 s (limit 10.0 s)');
-  expect(elapsedFigure({ phase: 'finishing', elapsedMs: 3_100 }, 20_000)).toBe('search ended at 3.1 s (limit 20.0 s)');
+  expect(elapsedFigure({ phase: 'references', elapsedMs: 12_300 }, 10_000)).toBe('12.3 s in all (search limit 10.0 s)');
+  expect(elapsedFigure({ phase: 'finishing', elapsedMs: 3_100 }, 20_000)).toBe('3.1 s in all (search limit 20.0 s)');
   expect(elapsedFigure(null, 20_000)).toBe('0 ms of 20.0 s');
   const refs = plan({ status: 'running', review: null, progress: { ...running.progress!, phase: 'references', elapsedMs: 12_300, timeLimitMs: 10_000 } });
   renderWithQueries(<PlanProgressView plan={refs} canCancel={false} cancelling={false} cancelError={null} onCancel={() => {}} />);
-  expect(screen.getByTestId('plan-progress-elapsed')).toHaveTextContent('search ended at 12.3 s (limit 10.0 s)');
+  expect(screen.getByTestId('plan-progress-elapsed')).toHaveTextContent('12.3 s in all (search limit 10.0 s)');
   expect(screen.getByTestId('plan-progress-elapsed')).not.toHaveTextContent(/ of /);
 });

@@ -29,6 +29,8 @@ export type TestJobsOptions = {
   computeModule?: string;
   /** worker log lines (default: dropped) */
   log?: (line: string) => void;
+  /** the worker's heartbeat staleness limit (default: the worker's own, 30 s) */
+  heartbeatStaleSeconds?: number;
 };
 
 export async function startTestJobs(config: ServerConfig, opts: TestJobsOptions = {}): Promise<TestJobs> {
@@ -39,7 +41,7 @@ export async function startTestJobs(config: ServerConfig, opts: TestJobsOptions 
   const { db, pool } = createDb(config.databaseUrl, { max: 4 });
   if (opts.workers) {
     // Short polling keeps the tests quick; production polls every second.
-    worker = await registerPlanWorker(boss, { db, log, computeModule: opts.computeModule, pollingIntervalSeconds: 0.5 });
+    worker = await registerPlanWorker(boss, { db, log, computeModule: opts.computeModule, pollingIntervalSeconds: 0.5, heartbeatStaleSeconds: opts.heartbeatStaleSeconds });
   }
   let stopped: Promise<void> | null = null;
   const stop = () => {
