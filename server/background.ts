@@ -26,7 +26,10 @@ type Stopper = () => Promise<void>;
 
 /** The job handlers of this process; each returns its stop function. */
 async function registerWorkers(boss: PgBoss, deps: BackgroundDeps, sinkPort?: number): Promise<Stopper[]> {
-  const plans = await registerPlanWorker(boss, { db: deps.db, log: deps.log, heartbeatStaleSeconds: deps.config.planHeartbeatStaleSeconds });
+  const plans = await registerPlanWorker(boss, {
+    db: deps.db, log: deps.log,
+    heartbeatStaleSeconds: deps.config.planHeartbeatStaleSeconds, expireMarginSeconds: deps.config.planExpireMarginSeconds,
+  });
   const stoppers: Stopper[] = [() => plans.stop()];
   // Mail (helper B1): to the in-process sink's actual port when there is one, else as configured.
   const mail = await registerMailWorker(boss, { db: deps.db, config: deps.config, sinkPort });

@@ -5,29 +5,49 @@ import { and, eq, lt, sql } from 'drizzle-orm';
 import type PgBoss from 'pg-boss';
 import type { Db } from '../../db/client';
 import { plans } from '../../db/schema';
+import { planSettingsSchema } from '../../shared/plans';
+import { planExpireSeconds } from '../services/plans/expire';
+import { finishFailed } from './plan-rows';
 import { QUEUES } from './queue';
 
 export type SweepResult = { planId: string; jobId: string | null }[];
 
-/** Runs `running` with a heartbeat older than `staleSeconds` (database clock) go back to `queued`; their jobs fail into a retry. */
-export async function sweepStalledRuns(db: Db, boss: PgBoss, staleSeconds: number): Promise<SweepResult> {
+/**
+ * Runs `running` with a heartbeat older than `staleSeconds` (database clock) go back to `queued` and their job is
+ * failed into a retry. A job that is no longer active (a stalled worker that woke up may have completed it) gets a
+ * fresh job; one whose retries are used up ends the run `failed`.
+ */
+export async function sweepStalledRuns(db: Db, boss: PgBoss, staleSeconds: number, expireMarginSeconds = 120): Promise<SweepResult> {
   const stale = and(
     eq(plans.status, 'running'),
     lt(plans.heartbeatAt, sql`now() - make_interval(secs => ${staleSeconds})`),
   );
   const taken = await db.update(plans).set({ status: 'queued', progress: null }).where(stale)
-    .returning({ planId: plans.id, jobId: plans.jobId });
+    .returning({ planId: plans.id, jobId: plans.jobId, settings: plans.settings });
+  const reason = `no heartbeat for ${staleSeconds} s: the worker stopped`;
   for (const run of taken) {
-    // pg-boss turns the failed job into a retry (or, with retries used up, sends it to the dead-letter queue).
-    if (run.jobId) await boss.fail(QUEUES.planRun, run.jobId, { message: `no heartbeat for ${staleSeconds} s: the worker stopped` });
+    const job = run.jobId ? await boss.getJobById(QUEUES.planRun, run.jobId) : null;
+    if (job?.state === 'active') {
+      // pg-boss turns the failed job into a retry (or, with retries used up, sends it to the dead-letter queue).
+      await boss.fail(QUEUES.planRun, job.id, { message: reason });
+    } else if (job?.state === 'failed') {
+      await finishFailed(db, run.planId, null, `The run was given up: ${reason}.`, new Date());
+    } else if (job?.state !== 'created' && job?.state !== 'retry') {
+      const settings = planSettingsSchema.parse(run.settings);
+      const expireInSeconds = planExpireSeconds(settings, { planExpireMarginSeconds: expireMarginSeconds });
+      const jobId = await boss.send(QUEUES.planRun, { planId: run.planId }, { expireInSeconds });
+      await db.update(plans).set({ jobId }).where(eq(plans.id, run.planId));
+    }
   }
-  return taken;
+  return taken.map(({ planId, jobId }) => ({ planId, jobId }));
 }
 
 /** Sweeps every `everySeconds` until stopped; errors (a database hiccup) are logged and the next sweep tries again. */
-export function startSweeper(db: Db, boss: PgBoss, o: { staleSeconds: number; everySeconds: number; log: (line: string) => void }): () => void {
+export function startSweeper(
+  db: Db, boss: PgBoss, o: { staleSeconds: number; everySeconds: number; expireMarginSeconds?: number; log: (line: string) => void },
+): () => void {
   const timer = setInterval(() => {
-    sweepStalledRuns(db, boss, o.staleSeconds)
+    sweepStalledRuns(db, boss, o.staleSeconds, o.expireMarginSeconds)
       .then((taken) => taken.forEach((t) => o.log(`plan ${t.planId}: worker stopped sending heartbeats; back to the queue`)))
       .catch((err: unknown) => o.log(`plan sweep failed: ${err instanceof Error ? err.message : String(err)}`));
   }, o.everySeconds * 1000);

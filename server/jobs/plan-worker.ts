@@ -16,6 +16,8 @@ export type PlanWorkerOptions = {
   pollingIntervalSeconds?: number;
   /** a run without a heartbeat for this long is handed back to the queue (default 30 s) */
   heartbeatStaleSeconds?: number;
+  /** PLAN_EXPIRE_MARGIN_SECONDS, for a job the sweep has to send afresh (default 120) */
+  expireMarginSeconds?: number;
 };
 
 export interface PlanWorker {
@@ -56,7 +58,9 @@ export async function registerPlanWorker(boss: PgBoss, opts: PlanWorkerOptions):
   });
   const staleSeconds = opts.heartbeatStaleSeconds ?? 30;
   // Heartbeats are written every half second; sweeping at a third of the stale time keeps recovery prompt.
-  const stopSweeper = startSweeper(opts.db, boss, { staleSeconds, everySeconds: Math.max(1, Math.floor(staleSeconds / 3)), log });
+  const stopSweeper = startSweeper(opts.db, boss, {
+    staleSeconds, everySeconds: Math.max(1, Math.floor(staleSeconds / 3)), expireMarginSeconds: opts.expireMarginSeconds, log,
+  });
   return {
     async stop() {
       stopping = true;

@@ -1,6 +1,6 @@
 // A worker that took a run and died (no more heartbeats) is noticed by the others' sweep: the run goes back to
 // the queue and is completed well before pg-boss would have expired the job.
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import { createDb, type Db } from '../../../db/client';
 import { plans } from '../../../db/schema';
 import { sweepStalledRuns } from '../../../server/jobs/plan-sweeper';
@@ -51,6 +51,27 @@ test('a stale run goes back to the queue and its job to a retry; a live one is l
   expect((await jobs.boss.getJobById(QUEUES.planRun, alive.jobId))?.state).toBe('active');
   // A second sweep finds nothing more: only one worker can take a run back.
   expect(await sweepStalledRuns(db, jobs.boss, 30)).toEqual([]);
+});
+
+test('a stale run whose job is no longer active gets a fresh job; one whose retries are used up ends failed', async () => {
+  const jobs = await startTestJobs(await demoConfig());
+  started.push(jobs);
+  // A stalled worker that woke up and completed the job after all: the run itself still needs a worker.
+  const woke = await runTakenByADeadWorker(jobs, 120);
+  await jobs.boss.complete(QUEUES.planRun, woke.jobId);
+  // The queue already gave up on this one (failed for good).
+  const spent = await runTakenByADeadWorker(jobs, 120);
+  await db.execute(sql.raw(`update "${jobs.schema}".job set retry_count = retry_limit where id = '${spent.jobId}'`));
+  await jobs.boss.fail(QUEUES.planRun, spent.jobId, { message: 'gave up' });
+  expect((await jobs.boss.getJobById(QUEUES.planRun, spent.jobId))?.state).toBe('failed');
+
+  await sweepStalledRuns(db, jobs.boss, 30);
+  const fresh = await readPlan(db, woke.planId);
+  expect(fresh.status).toBe('queued');
+  expect(fresh.jobId).not.toBe(woke.jobId);
+  expect((await jobs.boss.getJobById(QUEUES.planRun, fresh.jobId!))?.state).toBe('created');
+  const given = await readPlan(db, spent.planId);
+  expect([given.status, given.error]).toEqual(['failed', 'The run was given up: no heartbeat for 30 s: the worker stopped.']);
 });
 
 test('a live worker sweeps a dead one\'s run back and completes it, long before the job would expire', async () => {
