@@ -12,7 +12,7 @@ import { loadWindow } from './window-view';
 
 /** `notices`: the queue and config that withdrawal needs to send tenants their cancellations. */
 export async function transitionWindow(
-  db: Db, id: string, body: WindowTransition, user: Me, now: Date, notices?: NoticeMailDeps,
+  db: Db, id: string, body: WindowTransition, user: Me, now: Date, notices: NoticeMailDeps,
 ): Promise<void> {
   const w = await loadWindow(db, id, null);
   if (body.version !== w.version) throw new StaleVersionError();
@@ -24,7 +24,7 @@ export async function transitionWindow(
     if (version === null) throw new StaleVersionError();
     // Starting the work puts the accepted plan's placements in force; finishing or rolling back may restore them.
     await applyPlanPlacements(tx, { windowId: id, from: w.status, to: body.to, actorId: user.id, now });
-    if (body.to === 'withdrawn' && notices) await withdrawNotices(tx, { ...notices, now }, id, user.id);
+    if (body.to === 'withdrawn') await withdrawNotices(tx, { ...notices, now }, id, user.id);
     await insertAuditEntry(tx, {
       actorId: user.id, action: 'window.transition', entity: 'window', entityId: id, at: now,
       before: { status: w.status, version: w.version },
