@@ -8,6 +8,7 @@ import { CriticalCaution } from '@/components/critical-caution';
 import { formatWindowRange } from '@/components/time';
 import { Section } from '@/components/windows/section';
 import { StatusBadge } from '@/components/windows/status-badge';
+import { effectText } from '@/components/windows/window-elements-list';
 import { DecisionForm } from '@/components/signoff/decision-form';
 import { DecisionList } from '@/components/signoff/decision-list';
 import { blockedSentence } from '@/components/signoff/signoff-words';
@@ -26,7 +27,7 @@ type Props = {
 };
 
 function What({ summary: s, timeZone }: Pick<Props, 'summary' | 'timeZone'>) {
-  const elements = s.window.elements.map((e) => `${e.name}${e.effect === 'reduced' ? ` (reduced to ${Math.round((e.fraction ?? 0) * 100)} %)` : ''}`);
+  const elements = s.window.elements.map((e) => (e.effect === 'reduced' ? `${e.name} (${effectText(e).toLowerCase()})` : e.name));
   return (
     <View style={styles.what}>
       <Text style={styles.title} role="heading" aria-level={1} testID="signoff-title">{s.window.title}</Text>

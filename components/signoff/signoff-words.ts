@@ -39,5 +39,3 @@ export function decisionErrorView(error: unknown): { field: 'code' | 'comment' |
       return { field: null, message: error.message };
   }
 }
-
-export const percent = (p: number) => (p < 0.0001 ? '< 0.01 %' : `${(p * 100).toFixed(2)} %`);

@@ -1,9 +1,11 @@
 // The facts of a plan an approver weighs: who is moved, what stays unresolved, and the highest risks.
 import { StyleSheet, Text, View } from 'react-native';
 import type { SignoffSummary } from '@/shared/signoff';
+import { formatRiskPercent } from '@/components/impact/impact-format';
+import { SeverityPill } from '@/components/impact/severity-pill';
 import { Section } from '@/components/windows/section';
 import { RiskPill } from '@/components/signoff/risk-pill';
-import { percent, quorumSentence } from '@/components/signoff/signoff-words';
+import { quorumSentence } from '@/components/signoff/signoff-words';
 import { colors, space, type } from '@/constants/theme';
 
 export function MovesFacts({ summary: s }: { summary: SignoffSummary }) {
@@ -48,7 +50,10 @@ export function RiskFacts({ summary: s }: { summary: SignoffSummary }) {
       {s.highestRisks.map((r) => (
         <View key={r.slice} style={styles.line}>
           <Text style={styles.body}>{r.name}{r.unprotected ? ' (no backup path)' : ''}</Text>
-          <Text style={styles.figure}>{r.severity} · {percent(r.failureProbability)}</Text>
+          <View style={styles.figures}>
+            <SeverityPill severity={r.severity} />
+            <Text style={styles.figure}>{formatRiskPercent(r.failureProbability)}</Text>
+          </View>
         </View>
       ))}
     </Section>
@@ -61,6 +66,7 @@ const styles = StyleSheet.create({
   item: { gap: space.xxs },
   body: { ...type.body, color: colors.ink, flexShrink: 1 },
   strong: { ...type.bodyStrong, color: colors.ink },
+  figures: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   figure: { ...type.label, color: colors.inkMuted },
   muted: { ...type.caption, color: colors.inkMuted },
   danger: { ...type.caption, color: colors.danger },
