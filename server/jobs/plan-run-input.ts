@@ -1,6 +1,7 @@
 // Everything a plan run computes on, read from the database: settings, the current inventory with the window,
 // and what overlapping accepted plans reserve. Problems that a retry cannot fix are RunRefusedError.
 import type { Db } from '../../db/client';
+import { buildInventory } from '../../planner/model/build-inventory';
 import { planSettingsSchema } from '../../shared/plans';
 import type { ScenarioWindow } from '../../shared/scenario';
 import { loadScenario } from '../services/inventory/load-scenario';
@@ -48,7 +49,8 @@ export async function loadPlanInput(db: Db, plan: PlanRunRow): Promise<PlanThrea
   }
   const w = await loadCurrentWindow(db, plan);
   const scenario = await loadScenario(db);
-  const { reservations, reservedFor } = await reservationsFor(db, w.id);
+  // The scenario just read is the current inventory: compiled only if an overlapping accepted plan needs it.
+  const { reservations, reservedFor } = await reservationsFor(db, w.id, () => buildInventory(scenario));
   return {
     scenario: { ...scenario, windows: [scenarioWindowOf(w)] },
     windowId: w.id, settings: settings.data, reservations, reservedFor,

@@ -41,13 +41,18 @@ async function overlappingAccepted(db: Queryable, windowId: string, startsAt: Da
     .orderBy(windows.id);
 }
 
-/** Reservations for a run of `windowId`; `inv` is the current inventory (loaded when not given). */
-export async function reservationsFor(db: Queryable, windowId: string, inv?: Inventory): Promise<WindowReservations> {
+/**
+ * Reservations for a run of `windowId`. `inv` is the current inventory, or builds it from data the caller already
+ * read; it is only needed when an overlapping window has an accepted plan, and read from the database when not given.
+ */
+export async function reservationsFor(
+  db: Queryable, windowId: string, inv?: Inventory | (() => Inventory),
+): Promise<WindowReservations> {
   const [self] = await db.select({ startsAt: windows.startsAt, endsAt: windows.endsAt }).from(windows).where(eq(windows.id, windowId));
   if (!self) throw new WindowNotFoundError(windowId);
   const rows = await overlappingAccepted(db, windowId, self.startsAt, self.endsAt);
   if (rows.length === 0) return { reservations: {}, reservedFor: [] };
-  const inventory = inv ?? (await loadInventory(db)).inventory;
+  const inventory = typeof inv === 'function' ? inv() : inv ?? (await loadInventory(db)).inventory;
   const elements = await selectElementsByWindow(db, rows.map((r) => r.id));
   const others: OverlappingPlan[] = rows.map((r) => ({
     window: windowSpecOf({ ...r, elements: elements.get(r.id) ?? [] }),

@@ -1,12 +1,13 @@
 // Plans API test harness: a scratch database of its own, a recording job queue, a small network whose windows
 // force reroutes over one thin backup span, and finished plan runs computed in the test (no worker).
 import { plans, placements, sites, sliceFunctions, sliceTies, slices, spans, tenants } from '../../../db/schema';
+import { buildInventory } from '../../../planner/model/build-inventory';
 import { computePlan } from '../../../server/jobs/plan-compute';
+import { scenarioWindowOf } from '../../../server/jobs/plan-run-input';
 import { loadScenario } from '../../../server/services/inventory/load-scenario';
 import { reservationsFor } from '../../../server/services/plans/reservations';
 import { loadWindow } from '../../../server/services/windows/window-view';
 import { planSettingsSchema, type PlanReview, type PlanSettingsInput } from '../../../shared/plans';
-import type { ScenarioWindow } from '../../../shared/scenario';
 import { createRecordingQueue, type RecordingQueue } from '../helpers/jobs';
 import { removePrefixed } from '../helpers/remove-prefixed';
 import { useScratchDatabase } from '../helpers/scratch-database';
@@ -103,18 +104,6 @@ export async function bookAssessed(ctx: PlansContext, title: string, startsAt: s
   return id;
 }
 
-/** The stored window in the scenario format computePlan takes. */
-async function scenarioWindow(ctx: TestContext, windowId: string): Promise<ScenarioWindow> {
-  const w = await loadWindow(ctx.db, windowId, null);
-  const down = (kind: 'site' | 'span') => w.elements.filter((e) => e.kind === kind && e.effect === 'down').map((e) => e.id);
-  return {
-    id: w.id, title: w.title, start: w.startsAt.toISOString(), end: w.endsAt.toISOString(),
-    down: { sites: down('site'), spans: down('span') },
-    reduced: w.elements.filter((e) => e.effect === 'reduced')
-      .map((e) => (e.kind === 'site' ? { site: e.id, fraction: e.fraction ?? 1 } : { span: e.id, fraction: e.fraction ?? 1 })),
-  };
-}
-
 /**
  * Computes a plan for the window as the worker would (computePlan on the current inventory, with or without the
  * reservations of other accepted plans) and stores it as a finished run made for the window's current version.
@@ -123,8 +112,11 @@ export async function storeFinishedPlan(
   ctx: TestContext, windowId: string, opts: { settings?: PlanSettingsInput; reserve?: boolean } = {},
 ): Promise<{ planId: string; review: PlanReview }> {
   const settings = planSettingsSchema.parse({ timeLimitSeconds: 1, ...opts.settings });
-  const scenario = { ...(await loadScenario(ctx.db)), windows: [await scenarioWindow(ctx, windowId)] };
-  const held = opts.reserve === false ? { reservations: {}, reservedFor: [] } : await reservationsFor(ctx.db, windowId);
+  const current = await loadScenario(ctx.db);
+  const scenario = { ...current, windows: [scenarioWindowOf(await loadWindow(ctx.db, windowId, null))] };
+  const held = opts.reserve === false
+    ? { reservations: {}, reservedFor: [] }
+    : await reservationsFor(ctx.db, windowId, () => buildInventory(current));
   const review = await computePlan({ scenario, windowId, settings, ...held }, () => undefined);
   const [w] = (await ctx.pool.query('select version from windows where id = $1', [windowId])).rows;
   const planId = `pl-${ctx.prefix}-${Math.random().toString(36).slice(2, 10)}`;
