@@ -1,7 +1,7 @@
 // A stored sink message parsed for the Outbox with mailparser: headers, text body, attachments, invitation.
 import { simpleParser, type AddressObject, type Attachment, type HeaderValue } from 'mailparser';
 import type { OutboxAttachment, OutboxCalendar, OutboxMessage } from '../../shared/outbox';
-import { calendarMethod, firstEvent } from './ics-event';
+import { calendarMethod, firstEvent, parseCalendar } from './ics-event';
 
 export type ParsedMail = Omit<OutboxMessage, 'id' | 'receivedAt' | 'sizeBytes' | 'envelope'>;
 
@@ -28,7 +28,12 @@ function calendarOf(attachments: Attachment[]): OutboxCalendar | null {
     ?? attachments.find((a) => a.contentType.toLowerCase() === 'application/ics' || /\.ics$/i.test(a.filename ?? ''));
   if (!part) return null;
   const text = part.content.toString('utf8');
-  return { method: methodParam(part) ?? calendarMethod(text), text, event: firstEvent(text) };
+  const calendar = parseCalendar(text);
+  return {
+    method: methodParam(part) ?? (calendar && calendarMethod(calendar)),
+    text,
+    event: calendar && firstEvent(calendar),
+  };
 }
 
 export async function parseSinkMessage(raw: string): Promise<ParsedMail> {
