@@ -1,6 +1,5 @@
 // Checks made when a plan is accepted: outages named, placements unchanged since the run, and the plan still
 // verifying on the current network with the capacity other accepted plans hold.
-import type { SlicePlan } from '../../../planner/model/types';
 import { verifyPlan } from '../../../planner/verify/verify-plan';
 import type { PlacementView, PlanReview, PlanSlice } from '../../../shared/plans';
 import type { Scenario } from '../../../shared/scenario';
@@ -9,7 +8,7 @@ import { loadInventory } from '../inventory/load-scenario';
 import { windowSpecOf } from '../windows/compute-impact';
 import { loadWindow } from '../windows/window-view';
 import { OutageNotAcceptedError, PlanNotAcceptableError } from './errors';
-import { reservationsFor } from './reservations';
+import { reservationsFor, toSlicePlan } from './reservations';
 
 /** How many violations a refusal spells out (the rest are counted). */
 const LISTED_VIOLATIONS = 5;
@@ -40,11 +39,6 @@ export function changedSlices(scenario: Scenario, slices: PlanSlice[]): string[]
     const now = current.get(s.slice);
     return now === undefined || !samePlacement(s.before, now);
   }).map((s) => s.slice);
-}
-
-/** A stored review slice in the planner's id form (`after` is null when unresolved). */
-export function toSlicePlan(s: PlanSlice): SlicePlan {
-  return { slice: s.slice, outcome: s.outcome, sites: { ...(s.after?.sites ?? {}) }, paths: { ...(s.after?.paths ?? {}) } };
 }
 
 /**

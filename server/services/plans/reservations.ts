@@ -18,7 +18,7 @@ export interface WindowReservations {
 }
 
 /** A stored review slice in the planner's id form (`after` is null when the plan left it unresolved). */
-function toSlicePlan(s: PlanSlice): SlicePlan {
+export function toSlicePlan(s: PlanSlice): SlicePlan {
   return { slice: s.slice, outcome: s.outcome, sites: { ...(s.after?.sites ?? {}) }, paths: { ...(s.after?.paths ?? {}) } };
 }
 

@@ -6,8 +6,7 @@ import { addPlacementLoad, placementLoad, windowCapacity } from '../../../planne
 import { fromSlicePlans } from '../../../planner/plan/slice-plans';
 import { verifyPlan } from '../../../planner/verify/verify-plan';
 import { loadInventory } from '../../../server/services/inventory/load-scenario';
-import { toSlicePlan } from '../../../server/services/plans/accept-checks';
-import { reservationsFor } from '../../../server/services/plans/reservations';
+import { reservationsFor, toSlicePlan } from '../../../server/services/plans/reservations';
 import { windowSpecOf } from '../../../server/services/windows/compute-impact';
 import { loadWindow } from '../../../server/services/windows/window-view';
 import type { PlanReview } from '../../../shared/plans';
