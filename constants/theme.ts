@@ -59,6 +59,9 @@ export const WIDE_LAYOUT_MIN_WIDTH_PX = 900;
 /** Widest a content column grows on large screens, so lines stay readable. */
 export const CONTENT_MAX_WIDTH_PX = 1080;
 
+/** Column of phone-first screens (sign-off, one-time codes) on large screens: still about a phone and a half. */
+export const NARROW_CONTENT_MAX_WIDTH_PX = CONTENT_MAX_WIDTH_PX * 0.6;
+
 // ── Map tokens (components/map) ────────────────────────────────────────────────
 // Our own cartography: pale sand land on still water, spans from cool (idle) to warm (full).
 export const mapColors = {

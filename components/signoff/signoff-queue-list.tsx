@@ -1,11 +1,12 @@
 // The approver's queue: windows in review, soonest first, each with its risk, approvals so far and my state.
 import type { ReactNode } from 'react';
-import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { SignoffQueueItem } from '@/shared/signoff';
+import { PageColumn } from '@/components/page-column';
 import { formatWindowRange } from '@/components/time';
 import { RiskPill } from '@/components/signoff/risk-pill';
 import { quorumSentence } from '@/components/signoff/signoff-words';
-import { colors, CONTENT_MAX_WIDTH_PX, radii, space, type } from '@/constants/theme';
+import { colors, radii, space, type } from '@/constants/theme';
 
 type Props = { items: SignoffQueueItem[]; timeZone: string; onOpen: (windowId: string) => void; footer?: ReactNode };
 
@@ -38,20 +39,16 @@ function QueueRow({ item, timeZone, onOpen }: { item: SignoffQueueItem; timeZone
 
 export function SignoffQueueList({ items, timeZone, onOpen, footer }: Props) {
   return (
-    <ScrollView contentContainerStyle={styles.page}>
-      <View style={styles.column}>
-        <Text style={styles.heading} role="heading" aria-level={1}>Sign-off</Text>
-        <Text style={styles.meta}>{items.length} window{items.length === 1 ? '' : 's'} in review · times in {timeZone}</Text>
-        {items.map((item) => <QueueRow key={item.windowId} item={item} timeZone={timeZone} onOpen={onOpen} />)}
-        {footer}
-      </View>
-    </ScrollView>
+    <PageColumn narrow>
+      <Text style={styles.heading} role="heading" aria-level={1}>Sign-off</Text>
+      <Text style={styles.meta}>{items.length} window{items.length === 1 ? '' : 's'} in review · times in {timeZone}</Text>
+      {items.map((item) => <QueueRow key={item.windowId} item={item} timeZone={timeZone} onOpen={onOpen} />)}
+      {footer}
+    </PageColumn>
   );
 }
 
 const styles = StyleSheet.create({
-  page: { padding: space.lg, alignItems: 'center' },
-  column: { width: '100%', maxWidth: CONTENT_MAX_WIDTH_PX * 0.6, gap: space.md },
   heading: { ...type.title, color: colors.abyss },
   row: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, padding: space.lg, gap: space.xs },
   pressed: { backgroundColor: colors.primarySoft },

@@ -1,10 +1,11 @@
 // One window's sign-off on one phone screen: what and when, who moves, what stays unresolved, risk, cautions, the MOP
 // and the full plan one tap away, then the decision and the decisions so far.
-import { Linking, ScrollView, StyleSheet, Text, View } from 'react-native';
+import { Linking, StyleSheet, Text, View } from 'react-native';
 import type { SignoffDecisionBody, SignoffSummary } from '@/shared/signoff';
 import type { WindowStatus } from '@/shared/windows';
 import { Button } from '@/components/button';
 import { CriticalCaution } from '@/components/critical-caution';
+import { PageColumn } from '@/components/page-column';
 import { formatWindowRange } from '@/components/time';
 import { Section } from '@/components/windows/section';
 import { StatusBadge } from '@/components/windows/status-badge';
@@ -13,7 +14,7 @@ import { DecisionForm } from '@/components/signoff/decision-form';
 import { DecisionList } from '@/components/signoff/decision-list';
 import { blockedSentence } from '@/components/signoff/signoff-words';
 import { MovesFacts, RiskFacts, UnresolvedFacts } from '@/components/signoff/summary-facts';
-import { colors, CONTENT_MAX_WIDTH_PX, space, type } from '@/constants/theme';
+import { colors, space, type } from '@/constants/theme';
 
 type Props = {
   summary: SignoffSummary;
@@ -45,43 +46,39 @@ export function SignoffSummaryView(props: Props) {
   const { summary: s, timeZone } = props;
   const blocked = blockedSentence(s.me.blocked);
   return (
-    <ScrollView contentContainerStyle={styles.page}>
-      <View style={styles.column}>
-        <What summary={s} timeZone={timeZone} />
-        {s.criticalSlices > 0 ? (
-          <CriticalCaution
-            testID="signoff-critical-caution" title="Critical services are moved"
-            lead={`${s.criticalSlices} affected slice${s.criticalSlices === 1 ? ' carries' : 's carry'} public-safety, health or utility services.`}
-          />
-        ) : null}
-        <MovesFacts summary={s} />
-        <UnresolvedFacts summary={s} />
-        <RiskFacts summary={s} />
-        <View style={styles.row}>
-          <Button label="Full plan" variant="quiet" onPress={() => props.onOpenPlan(s.plan.href)} testID="signoff-open-plan" />
-          {s.mop ? <Button label={`MOP: ${s.mop.fileName}`} variant="quiet" onPress={() => void Linking.openURL(s.mop!.href)} testID="signoff-mop" /> : (
-            <Text style={styles.muted} testID="signoff-no-mop">No MOP attached.</Text>
-          )}
-        </View>
-        <Section title={`Your decision · round ${s.window.round}`} testID="signoff-decide">
-          {blocked ? <Text style={styles.body} testID="signoff-blocked">{blocked}</Text> : (
-            <DecisionForm
-              requireCode={s.requireCode} codeEnrolled={props.codeEnrolled} busy={props.deciding} error={props.decisionError}
-              onDecide={props.onDecide} onEnrol={props.onEnrol}
-            />
-          )}
-        </Section>
-        <Section title="Decisions so far" testID="signoff-decisions">
-          <DecisionList decisions={s.decisions} round={s.window.round} timeZone={timeZone} />
-        </Section>
+    <PageColumn narrow>
+      <What summary={s} timeZone={timeZone} />
+      {s.criticalSlices > 0 ? (
+        <CriticalCaution
+          testID="signoff-critical-caution" title="Critical services are moved"
+          lead={`${s.criticalSlices} affected slice${s.criticalSlices === 1 ? ' carries' : 's carry'} public-safety, health or utility services.`}
+        />
+      ) : null}
+      <MovesFacts summary={s} />
+      <UnresolvedFacts summary={s} />
+      <RiskFacts summary={s} />
+      <View style={styles.row}>
+        <Button label="Full plan" variant="quiet" onPress={() => props.onOpenPlan(s.plan.href)} testID="signoff-open-plan" />
+        {s.mop ? <Button label={`MOP: ${s.mop.fileName}`} variant="quiet" onPress={() => void Linking.openURL(s.mop!.href)} testID="signoff-mop" /> : (
+          <Text style={styles.muted} testID="signoff-no-mop">No MOP attached.</Text>
+        )}
       </View>
-    </ScrollView>
+      <Section title={`Your decision · round ${s.window.round}`} testID="signoff-decide">
+        {blocked ? <Text style={styles.body} testID="signoff-blocked">{blocked}</Text> : (
+          <DecisionForm
+            requireCode={s.requireCode} codeEnrolled={props.codeEnrolled} busy={props.deciding} error={props.decisionError}
+            onDecide={props.onDecide} onEnrol={props.onEnrol}
+          />
+        )}
+      </Section>
+      <Section title="Decisions so far" testID="signoff-decisions">
+        <DecisionList decisions={s.decisions} round={s.window.round} timeZone={timeZone} />
+      </Section>
+    </PageColumn>
   );
 }
 
 const styles = StyleSheet.create({
-  page: { padding: space.lg, alignItems: 'center' },
-  column: { width: '100%', maxWidth: CONTENT_MAX_WIDTH_PX * 0.6, gap: space.md },
   what: { gap: space.xs },
   title: { ...type.title, color: colors.abyss },
   when: { ...type.bodyStrong, color: colors.ink },
