@@ -1,8 +1,8 @@
 // Outbox (admin): what the local SMTP sink received — GET /api/outbox, /api/outbox/:id, /api/outbox/:id/raw.
 // Tenant users get 404 (the Outbox does not exist for them); other roles without admin get 403.
-import express, { type RequestHandler, type Router } from 'express';
+import express, { type Router } from 'express';
 import { outboxIdParamSchema, outboxListQuerySchema, outboxListSchema, outboxMessageSchema } from '../../shared/outbox';
-import { requireRole } from '../auth/guards';
+import { hideFromTenants, requireRole } from '../auth/guards';
 import { AppError, RouteNotFoundError } from '../errors';
 import { parseSinkMessage } from '../mail/parse-message';
 import { getSinkMessage, listSinkMessages, type SinkMessageRow } from '../mail/sink-messages';
@@ -16,15 +16,11 @@ export class OutboxMessageNotFoundError extends AppError {
   }
 }
 
-const hideFromTenants: RequestHandler = (req, _res, next) => {
-  const roles = req.user?.roles ?? [];
-  const tenantOnly = roles.includes('tenant') && !roles.includes('admin');
-  next(tenantOnly ? new RouteNotFoundError(req.method, req.originalUrl.split('?')[0]) : undefined);
-};
+const outboxHidden = hideFromTenants((req) => new RouteNotFoundError(req.method, req.originalUrl.split('?')[0]));
 
 export function outboxRouter({ db }: RouteDeps): Router {
   const router = express.Router();
-  router.use(hideFromTenants, requireRole('admin'));
+  router.use(outboxHidden, requireRole('admin'));
 
   const load = async (rawId: unknown): Promise<SinkMessageRow> => {
     const { id } = outboxIdParamSchema.parse({ id: rawId });

@@ -1,29 +1,25 @@
 // /api/signoff: the approver's queue, a window's one-screen summary, decisions, and an admin's reset of a user's
 // one-time codes; plus POST /api/windows/:id/submit (planner), mounted beside the windows router.
-import express, { type Request, type RequestHandler, type Router } from 'express';
+import express, { type Request, type Router } from 'express';
 import { signoffDecisionBodySchema, signoffDecisionResultSchema, signoffQueueSchema, signoffSubmitResultSchema, signoffSummarySchema } from '../../shared/signoff';
-import { requireRole } from '../auth/guards';
+import { hideFromTenants, requireRole } from '../auth/guards';
 import { removeOtp } from '../auth/otp-keys';
 import { decideSignoff } from '../services/signoff/decide';
 import { submitForSignoff } from '../services/signoff/submit';
 import { signoffQueue, signoffSummary } from '../services/signoff/summary';
 import { WindowNotFoundError } from '../services/windows/errors';
-import { STAFF_ROLES, tenantScopeOf } from '../services/windows/tenant-scope';
+import { STAFF_ROLES } from '../services/windows/tenant-scope';
 import type { RouteDeps } from './deps';
 
 const windowIdOf = (req: Request, param = 'windowId') => String(req.params[param]);
 
 /** Tenant users never learn whether a sign-off exists: the window is simply not found (404, not 403). */
-function hideFromTenants(param: string): RequestHandler {
-  return (req, _res, next) => {
-    next(req.user && tenantScopeOf(req.user) !== null ? new WindowNotFoundError(windowIdOf(req, param)) : undefined);
-  };
-}
+const windowHidden = (param: string) => hideFromTenants((req) => new WindowNotFoundError(windowIdOf(req, param)));
 
 export function signoffRouter(deps: RouteDeps): Router {
   const { db, now } = deps;
   const router = express.Router();
-  const hide = hideFromTenants('windowId');
+  const hide = windowHidden('windowId');
   router.get('/queue', requireRole('approver', 'admin'), async (req, res) => {
     res.json(signoffQueueSchema.parse(await signoffQueue(db, req.user!)));
   });
@@ -46,7 +42,7 @@ export function signoffRouter(deps: RouteDeps): Router {
 /** POST /api/windows/:id/submit; mounted at /windows after the windows router, which has no such route. */
 export function signoffSubmitRouter(deps: RouteDeps): Router {
   const router = express.Router();
-  router.post('/:id/submit', hideFromTenants('id'), requireRole('planner'), async (req, res) => {
+  router.post('/:id/submit', windowHidden('id'), requireRole('planner'), async (req, res) => {
     const result = await submitForSignoff({ ...deps, now: deps.now() }, windowIdOf(req, 'id'), req.user!);
     res.json(signoffSubmitResultSchema.parse(result));
   });
