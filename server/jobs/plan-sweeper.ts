@@ -7,6 +7,8 @@ import type { Db } from '../../db/client';
 import { plans } from '../../db/schema';
 import { planSettingsSchema } from '../../shared/plans';
 import { planExpireSeconds } from '../services/plans/expire';
+import { setPlanJobId } from '../services/plans/plan-rows';
+import { createJobQueue } from './boss-queue';
 import { finishFailed } from './plan-rows';
 import { QUEUES } from './queue';
 
@@ -35,8 +37,7 @@ export async function sweepStalledRuns(db: Db, boss: PgBoss, staleSeconds: numbe
     } else if (job?.state !== 'created' && job?.state !== 'retry') {
       const settings = planSettingsSchema.parse(run.settings);
       const expireInSeconds = planExpireSeconds(settings, { planExpireMarginSeconds: expireMarginSeconds });
-      const jobId = await boss.send(QUEUES.planRun, { planId: run.planId }, { expireInSeconds });
-      await db.update(plans).set({ jobId }).where(eq(plans.id, run.planId));
+      await setPlanJobId(db, run.planId, await createJobQueue(boss).sendPlanRun(run.planId, { expireInSeconds }));
     }
   }
   return taken.map(({ planId, jobId }) => ({ planId, jobId }));
