@@ -3,18 +3,13 @@
 import express, { type Router } from 'express';
 import { outboxIdParamSchema, outboxListQuerySchema, outboxListSchema, outboxMessageSchema } from '../../shared/outbox';
 import { hideFromTenants, requireRole } from '../auth/guards';
-import { AppError, RouteNotFoundError } from '../errors';
+import { domainError, RouteNotFoundError } from '../errors';
 import { parseSinkMessage } from '../mail/parse-message';
 import { getSinkMessage, listSinkMessages, type SinkMessageRow } from '../mail/sink-messages';
 import type { RouteDeps } from './deps';
 
-export class OutboxMessageNotFoundError extends AppError {
-  readonly code = 'MESSAGE_NOT_FOUND';
-  readonly status = 404;
-  constructor(id: number) {
-    super(`No message ${id} in the outbox.`);
-  }
-}
+export class OutboxMessageNotFoundError extends domainError('MESSAGE_NOT_FOUND', 404,
+  (id: number) => `No message ${id} in the outbox.`) {}
 
 const outboxHidden = hideFromTenants((req) => new RouteNotFoundError(req.method, req.originalUrl.split('?')[0]));
 
