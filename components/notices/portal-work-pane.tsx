@@ -1,18 +1,17 @@
 // The tenant portal's list side: a title, the zone times are shown in, then the list or its state.
 import type { ReactNode } from 'react';
-import { ScrollView, StyleSheet, Text, View } from 'react-native';
+import { ScrollView, StyleSheet, Text } from 'react-native';
 import type { PortalWork } from '@/shared/notices';
+import { ListPane } from '@/components/inventory/list-pane';
 import { zoneName } from '@/components/time';
 import { colors, space, type } from '@/constants/theme';
 import { PortalWorkRow } from './portal-work-row';
 
 export function PortalWorkPane({ children }: { children: ReactNode }) {
   return (
-    <View style={styles.pane} testID="notices-pane">
-      <Text style={styles.title} role="heading" aria-level={1}>Planned work</Text>
-      <Text style={styles.hint}>Maintenance that touches your slices, and the notices we sent you about it.</Text>
-      <View style={styles.body}>{children}</View>
-    </View>
+    <ListPane title="Planned work" hint="Maintenance that touches your slices, and the notices we sent you about it." testID="notices-pane">
+      {children}
+    </ListPane>
   );
 }
 
@@ -36,10 +35,6 @@ export function noticeIdFromPath(pathname: string): string | null {
 }
 
 const styles = StyleSheet.create({
-  pane: { flex: 1, gap: space.sm, padding: space.md },
-  title: { ...type.display, color: colors.abyss },
-  hint: { ...type.body, color: colors.inkMuted },
-  body: { flex: 1 },
   list: { gap: space.sm, paddingBottom: space.xl },
   zone: { ...type.caption, color: colors.inkMuted },
 });
