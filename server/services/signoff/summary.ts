@@ -1,5 +1,6 @@
 // The approver's one-screen summary of a window's accepted plan, and the queue of windows awaiting decisions.
 import { asc, eq } from 'drizzle-orm';
+import type { Db } from '../../../db/client';
 import { windows } from '../../../db/schema';
 import type { Me } from '../../../shared/api';
 import type { SignoffQueue, SignoffQueueItem, SignoffSummary } from '../../../shared/signoff';
@@ -27,7 +28,8 @@ async function myState(db: Queryable, ctx: SignoffContext, user: Me): Promise<My
 
 const person = (p: { id: string; name: string } | undefined) => (p ? { id: p.id, name: p.name } : null);
 
-export async function signoffSummary(db: Queryable, windowId: string, user: Me): Promise<SignoffSummary> {
+/** Reads on the pool (`Db`, never a transaction): its look-ups run side by side, which one connection refuses. */
+export async function signoffSummary(db: Db, windowId: string, user: Me): Promise<SignoffSummary> {
   const ctx = await loadSignoffContext(db, windowId);
   const plan = ctx.plan;
   if (!plan) throw new SignoffNotFoundError(windowId);
@@ -71,8 +73,8 @@ async function queueItem(db: Queryable, windowId: string, user: Me, quorum: (ctx
   };
 }
 
-/** Windows in review, soonest first. A handful at a time in practice, so one look-up each is fine. */
-export async function signoffQueue(db: Queryable, user: Me): Promise<SignoffQueue> {
+/** Windows in review, soonest first. A handful at a time in practice, so one look-up each is fine (on the pool). */
+export async function signoffQueue(db: Db, user: Me): Promise<SignoffQueue> {
   const policies = await getPolicies(db);
   const rows = await db.select({ id: windows.id }).from(windows).where(eq(windows.status, 'in-review')).orderBy(asc(windows.startsAt), asc(windows.id));
   const items = await Promise.all(rows.map((r) => queueItem(db, r.id, user, (ctx) => quorumFor(policies, riskOfContext(ctx)))));
