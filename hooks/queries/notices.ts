@@ -6,7 +6,7 @@ import { apiFetch, jsonBody } from '@/hooks/api-fetch';
 import { windowsKey } from '@/hooks/queries/windows-list';
 
 const NOTICES_ROOT = ['notices'] as const;
-// Sending happens in the background worker; while a staff member watches a window, look again now and then.
+// Sending happens in the background worker; while a notice waits to go out, look again now and then.
 const SENDING_REFRESH_MS = 10_000;
 
 /** Key of everything about notices; invalidate it after any change to one. */
@@ -43,7 +43,8 @@ export function useWindowNoticesQuery(windowId: string, enabled: boolean) {
     queryKey: windowNoticesKey(windowId),
     queryFn: () => apiFetch(`/api/windows/${encodeURIComponent(windowId)}/notices`, windowNoticesSchema),
     enabled,
-    refetchInterval: SENDING_REFRESH_MS,
+    // Only queued notices change by themselves; sent, failed and held ones wait for a person (and a refetch on focus).
+    refetchInterval: (query) => (query.state.data?.notices.some((n) => n.status === 'queued') ? SENDING_REFRESH_MS : false),
   });
 }
 

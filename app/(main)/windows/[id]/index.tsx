@@ -8,7 +8,7 @@ import { detailHref, flashFromParams } from '@/components/windows/form-page';
 import { WindowDetail } from '@/components/windows/window-detail';
 import { WindowPlansEntry } from '@/components/plans/window-plans-entry';
 import { SubmitForSignoff } from '@/components/signoff/submit-for-signoff';
-import { WindowNotices } from '@/components/notices/window-notices';
+import { WindowTenantNotices } from '@/components/notices/window-tenant-notices';
 
 export default function WindowScreen() {
   const params = useLocalSearchParams<{ id: string; saved?: string; reverted?: string; mop?: string }>();
@@ -35,7 +35,7 @@ export default function WindowScreen() {
         onOpenPlan={(planId) => router.push(`/windows/${encodeURIComponent(params.id)}/plans/${encodeURIComponent(planId)}`)}
       />
       <SubmitForSignoff window={window.data} me={me.data} onOpenSignoff={() => router.push(`/sign-off/${encodeURIComponent(params.id)}`)} />
-      <WindowNotices windowId={params.id} me={me.data} timeZone={viewerTimeZone()} />
+      <WindowTenantNotices windowId={params.id} me={me.data} timeZone={viewerTimeZone()} />
     </WindowDetail>
   );
 }

@@ -9,7 +9,7 @@ import { WindowNoticeRow } from './window-notice-row';
 
 const NOTICE_STAFF: readonly RoleName[] = ['admin', 'planner', 'approver'];
 
-export function WindowNotices({ windowId, me, timeZone }: { windowId: string; me: Me; timeZone: string }) {
+export function WindowTenantNotices({ windowId, me, timeZone }: { windowId: string; me: Me; timeZone: string }) {
   const staff = me.roles.some((r) => NOTICE_STAFF.includes(r));
   const notices = useWindowNoticesQuery(windowId, staff);
   const action = useNoticeActionMutation();
