@@ -14,7 +14,7 @@ import { setWindowStatus } from '../windows/set-window-status';
 import { AlreadyDecidedError, NoAcceptedPlanError, NotInReviewError, SelfSignoffError } from './errors';
 import { countApprovals, hasDecided, isOwnWork, loadSignoffContext, quorumFor, riskOfContext, usersByIds, type SignoffContext } from './signoff-rows';
 import { queueMails, sendBackMail } from './signoff-mail';
-import type { SignoffDeps } from './submit';
+import { logOf, type SignoffDeps } from './submit';
 
 /** A code is checked whenever one is given; without one, only a policy that requires codes refuses. */
 async function confirmWithCode(tx: Queryable, requireCode: boolean, userId: string, code: string | undefined, at: Date): Promise<boolean> {
@@ -61,7 +61,7 @@ export async function decideSignoff(deps: SignoffDeps, windowId: string, user: M
   if (result.status === 'returned') {
     // The planner who accepted the plan and the window's owner hear of it, with the approver's words.
     const people = await usersByIds(deps.db, [ctx.plan?.acceptedBy ?? null, ctx.window.ownerId]);
-    const log = deps.log ?? ((message, err) => console.error(`[signoff] ${message}`, err));
+    const log = logOf(deps);
     await queueMails(deps.jobs, (to) => sendBackMail(deps.config, ctx.window, user.name, body.comment, to),
       [...people.values()].map((p) => p.email), (err) => log(`send-back mail for ${windowId} not queued`, err));
   }

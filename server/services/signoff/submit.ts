@@ -9,7 +9,8 @@ import { queueMails, signoffRequestMail } from './signoff-mail';
 
 export type SignoffDeps = Pick<RouteDeps, 'db' | 'config' | 'jobs'> & { now: Date; log?: (message: string, err: unknown) => void };
 
-const defaultLog = (message: string, err: unknown) => console.error(`[signoff] ${message}`, err);
+/** Where a mail that could not be queued is reported (the decision itself stands). */
+export const logOf = (deps: SignoffDeps) => deps.log ?? ((message: string, err: unknown) => console.error(`[signoff] ${message}`, err));
 
 export async function submitForSignoff(deps: SignoffDeps, windowId: string, user: Me): Promise<SignoffSubmitResult> {
   const { window, round } = await deps.db.transaction(async (tx) => {
@@ -24,7 +25,7 @@ export async function submitForSignoff(deps: SignoffDeps, windowId: string, user
   });
   // After the commit: a mail must never announce a submission that was rolled back.
   const approvers = await listApprovers(deps.db);
-  const log = deps.log ?? defaultLog;
+  const log = logOf(deps);
   const approversMailed = await queueMails(
     deps.jobs, (to) => signoffRequestMail(deps.config, window, round, to), approvers.map((a) => a.email),
     (err) => log(`sign-off request for ${windowId} not queued`, err),
