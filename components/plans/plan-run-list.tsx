@@ -6,7 +6,7 @@ import { formatCost, settingsSummary } from '@/components/plans/plan-format';
 import { PlanMarks, PlanStatusPill } from '@/components/plans/plan-status-pill';
 import { colors, radii, space, type } from '@/constants/theme';
 
-type Props = { plans: readonly PlanListItem[]; timeZone: string; selectedId?: string | null; onOpen: (planId: string) => void };
+type Props = { plans: readonly PlanListItem[]; timeZone: string; onOpen: (planId: string) => void };
 
 function totalsLine(plan: PlanListItem): string {
   if (plan.totals) {
@@ -24,7 +24,7 @@ export function sortRuns(plans: readonly PlanListItem[]): PlanListItem[] {
   return [...plans].sort((a, b) => b.createdAt.localeCompare(a.createdAt));
 }
 
-export function PlanRunList({ plans, timeZone, selectedId = null, onOpen }: Props) {
+export function PlanRunList({ plans, timeZone, onOpen }: Props) {
   return (
     <View style={styles.list} testID="plan-runs">
       {sortRuns(plans).map((plan) => (
@@ -33,7 +33,7 @@ export function PlanRunList({ plans, timeZone, selectedId = null, onOpen }: Prop
           role="link"
           accessibilityLabel={`Run of ${formatInstant(plan.createdAt, timeZone)}`}
           onPress={() => onOpen(plan.id)}
-          style={({ pressed }) => [styles.row, plan.id === selectedId && styles.selected, pressed && styles.pressed]}
+          style={({ pressed }) => [styles.row, pressed && styles.pressed]}
           testID={`plan-row-${plan.id}`}
         >
           <View style={styles.head}>
@@ -52,7 +52,6 @@ export function PlanRunList({ plans, timeZone, selectedId = null, onOpen }: Prop
 const styles = StyleSheet.create({
   list: { gap: space.sm },
   row: { gap: space.xs, padding: space.md, borderRadius: radii.md, borderWidth: 1, borderColor: colors.border, backgroundColor: colors.surface },
-  selected: { borderColor: colors.primary, borderWidth: 2 },
   pressed: { backgroundColor: colors.primarySoft },
   head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
   when: { ...type.bodyStrong, color: colors.ink },
