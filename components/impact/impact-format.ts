@@ -31,7 +31,8 @@ export function formatRiskPercent(probability: number): string {
   return `${percent.toFixed(1)} %`;
 }
 
-const SEVERITY_RANK: Record<AffectedSlice['severity'], number> = { critical: 0, high: 1, medium: 2, low: 3 };
+/** Most severe first, for sorting. */
+export const SEVERITY_RANK: Record<AffectedSlice['severity'], number> = { critical: 0, high: 1, medium: 2, low: 3 };
 
 /** Critical slices first, then by severity, then the riskiest; ties by name so the order is stable. */
 export function sortAffected(slices: readonly AffectedSlice[]): AffectedSlice[] {

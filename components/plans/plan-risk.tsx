@@ -1,11 +1,9 @@
 // Risk to each affected slice during the window, where the plan leaves it: chance of an unplanned failure, lost backup.
 import { StyleSheet, Text, View } from 'react-native';
 import type { PlanReview } from '@/shared/plans';
-import { formatRiskPercent } from '@/components/impact/impact-format';
+import { formatRiskPercent, SEVERITY_RANK } from '@/components/impact/impact-format';
 import { SeverityPill } from '@/components/impact/severity-pill';
 import { colors, space, type } from '@/constants/theme';
-
-const SEVERITY_RANK = { critical: 0, high: 1, medium: 2, low: 3 } as const;
 
 export function PlanRisk({ risk, sliceName }: { risk: PlanReview['risk']; sliceName: (id: string) => string }) {
   if (risk.length === 0) return <Text style={styles.muted}>No affected slice carries a risk figure.</Text>;
