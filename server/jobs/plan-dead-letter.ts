@@ -1,7 +1,8 @@
 // Plan-run jobs that used up their retries land on the dead-letter queue: their plans are marked failed with a
 // reason a planner can read, so no run stays `queued` or `running` for ever.
 import type { Db } from '../../db/client';
-import { finishFailed, readRunState } from './plan-rows';
+import { endPlanRun } from '../services/plans/plan-rows';
+import { readRunState } from './plan-rows';
 
 /** pg-boss stores a thrown error as { message, … } and its own reasons as { value: … }. */
 function lastMessage(output: unknown): string | null {
@@ -30,5 +31,6 @@ export async function markDeadRun(db: Db, job: { data: { planId?: string }; outp
   if (!state) return;
   // A worker can die between taking the job and marking the row, so the row may count fewer attempts.
   const reason = deadRunReason(job.output, Math.max(1, state.attempts));
-  if (await finishFailed(db, planId, null, reason, new Date())) log(`plan run ${planId}: failed for good (${reason})`);
+  const ended = await endPlanRun(db, planId, { from: ['queued', 'running'], to: 'failed', error: reason, now: new Date() });
+  if (ended) log(`plan run ${planId}: failed for good (${reason})`);
 }

@@ -1,18 +1,10 @@
 // The plan-run worker's reads and writes of `plans` rows. Every write after pick-up is guarded by the attempt
 // number and `running`, so a cancelled run is never overwritten and a superseded attempt cannot write.
+// Reads and writes not tied to an attempt (selectPlanRow, endPlanRun) are the ones in services/plans/plan-rows.ts.
 import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { plans } from '../../db/schema';
 import type { PlanProgress, PlanReview } from '../../shared/plans';
-
-export async function selectPlanForRun(db: Db, id: string) {
-  const [row] = await db.select({
-    id: plans.id, windowId: plans.windowId, windowVersion: plans.windowVersion, status: plans.status,
-    settings: plans.settings, createdAt: plans.createdAt, attempts: plans.attempts,
-  }).from(plans).where(eq(plans.id, id));
-  return row ?? null;
-}
-export type PlanRunRow = NonNullable<Awaited<ReturnType<typeof selectPlanForRun>>>;
 
 /** Takes the run: `running`, one more attempt. Null when it is no longer queued or running (cancelled, gone). */
 export async function markRunning(db: Db, id: string, now: Date, progress: PlanProgress): Promise<number | null> {
@@ -54,12 +46,10 @@ export async function finishDone(
   return rows.length > 0;
 }
 
-/** With an attempt: only that attempt's run. Without (the dead-letter handler): any run still queued or running. */
-export async function finishFailed(db: Db, id: string, attempt: number | null, error: string, now: Date): Promise<boolean> {
-  const where = attempt === null
-    ? and(eq(plans.id, id), inArray(plans.status, ['queued', 'running']))
-    : ownedBy(id, attempt);
-  const rows = await db.update(plans).set({ status: 'failed', error, finishedAt: now }).where(where).returning({ id: plans.id });
+/** Only while the run is still this attempt's. */
+export async function finishFailed(db: Db, id: string, attempt: number, error: string, now: Date): Promise<boolean> {
+  const rows = await db.update(plans).set({ status: 'failed', error, finishedAt: now })
+    .where(ownedBy(id, attempt)).returning({ id: plans.id });
   return rows.length > 0;
 }
 

@@ -2,7 +2,8 @@
 // A planner failure is stored as `failed` (retrying cannot help); anything else is thrown so the queue retries.
 import type { Db } from '../../db/client';
 import { planReviewSchema, planSettingsSchema, type PlanProgress } from '../../shared/plans';
-import { finishDone, finishFailed, markRunning, requeue, selectPlanForRun, type PlanRunRow } from './plan-rows';
+import { selectPlanRow, type PlanRow } from '../services/plans/plan-rows';
+import { finishDone, finishFailed, markRunning, requeue } from './plan-rows';
 import { loadPlanInput, RunRefusedError } from './plan-run-input';
 import { ProgressBox, watchRun, type RunEnd, type StopReason } from './plan-run-watch';
 import { startPlanThread } from './plan-thread';
@@ -20,13 +21,13 @@ export type PlanRunJob = { id: string; data: { planId: string }; expireInSeconds
 /** Stop the thread a second before the queue would expire the job, so a run never outlives its job. */
 const EXPIRY_HEADROOM_MS = 1000;
 
-function firstProgress(plan: PlanRunRow): PlanProgress {
+function firstProgress(plan: PlanRow): PlanProgress {
   const settings = planSettingsSchema.safeParse(plan.settings);
   const timeLimitMs = settings.success ? settings.data.timeLimitSeconds * 1000 : 0;
   return { phase: 'preparing', generation: 0, evaluations: 0, best: null, elapsedMs: 0, timeLimitMs };
 }
 
-type Ctx = { deps: PlanRunDeps; plan: PlanRunRow; attempt: number; job: PlanRunJob; pickedAt: Date };
+type Ctx = { deps: PlanRunDeps; plan: PlanRow; attempt: number; job: PlanRunJob; pickedAt: Date };
 
 function logRun(c: Ctx, computeMs: number, outcome: string): void {
   const waitMs = c.pickedAt.getTime() - c.plan.createdAt.getTime();
@@ -35,7 +36,7 @@ function logRun(c: Ctx, computeMs: number, outcome: string): void {
 }
 
 export async function runPlanJob(deps: PlanRunDeps, job: PlanRunJob): Promise<void> {
-  const plan = await selectPlanForRun(deps.db, job.data.planId);
+  const plan = await selectPlanRow(deps.db, job.data.planId);
   // Cancelled while queued, already finished by an earlier attempt, or deleted with its window: nothing to do.
   if (!plan || (plan.status !== 'queued' && plan.status !== 'running')) return;
   const pickedAt = new Date();

@@ -5,10 +5,10 @@ import { buildInventory } from '../../planner/model/build-inventory';
 import { planSettingsSchema } from '../../shared/plans';
 import type { ScenarioWindow } from '../../shared/scenario';
 import { loadScenario } from '../services/inventory/load-scenario';
+import type { PlanRow } from '../services/plans/plan-rows';
 import { reservationsFor } from '../services/plans/reservations';
 import { WindowNotFoundError } from '../services/windows/errors';
 import { loadWindow, type LoadedWindow } from '../services/windows/window-view';
-import type { PlanRunRow } from './plan-rows';
 import type { PlanThreadInput } from './plan-thread-protocol';
 
 /** The run cannot succeed as requested; its message is shown to the planner as the run's error. */
@@ -26,7 +26,7 @@ export function scenarioWindowOf(w: LoadedWindow): ScenarioWindow {
   };
 }
 
-async function loadCurrentWindow(db: Db, plan: PlanRunRow): Promise<LoadedWindow> {
+async function loadCurrentWindow(db: Db, plan: PlanRow): Promise<LoadedWindow> {
   let w: LoadedWindow;
   try {
     w = await loadWindow(db, plan.windowId, null);
@@ -42,7 +42,7 @@ async function loadCurrentWindow(db: Db, plan: PlanRunRow): Promise<LoadedWindow
   return w;
 }
 
-export async function loadPlanInput(db: Db, plan: PlanRunRow): Promise<PlanThreadInput> {
+export async function loadPlanInput(db: Db, plan: PlanRow): Promise<PlanThreadInput> {
   const settings = planSettingsSchema.safeParse(plan.settings);
   if (!settings.success) {
     throw new RunRefusedError(`The run's settings are not valid: ${settings.error.issues.map((i) => i.message).join('; ')}`);

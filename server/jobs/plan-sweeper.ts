@@ -7,9 +7,8 @@ import type { Db } from '../../db/client';
 import { plans } from '../../db/schema';
 import { planSettingsSchema } from '../../shared/plans';
 import { planExpireSeconds } from '../services/plans/expire';
-import { setPlanJobId } from '../services/plans/plan-rows';
+import { endPlanRun, setPlanJobId } from '../services/plans/plan-rows';
 import { createJobQueue } from './boss-queue';
-import { finishFailed } from './plan-rows';
 import { QUEUES } from './queue';
 
 export type SweepResult = { planId: string; jobId: string | null }[];
@@ -33,7 +32,8 @@ export async function sweepStalledRuns(db: Db, boss: PgBoss, staleSeconds: numbe
       // pg-boss turns the failed job into a retry (or, with retries used up, sends it to the dead-letter queue).
       await boss.fail(QUEUES.planRun, job.id, { message: reason });
     } else if (job?.state === 'failed') {
-      await finishFailed(db, run.planId, null, `The run was given up: ${reason}.`, new Date());
+      const error = `The run was given up: ${reason}.`;
+      await endPlanRun(db, run.planId, { from: ['queued', 'running'], to: 'failed', error, now: new Date() });
     } else if (job?.state !== 'created' && job?.state !== 'retry') {
       const settings = planSettingsSchema.parse(run.settings);
       const expireInSeconds = planExpireSeconds(settings, { planExpireMarginSeconds: expireMarginSeconds });
