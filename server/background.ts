@@ -49,31 +49,33 @@ function stopOnce(boss: PgBoss, stoppers: Stopper[]): () => Promise<void> {
   };
 }
 
-/** For the API process: the queue routes send to, plus the workers when config.workerInProcess. */
-export async function startBackground(deps: BackgroundDeps): Promise<Background> {
+/** Starts pg-boss and runs `setUp`, which adds what stop() stops (in list order); a failed set-up stops it all. */
+async function withBoss(deps: BackgroundDeps, setUp: (boss: PgBoss, stoppers: Stopper[]) => Promise<void>): Promise<Background> {
   const boss = await startBoss(deps.config, { log: deps.log });
   const stoppers: Stopper[] = [];
+  const stop = stopOnce(boss, stoppers);
   try {
+    await setUp(boss, stoppers);
+  } catch (err) {
+    await stop();
+    throw err;
+  }
+  return { jobs: createJobQueue(boss), stop };
+}
+
+/** For the API process: the queue routes send to, plus the workers when config.workerInProcess. */
+export function startBackground(deps: BackgroundDeps): Promise<Background> {
+  return withBoss(deps, async (boss, stoppers) => {
     // SMTP sink (helper B1): before the workers, so the mail worker is given the port the sink got.
     const sink = await startSinkIfConfigured(deps.config, deps.db, deps.log);
     if (sink) stoppers.push(() => sink.stop());
     if (deps.config.workerInProcess) stoppers.unshift(...(await registerWorkers(boss, deps, sink?.port)));
-  } catch (err) {
-    await stopOnce(boss, stoppers)();
-    throw err;
-  }
-  return { jobs: createJobQueue(boss), stop: stopOnce(boss, stoppers) };
+  });
 }
 
 /** For `npm run worker`: the same job handlers, with no HTTP. */
-export async function startWorkers(deps: BackgroundDeps): Promise<Background> {
-  const boss = await startBoss(deps.config, { log: deps.log });
-  let stoppers: Stopper[] = [];
-  try {
-    stoppers = await registerWorkers(boss, deps);
-  } catch (err) {
-    await stopOnce(boss, stoppers)();
-    throw err;
-  }
-  return { jobs: createJobQueue(boss), stop: stopOnce(boss, stoppers) };
+export function startWorkers(deps: BackgroundDeps): Promise<Background> {
+  return withBoss(deps, async (boss, stoppers) => {
+    stoppers.push(...(await registerWorkers(boss, deps)));
+  });
 }
