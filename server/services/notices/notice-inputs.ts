@@ -3,7 +3,7 @@
 import { eq, inArray } from 'drizzle-orm';
 import { plans, sites, sliceFunctions, sliceTies, slices, spans, tenants, users, windows } from '../../../db/schema';
 import { planReviewSchema, planSettingsSchema, type PlanSlice } from '../../../shared/plans';
-import { FIBRE_MS_PER_KM } from '../../../shared/scenario';
+import { spanLatencyMs } from '../../../shared/scenario';
 import { getPolicies } from '../../queries/windows/policies';
 import type { Queryable } from '../../queries/windows/window-rows';
 import { NoticeStateError } from './errors';
@@ -83,7 +83,7 @@ async function loadLookups(db: Queryable, planSlices: PlanSlice[]): Promise<Noti
   const tieRows = await db.select().from(sliceTies).where(inArray(sliceTies.sliceId, any(sliceIds)));
   return {
     sites: new Map(siteRows.map((s) => [s.id, { lat: s.lat, lon: s.lon }])),
-    spanLatencyMs: new Map(spanRows.map((s) => [s.id, s.latencyMs ?? s.lengthKm * FIBRE_MS_PER_KM])),
+    spanLatencyMs: new Map(spanRows.map((s) => [s.id, spanLatencyMs({ latencyMs: s.latencyMs ?? undefined, lengthKm: s.lengthKm })])),
     functionNames: new Map(fnRows.map((f) => [f.id, f.name ?? f.id])),
     ties: new Map(tieRows.map((t) => [t.id, { from: t.fromFunction, to: t.toFunction, maxLatencyMs: t.maxLatencyMs }])),
   };
