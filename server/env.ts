@@ -93,3 +93,14 @@ export function parseEnv(source: Record<string, string | undefined> = process.en
     publicUrl: (env.PUBLIC_URL ?? `http://${env.HOST}:${env.PORT}`).replace(/\/$/, ''),
   };
 }
+
+/** For the entry points (server, worker): the configuration, or one message naming what is wrong and exit 1. */
+export function parseEnvOrExit(): ServerConfig {
+  try {
+    return parseEnv();
+  } catch (err) {
+    if (!(err instanceof ConfigError)) throw err;
+    console.error(err.message);
+    process.exit(1);
+  }
+}

@@ -3,22 +3,10 @@
 import { createDb } from '../db/client';
 import { createApp } from './app';
 import { startBackground } from './background';
-import { ConfigError, parseEnv } from './env';
-
-function loadConfig() {
-  try {
-    return parseEnv();
-  } catch (err) {
-    if (err instanceof ConfigError) {
-      console.error(err.message);
-      process.exit(1);
-    }
-    throw err;
-  }
-}
+import { parseEnvOrExit } from './env';
 
 async function main(): Promise<void> {
-  const config = loadConfig();
+  const config = parseEnvOrExit();
   const { db, pool } = createDb(config.databaseUrl);
   const background = await startBackground({ db, config });
   const app = createApp({ db, pool, config, jobs: background.jobs });

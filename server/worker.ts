@@ -2,19 +2,10 @@
 // Start as many as you like, on any machine that reaches the database; they share the queue.
 import { createDb } from '../db/client';
 import { startWorkers } from './background';
-import { ConfigError, parseEnv } from './env';
+import { parseEnvOrExit } from './env';
 
 async function main(): Promise<void> {
-  let config;
-  try {
-    config = parseEnv();
-  } catch (err) {
-    if (err instanceof ConfigError) {
-      console.error(err.message);
-      process.exit(1);
-    }
-    throw err;
-  }
+  const config = parseEnvOrExit();
   const { db, pool } = createDb(config.databaseUrl, { max: 4 });
   const background = await startWorkers({ db, config });
   console.log(`Slackwater worker ${process.pid} waiting for jobs (queue schema ${config.jobSchema})`);
