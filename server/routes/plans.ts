@@ -17,22 +17,22 @@ export function plansRouter({ db, now, jobs, config }: RouteDeps): Router {
   const router = express.Router();
   const answer = async (planId: string) => planResponseSchema.parse({ plan: await getPlan(db, planId) });
 
-  router.post('/windows/:id/plans', writers, async (req, res) => {
+  router.post('/windows/:id/plans', ...writers, async (req, res) => {
     const settings = planSettingsSchema.parse(req.body ?? {});
     const id = await enqueuePlan({ db, jobs, config, now: now() }, windowIdOf(req), settings, req.user!);
     res.status(202).json(await answer(id));
   });
-  router.get('/windows/:id/plans', readers, async (req, res) => {
+  router.get('/windows/:id/plans', ...readers, async (req, res) => {
     res.json(planListResponseSchema.parse({ plans: await listWindowPlans(db, windowIdOf(req)) }));
   });
-  router.get('/plans/:planId', readers, async (req, res) => {
+  router.get('/plans/:planId', ...readers, async (req, res) => {
     res.json(await answer(planIdOf(req)));
   });
-  router.post('/plans/:planId/cancel', writers, async (req, res) => {
+  router.post('/plans/:planId/cancel', ...writers, async (req, res) => {
     await cancelPlan({ db, jobs, now: now() }, planIdOf(req), req.user!);
     res.json(await answer(planIdOf(req)));
   });
-  router.post('/plans/:planId/accept', writers, async (req, res) => {
+  router.post('/plans/:planId/accept', ...writers, async (req, res) => {
     await acceptPlan({ db, now: now() }, planIdOf(req), planAcceptSchema.parse(req.body ?? {}), req.user!);
     res.json(await answer(planIdOf(req)));
   });
