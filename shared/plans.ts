@@ -16,6 +16,10 @@ export const planSettingsSchema = z.object({
   excludedSites: z.array(id).max(1000).default([]),
   /** after the window: `return` = restore the original placements; `keep` = the new ones stay */
   afterWindow: z.enum(['return', 'keep']).default('return'),
+  /** may the re-mapper move or reroute slices the window does not touch, to keep touched ones in service */
+  knockOn: z.boolean().default(true),
+  /** at most this many such knock-on moves in one plan */
+  maxKnockOnMoves: z.number().int().min(0).max(50).default(5),
 }).strict();
 export type PlanSettings = z.infer<typeof planSettingsSchema>;
 export type PlanSettingsInput = z.input<typeof planSettingsSchema>;
@@ -75,6 +79,11 @@ export const planSliceSchema = z.object({
   after: placementSchema.nullable(),
   /** unresolved: which constraint stopped it */
   unresolvedReason: z.string().nullable(),
+  /**
+   * Knock-on move: the window does not touch this slice; it moves to make room for these touched slices.
+   * Empty for the window's own affected slices.
+   */
+  madeRoomFor: z.array(z.object({ slice: z.string(), name: z.string() })).default([]),
 });
 export type PlanSlice = z.infer<typeof planSliceSchema>;
 
@@ -86,6 +95,8 @@ export const planStepSchema = z.object({
   to: z.union([z.string(), z.array(z.string())]),
   /** only fits with temporary spare capacity */
   needsSpare: z.boolean(),
+  /** a knock-on move (ordered before the moves it makes room for) */
+  knockOn: z.boolean().default(false),
 });
 export type PlanStep = z.infer<typeof planStepSchema>;
 
@@ -119,6 +130,8 @@ export const planReviewSchema = z.object({
   totals: z.object({
     stays: z.number().int(), moved: z.number().int(), rerouted: z.number().int(),
     unresolved: z.number().int(), moveCost: z.number(),
+    /** slices the window does not touch, moved or rerouted to make room (also counted in moved / rerouted) */
+    knockOn: z.number().int().default(0),
   }),
   slices: z.array(planSliceSchema),
   steps: z.array(planStepSchema),
@@ -132,6 +145,13 @@ export const planReviewSchema = z.object({
   reservedFor: z.array(z.string()),
   /** the DE search itself (excludes queueing and the reference solvers) */
   computeMs: z.number(),
+  /**
+   * What the search alone found, before any fallback; `usedFallback` says when the greedy plan was kept instead
+   * because the search's own was worse or infeasible. Null for runs stored before this was recorded.
+   */
+  search: z.object({
+    objective: objectiveSchema, feasible: z.boolean(), usedFallback: z.enum(['greedy']).nullable(),
+  }).nullable().default(null),
 });
 export type PlanReview = z.infer<typeof planReviewSchema>;
 

@@ -115,6 +115,11 @@ export interface SlicePlan {
   paths: Record<string, string[]>;
   /** why a slice is unresolved (which constraint), for the review screen */
   reason?: string;
+  /**
+   * Knock-on move: the window does not touch this slice, but moving or rerouting it frees room that keeps
+   * these touched slices (ids) in service. Absent on the window's own affected slices.
+   */
+  madeRoomFor?: string[];
 }
 
 /** Lexicographic objective, compared in this order (DESIGN §4.2). */
@@ -152,4 +157,9 @@ export interface PlanResult {
   trace: TracePoint[];
   /** exact mode: proven optimum or not, and the relative gap to the best bound */
   exact?: { optimal: boolean; gap: number; bound: number };
+  /**
+   * DE modes: what the search alone found, before any fallback. `usedFallback` names the plan returned instead
+   * when the search's own was worse or infeasible (the product keeps the better plan; the figures stay honest).
+   */
+  search?: { objective: Objective; feasible: boolean; usedFallback: 'greedy' | null };
 }

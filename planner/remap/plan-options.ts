@@ -33,6 +33,10 @@ export interface PlanOptions {
   /** islands: generations between migrations */
   migrationInterval: number;
   maxCandidates: number;
+  /** knock-on moves: the search may move or reroute slices the window does not touch to keep touched ones in service */
+  knockOn: boolean;
+  /** at most this many knock-on moves per plan */
+  maxKnockOnMoves: number;
   reservations?: Reservation;
   pinned?: string[];
   excludedSites?: string[];
@@ -63,4 +67,6 @@ export const PLAN_DEFAULTS: Omit<PlanOptions, 'reservations' | 'pinned' | 'exclu
   workers: 2,
   migrationInterval: 10,
   maxCandidates: 16,
+  knockOn: true,
+  maxKnockOnMoves: 5,
 };

@@ -11,6 +11,8 @@ export interface RemapProblemOptions {
   excludedSites?: string[];
   /** at most this many candidate sites per function (current site included) */
   maxCandidates?: number;
+  /** knock-on moves of slices the window does not touch; absent = touched slices only */
+  knockOn?: { maxMoves: number };
 }
 
 /** One affected function: where it may go. */

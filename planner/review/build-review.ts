@@ -26,6 +26,7 @@ export function reviewTotals(result: PlanResult): PlanReview['totals'] {
   return {
     stays: count('stays'), moved: count('move'), rerouted: count('reroute'), unresolved: count('unresolved'),
     moveCost: result.objective.moveCost,
+    knockOn: result.slices.filter((s) => (s.madeRoomFor?.length ?? 0) > 0).length,
   };
 }
 
@@ -49,5 +50,6 @@ export function buildReview(inv: Inventory, window: WindowSpec, result: PlanResu
     exact: inputs.exact,
     reservedFor: [...(inputs.reservedFor ?? [])],
     computeMs: inputs.computeMs,
+    search: result.search ? { ...result.search, objective: { ...result.search.objective } } : null,
   };
 }

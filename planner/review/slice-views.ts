@@ -44,6 +44,7 @@ function sliceView(inv: Inventory, plan: SlicePlan, reasons: string[], o: SliceV
     critical: slice.critical, priority: slice.priority, sst: slice.sst, reasons,
     outcome: plan.outcome, ...changes(before, after), before, after,
     unresolvedReason: plan.outcome === 'unresolved' ? plan.reason ?? 'no feasible placement found' : null,
+    madeRoomFor: (plan.madeRoomFor ?? []).map((id) => ({ slice: id, name: o.names?.get(id) ?? id })),
   };
 }
 

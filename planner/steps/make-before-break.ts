@@ -16,6 +16,8 @@ export interface OrderedStep {
   to: string | string[];
   /** true when the step only fits with temporary spare capacity */
   needsSpare: boolean;
+  /** a knock-on move: a slice the window does not touch, moved to make room */
+  knockOn: boolean;
 }
 
 export interface StepOrder {
@@ -56,7 +58,7 @@ function describe(inv: Inventory, step: PendingStep, needsSpare: boolean): Order
   const slice = inv.slices[step.slice];
   const moving = step.kind === 'move-function';
   return {
-    slice: slice.id, kind: step.kind, needsSpare,
+    slice: slice.id, kind: step.kind, needsSpare, knockOn: false,
     element: moving ? slice.functions[step.part].id : slice.ties[step.part].id,
     from: moving ? sites[step.fromSite].id : step.fromSpans.map((x) => spans[x].id),
     to: moving ? sites[step.toSite].id : step.toSpans.map((x) => spans[x].id),

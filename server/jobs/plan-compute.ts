@@ -34,6 +34,7 @@ function baseOptions(input: PlanComputeInput): Partial<PlanOptions> {
   return {
     seed: s.seed, population: s.population, timeLimitMs: s.timeLimitSeconds * 1000,
     pinned: [...s.pinned], excludedSites: [...s.excludedSites], reservations: input.reservations,
+    knockOn: s.knockOn, maxKnockOnMoves: s.maxKnockOnMoves,
   };
 }
 
