@@ -52,6 +52,7 @@ async function missingSlices(db: Queryable, affected: string[], listed: Set<stri
   return rows.map((r) => ({
     slice: r.id, name: r.name, tenantId: r.tenantId, critical: r.critical, priority: r.priority, sst: r.sst,
     reasons: [], outcome: 'stays', moves: [], reroutes: [], before: { sites: {}, paths: {} }, after: null, unresolvedReason: null,
+    madeRoomFor: [],
   }));
 }
 

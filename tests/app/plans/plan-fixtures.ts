@@ -13,7 +13,7 @@ function slice(id: string, extra: Partial<PlanSlice>): PlanSlice {
   return {
     slice: id, name: `Slice ${id}`, tenantId: 't-1', critical: false, priority: 3, sst: 1, reasons: ['hosted'],
     outcome: 'stays', moves: [], reroutes: [], before: { sites: {}, paths: {} }, after: { sites: {}, paths: {} },
-    unresolvedReason: null, ...extra,
+    unresolvedReason: null, madeRoomFor: [], ...extra,
   };
 }
 
@@ -41,12 +41,12 @@ export function review(extra: Partial<PlanReview> = {}): PlanReview {
   return {
     affected: slices.map((s) => s.slice),
     objective: best,
-    totals: { stays: 1, moved: 1, rerouted: 1, unresolved: 1, moveCost: 3.25 },
+    totals: { stays: 1, moved: 1, rerouted: 1, unresolved: 1, moveCost: 3.25, knockOn: 0 },
     slices,
     steps: [
-      { slice: 'sl-port', kind: 'move-function', element: 'sl-port-gw', from: 'edge-a', to: 'agg-b', needsSpare: false },
-      { slice: 'sl-port', kind: 'reroute-tie', element: 'sl-port-t1', from: ['sp-1'], to: ['sp-2', 'sp-3'], needsSpare: true },
-      { slice: 'sl-fair', kind: 'reroute-tie', element: 'sl-fair-t1', from: ['sp-1'], to: ['sp-4'], needsSpare: false },
+      { slice: 'sl-port', kind: 'move-function', element: 'sl-port-gw', from: 'edge-a', to: 'agg-b', needsSpare: false, knockOn: false },
+      { slice: 'sl-port', kind: 'reroute-tie', element: 'sl-port-t1', from: ['sp-1'], to: ['sp-2', 'sp-3'], needsSpare: true, knockOn: false },
+      { slice: 'sl-fair', kind: 'reroute-tie', element: 'sl-fair-t1', from: ['sp-1'], to: ['sp-4'], needsSpare: false, knockOn: false },
     ],
     needsSpare: 1,
     risk: [
@@ -61,6 +61,7 @@ export function review(extra: Partial<PlanReview> = {}): PlanReview {
     exact: { solver: 'exact', objective: objective({ unresolvedWeight: 5, unresolved: 1, moveCost: 3 }), elapsedMs: 1500, optimal: false, gap: 0.042, bound: 7.5, note: null },
     reservedFor: [],
     computeMs: 4200,
+    search: null,
     ...extra,
   };
 }
@@ -68,7 +69,7 @@ export function review(extra: Partial<PlanReview> = {}): PlanReview {
 export function plan(extra: Partial<Plan> = {}): Plan {
   return {
     id: 'p-1', windowId: 'w-1', windowVersion: 2, status: 'done',
-    settings: { mode: 'serial', seed: 7, population: 40, timeLimitSeconds: 20, pinned: [], excludedSites: ['core-x'], afterWindow: 'return' },
+    settings: { mode: 'serial', seed: 7, population: 40, timeLimitSeconds: 20, pinned: [], excludedSites: ['core-x'], afterWindow: 'return', knockOn: true, maxKnockOnMoves: 5 },
     progress: null, error: null, attempts: 1, createdBy: 'u-pln',
     createdAt: '2030-01-01T10:00:00.000Z', startedAt: '2030-01-01T10:00:01.000Z', finishedAt: '2030-01-01T10:00:25.000Z',
     stale: false, accepted: false, acceptedAt: null, outageAccepted: [], review: review(),

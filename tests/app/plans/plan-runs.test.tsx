@@ -79,7 +79,7 @@ test('runs are listed newest first with their totals or their failure', () => {
   const { review: _review, ...base } = plan();
   const item = (id: string, createdAt: string, extra: Partial<PlanListItem> = {}): PlanListItem => ({ ...base, id, createdAt, totals: null, ...extra });
   const runs = [
-    item('p-old', '2030-01-01T08:00:00.000Z', { totals: { stays: 1, moved: 2, rerouted: 3, unresolved: 0, moveCost: 4.5 }, accepted: true }),
+    item('p-old', '2030-01-01T08:00:00.000Z', { totals: { stays: 1, moved: 2, rerouted: 3, unresolved: 0, moveCost: 4.5, knockOn: 0 }, accepted: true }),
     item('p-new', '2030-01-01T09:00:00.000Z', { status: 'failed', error: 'No worker answered.' }),
   ];
   const onOpen = jest.fn();

@@ -91,7 +91,7 @@ async function insertNetwork(ctx: TestContext, id: (name: string) => string): Pr
 }
 
 function planSlices(id: (name: string) => string, ownTenantId: string, otherTenantId: string): PlanSlice[] {
-  const none = { before: { sites: {}, paths: {} }, after: { sites: {}, paths: {} }, unresolvedReason: null };
+  const none = { before: { sites: {}, paths: {} }, after: { sites: {}, paths: {} }, unresolvedReason: null, madeRoomFor: [] };
   return [
     { slice: id('A'), name: 'Port cranes', tenantId: ownTenantId, critical: false, priority: 1, sst: 2, reasons: ['hosted'], outcome: 'move',
       moves: [{ function: id('fa1'), from: id('X1'), to: id('X2') }],

@@ -21,6 +21,7 @@ function view(slice: string, outcome: PlanSlice['outcome'], after: PlanSlice['af
   return {
     slice, name: slice, tenantId: 'tenant-alpha', critical: false, priority: 3, sst: 1, reasons: ['hosted'], outcome,
     moves: [], reroutes: [], before: { sites: {}, paths: {} }, after, unresolvedReason: outcome === 'unresolved' ? 'no room' : null,
+    madeRoomFor: [],
   };
 }
 

@@ -52,6 +52,7 @@ function slice(ctx: TestContext, key: string, outcome: PlanSlice['outcome'], cri
     moves: outcome === 'move' ? [{ function: `${id}-f1`, from: `${ctx.prefix}-A`, to: `${ctx.prefix}-B` }] : [], reroutes: [],
     before: placed, after: outcome === 'unresolved' ? null : { sites: { [`${id}-f1`]: `${ctx.prefix}-B` }, paths: {} },
     unresolvedReason: outcome === 'unresolved' ? 'no site within the anchor radius has 4 vCPU free' : null,
+    madeRoomFor: [],
   };
 }
 
