@@ -5,6 +5,7 @@ import { assessImpact } from '../impact/assess-impact';
 import type { Inventory, PlanResult, Reservation, WindowSpec } from '../model/types';
 import { fromSlicePlans } from '../plan/slice-plans';
 import { sliceRisk } from '../risk/slice-risk';
+import { madeRoomForIndex } from '../steps/knock-on-order';
 import { orderSteps } from '../steps/make-before-break';
 import { sliceViews } from './slice-views';
 
@@ -33,10 +34,11 @@ export function reviewTotals(result: PlanResult): PlanReview['totals'] {
 export function buildReview(inv: Inventory, window: WindowSpec, result: PlanResult, inputs: ReviewInputs): PlanReview {
   const impact = assessImpact(inv, window, { reservations: inputs.reservations });
   const next = fromSlicePlans(inv, result.slices);
-  const order = orderSteps(inv, window, next, inputs.reservations);
-  const affected = new Set(result.affected);
-  // sliceRisk covers every slice in service; the review shows the affected ones (unresolved ones are out of service).
-  const risk = sliceRisk(inv, window, next).filter((r) => affected.has(r.slice));
+  const order = orderSteps(inv, window, next, inputs.reservations, { madeRoomFor: madeRoomForIndex(inv, result.slices) });
+  // sliceRisk covers every slice in service; the review shows the plan's (affected ones and knock-on moves;
+  // unresolved ones are out of service).
+  const shown = new Set([...result.affected, ...result.slices.map((s) => s.slice)]);
+  const risk = sliceRisk(inv, window, next).filter((r) => shown.has(r.slice));
   return {
     affected: [...result.affected],
     objective: { ...result.objective },

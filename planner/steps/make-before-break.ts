@@ -4,6 +4,7 @@ import { fits } from '../model/tolerance';
 import type { Inventory, Reservation, SlicePlacement, WindowSpec } from '../model/types';
 import { placementLoad } from '../model/window-capacity';
 import { resolveWindow } from '../model/window-elements';
+import { KnockOnGate, type MadeRoomFor } from './knock-on-order';
 import { listSteps, type PendingStep } from './step-list';
 
 export interface OrderedStep {
@@ -18,6 +19,11 @@ export interface OrderedStep {
   needsSpare: boolean;
   /** a knock-on move: a slice the window does not touch, moved to make room */
   knockOn: boolean;
+}
+
+export interface StepOrderOptions {
+  /** knock-on slices (index) → the touched slices (indices) they make room for; see madeRoomForIndex */
+  madeRoomFor?: MadeRoomFor;
 }
 
 export interface StepOrder {
@@ -53,12 +59,12 @@ function apply(inv: Inventory, step: PendingStep, ledger: Ledger): void {
   for (const x of step.fromSpans) ledger.freeGbps[x] += gbps;
 }
 
-function describe(inv: Inventory, step: PendingStep, needsSpare: boolean): OrderedStep {
+function describe(inv: Inventory, step: PendingStep, needsSpare: boolean, knockOn: boolean): OrderedStep {
   const { sites, spans } = inv.network;
   const slice = inv.slices[step.slice];
   const moving = step.kind === 'move-function';
   return {
-    slice: slice.id, kind: step.kind, needsSpare, knockOn: false,
+    slice: slice.id, kind: step.kind, needsSpare, knockOn,
     element: moving ? slice.functions[step.part].id : slice.ties[step.part].id,
     from: moving ? sites[step.fromSite].id : step.fromSpans.map((x) => spans[x].id),
     to: moving ? sites[step.toSite].id : step.toSpans.map((x) => spans[x].id),
@@ -76,20 +82,28 @@ function initialLedger(inv: Inventory, window: WindowSpec, reservations?: Reserv
 
 /**
  * Greedy: repeatedly take the first pending step that fits; when none fits, take the first pending one
- * anyway and flag it needsSpare (its completion may unblock the rest).
+ * anyway and flag it needsSpare (its completion may unblock the rest). Knock-on moves are tried first, and a
+ * touched slice's steps wait until the knock-on moves making room for it are done; the capacity check is the
+ * same for every step.
  */
 export function orderSteps(
   inv: Inventory, window: WindowSpec, next: Map<number, SlicePlacement | null>, reservations?: Reservation,
+  options: StepOrderOptions = {},
 ): StepOrder {
   const ledger = initialLedger(inv, window, reservations);
-  const pending = listSteps(inv, next);
+  const listed = listSteps(inv, next);
+  const gate = new KnockOnGate(options.madeRoomFor ?? new Map(), listed);
+  const pending = gate.sort(listed);
   const steps: OrderedStep[] = [];
   while (pending.length > 0) {
-    const ready = pending.findIndex((step) => fitsNow(inv, step, ledger));
-    const pick = ready === -1 ? 0 : ready;
+    const ready = pending.findIndex((step) => gate.mayGo(step) && fitsNow(inv, step, ledger));
+    // None fits: the first step allowed to go (any step if hand-made data has knock-on moves wait on each other).
+    const pick = ready !== -1 ? ready : Math.max(0, pending.findIndex((step) => gate.mayGo(step)));
     const [step] = pending.splice(pick, 1);
+    const needsSpare = ready === -1 && !fitsNow(inv, step, ledger);
     apply(inv, step, ledger);
-    steps.push(describe(inv, step, ready === -1));
+    gate.done(step);
+    steps.push(describe(inv, step, needsSpare, gate.isKnockOn(step.slice)));
   }
   return { steps, needsSpare: steps.filter((s) => s.needsSpare).length };
 }

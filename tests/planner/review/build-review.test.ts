@@ -23,7 +23,17 @@ function review(inv: Inventory, w: WindowSpec, result: PlanResult, names?: Map<s
 /** Every invariant the review screen relies on. */
 function expectConsistent(scenario: Scenario, r: PlanReview): void {
   const current = new Map(scenario.placements.map((p) => [p.slice, p]));
-  expect(r.slices.map((s) => s.slice)).toEqual(r.affected);
+  // the affected slices, then any knock-on moves: untouched slices moved or rerouted to make room for affected ones
+  const affected = new Set(r.affected);
+  expect(r.slices.filter((s) => affected.has(s.slice)).map((s) => s.slice)).toEqual(r.affected);
+  for (const s of r.slices.filter((x) => !affected.has(x.slice))) {
+    expect(s.madeRoomFor.length).toBeGreaterThan(0);
+    expect(['move', 'reroute']).toContain(s.outcome);
+    for (const m of s.madeRoomFor) expect(affected.has(m.slice)).toBe(true);
+  }
+  expect(r.totals.knockOn).toBe(r.slices.filter((s) => s.madeRoomFor.length > 0).length);
+  expect(r.steps.filter((x) => x.knockOn).map((x) => x.slice)).toEqual(
+    r.steps.map((x) => x.slice).filter((id) => r.slices.find((s) => s.slice === id)!.madeRoomFor.length > 0));
   for (const s of r.slices) {
     expect(s.before).toEqual({ sites: current.get(s.slice)!.sites, paths: current.get(s.slice)!.paths });
     if (s.outcome === 'unresolved') {

@@ -52,7 +52,7 @@ describe('orderSteps', () => {
     const next = new Map([[0, { sites: inv.placements[0].sites, paths: [[span('ac'), span('cd'), span('de')]] }]]);
     const order = orderSteps(inv, quiet, next);
     expect(order.steps).toEqual([{
-      slice: 's1', kind: 'reroute-tie', element: 'a-e', from: ['ab', 'bd', 'de'], to: ['ac', 'cd', 'de'], needsSpare: false,
+      slice: 's1', kind: 'reroute-tie', element: 'a-e', from: ['ab', 'bd', 'de'], to: ['ac', 'cd', 'de'], needsSpare: false, knockOn: false,
     }]);
     // a reservation on cd leaves too little room for the new path
     expect(orderSteps(inv, quiet, next, { spanGbps: { cd: 15 } }).needsSpare).toBe(1);
