@@ -39,7 +39,7 @@ async function plan(args: string[]): Promise<Run> {
 
 interface Doc {
   window: string; mode: string; seed: number; elapsedMs: number; affected: string[];
-  slices: SlicePlan[]; objective: { unresolved: number; moved: number; rerouted: number; moveCost: number };
+  slices: SlicePlan[]; knockOn: string[]; objective: { unresolved: number; moved: number; rerouted: number; moveCost: number };
 }
 
 function expectBadInput(r: Run, mentions: string | RegExp): void {
@@ -59,7 +59,12 @@ describe('plan command line', () => {
     expect(doc).toMatchObject({ window: 'window-1', mode: 'serial', seed: 7 });
     expect(doc.elapsedMs).toBeGreaterThanOrEqual(0);
     expect(doc.affected.length).toBeGreaterThan(0);
-    expect(doc.slices.map((s) => s.slice).sort()).toEqual([...doc.affected].sort());
+    // every affected slice has an entry; any other entry is a knock-on move, named as such
+    const affected = new Set(doc.affected);
+    expect(doc.slices.filter((s) => affected.has(s.slice)).map((s) => s.slice).sort()).toEqual([...doc.affected].sort());
+    const knockOn = doc.slices.filter((s) => !affected.has(s.slice));
+    expect(doc.knockOn).toEqual(knockOn.map((s) => s.slice));
+    for (const s of knockOn) expect(s.madeRoomFor!.every((id) => affected.has(id))).toBe(true);
     for (const k of ['unresolved', 'moved', 'rerouted', 'moveCost'] as const) expect(typeof doc.objective[k]).toBe('number');
     const inv = buildInventory(scenario);
     for (const s of doc.slices.filter((x) => x.outcome !== 'unresolved')) {
@@ -85,6 +90,7 @@ describe('plan command line', () => {
     const doc = JSON.parse(r.stdout) as Doc;
     expect(doc.affected).toEqual([]);
     expect(doc.slices).toEqual([]);
+    expect(doc.knockOn).toEqual([]);
   });
 
   it('runs the threaded, shared-eval and exact modes', async () => {
