@@ -51,6 +51,8 @@ class Builder {
   gbps = new Map<number, Terms>();
   tieVars: TieVar[] = [];
   complete = true;
+  /** one "moved" flag per knock-on candidate, for the cap on knock-on moves */
+  knockOnFlags: string[] = [];
 
   binary(name: string, cost: number): string {
     this.binaries.push(name);
@@ -65,7 +67,8 @@ class Builder {
   }
 }
 
-function addFunctions(p: RemapProblem, w: ExactWeights, b: Builder, blockIndex: number, u: string): string[][] {
+/** `u` is the block's unresolved variable; knock-on candidates have none (they are always placed). */
+function addFunctions(p: RemapProblem, w: ExactWeights, b: Builder, blockIndex: number, u: string | null): string[][] {
   const block = p.slices[blockIndex];
   return block.functions.map((k) => {
     const f = p.functions[k];
@@ -76,7 +79,8 @@ function addFunctions(p: RemapProblem, w: ExactWeights, b: Builder, blockIndex: 
       b.load(b.cpu, site, fn.cpu, name);
       return name;
     });
-    b.rows.push(row(`place${k}`, [...names.map((n): [number, string] => [1, n]), [1, u]], '=', 1));
+    const out: Terms = u === null ? [] : [[1, u]];
+    b.rows.push(row(`place${k}`, [...names.map((n): [number, string] => [1, n]), ...out], '=', 1));
     return names;
   });
 }
@@ -108,6 +112,23 @@ function addTie(
   toRows.forEach((terms, c) => b.rows.push(row(`tt${blockIndex}_${tie}_${c}`, terms, '=', 0)));
 }
 
+/**
+ * Knock-on candidate `i` counts as moved (m = 1) when any function leaves its current site or any tie changes
+ * path: m ≥ each such variable. The cap row then bounds Σ m.
+ */
+function addKnockOnFlag(p: RemapProblem, b: Builder, i: number, x: string[][]): void {
+  const m = b.binary(`m${i}`, 0);
+  b.knockOnFlags.push(m);
+  const block = p.slices[i];
+  const changes: string[] = [];
+  block.functions.forEach((k, fn) => {
+    const current = p.inv.placements[block.slice].sites[p.functions[k].fn];
+    p.functions[k].candidates.forEach((site, c) => { if (site !== current) changes.push(x[fn][c]); });
+  });
+  for (const y of b.tieVars) if (y.block === i && y.option.changed) changes.push(y.name);
+  changes.forEach((v, n) => b.rows.push(row(`mv${i}_${n}`, [[1, m], [-1, v]], '>=', 0)));
+}
+
 /** Capacity rows, skipped where even every option at once fits (they cannot bind). */
 function addCapacityRows(b: Builder, map: Map<number, Terms>, residual: Float64Array, prefix: string): void {
   for (const [key, terms] of [...map.entries()].sort((l, r) => l[0] - r[0])) {
@@ -122,14 +143,16 @@ export function buildExactModel(p: RemapProblem, setting: PathSetting, start?: M
   const b = new Builder();
   p.slices.forEach((block, i) => {
     const slice = p.inv.slices[block.slice];
-    const u = b.binary(`u${i}`, w.unresolved * sliceWeight(slice.priority));
-    if (block.blockedReason !== undefined) {
+    const u = block.touched ? b.binary(`u${i}`, w.unresolved * sliceWeight(slice.priority)) : null;
+    if (u !== null && block.blockedReason !== undefined) {
       b.fixedOut.push(u);
       return;
     }
     const x = addFunctions(p, w, b, i, u);
     slice.ties.forEach((_t, tie) => addTie(p, w, b, { block: i, tie }, x, setting, start?.get(block.slice)));
+    if (!block.touched) addKnockOnFlag(p, b, i, x);
   });
+  if (b.knockOnFlags.length > 0) b.rows.push(row('knockon', b.knockOnFlags.map((m): [number, string] => [1, m]), '<=', p.maxKnockOnMoves));
   addCapacityRows(b, b.cpu, p.residualCpu, 'cpu');
   addCapacityRows(b, b.gbps, p.residualGbps, 'bw');
   const objective = ` obj: ${b.objective.length > 0 ? sum(b.objective) : '0 u0'}`;

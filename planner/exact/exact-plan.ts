@@ -63,10 +63,15 @@ function startOnes(p: RemapProblem, model: ExactModel, start: Map<number, SliceP
   for (let i = 0; i < p.slices.length; i += 1) {
     const block = p.slices[i];
     const placement = start.get(block.slice);
-    if (!placement || block.blockedReason !== undefined) {
+    if (!placement || (block.touched && block.blockedReason !== undefined)) {
+      if (!block.touched) return null;
       ones.add(`u${i}`);
       continue;
     }
+    const current = p.inv.placements[block.slice];
+    const moved = placement.sites.some((s, f) => s !== current.sites[f])
+      || placement.paths.some((path, t) => path.join() !== current.paths[t].join());
+    if (!block.touched && moved) ones.add(`m${i}`);
     for (const k of block.functions) {
       const c = p.functions[k].candidates.indexOf(placement.sites[p.functions[k].fn]);
       if (c < 0) return null;
@@ -114,6 +119,10 @@ function extract(p: RemapProblem, model: ExactModel, values: Map<string, number>
     paths.set(v.block, list);
   }
   p.slices.forEach((block, i) => {
+    if (values === null && !block.touched) {
+      next.set(block.slice, p.inv.placements[block.slice]);
+      return;
+    }
     if (values === null || block.blockedReason !== undefined || on(`u${i}`)) {
       next.set(block.slice, null);
       return;

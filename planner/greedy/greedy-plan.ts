@@ -1,9 +1,12 @@
-// Greedy reference solver: sites ranked by GRC on the residual network; each affected slice (priority order)
-// takes its current site where it still fits, else the best-ranked candidate, and its ties are routed by
-// the decoder's own kernel — so the greedy plan is exactly reproducible as a DE seed.
+// Greedy reference solver: sites ranked by GRC on the residual network; each touched slice (priority order)
+// takes its current site where it still fits, else the best-ranked candidate (then the nearest), and its ties are
+// routed by the decoder's own kernel on their first catalogue path that fits — so the greedy plan is exactly
+// reproducible as a DE seed. Knock-on candidates stay where they are: greedy makes no knock-on moves.
 import type { SlicePlacement } from '../model/types';
 import { fits } from '../model/tolerance';
-import { createBookingState, placeSlice, releaseHeld, type BookingState } from '../remap/booking';
+import { createBookingState, releaseHeld, type BookingState } from '../remap/booking';
+import { CELL_MIDDLE, KEEP_IN, LEAVE_OUT, stayPutGenes } from '../remap/decoder';
+import { bookPlacement, placeSlice } from '../remap/place-slice';
 import type { RemapProblem, RemapSlice } from '../remap/remap-types';
 import { grcRank } from './grc';
 
@@ -43,29 +46,15 @@ function chooseSites(problem: RemapProblem, state: BookingState, block: RemapSli
   return picks;
 }
 
-function snapshot(state: BookingState): BookingState {
-  return { ...state, cpu: Float64Array.from(state.cpu), gbps: Float64Array.from(state.gbps), protectedGbps: Float64Array.from(state.protectedGbps) };
-}
-
-function restore(state: BookingState, saved: BookingState): void {
-  const { cpu, gbps, protectedGbps, pathOptions, protectedOptions } = state;
-  cpu.set(saved.cpu);
-  gbps.set(saved.gbps);
-  protectedGbps.set(saved.protectedGbps);
-  Object.assign(state, saved, { cpu, gbps, protectedGbps, pathOptions, protectedOptions });
-}
-
-/** Tries the ranked choice, then the nearest one; keeps the first that books without any violation. */
-function placeGreedily(problem: RemapProblem, state: BookingState, block: RemapSlice, rank: Float64Array): { picks: number[]; placement: SlicePlacement } | null {
+/** Tries the ranked choice, then the nearest one; writes the first that places into `genes`. */
+function placeGreedily(problem: RemapProblem, state: BookingState, block: RemapSlice, rank: Float64Array, genes: Float64Array): SlicePlacement | null {
   const sites = new Int32Array(block.functions.length);
   for (const how of ['ranked', 'nearest'] as const) {
     const picks = chooseSites(problem, state, block, rank, how);
     if (picks === null) continue;
-    picks.forEach((p, fn) => { sites[fn] = problem.functions[block.functions[fn]].candidates[p]; });
-    const saved = snapshot(state);
-    const placement = placeSlice(problem, state, block, sites, true);
-    if (state.violation === saved.violation && placement) return { picks, placement };
-    restore(state, saved);
+    picks.forEach((p, fn) => { genes[problem.functions[block.functions[fn]].gene] = p + CELL_MIDDLE; });
+    const placed = placeSlice(problem, state, block, genes, sites);
+    if (placed) return placed;
   }
   return null;
 }
@@ -74,13 +63,18 @@ export function greedyPlan(problem: RemapProblem): GreedyResult {
   const state = createBookingState(problem);
   const rank = grcRank(problem.inv.network, state.cpu, state.gbps);
   const next = new Map<number, SlicePlacement | null>();
-  const genes = new Float64Array(problem.dimension).fill(0.5);
+  const genes = stayPutGenes(problem);
   for (const block of problem.slices) {
-    const placed = block.blockedReason === undefined ? placeGreedily(problem, state, block, rank) : null;
-    if (!placed) releaseHeld(state, block);
-    genes[block.keepGene] = placed ? 0.75 : 0.25;
-    next.set(block.slice, placed ? placed.placement : null);
-    placed?.picks.forEach((p, fn) => { genes[problem.functions[block.functions[fn]].gene] = p + 0.5; });
+    releaseHeld(state, block);
+    if (!block.touched) {
+      bookPlacement(problem, state, block.slice, problem.inv.placements[block.slice]);
+      next.set(block.slice, problem.inv.placements[block.slice]);
+      continue;
+    }
+    const placed = block.blockedReason === undefined ? placeGreedily(problem, state, block, rank, genes) : null;
+    genes[block.keepGene] = placed ? KEEP_IN : LEAVE_OUT;
+    if (!placed) for (const k of block.functions) genes[problem.functions[k].gene] = CELL_MIDDLE;
+    next.set(block.slice, placed);
   }
   return { next, genes };
 }

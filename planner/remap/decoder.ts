@@ -1,14 +1,17 @@
-// Genome → placements: floors each function gene to a candidate site and books slices in priority order.
+// Genome → placements: orders the blocks by their random keys and books each on the sites and paths its genes
+// pick. A touched slice that cannot be placed whole is left unresolved; an untouched (knock-on) slice that
+// cannot be re-placed, or would exceed the knock-on cap, keeps its current placement.
 import type { DEProblem, Fitness } from '../de/differential-evolution';
 import type { Objective, SlicePlacement } from '../model/types';
 import { sliceWeight } from '../plan/evaluate-plan';
-import { createBookingState, loadBookingState, placeSlice, releaseHeld, resetBookingState, saveBookingState, type BookingState } from './booking';
-import type { RemapProblem } from './remap-types';
+import { createBookingState, loadBookingState, releaseHeld, resetBookingState, saveBookingState, type BookingState } from './booking';
+import { bookPlacement, geneIndex, placeSlice } from './place-slice';
+import type { RemapProblem, RemapSlice } from './remap-types';
 
 /** Genes at the middle of their cell, so small DE steps do not flip them. */
-const KEEP_IN = 0.75;
-const LEAVE_OUT = 0.25;
-const CELL_MIDDLE = 0.5;
+export const KEEP_IN = 0.75;
+export const LEAVE_OUT = 0.25;
+export const CELL_MIDDLE = 0.5;
 
 export interface Decoded {
   fitness: Fitness;
@@ -19,13 +22,15 @@ export interface Decoded {
 export interface Decoder {
   evaluate(genes: Float64Array): Fitness;
   decode(genes: Float64Array): Decoded;
-  /** evaluate, saving the booking state before each slice block for evaluateFrom */
+  /** evaluate, saving the booking state before each decode position for evaluateFrom */
   evaluateSaving(genes: Float64Array): Fitness;
   /**
-   * evaluate for genes that equal those of the last evaluateSaving call in every block before `block`:
-   * decodes only from that block on (same result as evaluate).
+   * evaluate for genes that differ from those of the last evaluateSaving call only in the blocks listed:
+   * decodes from the first position where anything can differ (same result as evaluate).
    */
-  evaluateFrom(genes: Float64Array, block: number): Fitness;
+  evaluateFrom(genes: Float64Array, changedBlocks: readonly number[]): Fitness;
+  /** block indices in the decode order of `genes` (a fresh array) */
+  orderOf(genes: Float64Array): number[];
 }
 
 /** Objective vector order: the lexicographic keys, then counts as tie-breakers (fewer is better there too). */
@@ -41,41 +46,46 @@ export function objectiveFromFitness(f: Fitness): Objective {
   return { unresolvedWeight, unresolved, moved, rerouted, moveCost, usage, peakUtilisation };
 }
 
-function candidateIndex(gene: number, count: number): number {
-  const i = Math.floor(gene);
-  return i < 0 ? 0 : i >= count ? count - 1 : i;
+/** Sorts `order` (block indices) by the blocks' keys; block index breaks ties, so the order is deterministic. */
+function sortByKeys(problem: RemapProblem, genes: Float64Array, order: Int32Array): void {
+  for (let b = 0; b < order.length; b += 1) order[b] = b;
+  const key = (b: number) => genes[problem.slices[b].orderGene];
+  order.sort((a, b) => key(a) - key(b) || a - b);
 }
 
-/** Partial decodes: the booking state before each slice block, saved by a full pass. */
-interface Resume {
-  /** start at this block from saves[from] (0 = from scratch) */
-  from: number;
-  saves: Float64Array[];
-  /** save the state before each block into saves */
-  save: boolean;
-}
-
-function run(problem: RemapProblem, state: BookingState, sites: Int32Array, genes: Float64Array, next?: Map<number, SlicePlacement | null>, resume?: Resume): void {
-  const from = resume?.from ?? 0;
-  if (from > 0 && resume) loadBookingState(state, resume.saves[from]);
-  else resetBookingState(problem, state);
-  const record = next !== undefined;
-  for (let b = from; b < problem.slices.length; b += 1) {
-    const block = problem.slices[b];
-    if (resume?.save) resume.saves[b] = saveBookingState(state, resume.saves[b]);
-    if (block.blockedReason !== undefined || genes[block.keepGene] < 0.5) {
-      releaseHeld(state, block);
+function decodeBlock(problem: RemapProblem, state: BookingState, block: RemapSlice, genes: Float64Array, sites: Int32Array): SlicePlacement | null {
+  releaseHeld(state, block);
+  if (block.touched) {
+    const placed = block.blockedReason === undefined && genes[block.keepGene] >= 0.5 ? placeSlice(problem, state, block, genes, sites) : null;
+    if (placed === null) {
       state.unresolvedWeight += sliceWeight(problem.inv.slices[block.slice].priority);
       state.unresolved += 1;
-      next?.set(block.slice, null);
-      continue;
     }
-    block.functions.forEach((k, fn) => {
-      const f = problem.functions[k];
-      sites[fn] = f.candidates[candidateIndex(genes[f.gene], f.candidates.length)];
-    });
-    const placement = placeSlice(problem, state, block, sites, record);
-    next?.set(block.slice, placement);
+    return placed;
+  }
+  const mayMove = block.blockedReason === undefined && state.knockOnMoves < problem.maxKnockOnMoves;
+  const placed = mayMove ? placeSlice(problem, state, block, genes, sites) : null;
+  if (placed !== null) return placed;
+  const current = problem.inv.placements[block.slice];
+  bookPlacement(problem, state, block.slice, current);
+  return current;
+}
+
+interface Run {
+  order: Int32Array;
+  from: number;
+  saves?: Float64Array[];
+  next?: Map<number, SlicePlacement | null>;
+}
+
+function run(problem: RemapProblem, state: BookingState, sites: Int32Array, genes: Float64Array, r: Run): void {
+  if (r.from > 0 && r.saves) loadBookingState(state, r.saves[r.from]);
+  else resetBookingState(problem, state);
+  for (let p = r.from; p < r.order.length; p += 1) {
+    if (r.saves && r.from === 0) r.saves[p] = saveBookingState(state, r.saves[p]);
+    const block = problem.slices[r.order[p]];
+    const placed = decodeBlock(problem, state, block, genes, sites);
+    r.next?.set(block.slice, placed);
   }
 }
 
@@ -85,26 +95,47 @@ export function createDecoder(problem: RemapProblem): Decoder {
   let widest = 1;
   for (const block of problem.slices) widest = Math.max(widest, block.functions.length);
   const sites = new Int32Array(widest);
+  const n = problem.slices.length;
+  const order = new Int32Array(n);
+  const savedOrder = new Int32Array(n);
+  const position = new Int32Array(n);
   const saves: Float64Array[] = [];
+  let haveSaves = false;
   return {
     evaluateSaving(genes) {
-      run(problem, state, sites, genes, undefined, { from: 0, saves, save: true });
+      sortByKeys(problem, genes, order);
+      run(problem, state, sites, genes, { order, from: 0, saves });
+      savedOrder.set(order);
+      haveSaves = true;
       return toFitness(state);
     },
-    evaluateFrom(genes, block) {
-      // Without saved states (no evaluateSaving yet) this is a plain evaluate.
-      run(problem, state, sites, genes, undefined, { from: saves.length === problem.slices.length ? block : 0, saves, save: false });
+    evaluateFrom(genes, changedBlocks) {
+      sortByKeys(problem, genes, order);
+      let from = 0;
+      if (haveSaves) {
+        for (let p = 0; p < n; p += 1) position[order[p]] = p;
+        from = n;
+        for (const b of changedBlocks) from = Math.min(from, position[b]);
+        for (let p = 0; p < from; p += 1) if (order[p] !== savedOrder[p]) { from = p; break; }
+      }
+      run(problem, state, sites, genes, { order, from: from >= n ? n : from, saves: haveSaves ? saves : undefined });
       return toFitness(state);
     },
     evaluate(genes) {
-      run(problem, state, sites, genes);
+      sortByKeys(problem, genes, order);
+      run(problem, state, sites, genes, { order, from: 0 });
       return toFitness(state);
     },
     decode(genes) {
       const next = new Map<number, SlicePlacement | null>();
-      run(problem, state, sites, genes, next);
+      sortByKeys(problem, genes, order);
+      run(problem, state, sites, genes, { order, from: 0, next });
       const fitness = toFitness(state);
       return { fitness, next, objective: objectiveFromFitness(fitness) };
+    },
+    orderOf(genes) {
+      sortByKeys(problem, genes, order);
+      return Array.from(order);
     },
   };
 }
@@ -118,27 +149,52 @@ export function toDEProblem(problem: RemapProblem, decoder: Decoder = createDeco
   return { dimension: problem.dimension, lower: problem.lower, upper: problem.upper, evaluate: (x) => decoder.evaluate(x) };
 }
 
-/** Every slice kept, every function on candidate 0 (its current site whenever that is still usable). */
+/** Order keys in the problem's block order: knock-on candidates first, then touched slices by priority. */
+function baseOrderKey(problem: RemapProblem, b: number): number {
+  return (b + 0.5) / Math.max(1, problem.slices.length);
+}
+
+/** Every touched slice kept, every function on candidate 0 (its current site when usable), every tie on path 0. */
 export function stayPutGenes(problem: RemapProblem): Float64Array {
   const genes = new Float64Array(problem.dimension).fill(CELL_MIDDLE);
-  for (const block of problem.slices) genes[block.keepGene] = KEEP_IN;
+  problem.slices.forEach((block, b) => {
+    if (block.keepGene >= 0) genes[block.keepGene] = KEEP_IN;
+    genes[block.orderGene] = baseOrderKey(problem, b);
+  });
   return genes;
 }
 
-/** Genes that decode to `next`'s sites (slices missing from `next` stay put; null = left out). */
+/** The gene value that picks catalogue path `spans` for a tie between `from` and `to` (path 0 when not listed). */
+export function pathGene(problem: RemapProblem, slice: number, tie: number, from: number, to: number, spans: readonly number[]): number {
+  const list = problem.paths.get(slice, tie, from, to);
+  const i = list.findIndex((p) => p.spans.length === spans.length && p.spans.every((x, k) => x === spans[k]));
+  if (i <= 0) return CELL_MIDDLE;
+  const gene = ((i + 0.5) * problem.kPaths) / list.length;
+  return geneIndex(gene, list.length, problem.kPaths) === i ? gene : CELL_MIDDLE;
+}
+
+/**
+ * Genes that decode to `next` whenever its placements fit together and use catalogue paths (blocks missing from
+ * `next` stay put; null = left out). The order keys are the problem's base order.
+ */
 export function genesFromPlacement(problem: RemapProblem, next: Map<number, SlicePlacement | null>): Float64Array {
   const genes = stayPutGenes(problem);
   for (const block of problem.slices) {
     const placement = next.get(block.slice);
     if (placement === undefined) continue;
     if (placement === null) {
-      genes[block.keepGene] = LEAVE_OUT;
+      if (block.keepGene >= 0) genes[block.keepGene] = LEAVE_OUT;
       continue;
     }
     for (const k of block.functions) {
       const f = problem.functions[k];
       const i = f.candidates.indexOf(placement.sites[f.fn]);
       genes[f.gene] = (i < 0 ? 0 : i) + CELL_MIDDLE;
+    }
+    for (const k of block.ties) {
+      const t = problem.ties[k];
+      const info = problem.inv.slices[t.slice].ties[t.tie];
+      genes[t.gene] = pathGene(problem, t.slice, t.tie, placement.sites[info.from], placement.sites[info.to], placement.paths[t.tie]);
     }
   }
   return genes;

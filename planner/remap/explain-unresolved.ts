@@ -2,7 +2,8 @@
 import { fits } from '../model/tolerance';
 import type { SlicePlacement } from '../model/types';
 import { shortestLatencyPath } from '../paths/shortest-path';
-import { bookPlacement, createBookingState, type BookingState } from './booking';
+import { createBookingState, type BookingState } from './booking';
+import { bookPlacement } from './place-slice';
 import type { RemapProblem, RemapSlice } from './remap-types';
 
 /** Nearest candidate per function with enough CPU left after the plan, or the reason there is none. */

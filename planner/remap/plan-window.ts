@@ -11,7 +11,8 @@ import { createDecoder, objectiveFromFitness, stayPutGenes, toDEProblem, type De
 import { explainUnresolved } from './explain-unresolved';
 import { PLAN_DEFAULTS, type PlanOptions } from './plan-options';
 import { buildRemapProblem } from './problem';
-import { polish } from './polish';
+import { finalPlan } from './knock-on-reasons';
+import { localSearch } from './local-search';
 import { perturbedSeeds } from './seeding';
 import type { RemapProblem } from './remap-types';
 
@@ -69,7 +70,7 @@ function initialMembers(problem: RemapProblem, greedyGenes: Float64Array, o: Pla
   return [...bases, ...perturbedSeeds(problem, bases, extra, createRng(deriveSeed(o.seed, SEEDING_STREAM)))];
 }
 
-/** Decodes per hill-climb: a few passes over the genome. */
+/** Decodes per local search: a few passes over the genome. */
 function polishBudget(problem: RemapProblem): number {
   return Math.max(200, 4 * problem.dimension);
 }
@@ -84,7 +85,7 @@ const FINAL_POLISH_SHARE = 0.15;
 
 function polishFound(problem: RemapProblem, decoder: Decoder, found: Search, budget: number, timeUp: () => boolean): Search {
   if (!found.genes) return found;
-  const p = polish(problem, decoder, found.genes, budget, timeUp);
+  const p = localSearch(problem, decoder, found.genes, budget, timeUp);
   const decoded = decoder.decode(p.genes);
   return { ...found, next: decoded.next, feasible: decoded.fitness.violation <= 0, genes: p.genes };
 }
@@ -104,14 +105,15 @@ async function search(problem: RemapProblem, o: PlanOptions, startMs: number, no
   // the greedy seed is hill-climbed first, and DE's best is hill-climbed at the end.
   const budget = polishBudget(problem);
   const until = (share: number) => () => now() - startMs >= o.timeLimitMs * share;
-  const seed = polish(problem, decoder, greedy.genes, budget, until(SEED_POLISH_SHARE)).genes;
+  const seed = localSearch(problem, decoder, greedy.genes, budget, until(SEED_POLISH_SHARE)).genes;
   const evolved = await evolve(problem, decoder, o, initialMembers(problem, seed, o), startMs, now);
   const found = polishFound(problem, decoder, evolved, budget, until(1));
   // The product keeps the better of the search's plan and greedy's; `alone` records the search's own figures,
   // so benchmarks and tests judge the search, not the fallback.
-  const own = evaluatePlan(problem.inv, problem.window, found.next, problem.options.reservations);
-  const better = found.feasible === true
-    && compareObjectives(own, evaluatePlan(problem.inv, problem.window, greedy.next, problem.options.reservations)) <= 0;
+  const score = (next: Map<number, SlicePlacement | null>) =>
+    evaluatePlan(problem.inv, problem.window, finalPlan(problem, next).next, problem.options.reservations);
+  const own = score(found.next);
+  const better = found.feasible === true && compareObjectives(own, score(greedy.next)) <= 0;
   const alone = { objective: own, feasible: found.feasible === true, usedFallback: better ? null : ('greedy' as const) };
   return better ? { ...found, alone } : { ...found, next: greedy.next, alone };
 }
@@ -133,7 +135,12 @@ export async function planWindow(inv: Inventory, window: WindowSpec, options: Pa
   });
   const found = await search(problem, o, startMs, now);
   const affected = problem.affected.map((s) => inv.slices[s].id);
-  const slices = toSlicePlans(inv, found.next, explainUnresolved(problem, found.next));
+  const plan = finalPlan(problem, found.next);
+  const slices = toSlicePlans(inv, plan.next, explainUnresolved(problem, found.next));
+  for (const entry of slices) {
+    const touched = plan.madeRoomFor.get(inv.sliceIndex.get(entry.slice)!);
+    if (touched) entry.madeRoomFor = touched.map((s) => inv.slices[s].id);
+  }
   const verdict = verifyPlan(inv, window, { affected, slices }, o.reservations);
   if (!verdict.ok) {
     const first = verdict.violations[0];
@@ -141,7 +148,7 @@ export async function planWindow(inv: Inventory, window: WindowSpec, options: Pa
   }
   const result: PlanResult = {
     window: window.id, mode: o.mode, seed: o.seed, elapsedMs: now() - startMs, affected, slices,
-    objective: evaluatePlan(inv, window, found.next, o.reservations), trace: found.trace,
+    objective: evaluatePlan(inv, window, plan.next, o.reservations), trace: found.trace,
   };
   if (found.exact) result.exact = found.exact;
   if (found.alone) result.search = found.alone;

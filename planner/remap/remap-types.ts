@@ -1,6 +1,7 @@
 // Shapes of the re-mapping problem: options, candidate lists, residual capacities and the genome layout.
 import type { DEProblem } from '../de/differential-evolution';
 import type { Inventory, Reservation, WindowSpec } from '../model/types';
+import type { PathCatalog } from './path-catalog';
 
 /** Serializable options that, with the inventory and window, determine the problem exactly. */
 export interface RemapProblemOptions {
@@ -11,27 +12,46 @@ export interface RemapProblemOptions {
   excludedSites?: string[];
   /** at most this many candidate sites per function (current site included) */
   maxCandidates?: number;
-  /** knock-on moves of slices the window does not touch; absent = touched slices only */
-  knockOn?: { maxMoves: number };
+  /** candidate paths per tie and pair of end sites (current path included) */
+  kPaths?: number;
+  /**
+   * knock-on moves of slices the window does not touch: at most `maxMoves` of them per plan, chosen among
+   * `maxCandidates` slices that sit on the elements blocking touched slices; absent = touched slices only
+   */
+  knockOn?: { maxMoves: number; maxCandidates?: number };
 }
 
-/** One affected function: where it may go. */
+/** One function of a block: where it may go. */
 export interface RemapFunction {
   slice: number;
   fn: number;
   /** candidate site indices; index 0 is the current site when it is still usable */
   candidates: Int32Array;
-  /** genome position of this function's gene */
+  /** genome position of this function's gene, in [0, candidates) */
   gene: number;
 }
 
-/** One affected slice and its genome block. */
+/** One tie of a block: its path gene picks among the catalogue's paths between the chosen end sites. */
+export interface RemapTie {
+  slice: number;
+  tie: number;
+  /** genome position of this tie's gene, in [0, kPaths) */
+  gene: number;
+}
+
+/** One slice of the problem and its genome block: [keep (touched only), order, functions…, ties…]. */
 export interface RemapSlice {
   slice: number;
-  /** genome position of the keep-out gene (< 0.5 = leave the slice unresolved) */
+  /** the window touches it (hosted, transit, squeezed); false = a knock-on candidate */
+  touched: boolean;
+  /** genome position of the keep-out gene (< 0.5 = leave the slice unresolved); -1 for knock-on candidates */
   keepGene: number;
+  /** genome position of the random key that sets the decode order (smaller keys book first) */
+  orderGene: number;
   /** indices into RemapProblem.functions, in the slice's function order */
   functions: number[];
+  /** indices into RemapProblem.ties, in the slice's tie order */
+  ties: number[];
   /** why no decode can place it (a function without candidates), else undefined */
   blockedReason?: string;
   /** spans of its ties' current paths that survive the window (repeats allowed) and the Gbps each holds */
@@ -43,14 +63,20 @@ export interface RemapProblem extends Omit<DEProblem, 'evaluate'> {
   inv: Inventory;
   window: WindowSpec;
   options: RemapProblemOptions;
-  /** affected slice indices, ascending */
+  /** slice indices the window touches, ascending */
   affected: number[];
+  /** blocks: knock-on candidates first, then touched slices by priority (the stay-put decode order) */
   slices: RemapSlice[];
   functions: RemapFunction[];
-  /** capacity left during the window for the affected slices */
+  ties: RemapTie[];
+  /** most knock-on candidates that may leave their current placement in one plan (0 = none) */
+  maxKnockOnMoves: number;
+  kPaths: number;
+  paths: PathCatalog;
+  /** capacity left during the window for the blocks */
   residualCpu: Float64Array;
   residualGbps: Float64Array;
-  /** residualGbps minus every affected tie's surviving current path: new routes try this first */
+  /** residualGbps minus every block's surviving current path: fallback routes try this first */
   protectedGbps: Float64Array;
   /** window capacity without reservations, for utilisation */
   capacityGbps: Float64Array;

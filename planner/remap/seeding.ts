@@ -7,14 +7,17 @@ import type { RemapProblem } from './remap-types';
 /** Slices re-drawn per perturbed member: 1 … MAX_REDRAWN. */
 const MAX_REDRAWN = 3;
 
+function redraw(problem: RemapProblem, genes: Float64Array, gene: number, rng: Rng): void {
+  genes[gene] = problem.lower[gene] + rng() * (problem.upper[gene] - problem.lower[gene]);
+}
+
 function redrawSlice(problem: RemapProblem, genes: Float64Array, block: number, rng: Rng): void {
   const b = problem.slices[block];
   // Bias towards keeping the slice in: leaving slices out is rarely what improves a seed.
-  genes[b.keepGene] = 0.25 + 0.75 * rng();
-  for (const k of b.functions) {
-    const f = problem.functions[k];
-    genes[f.gene] = problem.lower[f.gene] + rng() * (problem.upper[f.gene] - problem.lower[f.gene]);
-  }
+  if (b.keepGene >= 0) genes[b.keepGene] = 0.25 + 0.75 * rng();
+  redraw(problem, genes, b.orderGene, rng);
+  for (const k of b.functions) redraw(problem, genes, problem.functions[k].gene, rng);
+  for (const k of b.ties) redraw(problem, genes, problem.ties[k].gene, rng);
 }
 
 /** `count` members, alternating between the bases, each with 1–3 slices re-drawn. */

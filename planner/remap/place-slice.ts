@@ -1,0 +1,149 @@
+// The decoder's kernel: places one slice on the sites and paths its genes pick, repairing a pick that does not
+// fit with the first candidate that does, and takes the whole slice back when any part cannot be placed.
+import { fits } from '../model/tolerance';
+import type { SlicePlacement } from '../model/types';
+import { REROUTE_COST } from '../plan/evaluate-plan';
+import { shortestLatencyPath } from '../paths/shortest-path';
+import { bookCpu, bookPath, commit, mark, undoSince, type BookingState } from './booking';
+import type { CandidatePath } from './path-catalog';
+import type { RemapProblem, RemapSlice } from './remap-types';
+
+export function geneIndex(gene: number, count: number, range: number): number {
+  const i = Math.floor((gene * count) / range);
+  return i < 0 ? 0 : i >= count ? count - 1 : i;
+}
+
+function pathFits(path: readonly number[], gbps: number, residual: Float64Array): boolean {
+  for (const span of path) if (!fits(gbps, residual[span])) return false;
+  return true;
+}
+
+function availability(problem: RemapProblem, path: readonly number[]): number {
+  let a = 1;
+  for (const span of path) a *= problem.inv.network.spans[span].availability;
+  return a;
+}
+
+/** The gene's path when it fits; else the catalogue's first that fits around later slices' paths, then anywhere. */
+function pickFromCatalogue(list: readonly CandidatePath[], gene: number, range: number, gbps: number, state: BookingState): readonly number[] | null {
+  if (list.length === 0) return null;
+  const chosen = geneIndex(gene, list.length, range);
+  if (pathFits(list[chosen].spans, gbps, state.gbps)) return list[chosen].spans;
+  for (const residual of [state.protectedGbps, state.gbps]) {
+    for (let i = 0; i < list.length; i += 1) if (i !== chosen && pathFits(list[i].spans, gbps, residual)) return list[i].spans;
+  }
+  return null;
+}
+
+/**
+ * The current path when the gene picks the catalogue's first entry, the end sites are unchanged and the path
+ * still qualifies and fits: the catalogue would start with it, so this skips listing the others (most slices
+ * keep their paths, and listing costs a k-shortest-paths search).
+ */
+function keptPath(problem: RemapProblem, state: BookingState, block: RemapSlice, tie: number, sites: Int32Array, gene: number): readonly number[] | null {
+  const t = problem.inv.slices[block.slice].ties[tie];
+  const current = problem.inv.placements[block.slice];
+  if (gene >= 1 || sites[t.from] !== current.sites[t.from] || sites[t.to] !== current.sites[t.to]) return null;
+  const path = current.paths[tie];
+  let latencyMs = 0;
+  for (const span of path) {
+    if (problem.spanDown[span] || !fits(t.bandwidthGbps, state.gbps[span])) return null;
+    latencyMs += problem.inv.network.spans[span].latencyMs;
+  }
+  if (latencyMs > t.maxLatencyMs) return null;
+  if (t.minAvailability !== undefined && availability(problem, path) < t.minAvailability) return null;
+  return path;
+}
+
+/** Routes tie `tie` of the block between the chosen sites; null when nothing fits. Books nothing. */
+function routeTie(problem: RemapProblem, state: BookingState, block: RemapSlice, tie: number, sites: Int32Array, gene: number): readonly number[] | null {
+  const kept = keptPath(problem, state, block, tie, sites, gene);
+  if (kept !== null) return kept;
+  const t = problem.inv.slices[block.slice].ties[tie];
+  const from = sites[t.from];
+  const to = sites[t.to];
+  const listed = pickFromCatalogue(problem.paths.get(block.slice, tie, from, to), gene, problem.kPaths, t.bandwidthGbps, state);
+  if (listed !== null) return listed;
+  // Beyond the catalogue: the shortest route on what is left, around later slices' current paths first.
+  for (const o of [state.protectedOptions, state.pathOptions]) {
+    o.minGbps = t.bandwidthGbps;
+    o.maxLatencyMs = t.maxLatencyMs;
+    const found = shortestLatencyPath(problem.inv.network, from, to, o);
+    if (found && (t.minAvailability === undefined || availability(problem, found.spans) >= t.minAvailability)) return found.spans;
+  }
+  return null;
+}
+
+function samePath(a: readonly number[], b: readonly number[]): boolean {
+  if (a.length !== b.length) return false;
+  for (let i = 0; i < a.length; i += 1) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+/** Move cost and counts of a placed slice against its current placement; true when it differs. */
+function tally(problem: RemapProblem, state: BookingState, slice: number, sites: ArrayLike<number>, paths: readonly (readonly number[])[]): boolean {
+  const info = problem.inv.slices[slice];
+  const current = problem.inv.placements[slice];
+  let moved = false;
+  let changed = false;
+  info.functions.forEach((f, fn) => {
+    if (sites[fn] !== current.sites[fn]) { moved = true; state.moveCost += f.moveCost; }
+  });
+  paths.forEach((path, tie) => {
+    if (!samePath(path, current.paths[tie])) { changed = true; state.moveCost += REROUTE_COST; }
+  });
+  if (moved) state.moved += 1;
+  else if (changed) state.rerouted += 1;
+  return moved || changed;
+}
+
+/**
+ * Books the block on the sites and paths its genes pick (repaired where a pick does not fit). Returns the
+ * placement, or null after taking back every booking when some function or tie cannot be placed.
+ */
+export function placeSlice(problem: RemapProblem, state: BookingState, block: RemapSlice, genes: Float64Array, sites: Int32Array): SlicePlacement | null {
+  const slice = problem.inv.slices[block.slice];
+  const m = mark(state);
+  for (let fn = 0; fn < block.functions.length; fn += 1) {
+    const f = problem.functions[block.functions[fn]];
+    const cpu = slice.functions[fn].cpu;
+    let i = geneIndex(genes[f.gene], f.candidates.length, f.candidates.length);
+    if (!fits(cpu, state.cpu[f.candidates[i]])) i = f.candidates.findIndex((site) => fits(cpu, state.cpu[site]));
+    if (i < 0) { undoSince(state, m); return null; }
+    sites[fn] = f.candidates[i];
+    bookCpu(state, sites[fn], cpu);
+  }
+  const paths: number[][] = [];
+  for (let tie = 0; tie < block.ties.length; tie += 1) {
+    const path = routeTie(problem, state, block, tie, sites, genes[problem.ties[block.ties[tie]].gene]);
+    if (path === null) { undoSince(state, m); return null; }
+    bookPath(problem, state, path, slice.ties[tie].bandwidthGbps);
+    paths.push(path as number[]);
+  }
+  commit(state);
+  const placement = { sites: Array.from(sites.subarray(0, block.functions.length)), paths };
+  if (tally(problem, state, block.slice, placement.sites, paths) && !block.touched) state.knockOnMoves += 1;
+  return placement;
+}
+
+/**
+ * Books a given placement as it is, e.g. an untouched slice kept where it is. What does not fit is booked anyway
+ * and counted as violation (the share of the demand that does not fit), so Deb's rules steer away from it.
+ */
+export function bookPlacement(problem: RemapProblem, state: BookingState, slice: number, placement: SlicePlacement): void {
+  const info = problem.inv.slices[slice];
+  info.functions.forEach((f, fn) => {
+    const site = placement.sites[fn];
+    const free = Math.max(0, state.cpu[site]);
+    if (!fits(f.cpu, free)) state.violation += (f.cpu - free) / f.cpu;
+    bookCpu(state, site, f.cpu);
+  });
+  info.ties.forEach((t, tie) => {
+    for (const span of placement.paths[tie]) {
+      const free = Math.max(0, state.gbps[span]);
+      if (!fits(t.bandwidthGbps, free)) state.violation += (t.bandwidthGbps - free) / t.bandwidthGbps;
+    }
+    bookPath(problem, state, placement.paths[tie], t.bandwidthGbps);
+  });
+  commit(state);
+}
