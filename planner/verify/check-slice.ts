@@ -1,9 +1,8 @@
 // Checks one slice's planned placement on its own: completeness, fixed functions, anchors, down elements, paths, SLA.
-import { satisfiesAnchor } from '../model/anchor';
-import type { Inventory, SlicePlacement, SlicePlan } from '../model/types';
-import type { WindowCapacity } from '../model/window-capacity';
-import { classifyOutcome } from '../plan/slice-plans';
+import type { Inventory, Outcome, SlicePlacement, SlicePlan } from '../model/types';
+import { anchorHolds } from './anchor-holds';
 import type { Violation } from './violation';
+import type { WindowLimits } from './window-limits';
 
 /** Latency and availability sums are compared with the same small slack as capacities. */
 const SLA_TOLERANCE = 1e-9;
@@ -44,17 +43,17 @@ function resolvePaths(inv: Inventory, s: number, plan: SlicePlan, report: Report
   return ok ? paths : null;
 }
 
-function checkFunctions(inv: Inventory, s: number, sites: number[], cap: WindowCapacity, report: Report): void {
+function checkFunctions(inv: Inventory, s: number, sites: number[], limits: WindowLimits, report: Report): void {
   const current = inv.placements[s].sites;
   inv.slices[s].functions.forEach((f, i) => {
     const siteId = inv.network.sites[sites[i]].id;
     if (f.fixed && sites[i] !== current[i]) report('fixed-moved', `fixed function "${f.id}" moved to "${siteId}"`);
-    if (!satisfiesAnchor(inv.network, f.anchor, sites[i])) report('anchor', `function "${f.id}" on "${siteId}" breaks its anchor`);
-    if (cap.siteDown[sites[i]]) report('down-element', `function "${f.id}" is on site "${siteId}", down in the window`);
+    if (!anchorHolds(inv.network, f.anchor, sites[i])) report('anchor', `function "${f.id}" on "${siteId}" breaks its anchor`);
+    if (limits.siteDown[sites[i]]) report('down-element', `function "${f.id}" is on site "${siteId}", down in the window`);
   });
 }
 
-function checkTie(inv: Inventory, s: number, t: number, placement: SlicePlacement, cap: WindowCapacity, report: Report): void {
+function checkTie(inv: Inventory, s: number, t: number, placement: SlicePlacement, limits: WindowLimits, report: Report): void {
   const tie = inv.slices[s].ties[t];
   const { spans, sites } = inv.network;
   let at = placement.sites[tie.from];
@@ -62,7 +61,7 @@ function checkTie(inv: Inventory, s: number, t: number, placement: SlicePlacemen
   let availability = 1;
   for (const x of placement.paths[t]) {
     const span = spans[x];
-    if (cap.spanDown[x]) report('down-element', `tie "${tie.id}" uses span "${span.id}", down in the window`);
+    if (limits.spanDown[x]) report('down-element', `tie "${tie.id}" uses span "${span.id}", down in the window`);
     if (span.a !== at && span.b !== at) {
       report('broken-path', `tie "${tie.id}": span "${span.id}" does not touch site "${sites[at].id}"`);
       return;
@@ -81,9 +80,19 @@ function checkTie(inv: Inventory, s: number, t: number, placement: SlicePlacemen
   }
 }
 
+const samePath = (a: readonly number[], b: readonly number[]) => a.length === b.length && a.every((x, i) => x === b[i]);
+
+/** The verifier's own reading of an outcome: 'move' if any function changed site, else 'reroute' if any path changed. */
+function actualOutcome(inv: Inventory, s: number, placement: SlicePlacement): Outcome {
+  const current = inv.placements[s];
+  if (placement.sites.some((site, i) => site !== current.sites[i])) return 'move';
+  if (placement.paths.some((path, i) => !samePath(path, current.paths[i]))) return 'reroute';
+  return 'stays';
+}
+
 /** Checks one entry; returns its placement (null when unresolved or not mappable) for the capacity tally. */
 export function checkSlice(
-  inv: Inventory, s: number, plan: SlicePlan, cap: WindowCapacity, out: Violation[],
+  inv: Inventory, s: number, plan: SlicePlan, limits: WindowLimits, out: Violation[],
 ): SlicePlacement | null {
   const report: Report = (code, message) => out.push({ slice: plan.slice, code, message });
   if (plan.outcome === 'unresolved') return null;
@@ -91,9 +100,9 @@ export function checkSlice(
   const paths = resolvePaths(inv, s, plan, report);
   if (sites === null || paths === null) return null;
   const placement = { sites, paths };
-  checkFunctions(inv, s, sites, cap, report);
-  inv.slices[s].ties.forEach((_, t) => checkTie(inv, s, t, placement, cap, report));
-  const actual = classifyOutcome(inv, s, placement);
+  checkFunctions(inv, s, sites, limits, report);
+  inv.slices[s].ties.forEach((_, t) => checkTie(inv, s, t, placement, limits, report));
+  const actual = actualOutcome(inv, s, placement);
   if (actual !== plan.outcome) report('outcome-mismatch', `declared "${plan.outcome}" but the placement is "${actual}"`);
   return placement;
 }
