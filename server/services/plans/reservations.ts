@@ -17,9 +17,16 @@ export interface WindowReservations {
   reservedFor: string[];
 }
 
-/** A stored review slice in the planner's id form (`after` is null when the plan left it unresolved). */
+/**
+ * A stored review slice in the planner's id form (`after` is null when the plan left it unresolved). A knock-on
+ * move keeps the ids of the slices it makes room for: verification accepts an entry for an untouched slice only then.
+ * Rows stored before knock-on moves existed have no madeRoomFor at all.
+ */
 export function toSlicePlan(s: PlanSlice): SlicePlan {
-  return { slice: s.slice, outcome: s.outcome, sites: { ...(s.after?.sites ?? {}) }, paths: { ...(s.after?.paths ?? {}) } };
+  const plan: SlicePlan = { slice: s.slice, outcome: s.outcome, sites: { ...(s.after?.sites ?? {}) }, paths: { ...(s.after?.paths ?? {}) } };
+  const madeRoomFor = (s.madeRoomFor ?? []).map((m) => m.slice);
+  if (madeRoomFor.length > 0) plan.madeRoomFor = madeRoomFor;
+  return plan;
 }
 
 function storedSlices(result: unknown): PlanSlice[] {

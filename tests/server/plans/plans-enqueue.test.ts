@@ -24,7 +24,7 @@ test('a planner runs a plan: stored queued with its settings, handed to the queu
   const { plan } = planResponseSchema.parse(res.body);
   expect(plan).toMatchObject({ windowId, status: 'queued', stale: false, accepted: false, review: null, createdBy: ctx.users.planner.id });
   expect(plan.id).toMatch(/^pl-/);
-  expect(plan.settings).toEqual({ mode: 'serial', seed: 7, population: 40, timeLimitSeconds: 5, pinned: [id('h1')], excludedSites: [], afterWindow: 'keep' });
+  expect(plan.settings).toEqual({ mode: 'serial', seed: 7, population: 40, timeLimitSeconds: 5, pinned: [id('h1')], excludedSites: [], afterWindow: 'keep', knockOn: true, maxKnockOnMoves: 5 });
   const run = ctx.queue.planRuns.find((r) => r.planId === plan.id);
   expect(run?.expireInSeconds).toBe(planExpireSeconds(plan.settings, ctx.config));
   expect(run?.expireInSeconds).toBe(5 * 3 + 60 + ctx.config.planExpireMarginSeconds);
