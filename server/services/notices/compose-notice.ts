@@ -37,9 +37,10 @@ export function summaryOf(workType: string | null): string {
 export function composeNotice(input: ComposeInput): NoticeContent {
   const { window: w, tenant } = input;
   const whenLocal = formatRangeIn(w.startsAt, w.endsAt, input.timeZone);
+  const own = new Set(input.slices.map((s) => s.slice));
   const slices = [...input.slices]
     .sort((a, b) => a.name.localeCompare(b.name) || a.slice.localeCompare(b.slice))
-    .map((s) => describeSlice(s, input.lookups, input.outageAccepted, whenLocal));
+    .map((s) => describeSlice(s, input.lookups, input.outageAccepted, whenLocal, own));
   const moves = slices.some((s) => s.effect === 'hitless');
   const afterWork = !moves ? 'Nothing needs to move back after the work.'
     : input.afterWindow === 'return'

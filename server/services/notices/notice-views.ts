@@ -70,7 +70,8 @@ export async function portalWork(db: Queryable, tenantId: string, now: Date): Pr
       critical: !!w.touchesCritical, notice: byWindow.get(w.id) ?? null,
     });
   }
-  // A withdrawn window drops out of the touching list, but its cancellation is still news to the tenant.
+  // Windows the touching list misses whose notice still concerns the tenant: a withdrawn one (its cancellation is
+  // news), or one that moves a slice of the tenant's only to make room (a knock-on move; impact does not list it).
   for (const { windows: w } of sent) {
     if (items.has(w.id)) continue;
     const notice = byWindow.get(w.id)!;

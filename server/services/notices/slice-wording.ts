@@ -1,5 +1,6 @@
-// One affected slice of an accepted plan in tenant-facing words: what moves, how far, what it does to
-// latency, and the expected effect. Never names the operator's sites or spans (they are internal).
+// One slice of an accepted plan in tenant-facing words: what moves, how far, what it does to latency, why an
+// untouched slice moves (knock-on), and the expected effect. Never names the operator's sites or spans (they are
+// internal).
 import { greatCircleKm, type LatLon } from '../../../planner/geo/great-circle';
 import type { NoticeSlice } from '../../../shared/notices';
 import type { PlanSlice } from '../../../shared/plans';
@@ -58,8 +59,26 @@ function staysLines(s: PlanSlice): string[] {
   return lines;
 }
 
-/** `whenText` is the window's time range as the notice shows it (for the interruption sentence). */
-export function describeSlice(s: PlanSlice, look: NoticeLookups, outageAccepted: Set<string>, whenText: string): NoticeSlice {
+/**
+ * A knock-on move: the work does not touch this slice, it moves to make room. Only this tenant's own slices are
+ * named (`own`: their ids); another tenant's slices are "other services" — tenants never learn each other's slices.
+ */
+function knockOnLine(s: PlanSlice, own: ReadonlySet<string>): string {
+  const ours = s.madeRoomFor.filter((m) => own.has(m.slice)).map((m) => `"${m.name}"`);
+  const others = s.madeRoomFor.length > ours.length;
+  const yours = ours.length === 0 ? '' : `your ${ours.length === 1 ? 'slice' : 'slices'} ${ours.join(', ')}`;
+  const forWhom = [yours, others ? 'other services' : ''].filter(Boolean).join(' and ');
+  const verb = s.outcome === 'reroute' ? 'rerouted' : 'moved';
+  return `The planned work does not touch this slice itself; it is ${verb} to make room for ${forWhom} during the work.`;
+}
+
+/**
+ * `whenText` is the window's time range as the notice shows it (for the interruption sentence); `own` the ids of
+ * this tenant's slices in the plan.
+ */
+export function describeSlice(
+  s: PlanSlice, look: NoticeLookups, outageAccepted: Set<string>, whenText: string, own: ReadonlySet<string> = new Set(),
+): NoticeSlice {
   const base = { slice: s.slice, name: s.name, critical: s.critical, outcome: s.outcome };
   if (s.outcome === 'unresolved') {
     const accepted = outageAccepted.has(s.slice) ? 'The operator has accepted this outage. ' : '';
@@ -74,5 +93,6 @@ export function describeSlice(s: PlanSlice, look: NoticeLookups, outageAccepted:
     return { ...base, changes: staysLines(s), effect: 'none', effectText: 'No interruption expected.' };
   }
   const changes = [...s.moves.map((m) => moveLine(m, look)), ...s.reroutes.map((r) => rerouteLine(r, look))];
+  if ((s.madeRoomFor ?? []).length > 0) changes.unshift(knockOnLine(s, own));
   return { ...base, changes, effect: 'hitless', effectText: HITLESS };
 }

@@ -90,7 +90,7 @@ async function insertNetwork(ctx: TestContext, id: (name: string) => string): Pr
   return otherTenantId;
 }
 
-function planSlices(id: (name: string) => string, ownTenantId: string, otherTenantId: string): PlanSlice[] {
+export function planSlices(id: (name: string) => string, ownTenantId: string, otherTenantId: string): PlanSlice[] {
   const none = { before: { sites: {}, paths: {} }, after: { sites: {}, paths: {} }, unresolvedReason: null, madeRoomFor: [] };
   return [
     { slice: id('A'), name: 'Port cranes', tenantId: ownTenantId, critical: false, priority: 1, sst: 2, reasons: ['hosted'], outcome: 'move',
@@ -107,14 +107,15 @@ function reviewOf(slices: PlanSlice[]) {
   const objective = { unresolvedWeight: 1, unresolved: 1, moved: 1, rerouted: 1, moveCost: 1, usage: 1, peakUtilisation: 0.5 };
   const reference = { solver: 'greedy' as const, objective, elapsedMs: 1, optimal: null, gap: null, bound: null, note: null };
   return planReviewSchema.parse({
-    affected: slices.map((s) => s.slice), objective,
+    // knock-on moves (madeRoomFor) are entries for slices the window does not affect
+    affected: slices.filter((s) => s.madeRoomFor.length === 0).map((s) => s.slice), objective,
     totals: { stays: 1, moved: 1, rerouted: 0, unresolved: 1, moveCost: 1 },
     slices, steps: [], needsSpare: 0, risk: [], trace: [], greedy: reference, exact: null, reservedFor: [], computeMs: 5,
   });
 }
 
-/** A cleared window taking X1 down `startDays` after NOW, with an accepted plan; returns its id. */
-export async function insertClearedWindow(ctx: NoticesContext, key: string, startDays: number): Promise<string> {
+/** A cleared window taking X1 down `startDays` after NOW, with an accepted plan (planSlices unless given); returns its id. */
+export async function insertClearedWindow(ctx: NoticesContext, key: string, startDays: number, planned?: PlanSlice[]): Promise<string> {
   const windowId = ctx.id(`w-${key}`);
   const planId = ctx.id(`plan-${key}`);
   const startsAt = new Date(NOW.getTime() + startDays * DAY_MS);
@@ -126,7 +127,7 @@ export async function insertClearedWindow(ctx: NoticesContext, key: string, star
     await tx.insert(windowElements).values({ windowId, elementKind: 'site', elementId: ctx.id('X1'), effect: 'down' });
     await tx.insert(plans).values({
       id: planId, windowId, windowVersion: 1, status: 'done', settings: planSettingsSchema.parse({ afterWindow: 'return' }),
-      result: reviewOf(planSlices(ctx.id, ctx.tenantId, ctx.otherTenantId)), outageAccepted: [ctx.id('C')],
+      result: reviewOf(planned ?? planSlices(ctx.id, ctx.tenantId, ctx.otherTenantId)), outageAccepted: [ctx.id('C')],
       acceptedAt: NOW, createdAt: NOW, finishedAt: NOW,
     });
     await tx.update(windows).set({ acceptedPlanId: planId }).where(eq(windows.id, windowId));
