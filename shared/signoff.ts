@@ -74,9 +74,21 @@ export const signoffSummarySchema = z.object({
     elements: z.array(z.object({ kind: z.enum(['site', 'span']), id: z.string(), name: z.string(), effect: z.enum(['down', 'reduced']), fraction: z.number().nullable() })),
   }),
   plan: z.object({ id: z.string(), href: z.string(), acceptedAt: z.string().nullable(), acceptedBy: person.nullable() }),
-  /** per tenant: slices affected and how many of them move (function moves or ties rerouted) */
-  tenants: z.array(z.object({ id: z.string(), name: z.string(), affected: z.number().int(), moving: z.number().int() })),
-  totals: z.object({ affected: z.number().int(), moving: z.number().int(), stays: z.number().int(), unresolved: z.number().int() }),
+  /**
+   * per tenant: slices affected and how many of them move (function moves or ties rerouted), and its slices the
+   * window does not touch that are moved to make room (knock-on moves, not counted in affected / moving)
+   */
+  tenants: z.array(z.object({
+    id: z.string(), name: z.string(), affected: z.number().int(), moving: z.number().int(), knockOn: z.number().int().default(0),
+  })),
+  totals: z.object({
+    affected: z.number().int(), moving: z.number().int(), stays: z.number().int(), unresolved: z.number().int(),
+    knockOn: z.number().int().default(0),
+  }),
+  /** knock-on moves: slices the window does not touch, moved or rerouted to make room for affected ones (by name) */
+  knockOn: z.array(z.object({
+    slice: z.string(), name: z.string(), tenantName: z.string(), outcome: z.enum(['move', 'reroute']), madeRoomFor: z.array(z.string()),
+  })).default([]),
   unresolved: z.array(z.object({ slice: z.string(), name: z.string(), tenantName: z.string(), reason: z.string().nullable(), outageAccepted: z.boolean() })),
   riskClass: riskClassSchema,
   /** the highest slice risks, worst first */

@@ -16,6 +16,17 @@ export const OUTCOME_LABELS: Record<SliceOutcome, string> = {
   unresolved: 'Unresolved',
 };
 
+/** "Quay cranes", "Quay cranes and Tram signalling", "A, B and C". */
+export function listWords(names: readonly string[]): string {
+  if (names.length <= 1) return names[0] ?? '';
+  return `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`;
+}
+
+/** Why a knock-on move is in the plan: "Moved to make room for Quay cranes" (names, never ids). */
+export function madeRoomSentence(outcome: SliceOutcome, names: readonly string[]): string {
+  return `${outcome === 'reroute' ? 'Rerouted' : 'Moved'} to make room for ${listWords(names)}`;
+}
+
 /** "850 ms", "12.4 s", "3 min 05 s". */
 export function formatDurationMs(ms: number): string {
   if (ms < 1_000) return `${Math.round(ms)} ms`;

@@ -13,7 +13,7 @@ import { effectText } from '@/components/windows/window-elements-list';
 import { DecisionForm } from '@/components/signoff/decision-form';
 import { DecisionList } from '@/components/signoff/decision-list';
 import { blockedSentence } from '@/components/signoff/signoff-words';
-import { MovesFacts, RiskFacts, UnresolvedFacts } from '@/components/signoff/summary-facts';
+import { KnockOnFacts, MovesFacts, RiskFacts, UnresolvedFacts } from '@/components/signoff/summary-facts';
 import { colors, space, type } from '@/constants/theme';
 
 type Props = {
@@ -55,6 +55,7 @@ export function SignoffSummaryView(props: Props) {
         />
       ) : null}
       <MovesFacts summary={s} />
+      <KnockOnFacts summary={s} />
       <UnresolvedFacts summary={s} />
       <RiskFacts summary={s} />
       <View style={styles.row}>

@@ -1,12 +1,22 @@
-// The facts of a plan an approver weighs: who is moved, what stays unresolved, and the highest risks.
+// The facts of a plan an approver weighs: who is moved (and moved to make room), what stays unresolved, and the
+// highest risks.
 import { StyleSheet, Text, View } from 'react-native';
 import type { SignoffSummary } from '@/shared/signoff';
 import { formatRiskPercent } from '@/components/impact/impact-format';
 import { SeverityPill } from '@/components/impact/severity-pill';
+import { madeRoomSentence } from '@/components/plans/plan-format';
 import { Section } from '@/components/windows/section';
 import { RiskPill } from '@/components/signoff/risk-pill';
 import { quorumSentence } from '@/components/signoff/signoff-words';
 import { colors, space, type } from '@/constants/theme';
+
+const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+
+function tenantLine(t: SignoffSummary['tenants'][number]): string {
+  const parts = t.affected > 0 ? [`${t.moving} of ${t.affected} move`] : [];
+  if (t.knockOn > 0) parts.push(`${t.knockOn} moved to make room`);
+  return parts.join(' · ');
+}
 
 export function MovesFacts({ summary: s }: { summary: SignoffSummary }) {
   const tenants = s.tenants.length;
@@ -15,11 +25,28 @@ export function MovesFacts({ summary: s }: { summary: SignoffSummary }) {
       <Text style={styles.lead} testID="signoff-moves-lead">
         {s.totals.moving} of {s.totals.affected} affected slice{s.totals.affected === 1 ? '' : 's'} move, for {tenants} tenant{tenants === 1 ? '' : 's'}
         {s.totals.stays ? ` · ${s.totals.stays} stay put` : ''}
+        {s.totals.knockOn ? ` · ${plural(s.totals.knockOn, 'more slice', 'more slices')} moved to make room` : ''}
       </Text>
       {s.tenants.map((t) => (
         <View key={t.id} style={styles.line} testID={`signoff-tenant-${t.id}`}>
           <Text style={styles.body}>{t.name}</Text>
-          <Text style={styles.figure}>{t.moving} of {t.affected} move</Text>
+          <Text style={styles.figure}>{tenantLine(t)}</Text>
+        </View>
+      ))}
+    </Section>
+  );
+}
+
+/** Slices the work does not touch, moved so that affected ones keep running: each with whom it makes room for. */
+export function KnockOnFacts({ summary: s }: { summary: SignoffSummary }) {
+  if (s.knockOn.length === 0) return null;
+  return (
+    <Section title={`Moved to make room (${s.knockOn.length})`} testID="signoff-knock-on">
+      <Text style={styles.muted}>The work does not touch these slices; the plan moves them so that affected slices keep running.</Text>
+      {s.knockOn.map((k) => (
+        <View key={k.slice} style={styles.item} testID={`signoff-knock-on-${k.slice}`}>
+          <Text style={styles.strong}>{k.name} · {k.tenantName}</Text>
+          <Text style={styles.body}>{madeRoomSentence(k.outcome, k.madeRoomFor)}.</Text>
         </View>
       ))}
     </Section>

@@ -9,7 +9,10 @@ const SEVERITY_RANK = { low: 0, medium: 1, high: 2, critical: 3 } as const;
 /** A phone screen shows a handful; the full plan (one tap away) lists every slice's risk. */
 const HIGHEST_RISKS_SHOWN = 5;
 
-const moving = (s: PlanReview['slices'][number]) => s.outcome === 'move' || s.outcome === 'reroute';
+type Slice = PlanReview['slices'][number];
+const moving = (s: Slice) => s.outcome === 'move' || s.outcome === 'reroute';
+/** A slice the window does not touch, moved to make room for affected ones. */
+const isKnockOn = (s: Slice) => s.madeRoomFor.length > 0;
 
 export async function tenantNames(db: Queryable, ids: string[]): Promise<Map<string, string>> {
   if (ids.length === 0) return new Map();
@@ -17,24 +20,38 @@ export async function tenantNames(db: Queryable, ids: string[]): Promise<Map<str
   return new Map(rows.map((r) => [r.id, r.name]));
 }
 
+/** Tenants with moving slices first; knock-on moves count apart from the affected slices. */
 export function tenantCounts(review: PlanReview, names: Map<string, string>): SignoffSummary['tenants'] {
-  const byTenant = new Map<string, { affected: number; moving: number }>();
+  const byTenant = new Map<string, { affected: number; moving: number; knockOn: number }>();
   for (const s of review.slices) {
-    const entry = byTenant.get(s.tenantId) ?? { affected: 0, moving: 0 };
-    entry.affected += 1;
-    if (moving(s)) entry.moving += 1;
+    const entry = byTenant.get(s.tenantId) ?? { affected: 0, moving: 0, knockOn: 0 };
+    if (isKnockOn(s)) entry.knockOn += 1;
+    else {
+      entry.affected += 1;
+      if (moving(s)) entry.moving += 1;
+    }
     byTenant.set(s.tenantId, entry);
   }
   return [...byTenant].map(([id, c]) => ({ id, name: names.get(id) ?? id, ...c }))
-    .sort((a, b) => b.moving - a.moving || a.name.localeCompare(b.name));
+    .sort((a, b) => b.moving + b.knockOn - (a.moving + a.knockOn) || a.name.localeCompare(b.name));
 }
 
 export function planTotals(review: PlanReview): SignoffSummary['totals'] {
-  const count = (f: (s: PlanReview['slices'][number]) => boolean) => review.slices.filter(f).length;
+  const touched = review.slices.filter((s) => !isKnockOn(s));
+  const count = (f: (s: Slice) => boolean) => touched.filter(f).length;
   return {
-    affected: review.slices.length, moving: count(moving),
+    affected: touched.length, moving: count(moving),
     stays: count((s) => s.outcome === 'stays'), unresolved: count((s) => s.outcome === 'unresolved'),
+    knockOn: review.slices.length - touched.length,
   };
+}
+
+/** Each knock-on move with the names of the slices it makes room for (approvers read names, not ids). */
+export function knockOnMoves(review: PlanReview, names: Map<string, string>): SignoffSummary['knockOn'] {
+  return review.slices.filter(isKnockOn).flatMap((s) => (moving(s) ? [{
+    slice: s.slice, name: s.name, tenantName: names.get(s.tenantId) ?? s.tenantId,
+    outcome: s.outcome as 'move' | 'reroute', madeRoomFor: s.madeRoomFor.map((m) => m.name),
+  }] : []));
 }
 
 export function unresolvedSlices(review: PlanReview, names: Map<string, string>, outageAccepted: string[]): SignoffSummary['unresolved'] {

@@ -12,7 +12,9 @@ import {
   countApprovals, hasDecided, isOwnWork, listDecisions, loadSignoffContext, quorumFor, riskOfContext, usersByIds,
   type SignoffContext,
 } from './signoff-rows';
-import { highestRisks, namedElements, planTotals, tenantCounts, tenantNames, unresolvedSlices } from './summary-parts';
+import {
+  highestRisks, knockOnMoves, namedElements, planTotals, tenantCounts, tenantNames, unresolvedSlices,
+} from './summary-parts';
 
 type My = SignoffSummary['me'];
 
@@ -53,6 +55,7 @@ export async function signoffSummary(db: Db, windowId: string, user: Me): Promis
     },
     tenants: tenantCounts(plan.review, names),
     totals: planTotals(plan.review),
+    knockOn: knockOnMoves(plan.review, names),
     unresolved: unresolvedSlices(plan.review, names, plan.outageAccepted),
     riskClass, highestRisks: highestRisks(plan.review),
     criticalSlices: plan.review.slices.filter((s) => s.critical).length,

@@ -79,3 +79,23 @@ test('an approver whose own work it is sees why, and no decision form', () => {
   expect(screen.getByTestId('signoff-blocked')).toHaveTextContent(/another approver decides/);
   expect(screen.queryByTestId('signoff-approve')).toBeNull();
 });
+
+test('knock-on moves: counted apart from the affected slices and listed with whom they make room for, by name', () => {
+  render(summaryFixture({
+    tenants: [
+      { id: 't-1', name: 'Harbour Health', affected: 2, moving: 2, knockOn: 0 },
+      { id: 't-3', name: 'Quay Logistics', affected: 0, moving: 0, knockOn: 1 },
+    ],
+    totals: { affected: 2, moving: 2, stays: 0, unresolved: 0, knockOn: 1 },
+    knockOn: [{ slice: 's-9', name: 'Forklift tracking', tenantName: 'Quay Logistics', outcome: 'reroute', madeRoomFor: ['Ambulance dispatch', 'Ward monitors'] }],
+  }));
+  expect(screen.getByTestId('signoff-moves-lead')).toHaveTextContent('2 of 2 affected slices move, for 2 tenants · 1 more slice moved to make room');
+  expect(screen.getByTestId('signoff-tenant-t-3')).toHaveTextContent('Quay Logistics1 moved to make room');
+  expect(screen.getByTestId('signoff-knock-on-s-9')).toHaveTextContent(
+    'Forklift tracking · Quay LogisticsRerouted to make room for Ambulance dispatch and Ward monitors.');
+});
+
+test('no knock-on section when the plan moves only affected slices', () => {
+  render();
+  expect(screen.queryByTestId('signoff-knock-on')).toBeNull();
+});

@@ -41,7 +41,11 @@ export async function setupSignoffApp(suffix: string, now: Date): Promise<Signof
   return { ...ctx, app, clock, recorded, userId, as, cleanup };
 }
 
-export type PlanShape = { critical?: boolean; severity?: 'low' | 'medium' | 'high' | 'critical'; unresolved?: boolean };
+export type PlanShape = {
+  critical?: boolean; severity?: 'low' | 'medium' | 'high' | 'critical'; unresolved?: boolean;
+  /** adds s5: the other tenant's slice, which the window does not touch, moved to make room for s1 */
+  knockOn?: boolean;
+};
 type WindowOptions = PlanShape & { key: string; ownerId?: string; planCreatedBy?: string; acceptedBy?: string };
 
 function slice(ctx: TestContext, key: string, outcome: PlanSlice['outcome'], critical: boolean, tenantId = ctx.tenantId): PlanSlice {
@@ -63,10 +67,13 @@ export function makeReview(ctx: TestContext, key: string, shape: PlanShape): Pla
     slice(ctx, `${key}-s1`, 'move', shape.critical ?? false), slice(ctx, `${key}-s2`, 'move', false, `${ctx.prefix}-other`),
     slice(ctx, `${key}-s3`, 'stays', false), ...(shape.unresolved ? [slice(ctx, `${key}-s4`, 'unresolved', false)] : []),
   ];
+  const knockOn = shape.knockOn
+    ? [{ ...slice(ctx, `${key}-s5`, 'move', false, `${ctx.prefix}-other`), reasons: [], madeRoomFor: [{ slice: list[0].slice, name: list[0].name }] }]
+    : [];
   return planReviewSchema.parse({
     affected: list.map((s) => s.slice), objective,
     totals: { stays: 1, moved: 2, rerouted: 0, unresolved: shape.unresolved ? 1 : 0, moveCost: 2 },
-    slices: list, steps: [], needsSpare: 0,
+    slices: [...list, ...knockOn], steps: [], needsSpare: 0,
     risk: list.map((s, i) => ({ slice: s.slice, failureProbability: 1e-4 * (i + 1), unprotected: false, severity: i === 0 ? shape.severity ?? 'low' : 'low' })),
     trace: [], greedy: { solver: 'greedy', objective, elapsedMs: 1, optimal: null, gap: null, bound: null, note: null },
     exact: null, reservedFor: [], computeMs: 10,

@@ -162,7 +162,8 @@ test('the summary and the queue: tenants and moving slices from the plan, unreso
   // Own tenant: s1 moves, s3 stays, s4 unresolved; the other tenant: s2 moves.
   expect(s.tenants.map((t: { id: string; affected: number; moving: number }) => [t.id, t.affected, t.moving]).sort())
     .toEqual([[`${ctx.prefix}-other`, 1, 1], [ctx.tenantId, 3, 1]].sort());
-  expect(s.totals).toEqual({ affected: 4, moving: 2, stays: 1, unresolved: 1 });
+  expect(s.totals).toEqual({ affected: 4, moving: 2, stays: 1, unresolved: 1, knockOn: 0 });
+  expect(s.knockOn).toEqual([]);
   expect(s.unresolved).toEqual([expect.objectContaining({ slice: review.slices[3].slice, outageAccepted: true })]);
   expect(s.riskClass).toBe('high');
   expect(s.highestRisks[0]).toMatchObject({ slice: review.slices[0].slice, severity: 'critical' });
@@ -177,4 +178,15 @@ test('the summary and the queue: tenants and moving slices from the plan, unreso
   expect(item).toMatchObject({ riskClass: 'high', critical: true, quorum: 2, approvals: 1, me: { decided: true, blocked: 'decided' } });
   const adminQueue = (await (await ctx.as('admin'))('get', '/api/signoff/queue')).body;
   expect(adminQueue.windows.find((w: { windowId: string }) => w.windowId === windowId).me.blocked).toBe('role');
+});
+
+test('the summary lists a knock-on move apart from the affected slices, with the names of the slices it makes room for', async () => {
+  const { windowId, review } = await insertPlannedWindow(ctx, { key: 'knock', knockOn: true });
+  await submit(windowId);
+  const s = (await (await ctx.as('approver'))('get', `/api/signoff/${windowId}`)).body;
+  const [, s2, , s5] = review.slices;
+  expect(s.totals).toEqual({ affected: 3, moving: 2, stays: 1, unresolved: 0, knockOn: 1 });
+  expect(s.tenants.find((t: { id: string }) => t.id === `${ctx.prefix}-other`)).toMatchObject({ affected: 1, moving: 1, knockOn: 1 });
+  expect(s.knockOn).toEqual([{ slice: s5.slice, name: s5.name, tenantName: `${ctx.prefix} Other tenant`, outcome: 'move', madeRoomFor: ['Slice knock-s1'] }]);
+  expect(s2.madeRoomFor).toEqual([]);
 });
