@@ -33,7 +33,7 @@ export const SCENARIO_BUILDER_DEFAULTS = {
 };
 
 /** Kind by degree rank: the best-connected sites act as core, then aggregation, edge, cell sites. */
-function kindsByDegree(degree: number[]): SiteKind[] {
+export function kindsByDegree(degree: number[]): SiteKind[] {
   const order = degree.map((d, i) => [d, i]).sort((a, b) => b[0] - a[0] || a[1] - b[1]).map(([, i]) => i);
   const kinds: SiteKind[] = new Array(degree.length);
   order.forEach((site, rank) => {
@@ -43,7 +43,7 @@ function kindsByDegree(degree: number[]): SiteKind[] {
   return kinds;
 }
 
-const CPU_FACTOR: Record<SiteKind, number> = { core: 4, aggregation: 2, edge: 1.5, 'cell-site': 1 };
+export const CPU_FACTOR: Record<SiteKind, number> = { core: 4, aggregation: 2, edge: 1.5, 'cell-site': 1 };
 
 function makeNetwork(o: ScenarioBuilderOptions, rng: Rng): { sites: ScenarioSite[]; spans: ScenarioSpan[] } {
   const g = waxmanGraph({ ...o.waxman, sites: o.sites, seed: deriveSeed(o.seed, 1) });

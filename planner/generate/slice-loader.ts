@@ -29,7 +29,7 @@ export interface SliceLoaderOptions {
 const SSTS = [1, 2, 3, 4];
 
 /** Sites within `hops` of `home` (home first, then by discovery order): where a slice's functions live. */
-function neighbourhood(net: NetworkModel, home: number, hops: number): number[] {
+export function neighbourhood(net: NetworkModel, home: number, hops: number): number[] {
   const seen = new Set([home]);
   let frontier = [home];
   for (let h = 0; h < hops; h += 1) {
