@@ -10,6 +10,9 @@ export type PlanFormState = {
   afterWindow: PlanSettings['afterWindow'];
   pinned: string[];
   excludedSites: string[];
+  /** may the search move or reroute slices the window does not touch (knock-on moves) */
+  knockOn: boolean;
+  maxKnockOnMoves: string;
 };
 
 export type PlanFormField = keyof PlanFormState;
@@ -27,10 +30,14 @@ export function formFromSettings(settings: PlanSettings = DEFAULT_PLAN_SETTINGS)
     afterWindow: settings.afterWindow,
     pinned: [...settings.pinned],
     excludedSites: [...settings.excludedSites],
+    knockOn: settings.knockOn,
+    maxKnockOnMoves: String(settings.maxKnockOnMoves),
   };
 }
 
-const FIELDS: readonly PlanFormField[] = ['mode', 'seed', 'population', 'timeLimitSeconds', 'afterWindow', 'pinned', 'excludedSites'];
+const FIELDS: readonly PlanFormField[] = [
+  'mode', 'seed', 'population', 'timeLimitSeconds', 'afterWindow', 'pinned', 'excludedSites', 'knockOn', 'maxKnockOnMoves',
+];
 
 function asNumber(text: string): number {
   // Empty stays NaN so the schema names the field rather than silently sending 0.
@@ -44,6 +51,7 @@ export function settingsFromForm(state: PlanFormState): { settings: PlanSettings
     seed: asNumber(state.seed),
     population: asNumber(state.population),
     timeLimitSeconds: asNumber(state.timeLimitSeconds),
+    maxKnockOnMoves: asNumber(state.maxKnockOnMoves),
   });
   if (parsed.success) return { settings: parsed.data };
   const errors: PlanFormErrors = {};
@@ -58,6 +66,7 @@ const FIELD_HINTS: Partial<Record<PlanFormField, string>> = {
   seed: 'A whole number from 0 to 2147483647.',
   population: 'A whole number from 8 to 400.',
   timeLimitSeconds: 'Seconds, from 1 to 600.',
+  maxKnockOnMoves: 'A whole number from 0 to 50.',
 };
 
 function fieldMessage(field: PlanFormField | 'form', fallback: string): string {

@@ -85,7 +85,17 @@ const AFTER_WORDS: Record<PlanSettings['afterWindow'], string> = {
   keep: 'keeps the new placement after the window',
 };
 
-/** "One thread · seed 7 · 40 candidates · 20 s limit · moves back after the window · 2 functions kept in place · 1 site left out". */
+/** "up to 5 moves of untouched slices" / "no moves of untouched slices". */
+export function knockOnWords(settings: Pick<PlanSettings, 'knockOn' | 'maxKnockOnMoves'>): string {
+  const n = settings.maxKnockOnMoves;
+  if (!settings.knockOn || n === 0) return 'no moves of untouched slices';
+  return `up to ${n} ${n === 1 ? 'move' : 'moves'} of untouched slices`;
+}
+
+/**
+ * "One thread · seed 7 · 40 candidates · 20 s limit · moves back after the window · up to 5 moves of untouched
+ * slices · 2 functions kept in place · 1 site left out".
+ */
 export function settingsSummary(settings: PlanSettings): string {
   const parts = [
     MODE_WORDS[settings.mode],
@@ -93,6 +103,7 @@ export function settingsSummary(settings: PlanSettings): string {
     `${settings.population} candidates`,
     `${settings.timeLimitSeconds} s limit`,
     AFTER_WORDS[settings.afterWindow],
+    knockOnWords(settings),
   ];
   if (settings.pinned.length > 0) parts.push(`${settings.pinned.length} ${settings.pinned.length === 1 ? 'function' : 'functions'} kept in place`);
   if (settings.excludedSites.length > 0) parts.push(`${settings.excludedSites.length} ${settings.excludedSites.length === 1 ? 'site' : 'sites'} left out`);

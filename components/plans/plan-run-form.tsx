@@ -1,4 +1,5 @@
-// The "new run" form: how the re-mapper searches, what happens after the window, what it must not touch.
+// The "new run" form: how the re-mapper searches, what happens after the window, whether it may move untouched
+// slices to make room, and what it must not touch.
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { PlanSettings } from '@/shared/plans';
@@ -6,6 +7,7 @@ import { usePlanRunMutation } from '@/hooks/queries/plans';
 import { Button } from '@/components/button';
 import { TextField } from '@/components/text-field';
 import { ChoiceChips } from '@/components/windows/choice-chips';
+import { KnockOnFields } from '@/components/plans/knock-on-fields';
 import { PickChips, type PickOption } from '@/components/plans/pick-chips';
 import type { RunOptions } from '@/components/plans/use-run-options';
 import {
@@ -78,6 +80,10 @@ export function PlanRunForm({ windowId, initial, functionOptions, siteOptions, l
       <Text style={styles.hint}>The same seed and settings give the same plan. More candidates search wider but take longer per round.</Text>
       <Text style={styles.label}>After the window</Text>
       <ChoiceChips label="After the window" choices={AFTER} value={form.afterWindow} onChange={(v) => v && set('afterWindow', v as PlanFormState['afterWindow'])} testID="plan-form-after" />
+      <KnockOnFields
+        on={form.knockOn} max={form.maxKnockOnMoves} error={errors.maxKnockOnMoves ?? errors.knockOn}
+        onToggle={(v) => set('knockOn', v)} onMax={(v) => set('maxKnockOnMoves', v)}
+      />
       {PICKS.map((p) => (
         <PickChips
           key={p.key}

@@ -11,7 +11,8 @@ type Props = { plans: readonly PlanListItem[]; timeZone: string; onOpen: (planId
 function totalsLine(plan: PlanListItem): string {
   if (plan.totals) {
     const t = plan.totals;
-    return `${t.moved} moved · ${t.rerouted} rerouted · ${t.unresolved} unresolved · move cost ${formatCost(t.moveCost)}`;
+    const room = t.knockOn > 0 ? ` · ${t.knockOn} untouched ${t.knockOn === 1 ? 'slice' : 'slices'} moved to make room` : '';
+    return `${t.moved} moved · ${t.rerouted} rerouted · ${t.unresolved} unresolved · move cost ${formatCost(t.moveCost)}${room}`;
   }
   if (plan.status === 'failed') return plan.error ?? 'The run failed.';
   if (plan.status === 'cancelled') return plan.error ?? 'Cancelled before it finished.';

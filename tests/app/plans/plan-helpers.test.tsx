@@ -4,7 +4,7 @@ import { elementNames, siteChain } from '@/components/plans/use-element-names';
 import { convergenceSeries, formatGap, outagesAllTicked, planMapElements } from '@/components/plans/plan-review-data';
 import { functionOptionsFrom } from '@/components/plans/use-run-options';
 import { settingsSummary } from '@/components/plans/plan-format';
-import { networkMap, objective, plan, review, slices } from './plan-fixtures';
+import { knockOnSlice, networkMap, objective, plan, review, slices } from './plan-fixtures';
 
 test('a path reads as the sites it passes in order, whichever way its spans are stored', () => {
   const names = elementNames(networkMap as Parameters<typeof elementNames>[0]);
@@ -29,6 +29,13 @@ test('the map shows only what changes, or one slice’s whole placement when it 
   expect(planMapElements(slices, 'sl-plc').after).toEqual({ sites: [], spans: [] });
 });
 
+test('the map draws knock-on moves too: their old and new paths join the plan’s changes', () => {
+  const all = planMapElements([...slices, knockOnSlice], null);
+  expect(all.before.spans).toContain('sp-4');
+  expect(all.after.spans).toContain('sp-1');
+  expect(planMapElements([...slices, knockOnSlice], 'sl-tele')).toEqual({ before: { sites: [], spans: ['sp-4'] }, after: { sites: [], spans: ['sp-1'] } });
+});
+
 test('the convergence series is thinned to at most the limit and always ends on the last generation', () => {
   const trace = Array.from({ length: 101 }, (_, g) => ({ generation: g, evaluations: g * 10, feasible: true, best: objective({ moveCost: 200 - g, unresolvedWeight: g < 50 ? 3 : 0 }) }));
   const series = convergenceSeries(trace, 40);
@@ -51,7 +58,9 @@ test('accepting needs every unresolved slice ticked; gaps read as percentages', 
 test('function options name the site each function sits on; the settings summary is one line', () => {
   const options = functionOptionsFrom([{ slice: 's', sites: { 'f-2': 'agg-b', 'f-1': 'edge-a' } }], (id) => id.toUpperCase());
   expect(options).toEqual([{ id: 'f-1', label: 'f-1 · EDGE-A' }, { id: 'f-2', label: 'f-2 · AGG-B' }]);
-  expect(settingsSummary(plan().settings)).toBe('One thread · seed 7 · 40 candidates · 20 s limit · moves back after the window · 1 site left out');
-  const kept = { ...plan().settings, mode: 'islands' as const, afterWindow: 'keep' as const, pinned: ['f-1', 'f-2'], excludedSites: [] };
-  expect(settingsSummary(kept)).toBe('Islands (parallel) · seed 7 · 40 candidates · 20 s limit · keeps the new placement after the window · 2 functions kept in place');
+  expect(settingsSummary(plan().settings)).toBe('One thread · seed 7 · 40 candidates · 20 s limit · moves back after the window · up to 5 moves of untouched slices · 1 site left out');
+  const kept = { ...plan().settings, mode: 'islands' as const, afterWindow: 'keep' as const, pinned: ['f-1', 'f-2'], excludedSites: [], knockOn: false };
+  expect(settingsSummary(kept)).toBe('Islands (parallel) · seed 7 · 40 candidates · 20 s limit · keeps the new placement after the window · no moves of untouched slices · 2 functions kept in place');
+  expect(settingsSummary({ ...plan().settings, maxKnockOnMoves: 1 })).toMatch(/ · up to 1 move of untouched slices · /);
+  expect(settingsSummary({ ...plan().settings, maxKnockOnMoves: 0 })).toMatch(/ · no moves of untouched slices · /);
 });

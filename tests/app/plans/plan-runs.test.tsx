@@ -57,6 +57,7 @@ test('the form sends the settings typed and places the server’s complaints nex
   await waitFor(() => expect(screen.getByTestId('plan-form-pinned-error')).toHaveTextContent(/not in this window/));
   expect(calls[0].body).toEqual({
     mode: 'islands', seed: 1, population: 40, timeLimitSeconds: 3, pinned: ['f-9'], excludedSites: ['core-x'], afterWindow: 'return',
+    knockOn: true, maxKnockOnMoves: 5,
   });
   expect(onQueued).not.toHaveBeenCalled();
 });
