@@ -1,4 +1,5 @@
 // Old and new positions on the network map: today's paths in one tone, the plan's in another, with a legend.
+// Every slice of the plan is drawn, knock-on moves of untouched slices included.
 import { useMemo } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { PlanSlice } from '@/shared/plans';
@@ -11,6 +12,12 @@ import { colors, space, type } from '@/constants/theme';
 const MAP_HEIGHT_PX = 420;
 const TONE_WORDS = { placement: 'Before (today)', alternative: 'After (planned)' } as const;
 
+/** The caption without a chosen slice; knock-on moves are named so the extra paths are not a surprise. */
+function everyChange(knockOn: number): string {
+  const extra = knockOn === 0 ? '' : `, the ${knockOn} ${knockOn === 1 ? 'slice' : 'slices'} moved to make room included`;
+  return `Every change in the plan${extra}: sites and paths left, and where they go.`;
+}
+
 type Props = { slices: readonly PlanSlice[]; selectedSlice: string | null };
 
 export function PlanMap({ slices, selectedSlice }: Props) {
@@ -21,6 +28,7 @@ export function PlanMap({ slices, selectedSlice }: Props) {
   const before = useMemo(() => ({ ...elements.before, tone: 'placement' as const }), [elements]);
   if (map.isError) return <Text style={styles.muted}>The map could not be loaded: {map.error.message}</Text>;
   if (!map.data) return <Text style={styles.muted}>Loading the map…</Text>;
+  const knockOn = slices.filter((s) => s.madeRoomFor.length > 0).length;
   const chosen = selectedSlice ? slices.find((s) => s.slice === selectedSlice)?.name ?? selectedSlice : null;
   return (
     <View style={styles.box} testID="plan-map">
@@ -28,7 +36,7 @@ export function PlanMap({ slices, selectedSlice }: Props) {
         <NetworkMap data={map.data} highlight={after} secondaryHighlight={before} toneLabels={TONE_WORDS} />
       </View>
       <Text style={styles.muted} testID="plan-map-caption">
-        {chosen ? `${chosen}: its whole placement before and after the move.` : 'Every change in the plan: sites and paths left, and where they go.'}
+        {chosen ? `${chosen}: its whole placement before and after the move.` : everyChange(knockOn)}
       </Text>
     </View>
   );

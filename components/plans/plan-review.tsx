@@ -11,6 +11,7 @@ import { PlanMap } from '@/components/plans/plan-map';
 import { PlanReferences } from '@/components/plans/plan-references';
 import { unresolvedSlices } from '@/components/plans/plan-review-data';
 import { PlanRisk } from '@/components/plans/plan-risk';
+import { PlanSearchNote } from '@/components/plans/plan-search-note';
 import { PlanSliceOutcomes } from '@/components/plans/plan-slice-outcomes';
 import { PlanSteps } from '@/components/plans/plan-steps';
 import { PlanTotals } from '@/components/plans/plan-totals';
@@ -38,6 +39,7 @@ export function PlanReviewView({ plan, review, canAct, wide, onAdjust, onResched
   const decision = (
     <>
       <PlanTotals review={review} />
+      <PlanSearchNote search={review.search} />
       {unresolved.length > 0 ? (
         <PlanUnresolved
           slices={unresolved}
@@ -52,7 +54,7 @@ export function PlanReviewView({ plan, review, canAct, wide, onAdjust, onResched
     </>
   );
   const outcomes = (
-    <Section title="What happens to each slice" aside={<Text>{review.slices.length}</Text>}>
+    <Section title="What happens to each slice" aside={<Text>{review.slices.length}</Text>} testID="plan-outcomes">
       <PlanSliceOutcomes slices={review.slices} names={names} selected={selected} onSelect={setSelected} />
     </Section>
   );

@@ -1,4 +1,5 @@
-// The plan at a glance: how many slices move, are rerouted, stay or are left unresolved, and what the moves cost.
+// The plan at a glance: how many slices move, are rerouted, stay or are left unresolved, what the moves cost, and
+// how many of the moves are knock-on moves of untouched slices.
 import { StyleSheet, Text, View } from 'react-native';
 import type { PlanReview } from '@/shared/plans';
 import { formatCost, formatDurationMs } from '@/components/plans/plan-format';
@@ -23,6 +24,13 @@ export function PlanTotals({ review }: { review: PlanReview }) {
           </View>
         ))}
       </View>
+      {t.knockOn > 0 ? (
+        <Text style={styles.body} testID="plan-total-knock-on">
+          {t.knockOn === 1
+            ? 'Includes 1 knock-on move: a slice the work does not touch, moved to make room (counted under Moved or Rerouted).'
+            : `Includes ${t.knockOn} knock-on moves: slices the work does not touch, moved to make room (counted under Moved or Rerouted).`}
+        </Text>
+      ) : null}
       <Text style={styles.muted}>
         {review.affected.length} affected {review.affected.length === 1 ? 'slice' : 'slices'} · search took {formatDurationMs(review.computeMs)}
         {review.reservedFor.length > 0 ? ` · capacity held for ${review.reservedFor.length} overlapping ${review.reservedFor.length === 1 ? 'window' : 'windows'}` : ''}
@@ -42,5 +50,6 @@ const styles = StyleSheet.create({
   value: { ...type.figure, color: colors.abyss },
   alarm: { color: colors.danger },
   label: { ...type.label, color: colors.inkMuted },
+  body: { ...type.body, color: colors.ink },
   muted: { ...type.caption, color: colors.inkMuted },
 });

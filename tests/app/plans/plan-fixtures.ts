@@ -36,6 +36,25 @@ export const slices: PlanSlice[] = [
   }),
 ];
 
+/** A knock-on move: the work does not touch "Crane telemetry"; it is rerouted off sp-4 to make room for the port. */
+export const knockOnSlice: PlanSlice = slice('sl-tele', {
+  name: 'Crane telemetry', tenantId: 't-2', outcome: 'reroute', reasons: [],
+  reroutes: [{ tie: 'sl-tele-t1', from: ['sp-4'], to: ['sp-1'] }],
+  before: { sites: {}, paths: { 'sl-tele-t1': ['sp-4'] } }, after: { sites: {}, paths: { 'sl-tele-t1': ['sp-1'] } },
+  madeRoomFor: [{ slice: 'sl-port', name: 'Harbour cranes' }],
+});
+
+/** review() plus the knock-on move, its step first, and the totals that count it. */
+export function knockOnReview(extra: Partial<PlanReview> = {}): PlanReview {
+  const base = review();
+  return review({
+    slices: [...slices, knockOnSlice],
+    totals: { ...base.totals, rerouted: base.totals.rerouted + 1, knockOn: 1 },
+    steps: [{ slice: 'sl-tele', kind: 'reroute-tie', element: 'sl-tele-t1', from: ['sp-4'], to: ['sp-1'], needsSpare: false, knockOn: true }, ...base.steps],
+    ...extra,
+  });
+}
+
 export function review(extra: Partial<PlanReview> = {}): PlanReview {
   const best = objective({ unresolvedWeight: 5, unresolved: 1, moved: 1, rerouted: 2, moveCost: 3.25 });
   return {
