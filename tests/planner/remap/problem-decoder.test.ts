@@ -5,7 +5,7 @@ import { evaluatePlan } from '../../../planner/plan/evaluate-plan';
 import { createDecoder, decode, genesFromPlacement, stayPutGenes } from '../../../planner/remap/decoder';
 import { buildRemapProblem } from '../../../planner/remap/problem';
 import { buildScenario } from '../../../planner/generate/scenario-builder';
-import { tinyScenario } from '../fixtures/tiny-scenario';
+import { scenarioWith, tinyNetwork, tinyScenario, window } from '../fixtures/tiny-scenario';
 
 function tiny(windowId: string, opts = {}) {
   const sc = tinyScenario();
@@ -15,12 +15,18 @@ function tiny(windowId: string, opts = {}) {
 }
 
 describe('buildRemapProblem', () => {
-  it('lays out one keep gene then one gene per function, slices in priority order', () => {
+  it('lays out per slice a keep gene, an order key, one gene per function and one per tie, in priority order', () => {
     const { inv, problem } = tiny('w-site-b');
     expect(problem.slices.map((b) => inv.slices[b.slice].id)).toEqual(['s-transit', 's-hosted']);
-    expect(problem.dimension).toBe(6);
-    expect(problem.slices[1].keepGene).toBe(3);
-    expect(Array.from(problem.upper.subarray(0, 1))).toEqual([1]);
+    const size = (b: number) => 2 + inv.slices[problem.slices[b].slice].functions.length + inv.slices[problem.slices[b].slice].ties.length;
+    expect(problem.dimension).toBe(size(0) + size(1));
+    expect(problem.slices[0].keepGene).toBe(0);
+    expect(problem.slices[0].orderGene).toBe(1);
+    expect(problem.slices[1].keepGene).toBe(size(0));
+    expect(problem.upper[0]).toBe(1);
+    expect(problem.upper[1]).toBe(1);
+    for (const t of problem.ties) expect(problem.upper[t.gene]).toBe(problem.kPaths);
+    expect(problem.slices.every((b) => b.touched)).toBe(true);
   });
 
   it('puts the current site first when usable, never offers a down site, and gives fixed functions one site', () => {
@@ -72,11 +78,50 @@ describe('decode', () => {
     expect(d.objective.unresolvedWeight).toBe(5);
   });
 
-  it('counts over-full sites as violation, not as a feasible plan', () => {
-    const { problem } = tiny('w-site-b');
-    expect(decode(problem, stayPutGenes(problem)).fitness.violation).toBe(0);
-    problem.residualCpu.fill(0); // every site now full: the same genes must be infeasible
-    expect(decode(problem, stayPutGenes(problem)).fitness.violation).toBeGreaterThan(0);
+  it('leaves a touched slice that cannot be placed whole unresolved, taking back what it had booked', () => {
+    const { inv, problem } = tiny('w-site-b');
+    expect(decode(problem, stayPutGenes(problem)).objective.unresolved).toBe(0);
+    problem.residualCpu.fill(0); // every site now full: no function fits anywhere
+    const d = decode(problem, stayPutGenes(problem));
+    expect(d.fitness.violation).toBe(0);
+    expect(d.objective.unresolved).toBe(2);
+    expect(d.objective.unresolvedWeight).toBe(problem.slices.reduce((w, b) => w + 6 - inv.slices[b.slice].priority, 0));
+    expect(d.objective.usage).toBe(0);
+  });
+
+  it('the order keys decide which of two slices competing for one span gets it', () => {
+    const { inv, problem } = tiny('w-site-b');
+    // Room on every span for exactly one of the two slices' largest tie.
+    const widest = Math.max(...problem.slices.flatMap((b) => inv.slices[b.slice].ties.map((t) => t.bandwidthGbps)));
+    problem.residualGbps.fill(widest);
+    problem.protectedGbps.fill(widest);
+    const first = stayPutGenes(problem);
+    const swapped = Float64Array.from(first);
+    swapped[problem.slices[0].orderGene] = first[problem.slices[1].orderGene];
+    swapped[problem.slices[1].orderGene] = first[problem.slices[0].orderGene];
+    const a = decode(problem, first);
+    const b = decode(problem, swapped);
+    const placedA = [...a.next].filter(([, p]) => p !== null).map(([s]) => s);
+    const placedB = [...b.next].filter(([, p]) => p !== null).map(([s]) => s);
+    expect(placedA).not.toEqual(placedB);
+  });
+
+  it('a path gene picks another catalogue path than the current one when the planner asks for it', () => {
+    // x on A and y on D are joined over A–C–D; z sits on E, which goes down, so the slice is re-placed.
+    const sc = scenarioWith([{
+      id: 's-three', functions: { x: ['A', 2], y: ['D', 2], z: ['E', 1] },
+      ties: [['xy', 'x', 'y', 1, 50, ['ac', 'cd']], ['yz', 'y', 'z', 1, 50, ['de']]],
+    }], tinyNetwork(), [window('w-e', { sites: ['E'] })]);
+    const inv = buildInventory(sc);
+    const problem = buildRemapProblem(inv, compileWindow(sc.windows![0]));
+    const genes = stayPutGenes(problem);
+    const id = (spans: readonly number[]) => spans.map((x) => inv.network.spans[x].id);
+    expect(id(decode(problem, genes).next.get(0)!.paths[0])).toEqual(['ac', 'cd']);
+    const A = inv.network.siteIndex.get('A')!;
+    const D = inv.network.siteIndex.get('D')!;
+    expect(problem.paths.get(0, 0, A, D).map((p) => id(p.spans))).toEqual([['ac', 'cd'], ['ab', 'bd']]);
+    genes[problem.ties[0].gene] = problem.kPaths - 1e-9; // the last path of the catalogue
+    expect(id(decode(problem, genes).next.get(0)!.paths[0])).toEqual(['ab', 'bd']);
   });
 
   it('greedy genes decode to exactly the greedy plan, and its objective agrees with evaluatePlan', () => {
