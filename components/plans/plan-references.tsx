@@ -27,11 +27,18 @@ function exactDetail(exact: ReferenceResult): string {
   return parts.join(' · ');
 }
 
+/** The run's figures are the greedy plan's when it was kept; the search's own then follow, so neither is hidden. */
+function runDetail(review: PlanReview): string {
+  const took = `search ${formatDurationMs(review.computeMs)}`;
+  if (review.search?.usedFallback !== 'greedy') return took;
+  return `${took} · greedy plan kept; the search alone: ${formatObjective(review.search.objective)}${review.search.feasible ? '' : ' (outside a limit)'}`;
+}
+
 export function PlanReferences({ review }: { review: PlanReview }) {
   const { greedy, exact } = review;
   return (
     <View style={styles.list} testID="plan-references">
-      <Row title="This run" objective={review.objective} detail={`search ${formatDurationMs(review.computeMs)}`} testID="plan-ref-run" />
+      <Row title="This run" objective={review.objective} detail={runDetail(review)} testID="plan-ref-run" />
       <Row
         title="Greedy reference"
         objective={greedy.objective}

@@ -96,6 +96,7 @@ describe('review', () => {
     show(knockOnReview({ search: { objective: own, feasible: true, usedFallback: 'greedy' } }));
     expect(screen.getByTestId('plan-search-fallback')).toHaveTextContent(
       /Showing the greedy plan.*The search's own plan was worse \(2 unresolved \(weight 7\) · move cost 9\.5\), so the greedy plan is shown instead\./s);
+    expect(screen.getByTestId('plan-ref-run')).toHaveTextContent(/greedy plan kept; the search alone: 2 unresolved \(weight 7\) · move cost 9\.5/);
     expect(searchFallbackText({ objective: own, feasible: false, usedFallback: 'greedy' })).toMatch(/^The search found no plan within every capacity and latency limit \(its best: 2 unresolved/);
   });
 
