@@ -44,7 +44,7 @@ const spent = (c: Climb) => c.evaluations >= c.maxEvaluations || c.timeUp();
 function attempt(c: Climb, change: Change, blocks: number[], fromSaved: boolean): boolean {
   if (spent(c)) return false;
   const old = change.map(([j]) => c.x[j]);
-  if (change.every(([j, v], i) => old[i] === v)) return false;
+  if (change.every(([, v], i) => old[i] === v)) return false;
   for (const [j, v] of change) c.x[j] = v;
   const f = fromSaved ? c.decoder.evaluateFrom(c.x, blocks) : c.decoder.evaluate(c.x);
   c.evaluations += 1;
