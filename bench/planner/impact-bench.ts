@@ -12,6 +12,7 @@ import { buildInstance, log } from './instances';
 import { ms, type Row } from './report';
 
 const GIB = 1024 ** 3;
+const TARGET_MS = 20_000;
 
 /**
  * The affected set (hosted ∪ transit ∪ squeezed) read from the reverse index: what the index buys.
@@ -57,8 +58,12 @@ export async function impactAndMemory(quick: boolean): Promise<Row[]> {
   }
   const n = inst.windows.length;
   log('(d) planning one window at 1,000 sites (serial DE)');
-  const planned = await planWindow(inst.inv, inst.windows[0], { mode: 'serial', timeLimitMs: quick ? 5_000 : 20_000 });
+  // WARNING: the full run plans with a 20 s time limit, the target itself; --quick cuts it to 5 s, so there the
+  // time target is not measured (n/a), only memory.
+  const timeLimitMs = quick ? 5_000 : TARGET_MS;
+  const planned = await planWindow(inst.inv, inst.windows[0], { mode: 'serial', timeLimitMs });
   const maxRssBytes = process.resourceUsage().maxRSS * 1024;
+  const alone = planned.search?.objective ?? planned.objective;
   const speedup = scan / lookup;
   return [
     { section: '(a)', figure: 'instance build (generate + compile), 1,000 sites / 20,000 slices', value: ms(buildMs) },
@@ -71,6 +76,11 @@ export async function impactAndMemory(quick: boolean): Promise<Row[]> {
     { section: '(a)', figure: 'index, report and scan agree on the affected set', value: `${agree}/${n}`, target: `${n}/${n}`, met: agree === n },
     { section: '(d)', figure: 'peak RSS (maxRSS) with 1,000 sites / 20,000 slices built, indexed, one window planned', value: `${(maxRssBytes / 1024 ** 2).toFixed(0)} MiB`, target: '< 1024 MiB', met: maxRssBytes < GIB },
     { section: '(d)', figure: 'heap used at that point', value: `${(process.memoryUsage().heapUsed / 1024 ** 2).toFixed(0)} MiB` },
-    { section: '(d)', figure: 'that window: affected / unresolved / planning time', value: `${planned.affected.length} / ${planned.objective.unresolved} / ${ms(planned.elapsedMs)}` },
+    { section: '(d)', figure: 'that window: affected / unresolved (DE alone) / planning time', value: `${planned.affected.length} / ${alone.unresolved} / ${ms(planned.elapsedMs)}` },
+    {
+      section: '(d)', figure: `1,000 sites / 20,000 slices, one window (serial DE, time limit ${timeLimitMs / 1000} s): planning time; peak RSS`,
+      value: `${ms(planned.elapsedMs)}; ${(maxRssBytes / 1024 ** 2).toFixed(0)} MiB`, target: '< 20 s, < 1 GiB',
+      met: quick ? null : planned.elapsedMs < TARGET_MS && maxRssBytes < GIB,
+    },
   ];
 }

@@ -1,6 +1,8 @@
 // Benchmark instances: Waxman networks (BRITE convention, α = 0.5, β = 0.2, see planner/generate/waxman.ts)
-// loaded to 60–70 % peak utilisation, with random windows of 1–5 elements that touch at least one slice.
+// loaded to 60–70 % peak utilisation, with random windows of 1–5 elements that touch at least one slice; and
+// real-shape networks (preferential attachment, scarce capacity around one window of a site and two spans).
 import { randomWindow } from '../../planner/generate/random-window';
+import { buildRealShapeScenario } from '../../planner/generate/real-shape-scenario';
 import { buildScenario } from '../../planner/generate/scenario-builder';
 import { buildInventory, compileWindow } from '../../planner/model/build-inventory';
 import type { Inventory, WindowSpec } from '../../planner/model/types';
@@ -27,6 +29,20 @@ export function buildInstance(sites: number, slices: number, seed: number, count
     if (n >= 1 && n <= maxAffected) windows.push(w);
   }
   return { label: `${sites} sites / ${slices} slices`, scenario, inv, windows };
+}
+
+export interface RealShapeInstance extends Instance {
+  /** peak span utilisation with the window down and every touched slice on its shortest surviving path */
+  peakUtilisation: number;
+}
+
+/** One real-shape scenario and its one window (planner/generate/real-shape-scenario.ts). */
+export function buildRealShapeInstance(sites: number, slices: number, seed: number): RealShapeInstance {
+  const r = buildRealShapeScenario({ sites, slices, seed });
+  return {
+    label: `rs-${sites}x${slices}-s${seed}`, scenario: r.scenario, inv: buildInventory(r.scenario),
+    windows: [compileWindow(r.window)], peakUtilisation: r.detourPeakUtilisation,
+  };
 }
 
 export function log(message: string): void {
