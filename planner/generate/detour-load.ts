@@ -20,6 +20,8 @@ export interface DetourLoad {
   touched: number[];
   /** touched slices with no obvious detour at all (fixed or site-anchored on a down site, or cut off) */
   stranded: number[];
+  /** the obvious detour of each touched slice (null when stranded) */
+  detours: Map<number, SlicePlacement | null>;
 }
 
 function touches(inv: Inventory, slice: number, siteDown: Uint8Array, spanDown: Uint8Array): boolean {
@@ -70,6 +72,7 @@ export function detourLoad(inv: Inventory, window: WindowSpec): DetourLoad {
   const during = { siteCpu: new Float64Array(sites), spanGbps: new Float64Array(spans) };
   const touched: number[] = [];
   const stranded: number[] = [];
+  const detours = new Map<number, SlicePlacement | null>();
   for (let s = 0; s < inv.slices.length; s += 1) {
     addPlacementLoad(inv, s, inv.placements[s], now);
     if (!touches(inv, s, cap.siteDown, cap.spanDown)) {
@@ -78,10 +81,11 @@ export function detourLoad(inv: Inventory, window: WindowSpec): DetourLoad {
     }
     touched.push(s);
     const detour = obviousDetour(inv, s, cap.siteDown, cap.spanDown);
+    detours.set(s, detour);
     if (detour) addPlacementLoad(inv, s, detour, during);
     else stranded.push(s);
   }
-  return { nowGbps: now.spanGbps, windowGbps: during.spanGbps, capacityGbps: cap.spanGbps, touched, stranded };
+  return { nowGbps: now.spanGbps, windowGbps: during.spanGbps, capacityGbps: cap.spanGbps, touched, stranded, detours };
 }
 
 /** Highest utilisation over the spans that stay up, with the touched slices on their obvious detours. */

@@ -1,13 +1,15 @@
 // Benchmark scenarios of real network shape, from a seed: sites around invented towns, links grown by
 // preferential attachment (heavy-tailed degrees, a few long spans), fibre routes longer than the great
 // circle, slices with latency budgets that leave room for detours, and capacity made scarce around one
-// window of a site and two spans. Pure and deterministic; every name and figure is invented.
-import type { Scenario, ScenarioSite, ScenarioSpan, ScenarioTenant, ScenarioWindow } from '../../shared/scenario';
+// window of a site and two spans — where the window allows, with a knock-on gate (knock-on-gate.ts): touched
+// slices that fit only if an untouched slice moves. Pure and deterministic; every name and figure is invented.
+import type { Scenario, ScenarioSite, ScenarioSlice, ScenarioSpan, ScenarioTenant, ScenarioWindow } from '../../shared/scenario';
 import { greatCircleKm } from '../geo/great-circle';
 import { buildInventory, compileWindow } from '../model/build-inventory';
 import { buildNetwork } from '../model/build-network';
 import { createRng, deriveSeed, type Rng } from '../random/rng';
 import { detourLoad, detourPeakUtilisation } from './detour-load';
+import { findKnockOnGate, gateSiteCpu, type KnockOnGate } from './knock-on-gate';
 import { preferentialAttachment } from './preferential-attachment';
 import { pickRealShapeWindow } from './real-shape-window';
 import { loadRealShapeSlices } from './real-shape-slices';
@@ -27,6 +29,8 @@ export interface RealShapeOptions {
   /** fibre route length over great-circle distance */
   routeFactor?: Band;
   capacity?: Partial<ScarceCapacityOptions>;
+  /** prefer a window with a knock-on gate and build it (default true) */
+  knockOnGate?: boolean;
 }
 
 export interface RealShapeScenario {
@@ -35,6 +39,8 @@ export interface RealShapeScenario {
   window: ScenarioWindow;
   /** peak span utilisation with the window down and every touched slice on its shortest surviving path */
   detourPeakUtilisation: number;
+  /** the knock-on gate built into the scenario, by ids; null when the window offered none */
+  knockOnGate: { site: string; span: string; shortfallGbps: number; fixedFunctions: string[] } | null;
 }
 
 export const REAL_SHAPE_DEFAULTS = {
@@ -44,6 +50,7 @@ export const REAL_SHAPE_DEFAULTS = {
   distanceScaleKm: 60,
   // Route factor 1.2–1.5 over the great circle (REFERENCES.md, geography of fibre; common practice).
   routeFactor: { lo: 1.2, hi: 1.5 },
+  knockOnGate: true,
 };
 
 /** Placeholder capacity before dimensioning; the slices are routed by latency, so it shapes nothing. */
@@ -78,6 +85,15 @@ function makeTenants(count: number): ScenarioTenant[] {
   return Array.from({ length: count }, (_, i) => ({ id: `tenant-${i + 1}`, name: `Tenant ${i + 1}`, noticeDays: 7 + (i % 3) * 7 }));
 }
 
+/** The slices with the gate's functions fixed on their site. */
+function withFixed(slices: ScenarioSlice[], gate: KnockOnGate | null): ScenarioSlice[] {
+  if (!gate) return slices;
+  const fixed = new Set(gate.fixed.map(([slice, fn]) => `${slice}/${fn}`));
+  return slices.map((s, i) => (gate.fixed.some(([slice]) => slice === i)
+    ? { ...s, functions: s.functions.map((f, k) => (fixed.has(`${i}/${k}`) ? { ...f, fixed: true } : f)) }
+    : s));
+}
+
 export function buildRealShapeScenario(options: RealShapeOptions): RealShapeScenario {
   const o = { ...REAL_SHAPE_DEFAULTS, ...options };
   const raw = makeNetwork(o, createRng(deriveSeed(o.seed, 3)));
@@ -90,18 +106,28 @@ export function buildRealShapeScenario(options: RealShapeOptions): RealShapeScen
     sites: raw.sites, spans: raw.spans, tenants, slices: loaded.slices, placements: loaded.placements,
   };
   const inv = buildInventory(draft);
-  const window = pickRealShapeWindow(inv, createRng(deriveSeed(o.seed, 5)));
+  const gateOf = (w: ScenarioWindow) => (o.knockOnGate ? findKnockOnGate(inv, compileWindow(w), detourLoad(inv, compileWindow(w))) : null);
+  const window = pickRealShapeWindow(inv, createRng(deriveSeed(o.seed, 5)), (w) => gateOf(w) !== null);
   const spec = compileWindow(window);
+  const gate = gateOf(window);
   const rng = createRng(deriveSeed(o.seed, 6));
+  // Fixing functions where they sit changes no load, so the detours measured on the draft still hold.
   const gbps = scarceSpanCapacities(detourLoad(inv, spec), rng, o.capacity);
+  if (gate) gbps[gate.span] = gate.capacityGbps;
   const load = new Float64Array(raw.sites.length);
   inv.slices.forEach((s, i) => s.functions.forEach((f, k) => (load[inv.placements[i].sites[k]] += f.cpu)));
   const cpu = slackSiteCapacities(load, rng, o.capacity);
+  if (gate) cpu[gate.site] = gateSiteCpu(load[gate.site]);
   const scenario: Scenario = {
     ...draft,
     sites: raw.sites.map((s, i) => ({ ...s, cpu: cpu[i] })),
     spans: raw.spans.map((s, i) => ({ ...s, capacityGbps: gbps[i] })),
+    slices: withFixed(loaded.slices, gate),
     windows: [window],
   };
-  return { scenario, window, detourPeakUtilisation: detourPeakUtilisation(buildInventory(scenario), spec) };
+  const knockOnGate = gate && {
+    site: raw.sites[gate.site].id, span: raw.spans[gate.span].id, shortfallGbps: Math.round(gate.shortfallGbps * 1000) / 1000,
+    fixedFunctions: gate.fixed.map(([slice, fn]) => loaded.slices[slice].functions[fn].id),
+  };
+  return { scenario, window, detourPeakUtilisation: detourPeakUtilisation(buildInventory(scenario), spec), knockOnGate };
 }

@@ -42,21 +42,35 @@ function staysConnected(inv: Inventory, site: number, spans: number[]): boolean 
 /** 22:00–02:00 local (UTC+01:00), a night-work slot. */
 const NIGHT = { start: '2030-03-04T22:00:00+01:00', end: '2030-03-05T02:00:00+01:00' };
 
-export function pickRealShapeWindow(inv: Inventory, rng: Rng, id = 'window-1'): ScenarioWindow {
+/** One random site-and-two-spans window over loaded elements, or null when it would split the network. */
+function drawWindow(inv: Inventory, loaded: { sites: number[]; spans: number[] }, rng: Rng, id: string): ScenarioWindow | null {
   const net = inv.network;
+  const site = loaded.sites[randomInt(rng, loaded.sites.length)];
+  const away = loaded.spans.filter((s) => net.spans[s].a !== site && net.spans[s].b !== site);
+  if (away.length < 2) return null;
+  const first = away[randomInt(rng, away.length)];
+  const rest = away.filter((s) => s !== first);
+  const second = rest[randomInt(rng, rest.length)];
+  if (!staysConnected(inv, site, [first, second])) return null;
+  return {
+    id, title: 'Site power work and two fibre splices', ...NIGHT, workType: 'combined',
+    down: { sites: [net.sites[site].id], spans: [net.spans[first].id, net.spans[second].id] }, reduced: [],
+  };
+}
+
+/**
+ * A window that keeps the network connected: among the first ATTEMPTS draws, the first that `prefer` accepts,
+ * else the first drawn.
+ */
+export function pickRealShapeWindow(inv: Inventory, rng: Rng, prefer: (w: ScenarioWindow) => boolean = () => true, id = 'window-1'): ScenarioWindow {
   const loaded = loadedElements(inv);
+  let fallback: ScenarioWindow | undefined;
   for (let attempt = 0; attempt < ATTEMPTS; attempt += 1) {
-    const site = loaded.sites[randomInt(rng, loaded.sites.length)];
-    const away = loaded.spans.filter((s) => net.spans[s].a !== site && net.spans[s].b !== site);
-    if (away.length < 2) continue;
-    const first = away[randomInt(rng, away.length)];
-    const rest = away.filter((s) => s !== first);
-    const second = rest[randomInt(rng, rest.length)];
-    if (!staysConnected(inv, site, [first, second])) continue;
-    return {
-      id, title: 'Site power work and two fibre splices', ...NIGHT, workType: 'combined',
-      down: { sites: [net.sites[site].id], spans: [net.spans[first].id, net.spans[second].id] }, reduced: [],
-    };
+    const w = drawWindow(inv, loaded, rng, id);
+    if (!w) continue;
+    if (prefer(w)) return w;
+    fallback ??= w;
   }
+  if (fallback) return fallback;
   throw new RangeError('no site-and-two-spans window keeps this network connected');
 }

@@ -1,10 +1,12 @@
 // Real-shape benchmark scenarios: valid, deterministic, connected, heavy-tailed, fibre-like spans, and scarce
 // capacity around their window — the last checked with reference libraries (dijkstrajs, @turf/distance),
-// not with the generator's own detour code.
+// not with the generator's own detour code — and a knock-on gate that HiGHS proves needs a knock-on move.
 import turfDistance from '@turf/distance';
 import dijkstra from 'dijkstrajs';
+import { exactPlan } from '../../../planner/exact/exact-plan';
 import { buildRealShapeScenario } from '../../../planner/generate/real-shape-scenario';
-import { buildInventory } from '../../../planner/model/build-inventory';
+import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
+import { buildRemapProblem } from '../../../planner/remap/problem';
 import { scenarioSchema, type Scenario } from '../../../shared/scenario';
 import { validateScenario } from '../../../shared/scenario-validate';
 
@@ -40,7 +42,7 @@ function connected(sc: Scenario): boolean {
  * Peak span utilisation with the window's elements down and every touched slice on its shortest surviving
  * path (a function on the down site moved to the nearest up site its anchor allows), from the scenario alone.
  */
-function referencePeak(sc: Scenario): number {
+function referenceLoads(sc: Scenario): { now: Map<string, number>; during: Map<string, number>; up: Scenario['spans'] } {
   const w = sc.windows![0];
   const downSite = new Set(w.down.sites);
   const up = sc.spans.filter((s) => !w.down.spans.includes(s.id) && !downSite.has(s.a) && !downSite.has(s.b));
@@ -51,10 +53,12 @@ function referencePeak(sc: Scenario): number {
     spanOf.set(`${s.a}|${s.b}`, s.id).set(`${s.b}|${s.a}`, s.id);
   }
   const load = new Map<string, number>();
+  const now = new Map<string, number>();
   const add = (span: string, gbps: number) => load.set(span, (load.get(span) ?? 0) + gbps);
   const isUp = new Set(up.map((s) => s.id));
   sc.slices.forEach((slice, i) => {
     const p = sc.placements[i];
+    slice.ties.forEach((t) => p.paths[t.id].forEach((s) => now.set(s, (now.get(s) ?? 0) + t.bandwidthGbps)));
     const touched = Object.values(p.sites).some((s) => downSite.has(s)) || Object.values(p.paths).some((path) => path.some((s) => !isUp.has(s)));
     if (!touched) return slice.ties.forEach((t) => p.paths[t.id].forEach((s) => add(s, t.bandwidthGbps)));
     const site: Record<string, string> = {};
@@ -76,7 +80,12 @@ function referencePeak(sc: Scenario): number {
       }
     }
   });
-  return Math.max(...up.map((s) => (load.get(s.id) ?? 0) / s.capacityGbps));
+  return { now, during: load, up };
+}
+
+function referencePeak(sc: Scenario): number {
+  const { during, up } = referenceLoads(sc);
+  return Math.max(...up.map((s) => (during.get(s.id) ?? 0) / s.capacityGbps));
 }
 
 describe.each(SIZES)('buildRealShapeScenario ($sites sites, $slices slices, seed $seed)', (size) => {
@@ -154,4 +163,53 @@ describe.each(SIZES)('buildRealShapeScenario ($sites sites, $slices slices, seed
     const slack = sc.spans.filter((s) => (load.get(s.id) ?? 0) / s.capacityGbps <= 0.7);
     expect(slack.length).toBeGreaterThanOrEqual(sc.spans.length / 2);
   });
+
+  it('builds a knock-on gate: a full two-span site whose one span left is short, and an untouched slice that could free it', () => {
+    const g = r.knockOnGate!;
+    expect(g).not.toBeNull();
+    const w = r.window;
+    const own = sc.spans.filter((s) => s.a === g.site || s.b === g.site);
+    expect(own).toHaveLength(2);
+    const downSpans = own.filter((s) => w.down.spans.includes(s.id) || w.down.sites.includes(s.a) || w.down.sites.includes(s.b));
+    expect(downSpans).toHaveLength(1);
+    expect(own.map((s) => s.id).filter((id) => id !== downSpans[0].id)).toEqual([g.span]);
+    const x = sc.spans.find((s) => s.id === g.span)!;
+    const { now, during } = referenceLoads(sc);
+    expect(now.get(x.id)!).toBeLessThanOrEqual(x.capacityGbps);
+    expect(during.get(x.id)! - x.capacityGbps).toBeCloseTo(g.shortfallGbps, 3);
+    expect(g.shortfallGbps).toBeGreaterThan(0);
+    // The gate site is full: less spare vCPU than the smallest function (1 vCPU).
+    const site = sc.sites.find((s) => s.id === g.site)!;
+    const onSite = sc.slices.flatMap((s, i) => s.functions.filter((f) => sc.placements[i].sites[f.id] === g.site));
+    expect(site.cpu - onSite.reduce((a, f) => a + f.cpu, 0)).toBeLessThan(1);
+    const fixed = new Set(g.fixedFunctions);
+    expect(onSite.filter((f) => fixed.has(f.id)).every((f) => f.fixed)).toBe(true);
+    // Some slice the window does not touch has one movable function on the site and more than the shortfall on X.
+    const downSite = new Set(w.down.sites);
+    const cut = new Set(sc.spans.filter((s) => w.down.spans.includes(s.id) || downSite.has(s.a) || downSite.has(s.b)).map((s) => s.id));
+    const untouched = sc.slices.filter((_s, i) => !Object.values(sc.placements[i].paths).flat().some((id) => cut.has(id))
+      && !Object.values(sc.placements[i].sites).some((id) => downSite.has(id)));
+    const frees = untouched.filter((s) => {
+      const p = sc.placements[sc.slices.indexOf(s)];
+      const here = s.functions.filter((f) => p.sites[f.id] === g.site);
+      const onX = s.ties.filter((t) => p.paths[t.id].includes(x.id)).reduce((a, t) => a + t.bandwidthGbps, 0);
+      return here.length === 1 && !here[0].fixed && !here[0].anchor && onX > g.shortfallGbps;
+    });
+    expect(frees.length).toBeGreaterThan(0);
+  });
+});
+
+describe('the knock-on gate, solved exactly', () => {
+  it('leaves a slice unresolved with touched slices only, and none once untouched slices may move', async () => {
+    // HiGHS (REFERENCES.md: the exact reference) on a 10-site instance, small enough to prove both optima.
+    const r = buildRealShapeScenario({ sites: 10, slices: 12, seed: 1 });
+    expect(r.knockOnGate).not.toBeNull();
+    const inv = buildInventory(r.scenario);
+    const w = compileWindow(r.window);
+    const touchedOnly = await exactPlan(buildRemapProblem(inv, w, { maxCandidates: 8 }), { timeLimitMs: 30_000 });
+    const withKnockOn = await exactPlan(buildRemapProblem(inv, w, { maxCandidates: 8, knockOn: { maxMoves: 5 } }), { timeLimitMs: 30_000 });
+    expect(touchedOnly.optimal && withKnockOn.optimal).toBe(true);
+    expect(touchedOnly.objective.unresolved).toBeGreaterThanOrEqual(1);
+    expect(withKnockOn.objective.unresolved).toBeLessThan(touchedOnly.objective.unresolved);
+  }, 120_000);
 });
