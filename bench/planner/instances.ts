@@ -34,6 +34,8 @@ export function buildInstance(sites: number, slices: number, seed: number, count
 export interface RealShapeInstance extends Instance {
   /** peak span utilisation with the window down and every touched slice on its shortest surviving path */
   peakUtilisation: number;
+  /** the knock-on gate as "site/span (short x Gbit/s)", or null */
+  gate: string | null;
 }
 
 /** One real-shape scenario and its one window (planner/generate/real-shape-scenario.ts). */
@@ -42,6 +44,7 @@ export function buildRealShapeInstance(sites: number, slices: number, seed: numb
   return {
     label: `rs-${sites}x${slices}-s${seed}`, scenario: r.scenario, inv: buildInventory(r.scenario),
     windows: [compileWindow(r.window)], peakUtilisation: r.detourPeakUtilisation,
+    gate: r.knockOnGate && `${r.knockOnGate.site}/${r.knockOnGate.span} (short ${r.knockOnGate.shortfallGbps} Gbit/s)`,
   };
 }
 

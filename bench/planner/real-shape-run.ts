@@ -32,6 +32,7 @@ export interface ShapeOutcome {
   slices: number;
   affected: number;
   peakUtilisation: number;
+  gate: string | null;
   /** DE alone, touched slices only */
   de: Objective; deMs: number; deFallback: boolean;
   /** the serial DE's best-so-far over time (touched only), for the islands race */
@@ -72,7 +73,7 @@ export async function runShapeWindow(inst: RealShapeInstance, exact: ExactSettin
   );
   return {
     label: inst.label, sites: inv.network.sites.length, slices: inv.slices.length, affected: de.affected.length,
-    peakUtilisation: inst.peakUtilisation,
+    peakUtilisation: inst.peakUtilisation, gate: inst.gate,
     de: searchAlone(de), deMs: de.elapsedMs, deFallback: Boolean(de.search?.usedFallback), deTrace,
     deKnockOn: searchAlone(deKnockOn), deKnockOnMs: deKnockOn.elapsedMs,
     greedy: greedy.objective, greedyMs: greedy.elapsedMs,
@@ -86,7 +87,7 @@ const cost = (x: number) => (Number.isInteger(x) ? String(x) : x.toFixed(2));
 /** The per-instance line: sizes, tightness, unresolved, move cost and time of every solver (* = proven optimal). */
 export function describeOutcome(o: ShapeOutcome): string {
   return [
-    `${o.sites} sites, ${o.slices} slices, ${o.affected} affected, peak ${(100 * o.peakUtilisation).toFixed(0)} %`,
+    `${o.sites} sites, ${o.slices} slices, ${o.affected} affected, peak ${(100 * o.peakUtilisation).toFixed(0)} %, knock-on gate ${o.gate ?? 'none'}`,
     `unresolved DE ${o.de.unresolved} / DE+k ${o.deKnockOn.unresolved} / greedy ${o.greedy.unresolved} / exact ${o.exact.objective.unresolved}${star(o.exact)} / exact+k ${o.exactKnockOn.objective.unresolved}${star(o.exactKnockOn)}`,
     `move cost DE ${cost(o.de.moveCost)} / DE+k ${cost(o.deKnockOn.moveCost)} / greedy ${cost(o.greedy.moveCost)} / exact ${cost(o.exact.objective.moveCost)} / exact+k ${cost(o.exactKnockOn.objective.moveCost)}`,
     `time DE ${ms(o.deMs)} / DE+k ${ms(o.deKnockOnMs)} / greedy ${ms(o.greedyMs)} / exact ${ms(o.exact.ms)} / exact+k ${ms(o.exactKnockOn.ms)}${o.deFallback ? '; DE alone lost to its greedy fallback' : ''}`,
