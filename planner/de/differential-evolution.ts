@@ -75,8 +75,15 @@ export function runDE(problem: DEProblem, options: DEOptions, rng: Rng, seeds?: 
     if (options.stallGenerations !== undefined && stall >= options.stallGenerations) break;
     generation += 1;
     trials = makeTrials(pop, problem, rng, options, trials);
-    const trialFit = trials.map((t) => problem.evaluate(t));
-    evaluations += trials.length;
+    // Time is checked between evaluations too: one generation of a large problem can take seconds. Trials left
+    // unevaluated when time is up lose to their parents (the generation still completes deterministically
+    // whenever time is not up).
+    const trialFit: Fitness[] = [];
+    for (const t of trials) {
+      const late = options.timeLimitMs !== undefined && trialFit.length > 0 && now() - startMs >= options.timeLimitMs;
+      trialFit.push(late ? { objective: [], violation: Infinity } : problem.evaluate(t));
+      if (!late) evaluations += 1;
+    }
     selectTrials(pop, trials, trialFit);
     best = bestIndex(pop);
     stall = compareFitness(pop.fit[best], bestFit) < 0 ? 0 : stall + 1;

@@ -48,25 +48,48 @@ function spurCandidates(
   return out;
 }
 
+/** Yen's paths one at a time, shortest first: the k-th costs nothing until it is asked for. */
+export interface PathEnumerator {
+  /** the next shortest loopless path, or null when there are no more */
+  next(): LatencyPath | null;
+}
+
+export function pathEnumerator(net: NetworkModel, from: number, to: number, opts: PathOptions = {}): PathEnumerator {
+  const found: LatencyPath[] = [];
+  const seen = new Set<string>();
+  const pool: LatencyPath[] = [];
+  let done = false;
+  return {
+    next() {
+      if (done) return null;
+      if (found.length === 0) {
+        const first = shortestLatencyPath(net, from, to, opts);
+        if (first === null) { done = true; return null; }
+        found.push(first);
+        seen.add(first.spans.join(','));
+        return first;
+      }
+      for (const c of spurCandidates(net, from, to, found, opts)) {
+        const key = c.spans.join(',');
+        if (!seen.has(key)) {
+          seen.add(key);
+          pool.push(c);
+        }
+      }
+      if (pool.length === 0) { done = true; return null; }
+      pool.sort(comparePaths);
+      const path = pool.shift()!;
+      found.push(path);
+      return path;
+    },
+  };
+}
+
 export function kShortestPaths(net: NetworkModel, from: number, to: number, k: number, opts: PathOptions = {}): LatencyPath[] {
   if (!Number.isInteger(k) || k < 1) throw new InvalidOptionError(`k must be a positive integer, got ${k}`);
-  const first = shortestLatencyPath(net, from, to, opts);
-  if (first === null) return [];
-  const found = [first];
-  const seen = new Set([first.spans.join(',')]);
-  const pool: LatencyPath[] = [];
-  while (found.length < k) {
-    for (const c of spurCandidates(net, from, to, found, opts)) {
-      const key = c.spans.join(',');
-      if (!seen.has(key)) {
-        seen.add(key);
-        pool.push(c);
-      }
-    }
-    if (pool.length === 0) break;
-    pool.sort(comparePaths);
-    found.push(pool.shift()!);
-  }
+  const paths = pathEnumerator(net, from, to, opts);
+  const found: LatencyPath[] = [];
+  for (let p = paths.next(); p !== null; p = found.length < k ? paths.next() : null) found.push(p);
   return found;
 }
 

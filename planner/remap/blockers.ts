@@ -22,8 +22,8 @@ export function pathGeneValues(problem: RemapProblem, genes: Float64Array, block
   const info = problem.inv.slices[t.slice].ties[t.tie];
   const sites = pickedSites(problem, genes, block);
   if (sites[info.from] < 0 || sites[info.to] < 0) return [];
-  const n = problem.paths.get(t.slice, t.tie, sites[info.from], sites[info.to]).length;
-  return Array.from({ length: n }, (_, i) => ((i + 0.5) * problem.kPaths) / n);
+  const n = problem.paths.get(t.slice, t.tie, sites[info.from], sites[info.to]).count();
+  return Array.from({ length: n }, (_, i) => i + 0.5);
 }
 
 function freeCapacity(problem: RemapProblem, next: Map<number, SlicePlacement | null>) {
@@ -47,8 +47,10 @@ export function blockersOf(problem: RemapProblem, next: Map<number, SlicePlaceme
   slice.functions.forEach((f, fn) => { if (sites[fn] >= 0 && !fits(f.cpu, free.cpu[sites[fn]])) scarceSites.add(sites[fn]); });
   slice.ties.forEach((t, tie) => {
     if (sites[t.from] < 0 || sites[t.to] < 0) return;
-    const list = problem.paths.get(problem.slices[u].slice, tie, sites[t.from], sites[t.to]).slice(0, PATHS_READ);
-    for (const p of list) for (const x of p.spans) if (!fits(t.bandwidthGbps, free.gbps[x])) scarceSpans.add(x);
+    const list = problem.paths.get(problem.slices[u].slice, tie, sites[t.from], sites[t.to]);
+    for (let i = 0; i < Math.min(PATHS_READ, list.count()); i += 1) {
+      for (const x of list.at(i)!.spans) if (!fits(t.bandwidthGbps, free.gbps[x])) scarceSpans.add(x);
+    }
   });
   const scored: [number, number][] = [];
   problem.slices.forEach((block, b) => {

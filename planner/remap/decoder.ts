@@ -5,7 +5,7 @@ import type { DEProblem, Fitness } from '../de/differential-evolution';
 import type { Objective, SlicePlacement } from '../model/types';
 import { sliceWeight } from '../plan/evaluate-plan';
 import { createBookingState, loadBookingState, releaseHeld, resetBookingState, saveBookingState, type BookingState } from './booking';
-import { bookPlacement, geneIndex, placeSlice } from './place-slice';
+import { bookPlacement, placeSlice } from './place-slice';
 import type { RemapProblem, RemapSlice } from './remap-types';
 
 /** Genes at the middle of their cell, so small DE steps do not flip them. */
@@ -166,11 +166,8 @@ export function stayPutGenes(problem: RemapProblem): Float64Array {
 
 /** The gene value that picks catalogue path `spans` for a tie between `from` and `to` (path 0 when not listed). */
 export function pathGene(problem: RemapProblem, slice: number, tie: number, from: number, to: number, spans: readonly number[]): number {
-  const list = problem.paths.get(slice, tie, from, to);
-  const i = list.findIndex((p) => p.spans.length === spans.length && p.spans.every((x, k) => x === spans[k]));
-  if (i <= 0) return CELL_MIDDLE;
-  const gene = ((i + 0.5) * problem.kPaths) / list.length;
-  return geneIndex(gene, list.length, problem.kPaths) === i ? gene : CELL_MIDDLE;
+  const i = problem.paths.get(slice, tie, from, to).indexOf(spans);
+  return (i < 0 ? 0 : i) + CELL_MIDDLE;
 }
 
 /**

@@ -183,6 +183,7 @@ const PAIR_SITES_CLIMBED = 8;
 function climbBlock(c: Climb, b: number, placed: SlicePlacement | null): boolean {
   const p = c.problem;
   const block = p.slices[b];
+  if (spent(c)) return false;
   c.decoder.evaluateSaving(c.x);
   c.evaluations += 1;
   let improved = false;
@@ -233,6 +234,7 @@ export function localSearch(
   while (improved && !spent(c)) {
     improved = ejectionPass(c);
     improved = stayPass(c) || improved;
+    if (spent(c)) break;
     for (const [b, placed] of changedBlocks(c)) improved = climbBlock(c, b, placed) || improved;
   }
   return { genes: c.x, fitness: c.fit, evaluations: c.evaluations };

@@ -5,7 +5,7 @@ import type { SlicePlacement } from '../model/types';
 import { REROUTE_COST } from '../plan/evaluate-plan';
 import { shortestLatencyPath } from '../paths/shortest-path';
 import { bookCpu, bookPath, commit, mark, undoSince, type BookingState } from './booking';
-import type { CandidatePath } from './path-catalog';
+import type { PathList } from './path-catalog';
 import type { RemapProblem, RemapSlice } from './remap-types';
 
 export function geneIndex(gene: number, count: number, range: number): number {
@@ -24,21 +24,27 @@ function availability(problem: RemapProblem, path: readonly number[]): number {
   return a;
 }
 
-/** The gene's path when it fits; else the catalogue's first that fits around later slices' paths, then anywhere. */
-function pickFromCatalogue(list: readonly CandidatePath[], gene: number, range: number, gbps: number, state: BookingState): readonly number[] | null {
-  if (list.length === 0) return null;
-  const chosen = geneIndex(gene, list.length, range);
-  if (pathFits(list[chosen].spans, gbps, state.gbps)) return list[chosen].spans;
+/** Catalogue paths the repair tries, in order, when the gene's own path does not fit. */
+const REPAIR_PATHS = 3;
+
+/** The gene's path when it fits; else one of the catalogue's first paths that fits around later slices' paths, then anywhere. */
+function pickFromCatalogue(list: PathList, gene: number, gbps: number, state: BookingState): readonly number[] | null {
+  const chosen = list.at(Math.max(0, Math.floor(gene)));
+  if (chosen === null) return null;
+  if (pathFits(chosen.spans, gbps, state.gbps)) return chosen.spans;
   for (const residual of [state.protectedGbps, state.gbps]) {
-    for (let i = 0; i < list.length; i += 1) if (i !== chosen && pathFits(list[i].spans, gbps, residual)) return list[i].spans;
+    for (let i = 0; i < REPAIR_PATHS; i += 1) {
+      const p = list.at(i)!;
+      if (p !== chosen && pathFits(p.spans, gbps, residual)) return p.spans;
+    }
   }
   return null;
 }
 
 /**
  * The current path when the gene picks the catalogue's first entry, the end sites are unchanged and the path
- * still qualifies and fits: the catalogue would start with it, so this skips listing the others (most slices
- * keep their paths, and listing costs a k-shortest-paths search).
+ * still qualifies and fits: the catalogue starts with it, so this skips building the list (most slices keep
+ * their paths).
  */
 function keptPath(problem: RemapProblem, state: BookingState, block: RemapSlice, tie: number, sites: Int32Array, gene: number): readonly number[] | null {
   const t = problem.inv.slices[block.slice].ties[tie];
@@ -62,7 +68,7 @@ function routeTie(problem: RemapProblem, state: BookingState, block: RemapSlice,
   const t = problem.inv.slices[block.slice].ties[tie];
   const from = sites[t.from];
   const to = sites[t.to];
-  const listed = pickFromCatalogue(problem.paths.get(block.slice, tie, from, to), gene, problem.kPaths, t.bandwidthGbps, state);
+  const listed = pickFromCatalogue(problem.paths.get(block.slice, tie, from, to), gene, t.bandwidthGbps, state);
   if (listed !== null) return listed;
   // Beyond the catalogue: the shortest route on what is left, around later slices' current paths first.
   for (const o of [state.protectedOptions, state.pathOptions]) {

@@ -2,7 +2,7 @@
 // allowed), candidate sites and paths, residual capacity, and the genome layout.
 // Genome per block: a keep-out gene in [0, 1) for touched slices (< 0.5 = leave the slice unresolved), a random
 // key in [0, 1) for the decode order, one gene per function in [0, candidates) and one per tie in [0, kPaths),
-// both decoded by flooring (a tie's gene is scaled to the number of paths its end sites actually have).
+// both decoded by flooring (a tie's gene past the paths its end sites actually have picks the last one).
 // Reference: J. C. Bean, "Genetics and random keys for sequencing and optimization", ORSA J. Computing 6 (1994)
 // 154–160 (random keys for the order).
 import { InvalidOptionError } from '../errors';
