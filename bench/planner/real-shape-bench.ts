@@ -1,7 +1,7 @@
 // (e) the real-shape set: preferential-attachment networks of 40–200 sites with 100–300 slices, capacity made
 // scarce around one window of a site and two spans (planner/generate/real-shape-scenario.ts). DE alone
 // (touched only, and with knock-on moves) against greedy and exact (touched only, and with knock-on blocks);
-// then islands vs serial on the largest windows where serial DE improves on its seeds.
+// then islands vs serial on the windows where serial DE works longest to reach its final objective.
 import { EXACT_DEFAULTS } from '../../planner/exact/exact-plan';
 import { buildRealShapeInstance, log, type RealShapeInstance } from './instances';
 import { islandsVsSerial } from './islands-race';
@@ -32,7 +32,6 @@ export async function realShape(quick: boolean): Promise<Row[]> {
     log(`(e) ${inst.label}: peak ${(100 * inst.peakUtilisation).toFixed(0)} % with the window down`);
     outcomes.push(await runShapeWindow(inst, exactSetting(quick)));
   }
-  // The largest windows carry the most work per generation, where threads should pay off.
   const race = await islandsVsSerial(instances.map((inst, i) => ({ inst, outcome: outcomes[i] })), quick ? 1 : 3);
   return [...instanceRows(outcomes), ...targetRows(outcomes), ...race];
 }
