@@ -20,6 +20,8 @@ export interface ParallelDEOptions {
   repair?: BoundRepair;
   /** islands: generations between ring migrations of each island's best member */
   migrationInterval?: number;
+  /** islands: decodes each island's local search may spend on its best member after every epoch (memetic islands) */
+  polishEvaluations?: number;
 }
 
 export interface ParallelProgress {

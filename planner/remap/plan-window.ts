@@ -55,7 +55,10 @@ async function evolve(problem: RemapProblem, decoder: Decoder, o: PlanOptions, s
   if (!o.parallel || !o.scenario) throw new InvalidOptionError(`mode "${o.mode}" needs options.parallel and options.scenario`);
   const r = await o.parallel.run({
     mode: o.mode === 'islands' ? 'islands' : 'shared-eval', scenario: o.scenario, window: problem.window,
-    problemOptions: problem.options, deOptions: { ...de, migrationInterval: o.migrationInterval },
+    problemOptions: problem.options,
+    // Islands are memetic: each worker polishes its island's best after every epoch, so the local search, the
+    // larger share of the work on scarce windows, runs on every worker at once.
+    deOptions: { ...de, migrationInterval: o.migrationInterval, ...(o.mode === 'islands' ? { polishEvaluations: islandPolishBudget(problem) } : {}) },
     seeds, seed: o.seed, workers: o.workers,
     onGeneration: (p) => report(p.generation, p.evaluations, objectiveFromFitness(p.best)),
   });
@@ -78,6 +81,11 @@ function initialMembers(problem: RemapProblem, greedyGenes: Float64Array, o: Pla
 /** Decodes per local search: a few passes over the genome. */
 function polishBudget(problem: RemapProblem): number {
   return Math.max(200, 4 * problem.dimension);
+}
+
+/** Decodes per island epoch's local search: a share of one full local search. */
+function islandPolishBudget(problem: RemapProblem): number {
+  return Math.ceil(polishBudget(problem) / 4);
 }
 
 /**

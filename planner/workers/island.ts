@@ -1,18 +1,22 @@
 // One island of the island model: a sub-population evolved with the shared DE steps, kept inside a worker.
 // Reference: R. Storn, K. Price, J. Global Optimization 11 (1997) 341–359 (DE/rand/1/bin steps);
-// island model with ring migration of the best member, as in coarse-grained parallel evolutionary algorithms.
+// island model with ring migration of the best member, as in coarse-grained parallel evolutionary algorithms;
+// optionally memetic: after each epoch the island's best member goes through a local search.
 import {
   bestIndex, compareFitness, initPopulation, makeTrials, selectTrials, type BoundRepair, type DEProblem, type Fitness, type Population,
 } from '../de/differential-evolution';
 import { createRng, type Rng } from '../random/rng';
 import type { IslandReport, Member } from './worker-protocol';
 
+/** A local search the island applies to its best member (memetic islands); returns the improved member. */
+export type Polish = (genes: Float64Array, maxEvaluations: number, deadlineMs?: number) => Member;
+
 export class Island {
   private readonly rng: Rng;
   private readonly pop: Population;
   private trials: Float64Array[] = [];
 
-  constructor(private readonly problem: DEProblem, size: number, seeds: Float64Array[], rngSeed: number) {
+  constructor(private readonly problem: DEProblem, size: number, seeds: Float64Array[], rngSeed: number, private readonly polish?: Polish) {
     this.rng = createRng(rngSeed);
     this.pop = initPopulation(problem, size, this.rng, seeds);
   }
@@ -30,7 +34,18 @@ export class Island {
     this.pop.fit[worst] = m.fitness;
   }
 
-  run(generations: number, o: { F: number; CR: number; repair?: BoundRepair; immigrant?: Member; deadlineMs?: number }): IslandReport {
+  /** The best member through the local search; it replaces that member when strictly better. */
+  private polishBest(maxEvaluations: number, deadlineMs?: number): Fitness | null {
+    if (!this.polish || maxEvaluations <= 0) return null;
+    const b = bestIndex(this.pop);
+    const m = this.polish(this.pop.x[b], maxEvaluations, deadlineMs);
+    if (compareFitness(m.fitness, this.pop.fit[b]) >= 0) return null;
+    this.pop.x[b] = Float64Array.from(m.genes);
+    this.pop.fit[b] = m.fitness;
+    return m.fitness;
+  }
+
+  run(generations: number, o: { F: number; CR: number; repair?: BoundRepair; immigrant?: Member; deadlineMs?: number; polishEvaluations?: number }): IslandReport {
     if (o.immigrant) this.receive(o.immigrant);
     const perGeneration: Fitness[] = [];
     let evaluations = 0;
@@ -42,6 +57,8 @@ export class Island {
       selectTrials(this.pop, this.trials, fit);
       perGeneration.push(this.pop.fit[bestIndex(this.pop)]);
     }
+    const polished = perGeneration.length > 0 ? this.polishBest(o.polishEvaluations ?? 0, o.deadlineMs) : null;
+    if (polished) perGeneration[perGeneration.length - 1] = polished;
     return { best: this.best(), perGeneration, evaluations };
   }
 }

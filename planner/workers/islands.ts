@@ -43,7 +43,7 @@ export async function runIslands(input: ParallelRunInput, workers: RemapWorker[]
     const n = Math.min(interval, o.generations - generation);
     const sent = bests;
     const reports = await Promise.all(islands.map((w, i) => w.request<IslandReport>({
-      kind: 'island-run', generations: n, F: o.F, CR: o.CR, repair: o.repair, deadlineMs,
+      kind: 'island-run', generations: n, F: o.F, CR: o.CR, repair: o.repair, deadlineMs, polishEvaluations: o.polishEvaluations,
       // Ring: island i receives the best of island i − 1 (none on the first epoch or with one island).
       immigrant: generation > 0 && islands.length > 1 ? sent[(i + islands.length - 1) % islands.length] : undefined,
     })));

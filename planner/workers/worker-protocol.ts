@@ -8,7 +8,11 @@ export type WorkerRequest =
   | { kind: 'load'; scenario: Scenario; window: WindowSpec; problemOptions: RemapProblemOptions }
   | { kind: 'evaluate'; genes: Float64Array[] }
   | { kind: 'island-init'; size: number; seeds: Float64Array[]; rngSeed: number }
-  | { kind: 'island-run'; generations: number; F: number; CR: number; repair?: BoundRepair; immigrant?: Member; deadlineMs?: number };
+  | {
+    kind: 'island-run'; generations: number; F: number; CR: number; repair?: BoundRepair; immigrant?: Member; deadlineMs?: number;
+    /** decodes the island's local search may spend on its best member after the generations (0 = none) */
+    polishEvaluations?: number;
+  };
 
 export interface Member {
   genes: Float64Array;
