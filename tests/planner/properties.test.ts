@@ -136,7 +136,8 @@ describe('planner properties', () => {
       // touched slices only on both sides: the program re-places exactly the problem built above
       const de = await planWindow(c.inv, c.window, { ...DE, mode: 'serial', knockOn: false });
       // peak utilisation is a tie-break the program does not model; compare the three modelled levels
-      expect(compareObjectives(levels(ex.objective), levels(de.search!.objective))).toBeLessThanOrEqual(0);
+      // (a window touching nothing has no search: its empty plan is the objective)
+      expect(compareObjectives(levels(ex.objective), levels(de.search?.objective ?? de.objective))).toBeLessThanOrEqual(0);
     }), { numRuns: 6 });
   });
 });
