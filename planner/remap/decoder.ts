@@ -33,16 +33,10 @@ export interface Decoder {
   orderOf(genes: Float64Array): number[];
 }
 
-/**
- * Sums reached in another booking order differ in their last bits; rounded, they compare equal, so neither the
- * search nor its local search takes float noise for an improvement (and trade a real level below for it).
- */
-const round = (x: number, digits: number) => Math.round(x * 10 ** digits) / 10 ** digits;
-
 /** Objective vector order: the lexicographic keys, then counts as tie-breakers (fewer is better there too). */
 function toFitness(s: BookingState): Fitness {
   return {
-    objective: [s.unresolvedWeight, round(s.moveCost, 9), round(s.usage, 6), round(s.peakUtilisation, 9), s.unresolved, s.moved, s.rerouted],
+    objective: [s.unresolvedWeight, s.moveCost, s.usage, s.peakUtilisation, s.unresolved, s.moved, s.rerouted],
     violation: s.violation,
   };
 }

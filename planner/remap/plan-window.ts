@@ -12,6 +12,7 @@ import { explainUnresolved } from './explain-unresolved';
 import { PLAN_DEFAULTS, type PlanOptions } from './plan-options';
 import { buildRemapProblem } from './problem';
 import { finalPlan } from './knock-on-reasons';
+import { iterateLocalSearch } from './kicks';
 import { localSearch } from './local-search';
 import { perturbedSeeds } from './seeding';
 import type { RemapProblem } from './remap-types';
@@ -20,6 +21,8 @@ export { PLAN_DEFAULTS, type PlanOptions, type PlanProgress, type ExactSolver, t
 
 /** rng stream for the initial members, apart from the DE's own stream */
 const SEEDING_STREAM = 0x5eed;
+/** rng stream for the kicks of the iterated local search */
+const KICK_STREAM = 0x61c4;
 const MODES = new Set(['serial', 'islands', 'shared-eval', 'greedy', 'exact']);
 
 interface Search {
@@ -98,9 +101,10 @@ const FINAL_POLISH_SHARE = 0.15;
 /** Left at the end for scoring, explaining and verifying the plan, so the whole run keeps its time limit. */
 const FINISH_SHARE = 0.03;
 
-function polishFound(problem: RemapProblem, decoder: Decoder, found: Search, budget: number, timeUp: () => boolean): Search {
+function polishFound(problem: RemapProblem, decoder: Decoder, found: Search, budget: number, o: PlanOptions, timeUp: () => boolean): Search {
   if (!found.genes) return found;
-  const p = localSearch(problem, decoder, found.genes, budget, timeUp);
+  const polished = localSearch(problem, decoder, found.genes, budget, timeUp);
+  const p = iterateLocalSearch(problem, decoder, polished.genes, Math.ceil(budget / 2), createRng(deriveSeed(o.seed, KICK_STREAM)), timeUp);
   const decoded = decoder.decode(p.genes);
   return { ...found, next: decoded.next, feasible: decoded.fitness.violation <= 0, genes: p.genes };
 }
@@ -116,13 +120,13 @@ async function search(problem: RemapProblem, o: PlanOptions, startMs: number, no
     const r = await o.exact(problem, { timeLimitMs: o.timeLimitMs });
     return { next: r.next, trace: [], exact: r.exact };
   }
-  // Memetic steps around DE (same in every DE mode, so shared-eval still follows serial exactly):
-  // the greedy seed is hill-climbed first, and DE's best is hill-climbed at the end.
+  // Memetic steps around DE (same in every DE mode, so shared-eval still follows serial exactly): the greedy
+  // seed is local-searched first; DE's best is local-searched at the end, then kicked and searched again.
   const budget = polishBudget(problem);
   const until = (share: number) => () => now() - startMs >= o.timeLimitMs * share;
   const seed = localSearch(problem, decoder, greedy.genes, budget, until(SEED_POLISH_SHARE)).genes;
   const evolved = await evolve(problem, decoder, o, initialMembers(problem, seed, o), startMs, now);
-  const found = polishFound(problem, decoder, evolved, budget, until(1 - FINISH_SHARE));
+  const found = polishFound(problem, decoder, evolved, budget, o, until(1 - FINISH_SHARE));
   // The product keeps the better of the search's plan and greedy's; `alone` records the search's own figures,
   // so benchmarks and tests judge the search, not the fallback.
   const score = (next: Map<number, SlicePlacement | null>) =>

@@ -1,6 +1,8 @@
 // Parallel DE modes in worker threads: shared evaluation follows the serial run exactly, islands are
 // deterministic per seed, every plan verifies, and the pool leaves no thread behind.
+import { compareObjectiveVectors } from '../../../planner/de/fitness';
 import { InvalidOptionError } from '../../../planner/errors';
+import type { Objective } from '../../../planner/model/types';
 import { buildScenario } from '../../../planner/generate/scenario-builder';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
 import { compareObjectives } from '../../../planner/plan/evaluate-plan';
@@ -39,9 +41,12 @@ describe('parallel runner', () => {
     expect(compareObjectives(a.objective, greedy.objective)).toBeLessThanOrEqual(0);
   });
 
-  it('the trace never gets worse from one generation to the next', async () => {
+  it('the trace never gets worse from one generation to the next (in the search\'s own order)', async () => {
     const r = await planWindow(inv, window, { ...de, mode: 'islands', seed: 2, migrationInterval: 4 });
-    for (let i = 1; i < r.trace.length; i += 1) expect(compareObjectives(r.trace[i].best, r.trace[i - 1].best)).toBeLessThanOrEqual(0);
+    // The search compares objectives exactly, level by level; compareObjectives treats sums within 1e-9 as equal
+    // and may then rank a later point lower on peak utilisation, so the search's own order is the invariant here.
+    const levels = (o: Objective) => [o.unresolvedWeight, o.moveCost, o.usage, o.peakUtilisation];
+    for (let i = 1; i < r.trace.length; i += 1) expect(compareObjectiveVectors(levels(r.trace[i].best), levels(r.trace[i - 1].best))).toBeLessThanOrEqual(0);
   });
 
   it('splits the total population across islands of at least 4', () => {
