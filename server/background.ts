@@ -1,6 +1,5 @@
 // Background services the server process runs besides HTTP: the job queue (pg-boss), its workers when
 // WORKER_IN_PROCESS is on, and the local SMTP sink when SMTP_URL=sink. `npm run worker` uses startWorkers alone.
-// OWNERS (this session): plan queue/worker = helper A1; SMTP sink + mail worker = helper B1.
 import type PgBoss from 'pg-boss';
 import type { Db } from '../db/client';
 import type { ServerConfig } from './env';
@@ -31,7 +30,7 @@ async function registerWorkers(boss: PgBoss, deps: BackgroundDeps, sinkPort?: nu
     heartbeatStaleSeconds: deps.config.planHeartbeatStaleSeconds, expireMarginSeconds: deps.config.planExpireMarginSeconds,
   });
   const stoppers: Stopper[] = [() => plans.stop()];
-  // Mail (helper B1): to the in-process sink's actual port when there is one, else as configured.
+  // Mail: to the in-process sink's actual port when there is one, else as configured.
   const mail = await registerMailWorker(boss, { db: deps.db, config: deps.config, sinkPort });
   stoppers.push(() => mail.stop());
   return stoppers;
@@ -66,7 +65,7 @@ async function withBoss(deps: BackgroundDeps, setUp: (boss: PgBoss, stoppers: St
 /** For the API process: the queue routes send to, plus the workers when config.workerInProcess. */
 export function startBackground(deps: BackgroundDeps): Promise<Background> {
   return withBoss(deps, async (boss, stoppers) => {
-    // SMTP sink (helper B1): before the workers, so the mail worker is given the port the sink got.
+    // SMTP sink: before the workers, so the mail worker is given the port the sink got.
     const sink = await startSinkIfConfigured(deps.config, deps.db, deps.log);
     if (sink) stoppers.push(() => sink.stop());
     if (deps.config.workerInProcess) stoppers.unshift(...(await registerWorkers(boss, deps, sink?.port)));

@@ -17,7 +17,7 @@ export interface ExactOutcome {
   exact: { optimal: boolean; gap: number; bound: number };
 }
 
-/** 'exact' mode's solver (P3's exactPlan behind an adapter), injected so the DE code does not load HiGHS. */
+/** 'exact' mode's solver (exactPlan behind an adapter), injected so the DE code does not load HiGHS. */
 export type ExactSolver = (problem: RemapProblem, options: { timeLimitMs: number }) => Promise<ExactOutcome>;
 
 export interface PlanOptions {

@@ -1,5 +1,5 @@
 // One plan run's computation, without the database: the DE re-mapper (serial or islands), the greedy and — on
-// small windows — the exact reference for the same window, and the review built from them. A1's worker runs it
+// small windows — the exact reference for the same window, and the review built from them. The plan worker runs it
 // in a worker thread and stores what it returns; progress goes out through the callback.
 import { InvalidOptionError } from '../../planner/errors';
 import { buildInventory, compileWindow } from '../../planner/model/build-inventory';
