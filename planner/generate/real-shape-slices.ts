@@ -5,7 +5,7 @@ import type { ScenarioFunction, ScenarioSlice, ScenarioTie } from '../../shared/
 import type { NetworkModel } from '../model/types';
 import { shortestLatencyPath } from '../paths/shortest-path';
 import { randomInt, type Rng } from '../random/rng';
-import { neighbourhood, placementOf, type LoadedSlices } from './slice-loader';
+import { neighbourhood, placementOf, round, tieEnds, type LoadedSlices } from './slice-loader';
 
 export interface RealShapeSliceOptions {
   count: number;
@@ -39,7 +39,6 @@ const SSTS = [1, 2, 3, 4];
 
 type Options = RealShapeSliceOptions & typeof REAL_SHAPE_SLICE_DEFAULTS;
 
-const round = (x: number, digits: number) => Math.round(x * 10 ** digits) / 10 ** digits;
 const ceil = (x: number, digits: number) => Math.ceil(x * 10 ** digits) / 10 ** digits;
 
 /** Home first, then sites within two hops, distinct where the neighbourhood allows. */
@@ -67,13 +66,6 @@ function makeFunctions(id: string, sites: number[], net: NetworkModel, rng: Rng,
     if (i === 0 && rng() < o.fixedShare) f.fixed = true;
     return f;
   });
-}
-
-function tieEnds(count: number, rng: Rng): [number, number][] {
-  const ends: [number, number][] = [];
-  for (let i = 1; i < count; i += 1) ends.push([i - 1, i]);
-  if (count >= 3 && rng() < 0.3) ends.push([0, count - 1]);
-  return ends;
 }
 
 function makeTie(id: string, from: ScenarioFunction, to: ScenarioFunction, spans: number[], latencyMs: number, net: NetworkModel, rng: Rng, o: Options): ScenarioTie {

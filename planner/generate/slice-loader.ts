@@ -52,7 +52,7 @@ function pathAvailability(net: NetworkModel, spans: number[]): number {
   return spans.reduce((a, s) => a * net.spans[s].availability, 1);
 }
 
-function round(x: number, digits: number): number {
+export function round(x: number, digits: number): number {
   const f = 10 ** digits;
   return Math.round(x * f) / f;
 }
@@ -69,7 +69,8 @@ function makeFunctions(id: string, count: number, rng: Rng, opts: SliceLoaderOpt
   });
 }
 
-function tieEnds(count: number, rng: Rng): [number, number][] {
+/** Ties in a chain f1–f2–…, and now and then one closing the ring (three functions or more). */
+export function tieEnds(count: number, rng: Rng): [number, number][] {
   const ends: [number, number][] = [];
   for (let i = 1; i < count; i += 1) ends.push([i - 1, i]);
   if (count >= 3 && rng() < 0.3) ends.push([0, count - 1]);
