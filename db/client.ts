@@ -5,6 +5,12 @@ import * as schema from './schema';
 
 export type Db = NodePgDatabase<typeof schema>;
 
+/** An open transaction on a Db. */
+export type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
+
+/** A pool-backed database or an open transaction: what every query function takes. */
+export type Queryable = Db | Tx;
+
 export function createDb(url: string, options: { max?: number } = {}): { db: Db; pool: pg.Pool } {
   const pool = new pg.Pool({ connectionString: url, max: options.max ?? 10 });
   return { db: drizzle(pool, { schema }), pool };

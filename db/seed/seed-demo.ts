@@ -10,7 +10,7 @@ import { scenarioRows } from './scenario-rows';
 import { windowShiftMs } from './shift-windows';
 import { seedDemoUsers } from './seed-users';
 import { DEMO_USERS, pickDemoTenantId } from './demo-users';
-import type { Tx } from './tx';
+import type { Tx } from '../client';
 
 
 /** Rows newly written per table (0 everywhere on a repeat run). */

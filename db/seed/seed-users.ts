@@ -3,7 +3,7 @@ import { hash } from '@node-rs/argon2';
 import { and, eq, inArray, isNull } from 'drizzle-orm';
 import { users, passwordCredentials, roleGrants } from '../schema';
 import { DEMO_PASSWORD, DEMO_USERS } from './demo-users';
-import type { Tx } from './tx';
+import type { Tx } from '../client';
 
 /** Creates the demo users that are missing (hashing only for those); returns how many were new. */
 export async function seedDemoUsers(tx: Tx, tenantId: string | null): Promise<number> {

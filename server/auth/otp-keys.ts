@@ -4,7 +4,7 @@ import QRCode from 'qrcode';
 import { userOtpKeys } from '../../db/schema';
 import type { OtpEnrolment, OtpStatus } from '../../shared/signoff';
 import { insertAuditEntry } from '../queries/audit';
-import type { Queryable } from '../queries/windows/window-rows';
+import type { Queryable } from '../../db/client';
 import { checkOtpCode, decodeOtpKey, encodeOtpKey, newOtpKey, otpKeyUri } from './otp';
 import {
   OtpAlreadyEnrolledError, OtpCodeInvalidError, OtpCodeReplayedError, OtpNotEnrolledError, OtpNotStartedError,

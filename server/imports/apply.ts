@@ -2,7 +2,7 @@
 import { eq, sql } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { imports } from '../../db/schema';
-import type { Tx } from '../../db/seed/tx';
+import type { Tx } from '../../db/client';
 import type { ImportApplied, ImportPreview } from '../../shared/imports';
 import { AppError } from '../errors';
 import { insertAuditEntry } from '../queries/audit';

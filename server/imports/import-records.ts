@@ -3,7 +3,7 @@ import { desc, eq } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { imports } from '../../db/schema';
 import type { ImportDetail, ImportPreview, ImportSummary } from '../../shared/imports';
-import type { Queryable } from '../queries/inventory/scenario-tables';
+import type { Queryable } from '../../db/client';
 
 export type ImportRow = typeof imports.$inferSelect;
 

@@ -2,7 +2,7 @@
 import type { ImportIssue, ImportKind, ImportPreview } from '../../shared/imports';
 import type { Scenario } from '../../shared/scenario';
 import { validateScenario } from '../../shared/scenario-validate';
-import type { Queryable } from '../queries/inventory/scenario-tables';
+import type { Queryable } from '../../db/client';
 import { loadScenario } from '../services/inventory/load-scenario';
 import { scenarioChecksum } from './canonical';
 import { decodeUpload } from './decode-upload';

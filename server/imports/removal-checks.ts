@@ -1,6 +1,6 @@
 // Removals the target would make but must not: elements that placements or open windows still use, tenants with accounts.
 import { and, eq, inArray, notInArray } from 'drizzle-orm';
-import type { Queryable } from '../queries/inventory/scenario-tables';
+import type { Queryable } from '../../db/client';
 import { users, windowElements, windows } from '../../db/schema';
 import type { ImportIssue } from '../../shared/imports';
 import type { Scenario } from '../../shared/scenario';

@@ -1,7 +1,7 @@
 // Writes a diff inside an open transaction: upserts, slice bodies, new placement revisions, then deletions.
 import { getTableColumns, inArray, sql, max, and, eq } from 'drizzle-orm';
 import type { PgColumn, PgTable, PgUpdateSetSource } from 'drizzle-orm/pg-core';
-import type { Tx } from '../../db/seed/tx';
+import type { Tx } from '../../db/client';
 import { scenarioRows } from '../../db/seed/scenario-rows';
 import { networkMeta, placements, sites, sliceFunctions, slices, sliceTies, spans, tenants } from '../../db/schema';
 import type { Scenario } from '../../shared/scenario';

@@ -1,7 +1,7 @@
 // Every placement revision of one slice, newest first.
 import { desc, eq } from 'drizzle-orm';
 import { placements } from '../../../db/schema';
-import type { Queryable } from './scenario-tables';
+import type { Queryable } from '../../../db/client';
 
 export async function listPlacementRevisions(db: Queryable, { sliceId }: { sliceId: string }) {
   return db.select({

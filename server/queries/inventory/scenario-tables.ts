@@ -1,13 +1,10 @@
 // Reads every inventory table needed to rebuild the current scenario (current placements only).
 import { eq } from 'drizzle-orm';
-import type { Db } from '../../../db/client';
-import type { Tx } from '../../../db/seed/tx';
+import type { Queryable } from '../../../db/client';
 import {
   networkMeta, placements, sites, sliceFunctions, sliceTies, slices, spans, tenants,
 } from '../../../db/schema';
 
-/** A pool-backed database or an open transaction (an import's apply reads inside its own). */
-export type Queryable = Db | Tx;
 
 export const NETWORK_META_ID = 'network';
 

@@ -1,8 +1,8 @@
 // A window's method-of-procedure document (bytes kept in PostgreSQL; one per window).
 import { eq } from 'drizzle-orm';
-import type { Tx } from '../../../db/seed/tx';
+import type { Tx } from '../../../db/client';
 import { windowDocuments } from '../../../db/schema';
-import type { Queryable } from './window-rows';
+import type { Queryable } from '../../../db/client';
 
 export type MopWrite = { windowId: string; fileName: string; mime: string; content: Buffer; uploadedBy: string; uploadedAt: Date };
 

@@ -1,7 +1,7 @@
 // Which of a window's element ids exist in the network.
 import { inArray } from 'drizzle-orm';
 import { sites, spans } from '../../../db/schema';
-import type { Queryable } from './window-rows';
+import type { Queryable } from '../../../db/client';
 
 /** The given elements that name no site/span, as "site x" / "span y" in input order. */
 export async function findUnknownElements(db: Queryable, elements: { kind: 'site' | 'span'; id: string }[]): Promise<string[]> {

@@ -1,8 +1,8 @@
 // Freeze periods: list, overlap look-up for bookings, and admin writes.
 import { and, asc, eq, gt, lt } from 'drizzle-orm';
-import type { Tx } from '../../../db/seed/tx';
+import type { Tx } from '../../../db/client';
 import { freezes } from '../../../db/schema';
-import type { Queryable } from './window-rows';
+import type { Queryable } from '../../../db/client';
 
 export type FreezeRow = typeof freezes.$inferSelect;
 

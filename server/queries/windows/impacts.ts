@@ -1,9 +1,9 @@
 // The stored impact of a window (one row per window, replaced on each assessment).
 import { eq } from 'drizzle-orm';
-import type { Tx } from '../../../db/seed/tx';
+import type { Tx } from '../../../db/client';
 import { windowImpacts } from '../../../db/schema';
 import type { WindowImpact } from '../../../shared/window-impact';
-import type { Queryable } from './window-rows';
+import type { Queryable } from '../../../db/client';
 
 export async function upsertWindowImpact(tx: Tx, impact: WindowImpact): Promise<void> {
   const row = { windowId: impact.windowId, windowVersion: impact.windowVersion, computedAt: new Date(impact.computedAt), impact };

@@ -1,9 +1,9 @@
 // Policies: stored overrides merged over the defaults in shared/policies.ts.
 import { inArray, sql } from 'drizzle-orm';
-import type { Tx } from '../../../db/seed/tx';
+import type { Tx } from '../../../db/client';
 import { policies } from '../../../db/schema';
 import { POLICY_DEFAULTS, policiesSchema, type Policies, type PoliciesPatch } from '../../../shared/policies';
-import type { Queryable } from './window-rows';
+import type { Queryable } from '../../../db/client';
 
 export async function getPolicies(db: Queryable): Promise<Policies> {
   const keys = Object.keys(POLICY_DEFAULTS);

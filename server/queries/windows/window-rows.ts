@@ -1,12 +1,10 @@
 // Reads windows with their elements, owner, MOP details and stored-impact flag; writes the window row itself.
 import { and, asc, eq, gt, inArray, lt, ne, sql, type SQL } from 'drizzle-orm';
-import type { Db } from '../../../db/client';
-import type { Tx } from '../../../db/seed/tx';
+import type { Queryable, Tx } from '../../../db/client';
 import { users, windowDocuments, windowElements, windowImpacts, windows } from '../../../db/schema';
 import type { WindowStatus } from '../../../shared/windows';
 import { windowTouchesTenant } from './tenant-footprint';
 
-export type Queryable = Db | Tx;
 
 export type WindowFilter = {
   ids?: string[];

@@ -3,7 +3,8 @@ import { buildInventory } from '../../../planner/model/build-inventory';
 import type { Inventory } from '../../../planner/model/types';
 import { placementLoad } from '../../../planner/model/window-capacity';
 import type { Scenario, ScenarioSite, ScenarioSlice, ScenarioSpan } from '../../../shared/scenario';
-import { selectScenarioTables, type Queryable, type ScenarioTables } from '../../queries/inventory/scenario-tables';
+import { selectScenarioTables, type ScenarioTables } from '../../queries/inventory/scenario-tables';
+import type { Queryable } from '../../../db/client';
 import { tablesToScenario } from './load-scenario';
 import { buildUseIndex, type UseIndex } from './slice-uses';
 

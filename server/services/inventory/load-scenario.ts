@@ -4,7 +4,8 @@ import type { Inventory } from '../../../planner/model/types';
 import {
   outlineSchema, SCENARIO_FORMAT, type Scenario, type ScenarioFunction, type ScenarioSlice, type ScenarioTie,
 } from '../../../shared/scenario';
-import { selectScenarioTables, type Queryable, type ScenarioTables } from '../../queries/inventory/scenario-tables';
+import { selectScenarioTables, type ScenarioTables } from '../../queries/inventory/scenario-tables';
+import type { Queryable } from '../../../db/client';
 
 // One collator for every comparison: localeCompare with options builds a new one per call (slow at thousands).
 const natural = new Intl.Collator('en', { numeric: true });

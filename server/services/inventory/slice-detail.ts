@@ -4,7 +4,7 @@ import {
   elementAvailability, spanLatencyMs, type ScenarioPlacement, type ScenarioTie,
 } from '../../../shared/scenario';
 import { listPlacementRevisions } from '../../queries/inventory/placement-history';
-import type { Queryable } from '../../queries/inventory/scenario-tables';
+import type { Queryable } from '../../../db/client';
 import { InventoryNotFoundError } from './errors';
 import type { InventoryView } from './inventory-view';
 import { sliceRowBuilder } from './slice-rows';

@@ -4,7 +4,7 @@
 import { eq } from 'drizzle-orm';
 import { notices } from '../../../db/schema';
 import { DEFAULT_TENANT_TIME_ZONE } from '../../../shared/notices';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { setWindowStatus } from '../windows/set-window-status';
 import { composeNotice } from './compose-notice';
 import { NoticeStateError } from './errors';

@@ -4,7 +4,7 @@ import { and, eq } from 'drizzle-orm';
 import type { Db } from '../../../db/client';
 import { notices, windows } from '../../../db/schema';
 import { noticeContentSchema } from '../../../shared/notices';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { NoticeStateError } from './errors';
 import { markNotified } from './issue-notices';
 import { auditNotice, stateOf } from './notice-audit';

@@ -1,6 +1,6 @@
 // Audit rows for notices: who changed which notice, from what to what.
 import { insertAuditEntry } from '../../queries/audit';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 
 type NoticeState = { status: string; method: string; sequence: number; [key: string]: unknown };
 

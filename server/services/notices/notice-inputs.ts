@@ -5,7 +5,7 @@ import { plans, sites, sliceFunctions, sliceTies, slices, spans, tenants, users,
 import { planReviewSchema, planSettingsSchema, type PlanSlice } from '../../../shared/plans';
 import { spanLatencyMs } from '../../../shared/scenario';
 import { getPolicies } from '../../queries/windows/policies';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { NoticeStateError } from './errors';
 import type { NoticeLookups } from './slice-wording';
 

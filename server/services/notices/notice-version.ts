@@ -6,7 +6,7 @@ import { notices } from '../../../db/schema';
 import type { NoticeContent, NoticeMethod } from '../../../shared/notices';
 import type { ServerConfig } from '../../env';
 import type { JobQueue } from '../../jobs/queue';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { buildNoticeIcs } from './notice-ics';
 import { noticeBody, noticeSubject } from './render-notice';
 

@@ -4,7 +4,8 @@ import { notices, tenants, users, windows } from '../../../db/schema';
 import {
   DEFAULT_TENANT_TIME_ZONE, noticeContentSchema, type Notice, type NoticeStatusRow, type PortalWork,
 } from '../../../shared/notices';
-import { selectWindowRows, type Queryable } from '../../queries/windows/window-rows';
+import { selectWindowRows } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { summaryOf } from './compose-notice';
 import { NoticeNotFoundError } from './errors';
 import { loadTenants } from './notice-inputs';

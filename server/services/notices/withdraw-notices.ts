@@ -3,7 +3,7 @@
 import { and, eq } from 'drizzle-orm';
 import { notices } from '../../../db/schema';
 import { noticeContentSchema } from '../../../shared/notices';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { auditNotice, stateOf } from './notice-audit';
 import { loadTenants } from './notice-inputs';
 import { queueNoticeMail, storeNoticeVersion, type NoticeDeps } from './notice-version';

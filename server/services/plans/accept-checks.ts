@@ -3,7 +3,7 @@
 import { verifyPlan } from '../../../planner/verify/verify-plan';
 import type { PlacementView, PlanReview, PlanSlice } from '../../../shared/plans';
 import type { Scenario } from '../../../shared/scenario';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { loadInventory } from '../inventory/load-scenario';
 import { windowSpecOf } from '../windows/compute-impact';
 import { loadWindow } from '../windows/window-view';

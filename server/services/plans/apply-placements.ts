@@ -5,7 +5,7 @@ import { placements, windows } from '../../../db/schema';
 import { planReviewSchema, planSettingsSchema, type PlacementView, type PlanSlice } from '../../../shared/plans';
 import type { WindowStatus } from '../../../shared/windows';
 import { insertAuditEntry } from '../../queries/audit';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { selectPlanRow } from './plan-rows';
 
 type Change = { windowId: string; from: WindowStatus; to: WindowStatus; actorId: string | null; now: Date };

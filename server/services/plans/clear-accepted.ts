@@ -2,7 +2,7 @@
 // the run itself stays listed (stale) for comparison.
 import { eq } from 'drizzle-orm';
 import { windows } from '../../../db/schema';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 
 /** Returns the plan id that was accepted, or null. */
 export async function clearAcceptedPlan(tx: Queryable, windowId: string): Promise<string | null> {

@@ -1,6 +1,6 @@
 // Reads plans in API shape: one run with its review, or a window's runs newest first.
 import type { Plan, PlanListItem } from '../../../shared/plans';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { PlanNotFoundError } from './errors';
 import { selectPlanRow, selectPlanRowsByWindow } from './plan-rows';
 import { selectWindowFacts, toPlan, toPlanListItem } from './plan-view';

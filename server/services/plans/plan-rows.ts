@@ -2,7 +2,7 @@
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import { plans } from '../../../db/schema';
 import type { PlanRunStatus, PlanSettings } from '../../../shared/plans';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 
 const planColumns = {
   id: plans.id, windowId: plans.windowId, windowVersion: plans.windowVersion, status: plans.status,

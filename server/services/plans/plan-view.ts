@@ -5,7 +5,7 @@ import {
   planProgressSchema, planReviewSchema, planSettingsSchema, type Plan, type PlanListItem,
 } from '../../../shared/plans';
 import type { WindowStatus } from '../../../shared/windows';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { WindowNotFoundError } from '../windows/errors';
 import type { PlanRow } from './plan-rows';
 

@@ -7,7 +7,8 @@ import type { Inventory, Reservation, SlicePlan } from '../../../planner/model/t
 import type { PlanSlice } from '../../../shared/plans';
 import { ACTIVE_WINDOW_STATUSES } from '../../../shared/windows';
 import { loadInventory } from '../inventory/load-scenario';
-import { selectElementsByWindow, type Queryable } from '../../queries/windows/window-rows';
+import { selectElementsByWindow } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { windowSpecOf } from '../windows/compute-impact';
 import { WindowNotFoundError } from '../windows/errors';
 

@@ -8,7 +8,7 @@ import { withOtpAttempt } from '../../auth/otp-attempts';
 import { spendOtpCode } from '../../auth/otp-keys';
 import { insertAuditEntry } from '../../queries/audit';
 import { getPolicies } from '../../queries/windows/policies';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { issueNotices } from '../notices/issue-notices';
 import { setWindowStatus } from '../windows/set-window-status';
 import { AlreadyDecidedError, NoAcceptedPlanError, NotInReviewError, SelfSignoffError } from './errors';

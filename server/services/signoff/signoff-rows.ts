@@ -4,7 +4,7 @@ import { plans, roleGrants, signoffs, users, windows } from '../../../db/schema'
 import { planReviewSchema, type PlanReview } from '../../../shared/plans';
 import type { Policies } from '../../../shared/policies';
 import { riskClassOf, type RiskClass, type SignoffDecisionView } from '../../../shared/signoff';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { WindowNotFoundError } from '../windows/errors';
 
 export type SignoffWindow = {

@@ -3,7 +3,8 @@ import { inArray } from 'drizzle-orm';
 import { sites, spans, tenants } from '../../../db/schema';
 import type { PlanReview } from '../../../shared/plans';
 import type { SignoffSummary } from '../../../shared/signoff';
-import type { ElementRow, Queryable } from '../../queries/windows/window-rows';
+import type { ElementRow } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 
 const SEVERITY_RANK = { low: 0, medium: 1, high: 2, critical: 3 } as const;
 /** A phone screen shows a handful; the full plan (one tap away) lists every slice's risk. */

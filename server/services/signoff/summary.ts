@@ -6,7 +6,8 @@ import type { Me } from '../../../shared/api';
 import type { SignoffQueue, SignoffQueueItem, SignoffSummary } from '../../../shared/signoff';
 import { getPolicies } from '../../queries/windows/policies';
 import { getWindowDocument } from '../../queries/windows/documents';
-import { selectElementsByWindow, type Queryable } from '../../queries/windows/window-rows';
+import { selectElementsByWindow } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { SignoffNotFoundError } from './errors';
 import {
   countApprovals, hasDecided, isOwnWork, listDecisions, loadSignoffContext, quorumFor, riskOfContext, usersByIds,

@@ -5,7 +5,8 @@ import type { WindowElementInput } from '../../../shared/windows';
 import { findUnknownElements } from '../../queries/windows/elements';
 import { overlappingFreezes } from '../../queries/windows/freezes';
 import { getPolicies } from '../../queries/windows/policies';
-import type { ElementRow, Queryable } from '../../queries/windows/window-rows';
+import type { ElementRow } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { FreezeConflictError, UnknownElementsError, WindowInputError } from './errors';
 
 export type BookingCheck = {

@@ -5,8 +5,9 @@ import type { Inventory } from '../../../planner/model/types';
 import type { WindowConflict } from '../../../shared/window-impact';
 import { ACTIVE_WINDOW_STATUSES, type WindowStatus } from '../../../shared/windows';
 import {
-  selectActiveOverlapping, selectElementsByWindow, selectWindowRows, type ElementRow, type Queryable,
+  selectActiveOverlapping, selectElementsByWindow, selectWindowRows, type ElementRow,
 } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { loadInventory } from '../inventory/load-scenario';
 import { outageOf, pairConflictReasons, strandMessage, type Outage } from './pair-conflicts';
 

@@ -4,7 +4,7 @@ import { and, eq, inArray, sql } from 'drizzle-orm';
 import { windows } from '../../../db/schema';
 import type { WindowStatus } from '../../../shared/windows';
 import { insertAuditEntry } from '../../queries/audit';
-import type { Queryable } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { IllegalTransitionError } from './errors';
 
 export interface StatusChange {

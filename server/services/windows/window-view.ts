@@ -2,8 +2,9 @@
 import type { Window, WindowStatus } from '../../../shared/windows';
 import { durationHours } from '../../../shared/window-checks';
 import {
-  selectElementsByWindow, selectWindowRows, type ElementRow, type Queryable, type WindowFilter, type WindowRow,
+  selectElementsByWindow, selectWindowRows, type ElementRow, type WindowFilter, type WindowRow,
 } from '../../queries/windows/window-rows';
+import type { Queryable } from '../../../db/client';
 import { conflictsByWindow } from './conflicts';
 import { WindowNotFoundError } from './errors';
 
