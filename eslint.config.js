@@ -1,6 +1,7 @@
 // ESLint: TypeScript rules plus the folder import rules from DEVELOPERS.md ("Architecture").
 const tseslint = require('typescript-eslint');
 const globals = require('globals');
+const reactHooks = require('eslint-plugin-react-hooks');
 
 const nodeBuiltins = ['node:*', 'fs', 'path', 'os', 'child_process', 'worker_threads', 'http', 'net', 'crypto'];
 const pattern = (group, message) => ({ group, message });
@@ -57,5 +58,11 @@ module.exports = tseslint.config(
     // The worker wrapper and the command line are planner's only doors to the outside world.
     files: ['planner/workers/**/*.ts', 'planner/cli/**/*.ts'],
     rules: { 'no-restricted-imports': ['error', { patterns: [rules['planner/**'][0]] }] },
+  },
+  {
+    // Hooks called out of order, or effects missing a dependency, show stale data without any error.
+    files: ['app/**/*.{ts,tsx}', 'components/**/*.{ts,tsx}', 'hooks/**/*.{ts,tsx}'],
+    plugins: { 'react-hooks': reactHooks },
+    rules: { 'react-hooks/rules-of-hooks': 'error', 'react-hooks/exhaustive-deps': 'error' },
   },
 );
