@@ -5,7 +5,7 @@ import { colors, radii, space, type } from '@/constants/theme';
 
 type Props = { title: string; uses: readonly SliceUse[]; emptyText: string; onOpenSlice?: (sliceId: string) => void };
 
-function useSummary(use: SliceUse): string {
+function summaryOfUse(use: SliceUse): string {
   const parts: string[] = [];
   if (use.functions.length > 0) {
     const cpu = use.functions.reduce((sum, f) => sum + f.cpu, 0);
@@ -39,7 +39,7 @@ export function MapSliceUses({ title, uses, emptyText, onOpenSlice }: Props) {
             {use.critical ? <Text style={styles.critical}>critical</Text> : null}
           </View>
           <Text style={styles.muted} numberOfLines={1}>{use.tenantName}</Text>
-          <Text style={styles.muted}>{useSummary(use)}</Text>
+          <Text style={styles.muted}>{summaryOfUse(use)}</Text>
         </Pressable>
       ))}
     </View>
