@@ -1,30 +1,11 @@
-// What routes and services may ask of the job queue. pg-boss sits behind it (server/jobs/boss-queue.ts);
-// tests without a worker can pass their own.
+// The job queue the app hands to routes and services: both service ports in one. pg-boss sits behind it
+// (server/jobs/boss-queue.ts); tests without a worker can pass their own.
+import type { MailJob, MailQueue, PlanQueue } from '../services/ports';
 
-/** One e-mail to send through the queue (retried on failure). */
-export interface MailJob {
-  to: string[];
-  subject: string;
-  text: string;
-  /** iCalendar invitation: sent as a text/calendar alternative with its METHOD, and as an .ics attachment */
-  calendar?: { method: 'REQUEST' | 'CANCEL'; content: string; filename: string };
-  /** set for tenant notices: the worker records sending state and errors on this row */
-  noticeId?: string;
-  /**
-   * The notice version this mail carries (notices.sequence). Notices are queued inside the transaction that
-   * writes them, so the worker sends only once that version is committed, and never a superseded one.
-   */
-  noticeSequence?: number;
-}
+export type { MailJob };
 
-export interface JobQueue {
-  /** Enqueues a plan run (plans.id); returns the queue's job id. */
-  sendPlanRun(planId: string, options: { expireInSeconds: number }): Promise<string>;
-  /** Cancels a queued or running plan run's job (the worker stops the computation). */
-  cancelPlanRun(jobId: string): Promise<void>;
-  /** Enqueues one e-mail; returns the queue's job id. */
-  sendMail(job: MailJob): Promise<string>;
-}
+/** Both queues the services ask for (server/services/ports.ts), in one. */
+export interface JobQueue extends PlanQueue, MailQueue {}
 
 export const QUEUES = {
   planRun: 'plan-run',

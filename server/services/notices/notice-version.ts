@@ -5,12 +5,12 @@ import { eq } from 'drizzle-orm';
 import { notices } from '../../../db/schema';
 import type { NoticeContent, NoticeMethod } from '../../../shared/notices';
 import type { ServerConfig } from '../../env';
-import type { JobQueue } from '../../jobs/queue';
 import type { Queryable } from '../../../db/client';
+import type { MailQueue } from '../ports';
 import { buildNoticeIcs } from './notice-ics';
 import { noticeBody, noticeSubject } from './render-notice';
 
-export type NoticeDeps = { jobs: JobQueue; config: ServerConfig; now: Date };
+export type NoticeDeps = { jobs: MailQueue; config: ServerConfig; now: Date };
 
 export type NoticeVersion = {
   id: string; uid: string; sequence: number; method: NoticeMethod; content: NoticeContent; recipients: string[];

@@ -1,12 +1,12 @@
 // Cancels a queued or running plan run: the row says `cancelled` at once; the worker stops when it sees that.
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
-import type { JobQueue } from '../../jobs/queue';
 import { insertAuditEntry } from '../../queries/audit';
+import type { PlanQueue } from '../ports';
 import { PlanNotCancellableError, PlanNotFoundError } from './errors';
 import { endPlanRun, selectPlanRow } from './plan-rows';
 
-export async function cancelPlan(deps: { db: Db; jobs: JobQueue; now: Date }, planId: string, user: Me): Promise<void> {
+export async function cancelPlan(deps: { db: Db; jobs: PlanQueue; now: Date }, planId: string, user: Me): Promise<void> {
   const { db, now } = deps;
   const jobId = await db.transaction(async (tx) => {
     const row = await selectPlanRow(tx, planId, { forUpdate: true });

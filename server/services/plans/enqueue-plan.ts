@@ -7,7 +7,7 @@ import type { Me } from '../../../shared/api';
 import type { PlanSettings } from '../../../shared/plans';
 import type { WindowStatus } from '../../../shared/windows';
 import type { ServerConfig } from '../../env';
-import type { JobQueue } from '../../jobs/queue';
+import type { PlanQueue } from '../ports';
 import { insertAuditEntry } from '../../queries/audit';
 import { ImpactNotCurrentError, QueueUnavailableError, UnknownPlanInputsError, WindowNotPlannableError } from './errors';
 import { planExpireSeconds } from './expire';
@@ -17,7 +17,7 @@ import { selectWindowFacts } from './plan-view';
 /** States in which a window's plans may be run and accepted. */
 export const PLANNABLE: readonly WindowStatus[] = ['assessed', 'planned', 'returned'];
 
-export type EnqueueDeps = { db: Db; jobs: JobQueue; config: ServerConfig; now: Date };
+export type EnqueueDeps = { db: Db; jobs: PlanQueue; config: ServerConfig; now: Date };
 
 export const newPlanId = () => `pl-${randomBytes(9).toString('base64url')}`;
 

@@ -1,6 +1,6 @@
 // The e-mails of sign-off: a request to every approver, and a send-back to the planner; sent after the commit.
 import type { ServerConfig } from '../../env';
-import type { JobQueue, MailJob } from '../../jobs/queue';
+import type { MailJob, MailQueue } from '../ports';
 import type { SignoffWindow } from './signoff-rows';
 
 const when = (w: SignoffWindow) => `${w.startsAt.toISOString().replace('T', ' ').slice(0, 16)} – ${w.endsAt.toISOString().replace('T', ' ').slice(0, 16)} UTC`;
@@ -31,7 +31,7 @@ export function sendBackMail(config: ServerConfig, w: SignoffWindow, approverNam
 }
 
 /** One mail per recipient, so one bad address does not hold up the others; returns how many were queued. */
-export async function queueMails(jobs: JobQueue, make: (to: string[]) => MailJob, recipients: string[], log: (e: unknown) => void): Promise<number> {
+export async function queueMails(jobs: MailQueue, make: (to: string[]) => MailJob, recipients: string[], log: (e: unknown) => void): Promise<number> {
   let queued = 0;
   for (const to of [...new Set(recipients)]) {
     try {

@@ -1,13 +1,15 @@
 // Submit for sign-off (planner): an accepted plan goes to the change board; every approver gets an e-mail.
 import type { Me } from '../../../shared/api';
 import type { SignoffSubmitResult } from '../../../shared/signoff';
-import type { RouteDeps } from '../../routes/deps';
+import type { Db } from '../../../db/client';
+import type { ServerConfig } from '../../env';
+import type { MailQueue } from '../ports';
 import { setWindowStatus } from '../windows/set-window-status';
 import { NoAcceptedPlanError } from './errors';
 import { listApprovers, loadSignoffContext, riskOfContext } from './signoff-rows';
 import { queueMails, signoffRequestMail } from './signoff-mail';
 
-export type SignoffDeps = Pick<RouteDeps, 'db' | 'config' | 'jobs'> & { now: Date; log?: (message: string, err: unknown) => void };
+export type SignoffDeps = { db: Db; config: ServerConfig; jobs: MailQueue; now: Date; log?: (message: string, err: unknown) => void };
 
 /** Where a mail that could not be queued is reported (the decision itself stands). */
 export const logOf = (deps: SignoffDeps) => deps.log ?? ((message: string, err: unknown) => console.error(`[signoff] ${message}`, err));
