@@ -80,7 +80,8 @@ export function buildInventory(scenario: Scenario): Inventory {
 }
 
 /** Scenario window → WindowSpec; ids are kept (checked when the window is used against an inventory). */
-export function compileWindow(w: ScenarioWindow): WindowSpec {
+/** The planner's WindowSpec of a scenario window (title and work type are not needed, so callers may omit them). */
+export function compileWindow(w: Pick<ScenarioWindow, 'id' | 'start' | 'end' | 'down' | 'reduced'>): WindowSpec {
   const durationHours = (Date.parse(w.end) - Date.parse(w.start)) / MS_PER_HOUR;
   const spec: WindowSpec = {
     id: w.id,

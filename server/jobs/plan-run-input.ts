@@ -3,28 +3,16 @@
 import type { Db } from '../../db/client';
 import { buildInventory } from '../../planner/model/build-inventory';
 import { planSettingsSchema } from '../../shared/plans';
-import type { ScenarioWindow } from '../../shared/scenario';
 import { loadScenario } from '../services/inventory/load-scenario';
 import type { PlanRow } from '../services/plans/plan-rows';
 import { reservationsFor } from '../services/plans/reservations';
 import { WindowNotFoundError } from '../services/windows/errors';
 import { loadWindow, type LoadedWindow } from '../services/windows/window-view';
+import { scenarioWindowOf } from '../services/windows/window-spec';
 import type { PlanThreadInput } from './plan-thread-protocol';
 
 /** The run cannot succeed as requested; its message is shown to the planner as the run's error. */
 export class RunRefusedError extends Error {}
-
-/** The window as the scenario format writes it, which is what computePlan looks the window up in. */
-export function scenarioWindowOf(w: LoadedWindow): ScenarioWindow {
-  const down = (kind: 'site' | 'span') => w.elements.filter((e) => e.kind === kind && e.effect === 'down').map((e) => e.id);
-  return {
-    id: w.id, title: w.title, start: w.startsAt.toISOString(), end: w.endsAt.toISOString(),
-    down: { sites: down('site'), spans: down('span') },
-    reduced: w.elements.filter((e) => e.effect === 'reduced').map((e) =>
-      (e.kind === 'site' ? { site: e.id, fraction: e.fraction ?? 1 } : { span: e.id, fraction: e.fraction ?? 1 })),
-    ...(w.workType ? { workType: w.workType } : {}),
-  };
-}
 
 async function loadCurrentWindow(db: Db, plan: PlanRow): Promise<LoadedWindow> {
   let w: LoadedWindow;

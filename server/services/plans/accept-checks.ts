@@ -5,7 +5,7 @@ import type { PlacementView, PlanReview, PlanSlice } from '../../../shared/plans
 import type { Scenario } from '../../../shared/scenario';
 import type { Queryable } from '../../../db/client';
 import { loadInventory } from '../inventory/load-scenario';
-import { windowSpecOf } from '../windows/compute-impact';
+import { windowSpecOf } from '../windows/window-spec';
 import { loadWindow } from '../windows/window-view';
 import { OutageNotAcceptedError, PlanNotAcceptableError } from './errors';
 import { reservationsFor, toSlicePlan } from './reservations';

@@ -9,7 +9,7 @@ import { ACTIVE_WINDOW_STATUSES } from '../../../shared/windows';
 import { loadInventory } from '../inventory/load-scenario';
 import { selectElementsByWindow } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
-import { windowSpecOf } from '../windows/compute-impact';
+import { windowSpecOf } from '../windows/window-spec';
 import { WindowNotFoundError } from '../windows/errors';
 
 export interface WindowReservations {

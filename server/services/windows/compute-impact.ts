@@ -1,26 +1,13 @@
 // A window's impact from the planner (affected slices, splits, overloads) plus per-slice risk, in API shape.
 import { assessImpact } from '../../../planner/impact/assess-impact';
-import type { Inventory, WindowSpec } from '../../../planner/model/types';
+import type { Inventory } from '../../../planner/model/types';
 import { sliceRisk } from '../../../planner/risk/slice-risk';
 import type { Scenario } from '../../../shared/scenario';
 import type { AffectedSlice, WindowImpact } from '../../../shared/window-impact';
-import { durationHours } from '../../../shared/window-checks';
 import type { ElementRow } from '../../queries/windows/window-rows';
+import { windowSpecOf } from './window-spec';
 
 export type ImpactSubject = { id: string; version: number; startsAt: Date; endsAt: Date; elements: ElementRow[] };
-
-/** The same WindowSpec compileWindow() makes from a scenario window, built from stored rows. */
-export function windowSpecOf(w: ImpactSubject): WindowSpec {
-  const down = (kind: 'site' | 'span') => w.elements.filter((e) => e.kind === kind && e.effect === 'down').map((e) => e.id);
-  return {
-    id: w.id,
-    downSites: down('site'),
-    downSpans: down('span'),
-    reduced: w.elements.filter((e) => e.effect === 'reduced').map((e) =>
-      (e.kind === 'site' ? { site: e.id, fraction: e.fraction ?? 1 } : { span: e.id, fraction: e.fraction ?? 1 })),
-    durationHours: durationHours(w.startsAt, w.endsAt),
-  };
-}
 
 export function computeWindowImpact(scenario: Scenario, inv: Inventory, w: ImpactSubject, now: Date): WindowImpact {
   const spec = windowSpecOf(w);

@@ -3,7 +3,7 @@
 import { plans, placements, sites, sliceFunctions, sliceTies, slices, spans, tenants } from '../../../db/schema';
 import { buildInventory } from '../../../planner/model/build-inventory';
 import { computePlan } from '../../../server/jobs/plan-compute';
-import { scenarioWindowOf } from '../../../server/jobs/plan-run-input';
+import { scenarioWindowOf } from '../../../server/services/windows/window-spec';
 import { loadScenario } from '../../../server/services/inventory/load-scenario';
 import { reservationsFor } from '../../../server/services/plans/reservations';
 import { loadWindow } from '../../../server/services/windows/window-view';

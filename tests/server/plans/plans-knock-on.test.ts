@@ -6,7 +6,7 @@ import type { PlanResult } from '../../../planner/model/types';
 import { buildReview } from '../../../planner/review/build-review';
 import { loadInventory } from '../../../server/services/inventory/load-scenario';
 import { reservationsFor } from '../../../server/services/plans/reservations';
-import { windowSpecOf } from '../../../server/services/windows/compute-impact';
+import { windowSpecOf } from '../../../server/services/windows/window-spec';
 import { loadWindow } from '../../../server/services/windows/window-view';
 import { planSettingsSchema, type PlanReview } from '../../../shared/plans';
 import { bookAssessed, closePlansApp, setupPlansNetwork, windowRow, type PlansContext } from './helpers';

@@ -7,7 +7,7 @@ import { fromSlicePlans } from '../../../planner/plan/slice-plans';
 import { verifyPlan } from '../../../planner/verify/verify-plan';
 import { loadInventory } from '../../../server/services/inventory/load-scenario';
 import { reservationsFor, toSlicePlan } from '../../../server/services/plans/reservations';
-import { windowSpecOf } from '../../../server/services/windows/compute-impact';
+import { windowSpecOf } from '../../../server/services/windows/window-spec';
 import { loadWindow } from '../../../server/services/windows/window-view';
 import type { PlanReview } from '../../../shared/plans';
 import { bookAssessed, closePlansApp, setupPlansNetwork, storeFinishedPlan, windowRow, type PlansContext } from './helpers';
