@@ -1,8 +1,8 @@
 // Plan-run jobs that used up their retries land on the dead-letter queue: their plans are marked failed with a
 // reason a planner can read, so no run stays `queued` or `running` for ever.
 import type { Db } from '../../db/client';
-import { endPlanRun } from '../services/plans/plan-rows';
-import { readRunState } from './plan-rows';
+import { endPlanRun } from '../queries/plans/plan-rows';
+import { readRunState } from '../queries/plans/plan-run-rows';
 
 /** pg-boss stores a thrown error as { message, … } and its own reasons as { value: … }. */
 function lastMessage(output: unknown): string | null {

@@ -2,8 +2,8 @@
 // A planner failure is stored as `failed` (retrying cannot help); anything else is thrown so the queue retries.
 import type { Db } from '../../db/client';
 import { planReviewSchema, planSettingsSchema, type PlanProgress } from '../../shared/plans';
-import { selectPlanRow, type PlanRow } from '../services/plans/plan-rows';
-import { finishDone, finishFailed, markRunning, requeue } from './plan-rows';
+import { selectPlanRow, type PlanRow } from '../queries/plans/plan-rows';
+import { finishDone, finishFailed, markRunning, requeue } from '../queries/plans/plan-run-rows';
 import { loadPlanInput, RunRefusedError } from './plan-run-input';
 import { ProgressBox, watchRun, type RunEnd, type StopReason } from './plan-run-watch';
 import { startPlanThread } from './plan-thread';

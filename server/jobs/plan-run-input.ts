@@ -1,10 +1,10 @@
 // Everything a plan run computes on, read from the database: settings, the current inventory with the window,
 // and what overlapping accepted plans reserve. Problems that a retry cannot fix are RunRefusedError.
 import type { Db } from '../../db/client';
+import type { PlanRow } from '../queries/plans/plan-rows';
 import { buildInventory } from '../../planner/model/build-inventory';
 import { planSettingsSchema } from '../../shared/plans';
 import { loadScenario } from '../services/inventory/load-scenario';
-import type { PlanRow } from '../services/plans/plan-rows';
 import { reservationsFor } from '../services/plans/reservations';
 import { WindowNotFoundError } from '../services/windows/errors';
 import { loadWindow, type LoadedWindow } from '../services/windows/window-view';

@@ -3,7 +3,7 @@
 import { setTimeout as delay } from 'node:timers/promises';
 import type { Db } from '../../db/client';
 import type { PlanProgress } from '../../shared/plans';
-import { beat, readRunState } from './plan-rows';
+import { beat, readRunState } from '../queries/plans/plan-run-rows';
 import type { PlanThread, ThreadOutcome } from './plan-thread';
 
 /** WARNING: one tick both throttles progress writes (≤ 2/s) and bounds how late a cancel is seen (≤ 0.5 s + query). */

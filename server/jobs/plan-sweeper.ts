@@ -1,13 +1,12 @@
 // Finds plan runs whose worker died (no heartbeat for a while) and hands them back to the queue at once, rather
 // than waiting for pg-boss to expire the job (time limit × 3 + minutes of headroom). The expiry stays as the
 // backstop. Every worker sweeps; the guarded UPDATE lets only one of them take a given run back.
-import { and, eq, lt, sql } from 'drizzle-orm';
 import type PgBoss from 'pg-boss';
 import type { Db } from '../../db/client';
-import { plans } from '../../db/schema';
 import { planSettingsSchema } from '../../shared/plans';
 import { planExpireSeconds } from '../services/plans/expire';
-import { endPlanRun, setPlanJobId } from '../services/plans/plan-rows';
+import { endPlanRun, setPlanJobId } from '../queries/plans/plan-rows';
+import { requeueStalledRuns } from '../queries/plans/plan-run-rows';
 import { createJobQueue } from './boss-queue';
 import { QUEUES } from './queue';
 
@@ -19,12 +18,7 @@ export type SweepResult = { planId: string; jobId: string | null }[];
  * fresh job; one whose retries are used up ends the run `failed`.
  */
 export async function sweepStalledRuns(db: Db, boss: PgBoss, staleSeconds: number, expireMarginSeconds = 120): Promise<SweepResult> {
-  const stale = and(
-    eq(plans.status, 'running'),
-    lt(plans.heartbeatAt, sql`now() - make_interval(secs => ${staleSeconds})`),
-  );
-  const taken = await db.update(plans).set({ status: 'queued', progress: null }).where(stale)
-    .returning({ planId: plans.id, jobId: plans.jobId, settings: plans.settings });
+  const taken = await requeueStalledRuns(db, staleSeconds);
   const reason = `no heartbeat for ${staleSeconds} s: the worker stopped`;
   for (const run of taken) {
     const job = run.jobId ? await boss.getJobById(QUEUES.planRun, run.jobId) : null;

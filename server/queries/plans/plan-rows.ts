@@ -1,4 +1,5 @@
-// Reads and writes `plans` rows (one per run of the re-mapper for a window).
+// Reads and writes `plans` rows (one per run of the re-mapper for a window) that are not tied to a run's attempt;
+// the worker's attempt-guarded writes are in plan-run-rows.ts.
 import { and, desc, eq, inArray } from 'drizzle-orm';
 import { plans } from '../../../db/schema';
 import type { PlanRunStatus, PlanSettings } from '../../../shared/plans';

@@ -1,10 +1,10 @@
 // The plan-run worker's reads and writes of `plans` rows. Every write after pick-up is guarded by the attempt
 // number and `running`, so a cancelled run is never overwritten and a superseded attempt cannot write.
-// Reads and writes not tied to an attempt (selectPlanRow, endPlanRun) are the ones in services/plans/plan-rows.ts.
-import { and, eq, inArray, sql } from 'drizzle-orm';
-import type { Db } from '../../db/client';
-import { plans } from '../../db/schema';
-import type { PlanProgress, PlanReview } from '../../shared/plans';
+// Reads and writes not tied to an attempt (selectPlanRow, endPlanRun) are in plan-rows.ts.
+import { and, eq, inArray, lt, sql } from 'drizzle-orm';
+import type { Db } from '../../../db/client';
+import { plans } from '../../../db/schema';
+import type { PlanProgress, PlanReview } from '../../../shared/plans';
 
 /** Takes the run: `running`, one more attempt. Null when it is no longer queued or running (cancelled, gone). */
 export async function markRunning(db: Db, id: string, now: Date, progress: PlanProgress): Promise<number | null> {
@@ -56,4 +56,14 @@ export async function finishFailed(db: Db, id: string, attempt: number, error: s
 /** Back to `queued` while the queue retries the job (a shutdown, or an error that may not happen again). */
 export async function requeue(db: Db, id: string, attempt: number): Promise<void> {
   await db.update(plans).set({ status: 'queued', progress: null }).where(ownedBy(id, attempt));
+}
+
+/**
+ * Runs still `running` whose heartbeat is older than `staleSeconds` (database clock) go back to `queued`; returns
+ * them. The guarded UPDATE lets only one of several sweeping workers take a given run.
+ */
+export async function requeueStalledRuns(db: Db, staleSeconds: number) {
+  return db.update(plans).set({ status: 'queued', progress: null })
+    .where(and(eq(plans.status, 'running'), lt(plans.heartbeatAt, sql`now() - make_interval(secs => ${staleSeconds})`)))
+    .returning({ planId: plans.id, jobId: plans.jobId, settings: plans.settings });
 }

@@ -1,15 +1,15 @@
 // Accepts a finished plan run as the window's plan: re-verified on the current data, then window → planned.
-import { sql } from 'drizzle-orm';
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import { planReviewSchema, type PlanAccept } from '../../../shared/plans';
 import { insertAuditEntry } from '../../queries/audit';
+import { lockForTransaction } from '../../queries/locks';
+import { markPlanAccepted, selectPlanRow } from '../../queries/plans/plan-rows';
 import { setWindowStatus } from '../windows/set-window-status';
 import { checkOutageAccepted, checkStillFits } from './accept-checks';
 import { PLANNABLE } from './enqueue-plan';
 import { PlanNotAcceptableError, PlanNotFoundError, WindowNotPlannableError } from './errors';
-import { markPlanAccepted, selectPlanRow } from './plan-rows';
-import { isStale, selectWindowFacts } from './plan-view';
+import { isStale, loadWindowFacts } from './plan-view';
 
 /**
  * WARNING: accepts are serialised. Each verifies against the capacity other accepted plans hold; two accepts
@@ -20,10 +20,10 @@ const ACCEPT_LOCK_KEY = 6_170_331;
 export async function acceptPlan(deps: { db: Db; now: Date }, planId: string, body: PlanAccept, user: Me): Promise<void> {
   const { db, now } = deps;
   await db.transaction(async (tx) => {
-    await tx.execute(sql`select pg_advisory_xact_lock(${ACCEPT_LOCK_KEY})`);
+    await lockForTransaction(tx, ACCEPT_LOCK_KEY);
     const row = await selectPlanRow(tx, planId, { forUpdate: true });
     if (!row) throw new PlanNotFoundError(planId);
-    const w = await selectWindowFacts(tx, row.windowId, { forUpdate: true });
+    const w = await loadWindowFacts(tx, row.windowId, { forUpdate: true });
     if (row.status !== 'done') throw new PlanNotAcceptableError('PLAN_NOT_DONE', `Only a finished plan can be accepted; this one is ${row.status}.`);
     if (isStale(row, w)) {
       throw new PlanNotAcceptableError('PLAN_STALE', 'The window was edited or re-assessed after this run; run the plan again.');

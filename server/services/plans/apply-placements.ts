@@ -1,40 +1,38 @@
 // Puts an accepted plan into the placement history: its placements become current when the window starts;
 // `return` (and a roll-back) restores the ones from before as a further revision when it ends (DESIGN §4.3).
-import { and, desc, eq } from 'drizzle-orm';
-import { placements, windows } from '../../../db/schema';
 import { planReviewSchema, planSettingsSchema, type PlacementView, type PlanSlice } from '../../../shared/plans';
 import type { WindowStatus } from '../../../shared/windows';
 import { insertAuditEntry } from '../../queries/audit';
 import type { Queryable } from '../../../db/client';
-import { selectPlanRow } from './plan-rows';
+import { insertCurrentPlacement, lockLatestPlacementRevision, retireCurrentPlacement } from '../../queries/plans/placement-revisions';
+import { selectPlanRow } from '../../queries/plans/plan-rows';
+import { selectAcceptedPlanId } from '../../queries/plans/plan-window';
 
 type Change = { windowId: string; from: WindowStatus; to: WindowStatus; actorId: string | null; now: Date };
 type Revision = { sliceId: string; placement: PlacementView; reason: string; action: string; actorId: string | null; now: Date };
 
 /** Writes the next revision of one slice's placement and makes it the current one; false when the slice is gone. */
 export async function writePlacementRevision(tx: Queryable, r: Revision): Promise<boolean> {
-  const [latest] = await tx.select({ revision: placements.revision }).from(placements)
-    .where(eq(placements.sliceId, r.sliceId)).orderBy(desc(placements.revision)).limit(1).for('update');
-  if (!latest) return false;
-  const [current] = await tx.update(placements).set({ current: false })
-    .where(and(eq(placements.sliceId, r.sliceId), eq(placements.current, true))).returning({ revision: placements.revision });
-  const revision = latest.revision + 1;
-  await tx.insert(placements).values({
-    sliceId: r.sliceId, revision, current: true, sites: r.placement.sites, paths: r.placement.paths,
+  const latest = await lockLatestPlacementRevision(tx, r.sliceId);
+  if (latest === null) return false;
+  const current = await retireCurrentPlacement(tx, r.sliceId);
+  const revision = latest + 1;
+  await insertCurrentPlacement(tx, {
+    sliceId: r.sliceId, revision, sites: r.placement.sites, paths: r.placement.paths,
     reason: r.reason, createdBy: r.actorId, createdAt: r.now,
   });
   await insertAuditEntry(tx, {
     actorId: r.actorId, action: r.action, entity: 'slice', entityId: r.sliceId, at: r.now,
-    before: { revision: current?.revision ?? null }, after: { revision, reason: r.reason, sites: r.placement.sites, paths: r.placement.paths },
+    before: { revision: current }, after: { revision, reason: r.reason, sites: r.placement.sites, paths: r.placement.paths },
   });
   return true;
 }
 
 /** The window's accepted plan: the slices it moves or reroutes, and what happens after the window. */
 async function acceptedPlan(tx: Queryable, windowId: string) {
-  const [w] = await tx.select({ planId: windows.acceptedPlanId }).from(windows).where(eq(windows.id, windowId));
-  if (!w?.planId) return null;
-  const row = await selectPlanRow(tx, w.planId);
+  const planId = await selectAcceptedPlanId(tx, windowId);
+  if (!planId) return null;
+  const row = await selectPlanRow(tx, planId);
   if (!row || row.status !== 'done') return null;
   const changed = planReviewSchema.parse(row.result).slices
     .filter((s): s is PlanSlice & { after: PlacementView } => (s.outcome === 'move' || s.outcome === 'reroute') && s.after !== null);

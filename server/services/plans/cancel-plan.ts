@@ -2,9 +2,9 @@
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import { insertAuditEntry } from '../../queries/audit';
+import { endPlanRun, selectPlanRow } from '../../queries/plans/plan-rows';
 import type { PlanQueue } from '../ports';
 import { PlanNotCancellableError, PlanNotFoundError } from './errors';
-import { endPlanRun, selectPlanRow } from './plan-rows';
 
 export async function cancelPlan(deps: { db: Db; jobs: PlanQueue; now: Date }, planId: string, user: Me): Promise<void> {
   const { db, now } = deps;

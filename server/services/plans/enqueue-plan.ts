@@ -1,18 +1,17 @@
 // Starts a plan run: checks the window and the settings, stores the run as `queued` and hands it to the job queue.
 import { randomBytes } from 'node:crypto';
-import { inArray } from 'drizzle-orm';
 import type { Db } from '../../../db/client';
-import { sites, sliceFunctions } from '../../../db/schema';
 import type { Me } from '../../../shared/api';
 import type { PlanSettings } from '../../../shared/plans';
 import type { WindowStatus } from '../../../shared/windows';
 import type { ServerConfig } from '../../env';
 import type { PlanQueue } from '../ports';
 import { insertAuditEntry } from '../../queries/audit';
+import { selectExistingFunctionIds, selectExistingSiteIds } from '../../queries/plans/plan-inputs';
+import { endPlanRun, insertPlanRow, setPlanJobId } from '../../queries/plans/plan-rows';
 import { ImpactNotCurrentError, QueueUnavailableError, UnknownPlanInputsError, WindowNotPlannableError } from './errors';
 import { planExpireSeconds } from './expire';
-import { endPlanRun, insertPlanRow, setPlanJobId } from './plan-rows';
-import { selectWindowFacts } from './plan-view';
+import { loadWindowFacts } from './plan-view';
 
 /** States in which a window's plans may be run and accepted. */
 export const PLANNABLE: readonly WindowStatus[] = ['assessed', 'planned', 'returned'];
@@ -22,13 +21,8 @@ export type EnqueueDeps = { db: Db; jobs: PlanQueue; config: ServerConfig; now: 
 export const newPlanId = () => `pl-${randomBytes(9).toString('base64url')}`;
 
 async function checkSettings(db: Db, settings: PlanSettings): Promise<void> {
-  const known = async (ids: string[], table: typeof sites | typeof sliceFunctions) => {
-    if (ids.length === 0) return new Set<string>();
-    const rows = await db.select({ id: table.id }).from(table).where(inArray(table.id, ids));
-    return new Set(rows.map((r) => r.id));
-  };
-  const functions = await known(settings.pinned, sliceFunctions);
-  const siteIds = await known(settings.excludedSites, sites);
+  const functions = await selectExistingFunctionIds(db, settings.pinned);
+  const siteIds = await selectExistingSiteIds(db, settings.excludedSites);
   const unknownFunctions = [...new Set(settings.pinned.filter((id) => !functions.has(id)))];
   const unknownSites = [...new Set(settings.excludedSites.filter((id) => !siteIds.has(id)))];
   if (unknownFunctions.length + unknownSites.length > 0) throw new UnknownPlanInputsError(unknownFunctions, unknownSites);
@@ -36,7 +30,7 @@ async function checkSettings(db: Db, settings: PlanSettings): Promise<void> {
 
 export async function enqueuePlan(deps: EnqueueDeps, windowId: string, settings: PlanSettings, user: Me): Promise<string> {
   const { db, now } = deps;
-  const w = await selectWindowFacts(db, windowId);
+  const w = await loadWindowFacts(db, windowId);
   if (!PLANNABLE.includes(w.status)) throw new WindowNotPlannableError(w.status);
   if (w.impactVersion === null) throw new ImpactNotCurrentError();
   await checkSettings(db, settings);

@@ -1,29 +1,17 @@
 // Turns plan rows into the API's shapes (shared/plans.ts), with `stale` and `accepted` judged from the window.
-import { eq } from 'drizzle-orm';
-import { windowImpacts, windows } from '../../../db/schema';
 import {
   planProgressSchema, planReviewSchema, planSettingsSchema, type Plan, type PlanListItem,
 } from '../../../shared/plans';
-import type { WindowStatus } from '../../../shared/windows';
 import type { Queryable } from '../../../db/client';
+import type { PlanRow } from '../../queries/plans/plan-rows';
+import { selectWindowFacts, type WindowFacts } from '../../queries/plans/plan-window';
 import { WindowNotFoundError } from '../windows/errors';
-import type { PlanRow } from './plan-rows';
 
-/** What a plan's standing depends on: the window's state and the version its stored impact was computed for. */
-export type WindowFacts = {
-  id: string; status: WindowStatus; version: number; acceptedPlanId: string | null;
-  /** null when no impact is stored (an edit dropped it) */
-  impactVersion: number | null;
-};
-
-export async function selectWindowFacts(db: Queryable, windowId: string, opts: { forUpdate?: boolean } = {}): Promise<WindowFacts> {
-  const query = db.select({
-    id: windows.id, status: windows.status, version: windows.version, acceptedPlanId: windows.acceptedPlanId,
-    impactVersion: windowImpacts.windowVersion,
-  }).from(windows).leftJoin(windowImpacts, eq(windowImpacts.windowId, windows.id)).where(eq(windows.id, windowId));
-  const [row] = opts.forUpdate ? await query.for('update', { of: windows }) : await query;
-  if (!row) throw new WindowNotFoundError(windowId);
-  return row;
+/** The window's facts; WINDOW_NOT_FOUND when there is no such window. */
+export async function loadWindowFacts(db: Queryable, windowId: string, opts: { forUpdate?: boolean } = {}): Promise<WindowFacts> {
+  const facts = await selectWindowFacts(db, windowId, opts);
+  if (!facts) throw new WindowNotFoundError(windowId);
+  return facts;
 }
 
 /**

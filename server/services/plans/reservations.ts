@@ -1,12 +1,12 @@
 // What a plan run for one window must leave alone: capacity promised to the accepted plans of OTHER active
 // windows that overlap it in time (DESIGN §4.2). The amounts are the planner's rule (overlapReservations).
-import { and, eq, gt, inArray, isNotNull, lt, ne } from 'drizzle-orm';
-import { plans, windows } from '../../../db/schema';
 import { overlapReservations, type OverlappingPlan } from '../../../planner/plan/overlap-reservations';
 import type { Inventory, Reservation, SlicePlan } from '../../../planner/model/types';
 import type { PlanSlice } from '../../../shared/plans';
 import { ACTIVE_WINDOW_STATUSES } from '../../../shared/windows';
 import { loadInventory } from '../inventory/load-scenario';
+import { selectOverlappingAcceptedPlans } from '../../queries/plans/overlapping-plans';
+import { selectWindowTimes } from '../../queries/plans/plan-window';
 import { selectElementsByWindow } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
 import { windowSpecOf } from '../windows/window-spec';
@@ -35,20 +35,6 @@ function storedSlices(result: unknown): PlanSlice[] {
   return Array.isArray(slices) ? (slices as PlanSlice[]) : [];
 }
 
-async function overlappingAccepted(db: Queryable, windowId: string, startsAt: Date, endsAt: Date) {
-  return db.select({
-    id: windows.id, version: windows.version, startsAt: windows.startsAt, endsAt: windows.endsAt, result: plans.result,
-  }).from(windows)
-    .innerJoin(plans, eq(plans.id, windows.acceptedPlanId))
-    .where(and(
-      ne(windows.id, windowId), isNotNull(windows.acceptedPlanId),
-      inArray(windows.status, [...ACTIVE_WINDOW_STATUSES]),
-      // half-open intervals: a window ending when this one starts does not overlap it
-      gt(windows.endsAt, startsAt), lt(windows.startsAt, endsAt),
-    ))
-    .orderBy(windows.id);
-}
-
 /**
  * Reservations for a run of `windowId`. `inv` is the current inventory, or builds it from data the caller already
  * read; it is only needed when an overlapping window has an accepted plan, and read from the database when not given.
@@ -56,9 +42,9 @@ async function overlappingAccepted(db: Queryable, windowId: string, startsAt: Da
 export async function reservationsFor(
   db: Queryable, windowId: string, inv?: Inventory | (() => Inventory),
 ): Promise<WindowReservations> {
-  const [self] = await db.select({ startsAt: windows.startsAt, endsAt: windows.endsAt }).from(windows).where(eq(windows.id, windowId));
+  const self = await selectWindowTimes(db, windowId);
   if (!self) throw new WindowNotFoundError(windowId);
-  const rows = await overlappingAccepted(db, windowId, self.startsAt, self.endsAt);
+  const rows = await selectOverlappingAcceptedPlans(db, windowId, self, ACTIVE_WINDOW_STATUSES);
   if (rows.length === 0) return { reservations: {}, reservedFor: [] };
   const inventory = typeof inv === 'function' ? inv() : inv ?? (await loadInventory(db)).inventory;
   const elements = await selectElementsByWindow(db, rows.map((r) => r.id));
