@@ -14,6 +14,8 @@ const rules = {
   'planner/**': [
     pattern(['../../server/*', '../server/*', '../../db/*', '../db/*', '../../app/*', '../../components/*', '../../hooks/*', '@/*'],
       'planner/ is pure: it must not import server, db or app code.'),
+    pattern(['../../scenarios/*', '../scenarios/*', '../../../scenarios/*'],
+      'planner/ must not import scenarios/: the generators and demo data build inputs for tests, the bench and the demo.'),
     pattern(['pg', 'drizzle-orm', 'drizzle-orm/*', 'express', 'react', 'react-native', ...nodeBuiltins],
       'planner/ is pure computation: no I/O, database, server or node built-ins (only planner/workers and planner/cli may).'),
   ],
@@ -57,7 +59,7 @@ module.exports = tseslint.config(
   {
     // The worker wrapper and the command line are planner's only doors to the outside world.
     files: ['planner/workers/**/*.ts', 'planner/cli/**/*.ts'],
-    rules: { 'no-restricted-imports': ['error', { patterns: [rules['planner/**'][0]] }] },
+    rules: { 'no-restricted-imports': ['error', { patterns: rules['planner/**'].slice(0, 2) }] },
   },
   {
     // Hooks called out of order, or effects missing a dependency, show stale data without any error.

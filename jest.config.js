@@ -1,4 +1,5 @@
-// Three jest projects: pure planner/shared code, server + db against PostgreSQL, and the app under jest-expo.
+// Three jest projects: pure planner/shared code and the scenario generators, server + db against PostgreSQL,
+// and the app under jest-expo.
 // The end-to-end suite (tests/e2e) runs separately from scripts/test.sh once the server is up.
 const tsJest = {
   '^.+\\.tsx?$': ['ts-jest', { tsconfig: '<rootDir>/tsconfig.jest.json', diagnostics: false }],
@@ -15,7 +16,7 @@ module.exports = {
       testEnvironment: 'node',
       transform: tsJest,
       moduleNameMapper,
-      testMatch: ['<rootDir>/tests/planner/**/*.test.ts', '<rootDir>/tests/shared/**/*.test.ts', '<rootDir>/tests/architecture/**/*.test.ts'],
+      testMatch: ['<rootDir>/tests/planner/**/*.test.ts', '<rootDir>/tests/scenarios/**/*.test.ts', '<rootDir>/tests/shared/**/*.test.ts', '<rootDir>/tests/architecture/**/*.test.ts'],
     },
     {
       displayName: 'server',

@@ -1,9 +1,9 @@
-// Benchmark instances: Waxman networks (BRITE convention, α = 0.5, β = 0.2, see planner/generate/waxman.ts)
+// Benchmark instances: Waxman networks (BRITE convention, α = 0.5, β = 0.2, see scenarios/generate/waxman.ts)
 // loaded to 60–70 % peak utilisation, with random windows of 1–5 elements that touch at least one slice; and
 // real-shape networks (preferential attachment, scarce capacity around one window of a site and two spans).
-import { randomWindow } from '../../planner/generate/random-window';
-import { buildRealShapeScenario } from '../../planner/generate/real-shape-scenario';
-import { buildScenario } from '../../planner/generate/scenario-builder';
+import { randomWindow } from '../../scenarios/generate/random-window';
+import { buildRealShapeScenario } from '../../scenarios/generate/real-shape-scenario';
+import { buildScenario } from '../../scenarios/generate/scenario-builder';
 import { buildInventory, compileWindow } from '../../planner/model/build-inventory';
 import type { Inventory, WindowSpec } from '../../planner/model/types';
 import { buildRemapProblem } from '../../planner/remap/problem';
@@ -38,7 +38,7 @@ export interface RealShapeInstance extends Instance {
   gate: string | null;
 }
 
-/** One real-shape scenario and its one window (planner/generate/real-shape-scenario.ts). */
+/** One real-shape scenario and its one window (scenarios/generate/real-shape-scenario.ts). */
 export function buildRealShapeInstance(sites: number, slices: number, seed: number): RealShapeInstance {
   const r = buildRealShapeScenario({ sites, slices, seed });
   return {

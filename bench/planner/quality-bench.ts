@@ -1,7 +1,7 @@
 // (c) DE vs greedy vs exact on the same windows: unresolved, move cost, time, and DE's gap to exact's
 // proven optimum (or its bound). Small instances are tiny enough for every simple path, so exact's optimum
 // there is the true optimum over the candidate sites; medium ones use k = 4 candidate paths per tie.
-// The small tier is tight: real-shape scenarios (planner/generate/real-shape-scenario.ts) whose capacity is
+// The small tier is tight: real-shape scenarios (scenarios/generate/real-shape-scenario.ts) whose capacity is
 // scarce around their window. DE figures are the search's own (`result.search`), before any greedy fallback,
 // with touched slices only (no knock-on moves), the same problem exact solves.
 import { exactPlan } from '../../planner/exact/exact-plan';

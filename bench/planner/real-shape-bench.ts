@@ -1,5 +1,5 @@
 // (e) the real-shape set: preferential-attachment networks of 40–200 sites with 100–300 slices, capacity made
-// scarce around one window of a site and two spans (planner/generate/real-shape-scenario.ts). DE alone
+// scarce around one window of a site and two spans (scenarios/generate/real-shape-scenario.ts). DE alone
 // (touched only, and with knock-on moves) against greedy and exact (touched only, and with knock-on blocks);
 // then islands vs serial on the windows where serial DE works longest to reach its final objective.
 import { EXACT_DEFAULTS } from '../../planner/exact/exact-plan';

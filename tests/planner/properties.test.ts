@@ -2,8 +2,8 @@
 // Each test name states the invariant. numRuns stay small: every run plans a window, some in worker threads.
 import fc from 'fast-check';
 import { exactPlan, exactSolver } from '../../planner/exact/exact-plan';
-import { buildScenario } from '../../planner/generate/scenario-builder';
-import { randomWindow } from '../../planner/generate/random-window';
+import { buildScenario } from '../../scenarios/generate/scenario-builder';
+import { randomWindow } from '../../scenarios/generate/random-window';
 import { buildInventory, compileWindow } from '../../planner/model/build-inventory';
 import type { Inventory, Objective, PlanMode, PlanResult, WindowSpec } from '../../planner/model/types';
 import { compareObjectives } from '../../planner/plan/evaluate-plan';

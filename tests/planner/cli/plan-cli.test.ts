@@ -3,7 +3,7 @@ import { spawnSync } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { buildScenario } from '../../../planner/generate/scenario-builder';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
 import type { SlicePlan } from '../../../planner/model/types';
 import { main } from '../../../planner/cli/run-plan';

@@ -2,7 +2,7 @@
 // Source: HiGHS as the reference MIP solver (REFERENCES.md, "Exact reference"); brute force is exact by construction.
 import { exactPlan } from '../../../planner/exact/exact-plan';
 import { exactWeights, weightedObjective } from '../../../planner/exact/exact-weights';
-import { buildScenario } from '../../../planner/generate/scenario-builder';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
 import { evaluatePlan, toSlicePlans } from '../../../planner/plan/evaluate-plan';
 import { buildRemapProblem } from '../../../planner/remap/problem';

@@ -2,8 +2,8 @@
 // (invented Waxman scenarios loaded to 85–95 % peak utilisation). The product keeps the better of the two plans;
 // this property is about the search, so a regression that only the fallback hides makes it fail.
 import fc from 'fast-check';
-import { buildScenario } from '../../../planner/generate/scenario-builder';
-import { randomWindow } from '../../../planner/generate/random-window';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
+import { randomWindow } from '../../../scenarios/generate/random-window';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
 import { createRng } from '../../../planner/random/rng';
 import { planWindow } from '../../../planner/remap/plan-window';

@@ -1,6 +1,6 @@
 // Serial DE against the greedy reference on generated scenarios (invented data), and the parallel hook.
 import { runDE } from '../../../planner/de/differential-evolution';
-import { buildScenario } from '../../../planner/generate/scenario-builder';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
 import { compareObjectives } from '../../../planner/plan/evaluate-plan';
 import { createRng } from '../../../planner/random/rng';

@@ -1,6 +1,6 @@
 // The memetic local search (ejection chains + cost climb) and the partial decodes it relies on (generated, invented scenario).
 import { compareFitness } from '../../../planner/de/fitness';
-import { buildScenario } from '../../../planner/generate/scenario-builder';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
 import { greedyPlan } from '../../../planner/greedy/greedy-plan';
 import { createRng } from '../../../planner/random/rng';

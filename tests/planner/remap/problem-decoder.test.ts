@@ -4,7 +4,7 @@ import { greedyPlan } from '../../../planner/greedy/greedy-plan';
 import { evaluatePlan } from '../../../planner/plan/evaluate-plan';
 import { createDecoder, decode, genesFromPlacement, stayPutGenes } from '../../../planner/remap/decoder';
 import { buildRemapProblem } from '../../../planner/remap/problem';
-import { buildScenario } from '../../../planner/generate/scenario-builder';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
 import { scenarioWith, tinyNetwork, tinyScenario, window } from '../fixtures/tiny-scenario';
 
 function tiny(windowId: string, opts = {}) {

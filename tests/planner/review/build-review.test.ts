@@ -1,8 +1,8 @@
 // buildReview: the review of a finished run matches the API schema and tells a consistent story
 // (outcome ↔ moves/reroutes ↔ before/after ↔ steps ↔ totals), on the tiny network and on random scenarios.
 import fc from 'fast-check';
-import { randomWindow } from '../../../planner/generate/random-window';
-import { buildScenario } from '../../../planner/generate/scenario-builder';
+import { randomWindow } from '../../../scenarios/generate/random-window';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
 import type { Inventory, PlanResult, WindowSpec } from '../../../planner/model/types';
 import { planWindow } from '../../../planner/remap/plan-window';

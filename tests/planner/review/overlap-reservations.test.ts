@@ -1,8 +1,8 @@
 // overlapReservations: what an accepted plan of an overlapping window reserves, and — as a property — that two
 // overlapping windows planned one after the other never book more than the network has during the overlap.
 import fc from 'fast-check';
-import { randomWindow } from '../../../planner/generate/random-window';
-import { buildScenario } from '../../../planner/generate/scenario-builder';
+import { randomWindow } from '../../../scenarios/generate/random-window';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
 import { fits } from '../../../planner/model/tolerance';
 import type { Inventory, SlicePlacement, SlicePlan, WindowSpec } from '../../../planner/model/types';

@@ -3,7 +3,7 @@
 import { compareObjectiveVectors } from '../../../planner/de/fitness';
 import { InvalidOptionError } from '../../../planner/errors';
 import type { Objective } from '../../../planner/model/types';
-import { buildScenario } from '../../../planner/generate/scenario-builder';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
 import { compareObjectives } from '../../../planner/plan/evaluate-plan';
 import { planWindow } from '../../../planner/remap/plan-window';

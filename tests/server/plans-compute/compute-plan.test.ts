@@ -1,6 +1,6 @@
 // computePlan: the background job's computation (no database) — DE run, greedy and exact references, review.
-import { buildScenario } from '../../../planner/generate/scenario-builder';
-import { randomWindow } from '../../../planner/generate/random-window';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
+import { randomWindow } from '../../../scenarios/generate/random-window';
 import { buildInventory } from '../../../planner/model/build-inventory';
 import type { PlanResult } from '../../../planner/model/types';
 import { compareObjectives } from '../../../planner/plan/evaluate-plan';

@@ -8,8 +8,8 @@
 // degree(u) · exp(−d(u, v) / D), the Waxman distance factor (see waxman.ts) applied to the attachment rule, so
 // most new links stay local while hubs still draw some long ones. The combination is ours (common practice in
 // topology generators that add locality to preferential attachment; no single source).
-import { greatCircleKm, type LatLon } from '../geo/great-circle';
-import { createRng, type Rng } from '../random/rng';
+import { greatCircleKm, type LatLon } from '../../planner/geo/great-circle';
+import { createRng, type Rng } from '../../planner/random/rng';
 
 export interface PreferentialAttachmentOptions {
   sites: number;

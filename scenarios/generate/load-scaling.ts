@@ -3,7 +3,7 @@
 // runs at TYPICAL_UTILISATION, then every element above the band gets capacity for a utilisation drawn
 // inside the band, so the peak lies in [lo, hi] and most elements keep head-room for re-placement.
 import type { ScenarioSite, ScenarioSpan } from '../../shared/scenario';
-import type { Rng } from '../random/rng';
+import type { Rng } from '../../planner/random/rng';
 import type { LoadedSlices } from './slice-loader';
 
 const TYPICAL_UTILISATION = 0.35;

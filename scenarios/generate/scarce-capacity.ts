@@ -3,7 +3,7 @@
 // those detours fit, some overflow — while today's load stays below a ceiling; every other element keeps
 // slack. So a good plan exists but needs longer detours, moves, or room made by moving an untouched slice.
 // All bands are invented for the benchmark (no source); operators keep links well below full (common practice).
-import type { Rng } from '../random/rng';
+import type { Rng } from '../../planner/random/rng';
 import type { DetourLoad } from './detour-load';
 
 export interface Band {

@@ -2,8 +2,8 @@
 // that site), all three carrying slices today, chosen so that the rest of the network stays connected — a
 // window that splits the network leaves slices without any way round, which tells nothing about a planner.
 import type { ScenarioWindow } from '../../shared/scenario';
-import type { Inventory } from '../model/types';
-import { randomInt, type Rng } from '../random/rng';
+import type { Inventory } from '../../planner/model/types';
+import { randomInt, type Rng } from '../../planner/random/rng';
 
 const ATTEMPTS = 500;
 

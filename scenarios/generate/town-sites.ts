@@ -3,8 +3,8 @@
 // town first, so a growth model that starts from the first sites grows its hubs in the towns.
 // Town sizes follow a rank-size (Zipf) rule, size ∝ 1 / rank — Reference: G. K. Zipf, "Human Behavior and the
 // Principle of Least Effort", 1949 (memory); used here only for an invented, plausible spread.
-import type { LatLon } from '../geo/great-circle';
-import { createRng, type Rng } from '../random/rng';
+import type { LatLon } from '../../planner/geo/great-circle';
+import { createRng, type Rng } from '../../planner/random/rng';
 
 export interface LatLonBox {
   latMin: number;

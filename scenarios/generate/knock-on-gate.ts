@@ -5,8 +5,8 @@
 // them — short by δ — while an untouched slice on X whose one function on `a` could move (no anchor, not
 // fixed) carries more than δ. So the touched-only optimum leaves at least one slice unresolved, and moving
 // that untouched slice makes room: a case "exact with knock-on blocks" can prove and a search should find.
-import type { Inventory, SlicePlacement, WindowSpec } from '../model/types';
-import { windowCapacity } from '../model/window-capacity';
+import type { Inventory, SlicePlacement, WindowSpec } from '../../planner/model/types';
+import { windowCapacity } from '../../planner/model/window-capacity';
 import type { DetourLoad } from './detour-load';
 
 export interface KnockOnGate {

@@ -4,7 +4,7 @@
 import turfDistance from '@turf/distance';
 import dijkstra from 'dijkstrajs';
 import { exactPlan } from '../../../planner/exact/exact-plan';
-import { buildRealShapeScenario } from '../../../planner/generate/real-shape-scenario';
+import { buildRealShapeScenario } from '../../../scenarios/generate/real-shape-scenario';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
 import { buildRemapProblem } from '../../../planner/remap/problem';
 import { scenarioSchema, type Scenario } from '../../../shared/scenario';

@@ -2,9 +2,9 @@
 // on the shortest-latency path, and latency budgets of 1.3–3 × the current path's latency, so a detour fits
 // some ties and not others. Demands are invented; the capacities are dimensioned afterwards (scarce-capacity).
 import type { ScenarioFunction, ScenarioSlice, ScenarioTie } from '../../shared/scenario';
-import type { NetworkModel } from '../model/types';
-import { shortestLatencyPath } from '../paths/shortest-path';
-import { randomInt, type Rng } from '../random/rng';
+import type { NetworkModel } from '../../planner/model/types';
+import { shortestLatencyPath } from '../../planner/paths/shortest-path';
+import { randomInt, type Rng } from '../../planner/random/rng';
 import { neighbourhood, placementOf, round, tieEnds, type LoadedSlices } from './slice-loader';
 
 export interface RealShapeSliceOptions {

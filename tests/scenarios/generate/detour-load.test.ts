@@ -1,7 +1,7 @@
 // The obvious-detour load behind the benchmark's scarcity figure, on the hand-built square (loads worked by hand).
-import { detourLoad, detourPeakUtilisation } from '../../../planner/generate/detour-load';
+import { detourLoad, detourPeakUtilisation } from '../../../scenarios/generate/detour-load';
 import { buildInventory, compileWindow } from '../../../planner/model/build-inventory';
-import { scenarioWith, window, type SliceSpec } from '../fixtures/tiny-scenario';
+import { scenarioWith, window, type SliceSpec } from '../../planner/fixtures/tiny-scenario';
 
 //   A ─ab 15 km─ B
 //   │            │

@@ -1,9 +1,9 @@
 // Builds a complete, valid `slackwater-scenario/1` from a seed: Waxman network, tenants, loaded slices, windows.
 // All names are invented. Deterministic: the same options give the same scenario.
 import type { Scenario, ScenarioSite, ScenarioSpan, ScenarioTenant } from '../../shared/scenario';
-import { buildNetwork } from '../model/build-network';
-import type { SiteKind } from '../model/types';
-import { createRng, deriveSeed, type Rng } from '../random/rng';
+import { buildNetwork } from '../../planner/model/build-network';
+import type { SiteKind } from '../../planner/model/types';
+import { createRng, deriveSeed, type Rng } from '../../planner/random/rng';
 import { scaleToBand, type LoadBand } from './load-scaling';
 import { randomWindow } from './random-window';
 import { loadSlices } from './slice-loader';

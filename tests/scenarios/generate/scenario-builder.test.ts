@@ -1,5 +1,5 @@
 // The scenario builder produces valid, deterministic scenarios loaded to the 60–70 % peak band.
-import { buildScenario } from '../../../planner/generate/scenario-builder';
+import { buildScenario } from '../../../scenarios/generate/scenario-builder';
 import { buildInventory } from '../../../planner/model/build-inventory';
 import { validateScenario } from '../../../shared/scenario-validate';
 import type { Scenario } from '../../../shared/scenario';

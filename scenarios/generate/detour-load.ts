@@ -3,11 +3,11 @@
 // (or whose end moved) takes its shortest-latency surviving path — bandwidth and latency budgets ignored.
 // This is how the benchmark measures how scarce capacity is around a window: a peak utilisation ≥ 0.8 here
 // means the shortest detours nearly fill (or overfill) some span, so a plan must find longer ones or make room.
-import { greatCircleKm } from '../geo/great-circle';
-import { satisfiesAnchor } from '../model/anchor';
-import type { Inventory, SlicePlacement, WindowSpec } from '../model/types';
-import { addPlacementLoad, windowCapacity } from '../model/window-capacity';
-import { shortestLatencyPath } from '../paths/shortest-path';
+import { greatCircleKm } from '../../planner/geo/great-circle';
+import { satisfiesAnchor } from '../../planner/model/anchor';
+import type { Inventory, SlicePlacement, WindowSpec } from '../../planner/model/types';
+import { addPlacementLoad, windowCapacity } from '../../planner/model/window-capacity';
+import { shortestLatencyPath } from '../../planner/paths/shortest-path';
 
 export interface DetourLoad {
   /** load of the current placements */

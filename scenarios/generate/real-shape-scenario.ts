@@ -4,10 +4,10 @@
 // window of a site and two spans — where the window allows, with a knock-on gate (knock-on-gate.ts): touched
 // slices that fit only if an untouched slice moves. Pure and deterministic; every name and figure is invented.
 import type { Scenario, ScenarioSite, ScenarioSlice, ScenarioSpan, ScenarioTenant, ScenarioWindow } from '../../shared/scenario';
-import { greatCircleKm } from '../geo/great-circle';
-import { buildInventory, compileWindow } from '../model/build-inventory';
-import { buildNetwork } from '../model/build-network';
-import { createRng, deriveSeed, type Rng } from '../random/rng';
+import { greatCircleKm } from '../../planner/geo/great-circle';
+import { buildInventory, compileWindow } from '../../planner/model/build-inventory';
+import { buildNetwork } from '../../planner/model/build-network';
+import { createRng, deriveSeed, type Rng } from '../../planner/random/rng';
 import { detourLoad, detourPeakUtilisation } from './detour-load';
 import { findKnockOnGate, gateSiteCpu, type KnockOnGate } from './knock-on-gate';
 import { preferentialAttachment } from './preferential-attachment';

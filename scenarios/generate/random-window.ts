@@ -1,6 +1,6 @@
 // Random maintenance windows of 1–5 elements (sites or spans, down or reduced) for tests and benchmarks.
 import type { Scenario, ScenarioWindow } from '../../shared/scenario';
-import { randomInt, type Rng } from '../random/rng';
+import { randomInt, type Rng } from '../../planner/random/rng';
 
 export interface RandomWindowOptions {
   /** element count; drawn from 1–5 when omitted */

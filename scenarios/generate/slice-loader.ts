@@ -2,9 +2,9 @@
 // Reference: M. Yu, Y. Yi, J. Rexford, M. Chiang, CCR 38(2), 2008 (memory): requests of a few nodes,
 // CPU U[0, 20], bandwidth U[0, 50]; here 2–5 functions per slice, demands rescaled afterwards (load-scaling).
 import type { ScenarioFunction, ScenarioPlacement, ScenarioSlice, ScenarioTie } from '../../shared/scenario';
-import type { NetworkModel } from '../model/types';
-import { shortestLatencyPath } from '../paths/shortest-path';
-import { randomInt, type Rng } from '../random/rng';
+import type { NetworkModel } from '../../planner/model/types';
+import { shortestLatencyPath } from '../../planner/paths/shortest-path';
+import { randomInt, type Rng } from '../../planner/random/rng';
 
 export interface LoadedSlices {
   slices: ScenarioSlice[];

@@ -1,6 +1,6 @@
 // Waxman generator: connectivity, determinism and the α/β convention of the BRITE manual.
 // Source for the convention: BRITE user manual (confirmed in REFERENCES.md): P(u,v) = α·exp(−d/(βL)), L = max distance.
-import { waxmanGraph } from '../../../planner/generate/waxman';
+import { waxmanGraph } from '../../../scenarios/generate/waxman';
 
 function connected(n: number, links: [number, number][]): boolean {
   const adj: number[][] = Array.from({ length: n }, () => []);

@@ -2,8 +2,8 @@
 // Reference for the model: A.-L. Barabási, R. Albert, Science 286 (1999) 509–512 — growth with m links per new
 // node attached in proportion to degree gives a power-law degree tail; the "max ≥ 3 × median" check below is
 // our own plain reading of "heavy-tailed" (common practice, no single source).
-import { preferentialAttachment } from '../../../planner/generate/preferential-attachment';
-import { townSites } from '../../../planner/generate/town-sites';
+import { preferentialAttachment } from '../../../scenarios/generate/preferential-attachment';
+import { townSites } from '../../../scenarios/generate/town-sites';
 
 function connected(n: number, links: [number, number][]): boolean {
   const adj: number[][] = Array.from({ length: n }, () => []);

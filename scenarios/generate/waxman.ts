@@ -12,8 +12,8 @@
 //   'pairwise' (Waxman 1988 as written): every pair linked independently with P(u, v); the mean degree
 //     then grows with n (≈ 112 at 1,000 sites with α = 0.5, β = 0.2), so leftover components are joined
 //     to the main one through their nearest pair of sites.
-import { greatCircleKm, type LatLon } from '../geo/great-circle';
-import { createRng } from '../random/rng';
+import { greatCircleKm, type LatLon } from '../../planner/geo/great-circle';
+import { createRng } from '../../planner/random/rng';
 
 export interface WaxmanOptions {
   sites: number;
