@@ -31,9 +31,9 @@ import { spansRouter } from './routes/spans';
 import { tenantsRouter } from './routes/tenants';
 import { outboxRouter } from './routes/outbox';
 import { noticesRouter } from './routes/notices';
-import { otpRouter } from './routes/otp';
-import { signoffRouter, signoffSubmitRouter } from './routes/signoff';
+import { signoffRouter } from './routes/signoff';
 import { plansRouter } from './routes/plans';
+import { portalRouter } from './routes/portal';
 
 export type AppDeps = {
   db: Db;
@@ -57,13 +57,11 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   const api = express.Router();
   api.use(noStore);
   api.use('/auth', authRouter(deps));
-  api.use('/me/otp', otpRouter(deps));
-  api.use('/me', meRouter());
+  api.use('/me', meRouter(deps));
   api.use('/overview', overviewRouter(deps));
   api.use('/users', usersRouter(deps));
   api.use('/scenarios', scenariosRouter());
   api.use('/windows', windowsRouter(deps));
-  api.use('/windows', signoffSubmitRouter(deps));
   api.use('/signoff', signoffRouter(deps));
   api.use('/freezes', freezesRouter(deps));
   api.use('/policies', policiesRouter(deps));
@@ -75,8 +73,9 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   api.use('/network', networkRouter(deps));
   api.use('/export', exportRouter(deps));
   api.use('/outbox', outboxRouter(deps));
-  api.use(plansRouter(deps));
-  api.use(noticesRouter(deps));
+  api.use('/plans', plansRouter(deps));
+  api.use('/notices', noticesRouter(deps));
+  api.use('/portal', portalRouter(deps));
   api.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.originalUrl.split('?')[0])));
   return api;
 }

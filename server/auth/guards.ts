@@ -1,20 +1,20 @@
-// Route guards: requireAuth (401 without a session), requireRole (403 without one of the roles) and
-// hideFromTenants (404 for tenant users, who must not learn that a staff-only resource exists).
+// Route guards: requireAuth (401 without a session), requireRole (403 without one of the roles),
+// hideFromTenants (404 for tenant users, who must not learn that a staff-only resource exists), and
+// currentUser, the signed-in user a handler behind these guards works for.
 import type { Request, RequestHandler } from 'express';
-import type { RoleName } from '../../shared/api';
-import { ForbiddenError, UnauthenticatedError } from '../errors';
-import { tenantScopeOf } from '../services/windows/tenant-scope';
+import type { Me, RoleName } from '../../shared/api';
+import { holdsAnyRole, tenantScopeOf } from '../../shared/permissions';
+import { ForbiddenError, RouteNotFoundError, UnauthenticatedError } from '../errors';
 
 export const requireAuth: RequestHandler = (req, _res, next) => {
   next(req.user ? undefined : new UnauthenticatedError());
 };
 
-/** Passes when the user holds at least one of `roles`. */
-export function requireRole(...roles: RoleName[]): RequestHandler {
+/** Passes when the user holds at least one of `roles` (a set from shared/permissions.ts). */
+export function requireRole(...roles: readonly RoleName[]): RequestHandler {
   return (req, _res, next) => {
     if (!req.user) return next(new UnauthenticatedError());
-    const allowed = req.user.roles.some((role) => roles.includes(role));
-    next(allowed ? undefined : new ForbiddenError());
+    next(holdsAnyRole(req.user.roles, roles) ? undefined : new ForbiddenError());
   };
 }
 
@@ -23,4 +23,15 @@ export function hideFromTenants(notFound: (req: Request) => Error): RequestHandl
   return (req, _res, next) => {
     next(req.user && tenantScopeOf(req.user) !== null ? notFound(req) : undefined);
   };
+}
+
+/** For tenant users the route does not exist (404 ROUTE_NOT_FOUND); other users need one of `roles` (else 403). */
+export function staffOnlyRoute(...roles: readonly RoleName[]): RequestHandler[] {
+  return [hideFromTenants((req) => new RouteNotFoundError(req.method, req.originalUrl.split('?')[0])), requireRole(...roles)];
+}
+
+/** The signed-in user; 401 when there is none (a handler behind requireAuth or requireRole always has one). */
+export function currentUser(req: Request): Me {
+  if (!req.user) throw new UnauthenticatedError();
+  return req.user;
 }

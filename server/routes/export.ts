@@ -1,13 +1,12 @@
 // GET /api/export/scenario and /api/export/graphml (planner, admin, engineer): the current inventory as files.
 import express, { type Response, type Router } from 'express';
+import { INVENTORY_EXPORT_ROLES } from '../../shared/permissions';
 import { formatIssue, validateScenario } from '../../shared/scenario-validate';
 import { requireRole } from '../auth/guards';
 import { ExportInvalidError } from '../services/inventory/errors';
 import { scenarioToGraphml } from '../services/inventory/graphml-export';
 import { loadScenario } from '../services/inventory/load-scenario';
 import type { RouteDeps } from './deps';
-
-const EXPORT_ROLES = ['planner', 'admin', 'engineer'] as const;
 
 function attachment(res: Response, fileName: string, contentType: string): void {
   res.setHeader('Content-Type', contentType);
@@ -17,14 +16,14 @@ function attachment(res: Response, fileName: string, contentType: string): void 
 export function exportRouter({ db, now }: RouteDeps): Router {
   const router = express.Router();
   const stamp = () => now().toISOString().slice(0, 10);
-  router.get('/scenario', requireRole(...EXPORT_ROLES), async (_req, res) => {
+  router.get('/scenario', requireRole(...INVENTORY_EXPORT_ROLES), async (_req, res) => {
     const result = validateScenario(await loadScenario(db));
     // Refuse to hand out a file our own import would reject.
     if (!result.ok) throw new ExportInvalidError(formatIssue(result.errors[0]));
     attachment(res, `slackwater-scenario-${stamp()}.json`, 'application/json; charset=utf-8');
     res.send(JSON.stringify(result.scenario, null, 2));
   });
-  router.get('/graphml', requireRole(...EXPORT_ROLES), async (_req, res) => {
+  router.get('/graphml', requireRole(...INVENTORY_EXPORT_ROLES), async (_req, res) => {
     attachment(res, `slackwater-network-${stamp()}.graphml`, 'application/graphml+xml; charset=utf-8');
     res.send(scenarioToGraphml(await loadScenario(db)));
   });

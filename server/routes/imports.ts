@@ -1,7 +1,8 @@
 // Imports: upload → preview (POST /), apply (POST /:id/apply), list, detail, and CSV templates. Admin and planner.
 import express from 'express';
 import { importKindSchema, importListQuerySchema } from '../../shared/imports';
-import { requireRole } from '../auth/guards';
+import { INVENTORY_IMPORT_ROLES } from '../../shared/permissions';
+import { currentUser, requireRole } from '../auth/guards';
 import { applyImport } from '../imports/apply';
 import { ImportFileError, ImportNotFoundError } from '../imports/errors';
 import { getImportRow, listImportRows, toDetail, toSummary } from '../imports/import-records';
@@ -13,14 +14,14 @@ import type { RouteDeps } from './deps';
 
 export function importsRouter({ db, config, now }: RouteDeps): express.Router {
   const router = express.Router();
-  router.use(requireRole('admin', 'planner'));
+  router.use(requireRole(...INVENTORY_IMPORT_ROLES));
 
   router.post('/', singleFileUpload(config.importMaxBytes), async (req, res) => {
     if (!req.file) throw new ImportFileError('NO_FILE', 'Send the file in the multipart field "file".');
     const fileName = req.file.originalname || 'upload';
     const kind = typeof req.body?.kind === 'string' ? req.body.kind : undefined;
     const result = await buildPreview(db, { fileName, bytes: req.file.buffer, requestedKind: kind });
-    const id = await recordPreview(db, { ...result, fileName, sizeBytes: req.file.size, userId: req.user!.id, now: now() });
+    const id = await recordPreview(db, { ...result, fileName, sizeBytes: req.file.size, userId: currentUser(req).id, now: now() });
     res.status(201).json({ id, kind: result.kind, fileName, preview: result.preview });
   });
 
@@ -45,7 +46,7 @@ export function importsRouter({ db, config, now }: RouteDeps): express.Router {
   });
 
   router.post('/:id/apply', async (req, res) => {
-    res.json(await applyImport(db, { id: req.params.id, userId: req.user!.id, now: now() }));
+    res.json(await applyImport(db, { id: req.params.id, userId: currentUser(req).id, now: now() }));
   });
 
   return router;

@@ -1,13 +1,16 @@
-// GET /api/me: the signed-in user.
+// GET /api/me: the signed-in user; its one-time codes under /api/me/otp (routes/me/otp.ts).
 import express, { type Router } from 'express';
 import { meSchema } from '../../shared/api';
-import { requireAuth } from '../auth/guards';
+import { currentUser, requireAuth } from '../auth/guards';
 import { toPublicSession } from '../auth/sessions';
+import type { RouteDeps } from './deps';
+import { otpRouter } from './me/otp';
 
-export function meRouter(): Router {
+export function meRouter(deps: RouteDeps): Router {
   const router = express.Router();
+  router.use('/otp', otpRouter(deps));
   router.get('/', requireAuth, (req, res) => {
-    res.json(meSchema.parse(toPublicSession({ user: req.user! }).user));
+    res.json(meSchema.parse(toPublicSession({ user: currentUser(req) }).user));
   });
   return router;
 }

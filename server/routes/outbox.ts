@@ -2,8 +2,9 @@
 // Tenant users get 404 (the Outbox does not exist for them); other roles without admin get 403.
 import express, { type Router } from 'express';
 import { outboxIdParamSchema, outboxListQuerySchema, outboxListSchema, outboxMessageSchema } from '../../shared/outbox';
-import { hideFromTenants, requireRole } from '../auth/guards';
-import { domainError, RouteNotFoundError } from '../errors';
+import { ADMIN_ROLES } from '../../shared/permissions';
+import { staffOnlyRoute } from '../auth/guards';
+import { domainError } from '../errors';
 import { parseSinkMessage } from '../mail/parse-message';
 import { getSinkMessage, listSinkMessages, type SinkMessageRow } from '../mail/sink-messages';
 import type { RouteDeps } from './deps';
@@ -11,11 +12,9 @@ import type { RouteDeps } from './deps';
 export class OutboxMessageNotFoundError extends domainError('MESSAGE_NOT_FOUND', 404,
   (id: number) => `No message ${id} in the outbox.`) {}
 
-const outboxHidden = hideFromTenants((req) => new RouteNotFoundError(req.method, req.originalUrl.split('?')[0]));
-
 export function outboxRouter({ db }: RouteDeps): Router {
   const router = express.Router();
-  router.use(outboxHidden, requireRole('admin'));
+  router.use(...staffOnlyRoute(...ADMIN_ROLES));
 
   const load = async (rawId: unknown): Promise<SinkMessageRow> => {
     const { id } = outboxIdParamSchema.parse({ id: rawId });

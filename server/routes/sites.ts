@@ -1,9 +1,9 @@
 // GET /api/sites, /api/sites/:id: every signed-in role; a tenant user sees only the sites its slices use.
 import express, { type Router } from 'express';
 import { inventoryIdParamSchema, siteDetailSchema, siteListQuerySchema, siteListSchema } from '../../shared/inventory';
-import { requireAuth } from '../auth/guards';
+import { tenantScopeOf } from '../../shared/permissions';
+import { currentUser, requireAuth } from '../auth/guards';
 import { loadInventoryView } from '../services/inventory/inventory-view';
-import { inventoryScope } from '../services/inventory/scope';
 import { getSiteDetail, listSites } from '../services/inventory/site-rows';
 import type { RouteDeps } from './deps';
 
@@ -11,11 +11,11 @@ export function sitesRouter({ db }: RouteDeps): Router {
   const router = express.Router();
   router.get('/', requireAuth, async (req, res) => {
     const query = siteListQuerySchema.parse(req.query);
-    const view = await loadInventoryView(db, inventoryScope(req.user!));
+    const view = await loadInventoryView(db, tenantScopeOf(currentUser(req)));
     res.json(siteListSchema.parse(listSites(view, query)));
   });
   router.get('/:id', requireAuth, async (req, res) => {
-    const view = await loadInventoryView(db, inventoryScope(req.user!));
+    const view = await loadInventoryView(db, tenantScopeOf(currentUser(req)));
     res.json(siteDetailSchema.parse(getSiteDetail(view, inventoryIdParamSchema.parse(req.params).id)));
   });
   return router;

@@ -1,9 +1,9 @@
 // GET /api/spans, /api/spans/:id: every signed-in role; a tenant user sees only the spans its ties cross.
 import express, { type Router } from 'express';
 import { inventoryIdParamSchema, spanDetailSchema, spanListQuerySchema, spanListSchema } from '../../shared/inventory';
-import { requireAuth } from '../auth/guards';
+import { tenantScopeOf } from '../../shared/permissions';
+import { currentUser, requireAuth } from '../auth/guards';
 import { loadInventoryView } from '../services/inventory/inventory-view';
-import { inventoryScope } from '../services/inventory/scope';
 import { getSpanDetail, listSpans } from '../services/inventory/span-rows';
 import type { RouteDeps } from './deps';
 
@@ -11,11 +11,11 @@ export function spansRouter({ db }: RouteDeps): Router {
   const router = express.Router();
   router.get('/', requireAuth, async (req, res) => {
     const query = spanListQuerySchema.parse(req.query);
-    const view = await loadInventoryView(db, inventoryScope(req.user!));
+    const view = await loadInventoryView(db, tenantScopeOf(currentUser(req)));
     res.json(spanListSchema.parse(listSpans(view, query)));
   });
   router.get('/:id', requireAuth, async (req, res) => {
-    const view = await loadInventoryView(db, inventoryScope(req.user!));
+    const view = await loadInventoryView(db, tenantScopeOf(currentUser(req)));
     res.json(spanDetailSchema.parse(getSpanDetail(view, inventoryIdParamSchema.parse(req.params).id)));
   });
   return router;
