@@ -67,4 +67,14 @@ module.exports = tseslint.config(
     plugins: { 'react-hooks': reactHooks },
     rules: { 'react-hooks/rules-of-hooks': 'error', 'react-hooks/exhaustive-deps': 'error' },
   },
+  {
+    // `req.user!` turns a missing guard into a crash deep in a service; currentUser(req) answers 401 instead.
+    files: ['server/**/*.ts'],
+    rules: {
+      'no-restricted-syntax': ['error', {
+        selector: 'TSNonNullExpression > MemberExpression[property.name="user"]',
+        message: 'Take the signed-in user from currentUser(req) (server/auth/guards.ts), not req.user!.',
+      }],
+    },
+  },
 );
