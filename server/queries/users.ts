@@ -1,6 +1,6 @@
-// User look-ups for sign-in, the session and the admin user list.
-import { asc, eq, inArray, sql } from 'drizzle-orm';
-import type { Db } from '../../db/client';
+// User look-ups for sign-in, the session, the admin user list and the people a mail goes to.
+import { and, asc, eq, inArray, sql } from 'drizzle-orm';
+import type { Db, Queryable } from '../../db/client';
 import { passwordCredentials, roleGrants, users } from '../../db/schema';
 import { ROLE_NAMES, type Me, type RoleName } from '../../shared/api';
 
@@ -45,4 +45,22 @@ export async function listUsersWithRoles(db: Db): Promise<Me[]> {
   const rows = await db.select(userColumns).from(users).orderBy(asc(users.email));
   const roles = await getRolesByUserIds(db, rows.map((row) => row.id));
   return rows.map((row) => ({ ...row, roles: roles.get(row.id) ?? [] }));
+}
+
+export type UserContact = { id: string; email: string; name: string };
+
+/** Everyone holding `role`, by e-mail. */
+export async function listUsersWithRole(db: Queryable, role: RoleName): Promise<UserContact[]> {
+  return db.select({ id: users.id, email: users.email, name: users.name }).from(users)
+    .innerJoin(roleGrants, and(eq(roleGrants.userId, users.id), eq(roleGrants.role, role)))
+    .orderBy(asc(users.email));
+}
+
+/** The given users by id (nulls and repeats skipped, unknown ids left out). */
+export async function getUsersByIds(db: Queryable, ids: (string | null)[]): Promise<Map<string, UserContact>> {
+  const wanted = [...new Set(ids.filter((id): id is string => id !== null))];
+  if (wanted.length === 0) return new Map();
+  const rows = await db.select({ id: users.id, email: users.email, name: users.name }).from(users)
+    .where(inArray(users.id, wanted));
+  return new Map(rows.map((r) => [r.id, r]));
 }

@@ -1,18 +1,19 @@
 // An approver's decision: approve (the quorum clears the window and issues notices) or send back (returned at once).
 import type { Me } from '../../../shared/api';
 import type { SignoffDecisionBody, SignoffDecisionResult } from '../../../shared/signoff';
-import { signoffs, windows } from '../../../db/schema';
-import { eq } from 'drizzle-orm';
 import { OtpCodeRequiredError } from '../../auth/otp-errors';
 import { withOtpAttempt } from '../../auth/otp-attempts';
 import { spendOtpCode } from '../../auth/otp-keys';
 import { insertAuditEntry } from '../../queries/audit';
+import { insertSignoffDecision, countApprovals, hasDecided } from '../../queries/signoff/signoff-decisions';
+import { selectSignoffWindow } from '../../queries/signoff/signoff-window';
+import { getUsersByIds } from '../../queries/users';
 import { getPolicies } from '../../queries/windows/policies';
-import type { Queryable } from '../../../db/client';
+import type { Queryable, Tx } from '../../../db/client';
 import { issueNotices } from '../notices/issue-notices';
 import { setWindowStatus } from '../windows/set-window-status';
 import { AlreadyDecidedError, NoAcceptedPlanError, NotInReviewError, SelfSignoffError } from './errors';
-import { countApprovals, hasDecided, isOwnWork, loadSignoffContext, quorumFor, riskOfContext, usersByIds, type SignoffContext } from './signoff-rows';
+import { isOwnWork, loadSignoffContext, quorumFor, riskOfContext, type SignoffContext } from './signoff-context';
 import { queueMails, sendBackMail } from './signoff-mail';
 import { logOf, type SignoffDeps } from './submit';
 
@@ -28,7 +29,7 @@ async function confirmWithCode(tx: Queryable, requireCode: boolean, userId: stri
 
 type Recorded = SignoffDecisionResult & { ctx: SignoffContext };
 
-async function record(tx: Queryable, deps: SignoffDeps, windowId: string, user: Me, body: SignoffDecisionBody): Promise<Recorded> {
+async function record(tx: Tx, deps: SignoffDeps, windowId: string, user: Me, body: SignoffDecisionBody): Promise<Recorded> {
   const ctx = await loadSignoffContext(tx, windowId, true);
   if (ctx.window.status !== 'in-review') throw new NotInReviewError(ctx.window.status);
   if (!ctx.plan) throw new NoAcceptedPlanError();
@@ -38,7 +39,7 @@ async function record(tx: Queryable, deps: SignoffDeps, windowId: string, user: 
   const policies = await getPolicies(tx);
   const codeConfirmed = await confirmWithCode(tx, policies.signoffRequireCode, user.id, body.code, deps.now);
   const decision = { windowId, round, planId: ctx.plan.id, approverId: user.id, decision: body.decision, comment: body.comment, codeConfirmed };
-  await tx.insert(signoffs).values({ ...decision, decidedAt: deps.now });
+  await insertSignoffDecision(tx, { ...decision, decidedAt: deps.now });
   await insertAuditEntry(tx, { actorId: user.id, action: 'signoff.decision', entity: 'window', entityId: windowId, at: deps.now, after: decision });
   const quorum = quorumFor(policies, riskOfContext(ctx));
   const approvals = await countApprovals(tx, windowId, round);
@@ -50,8 +51,8 @@ async function record(tx: Queryable, deps: SignoffDeps, windowId: string, user: 
   if (approvals < quorum) return { status: 'in-review', approvals, quorum, notices: null, ctx };
   await setWindowStatus(tx, { ...change, to: 'cleared', action: 'signoff.cleared', details: { round, approvals, quorum } });
   const notices = await issueNotices(tx, { jobs: deps.jobs, config: deps.config, now: deps.now }, windowId, user.id);
-  const [after] = await tx.select({ status: windows.status }).from(windows).where(eq(windows.id, windowId));
-  return { status: after.status, approvals, quorum, notices, ctx };
+  const after = await selectSignoffWindow(tx, windowId);
+  return { status: after!.status, approvals, quorum, notices, ctx };
 }
 
 export async function decideSignoff(deps: SignoffDeps, windowId: string, user: Me, body: SignoffDecisionBody): Promise<SignoffDecisionResult> {
@@ -60,7 +61,7 @@ export async function decideSignoff(deps: SignoffDeps, windowId: string, user: M
   const { ctx, ...result } = body.code ? await withOtpAttempt(deps.db, user.id, deps.now, decide) : await decide();
   if (result.status === 'returned') {
     // The planner who accepted the plan and the window's owner hear of it, with the approver's words.
-    const people = await usersByIds(deps.db, [ctx.plan?.acceptedBy ?? null, ctx.window.ownerId]);
+    const people = await getUsersByIds(deps.db, [ctx.plan?.acceptedBy ?? null, ctx.window.ownerId]);
     const log = logOf(deps);
     await queueMails(deps.jobs, (to) => sendBackMail(deps.config, ctx.window, user.name, body.comment, to),
       [...people.values()].map((p) => p.email), (err) => log(`send-back mail for ${windowId} not queued`, err));

@@ -1,7 +1,7 @@
 // The e-mails of sign-off: a request to every approver, and a send-back to the planner; sent after the commit.
 import type { ServerConfig } from '../../env';
+import type { SignoffWindow } from '../../queries/signoff/signoff-window';
 import type { MailJob, MailQueue } from '../ports';
-import type { SignoffWindow } from './signoff-rows';
 
 const when = (w: SignoffWindow) => `${w.startsAt.toISOString().replace('T', ' ').slice(0, 16)} – ${w.endsAt.toISOString().replace('T', ' ').slice(0, 16)} UTC`;
 

@@ -3,10 +3,11 @@ import type { Me } from '../../../shared/api';
 import type { SignoffSubmitResult } from '../../../shared/signoff';
 import type { Db } from '../../../db/client';
 import type { ServerConfig } from '../../env';
+import { listUsersWithRole } from '../../queries/users';
 import type { MailQueue } from '../ports';
 import { setWindowStatus } from '../windows/set-window-status';
 import { NoAcceptedPlanError } from './errors';
-import { listApprovers, loadSignoffContext, riskOfContext } from './signoff-rows';
+import { loadSignoffContext, riskOfContext } from './signoff-context';
 import { queueMails, signoffRequestMail } from './signoff-mail';
 
 export type SignoffDeps = { db: Db; config: ServerConfig; jobs: MailQueue; now: Date; log?: (message: string, err: unknown) => void };
@@ -26,7 +27,7 @@ export async function submitForSignoff(deps: SignoffDeps, windowId: string, user
     return { window: ctx.window, round: next };
   });
   // After the commit: a mail must never announce a submission that was rolled back.
-  const approvers = await listApprovers(deps.db);
+  const approvers = await listUsersWithRole(deps.db, 'approver');
   const log = logOf(deps);
   const approversMailed = await queueMails(
     deps.jobs, (to) => signoffRequestMail(deps.config, window, round, to), approvers.map((a) => a.email),

@@ -1,8 +1,7 @@
 // Pieces of the one-screen summary worked out from the accepted plan's review: tenants, unresolved slices, risks.
-import { inArray } from 'drizzle-orm';
-import { sites, spans, tenants } from '../../../db/schema';
 import type { PlanReview } from '../../../shared/plans';
 import type { SignoffSummary } from '../../../shared/signoff';
+import { selectSiteNames, selectSpanEnds } from '../../queries/signoff/element-names';
 import type { ElementRow } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
 
@@ -14,12 +13,6 @@ type Slice = PlanReview['slices'][number];
 const moving = (s: Slice) => s.outcome === 'move' || s.outcome === 'reroute';
 /** A slice the window does not touch, moved to make room for affected ones. */
 const isKnockOn = (s: Slice) => s.madeRoomFor.length > 0;
-
-export async function tenantNames(db: Queryable, ids: string[]): Promise<Map<string, string>> {
-  if (ids.length === 0) return new Map();
-  const rows = await db.select({ id: tenants.id, name: tenants.name }).from(tenants).where(inArray(tenants.id, ids));
-  return new Map(rows.map((r) => [r.id, r.name]));
-}
 
 /** Tenants with moving slices first; knock-on moves count apart from the affected slices. */
 export function tenantCounts(review: PlanReview, names: Map<string, string>): SignoffSummary['tenants'] {
@@ -73,10 +66,9 @@ export function highestRisks(review: PlanReview): SignoffSummary['highestRisks']
 /** Sites by name, spans as "A – B" by their end sites' names (spans have no names of their own). */
 export async function namedElements(db: Queryable, elements: ElementRow[]): Promise<SignoffSummary['window']['elements']> {
   const spanIds = elements.filter((e) => e.kind === 'span').map((e) => e.id);
-  const spanRows = spanIds.length ? await db.select({ id: spans.id, a: spans.siteA, b: spans.siteB }).from(spans).where(inArray(spans.id, spanIds)) : [];
+  const spanRows = await selectSpanEnds(db, spanIds);
   const siteIds = [...elements.filter((e) => e.kind === 'site').map((e) => e.id), ...spanRows.flatMap((s) => [s.a, s.b])];
-  const siteRows = siteIds.length ? await db.select({ id: sites.id, name: sites.name }).from(sites).where(inArray(sites.id, siteIds)) : [];
-  const site = new Map(siteRows.map((s) => [s.id, s.name]));
+  const site = await selectSiteNames(db, siteIds);
   const span = new Map(spanRows.map((s) => [s.id, `${site.get(s.a) ?? s.a} – ${site.get(s.b) ?? s.b}`]));
   return elements.map((e) => ({ ...e, name: (e.kind === 'site' ? site.get(e.id) : span.get(e.id)) ?? e.id }));
 }

@@ -1,21 +1,18 @@
 // The approver's one-screen summary of a window's accepted plan, and the queue of windows awaiting decisions.
-import { asc, eq } from 'drizzle-orm';
 import type { Db } from '../../../db/client';
-import { windows } from '../../../db/schema';
 import type { Me } from '../../../shared/api';
 import type { SignoffQueue, SignoffQueueItem, SignoffSummary } from '../../../shared/signoff';
+import { selectTenantNames } from '../../queries/signoff/element-names';
+import { countApprovals, hasDecided } from '../../queries/signoff/signoff-decisions';
+import { selectWindowIdsInReview } from '../../queries/signoff/signoff-window';
+import { getUsersByIds } from '../../queries/users';
 import { getPolicies } from '../../queries/windows/policies';
 import { getWindowDocument } from '../../queries/windows/documents';
 import { selectElementsByWindow } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
 import { SignoffNotFoundError } from './errors';
-import {
-  countApprovals, hasDecided, isOwnWork, listDecisions, loadSignoffContext, quorumFor, riskOfContext, usersByIds,
-  type SignoffContext,
-} from './signoff-rows';
-import {
-  highestRisks, knockOnMoves, namedElements, planTotals, tenantCounts, tenantNames, unresolvedSlices,
-} from './summary-parts';
+import { isOwnWork, listDecisions, loadSignoffContext, quorumFor, riskOfContext, type SignoffContext } from './signoff-context';
+import { highestRisks, knockOnMoves, namedElements, planTotals, tenantCounts, unresolvedSlices } from './summary-parts';
 
 type My = SignoffSummary['me'];
 
@@ -39,10 +36,10 @@ export async function signoffSummary(db: Db, windowId: string, user: Me): Promis
   const w = ctx.window;
   const [policies, elements, doc, people, decisions, approvals, me] = await Promise.all([
     getPolicies(db), selectElementsByWindow(db, [w.id]), getWindowDocument(db, w.id),
-    usersByIds(db, [w.ownerId, plan.acceptedBy]), listDecisions(db, w.id), countApprovals(db, w.id, w.reviewRound),
+    getUsersByIds(db, [w.ownerId, plan.acceptedBy]), listDecisions(db, w.id), countApprovals(db, w.id, w.reviewRound),
     myState(db, ctx, user),
   ]);
-  const names = await tenantNames(db, [...new Set(plan.review.slices.map((s) => s.tenantId))]);
+  const names = await selectTenantNames(db, [...new Set(plan.review.slices.map((s) => s.tenantId))]);
   const riskClass = riskOfContext(ctx);
   return {
     window: {
@@ -80,7 +77,7 @@ async function queueItem(db: Queryable, windowId: string, user: Me, quorum: (ctx
 /** Windows in review, soonest first. A handful at a time in practice, so one look-up each is fine (on the pool). */
 export async function signoffQueue(db: Db, user: Me): Promise<SignoffQueue> {
   const policies = await getPolicies(db);
-  const rows = await db.select({ id: windows.id }).from(windows).where(eq(windows.status, 'in-review')).orderBy(asc(windows.startsAt), asc(windows.id));
-  const items = await Promise.all(rows.map((r) => queueItem(db, r.id, user, (ctx) => quorumFor(policies, riskOfContext(ctx)))));
+  const ids = await selectWindowIdsInReview(db);
+  const items = await Promise.all(ids.map((id) => queueItem(db, id, user, (ctx) => quorumFor(policies, riskOfContext(ctx)))));
   return { windows: items, requireCode: policies.signoffRequireCode };
 }
