@@ -1,4 +1,5 @@
-// Reads windows with their elements, owner, MOP details and stored-impact flag; writes the window row itself.
+// Reads windows with their elements, owner, MOP details and stored-impact flag; inserts the window row and its
+// elements (changes to an existing row go through window-status.ts).
 import { and, asc, eq, gt, inArray, lt, ne, sql, type SQL } from 'drizzle-orm';
 import type { Queryable, Tx } from '../../../db/client';
 import { users, windowDocuments, windowElements, windowImpacts, windows } from '../../../db/schema';
@@ -89,18 +90,6 @@ export type WindowWrite = {
 export async function insertWindowRow(tx: Tx, row: WindowWrite & { id: string; ownerId: string; now: Date }): Promise<void> {
   const { now, ...values } = row;
   await tx.insert(windows).values({ ...values, version: 1, createdAt: now, updatedAt: now });
-}
-
-/** Optimistic locking: writes only when the version still matches; returns the new version or null. */
-export async function updateWindowRow(
-  tx: Tx, id: string, expectedVersion: number, row: Partial<WindowWrite> & { now: Date },
-): Promise<number | null> {
-  const { now, ...values } = row;
-  const updated = await tx.update(windows)
-    .set({ ...values, updatedAt: now, version: sql`${windows.version} + 1` })
-    .where(and(eq(windows.id, id), eq(windows.version, expectedVersion)))
-    .returning({ version: windows.version });
-  return updated[0]?.version ?? null;
 }
 
 export async function replaceElements(tx: Tx, windowId: string, elements: ElementRow[]): Promise<void> {

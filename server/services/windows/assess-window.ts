@@ -2,13 +2,12 @@
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import type { WindowImpact } from '../../../shared/window-impact';
-import { insertAuditEntry } from '../../queries/audit';
 import { findUnknownElements } from '../../queries/windows/elements';
 import { upsertWindowImpact } from '../../queries/windows/impacts';
-import { updateWindowRow } from '../../queries/windows/window-rows';
 import { loadInventory } from '../inventory/load-scenario';
 import { computeWindowImpact } from './compute-impact';
 import { IllegalTransitionError, StaleVersionError, UnknownElementsError } from './errors';
+import { setWindowStatus } from './set-window-status';
 import { loadWindow } from './window-view';
 
 export async function assessWindow(
@@ -24,18 +23,15 @@ export async function assessWindow(
   if (unknown.length > 0) throw new UnknownElementsError(unknown);
   const { scenario, inventory } = await loadInventory(db);
   return db.transaction(async (tx) => {
-    const version = await updateWindowRow(tx, id, w.version, { status: 'assessed', now: opts.now });
-    if (version === null) throw new StaleVersionError();
-    const impact = computeWindowImpact(scenario, inventory, { ...w, version }, opts.now);
-    await upsertWindowImpact(tx, impact);
-    await insertAuditEntry(tx, {
-      actorId: opts.user.id, action: 'window.assess', entity: 'window', entityId: id, at: opts.now,
-      before: { status: w.status, version: w.version },
-      after: {
-        status: 'assessed', version, affectedSlices: impact.affected.length,
-        touchesCritical: impact.touchesCritical, splits: impact.splits,
+    let impact: WindowImpact | undefined;
+    await setWindowStatus(tx, {
+      windowId: id, version: w.version, to: 'assessed', actorId: opts.user.id, action: 'window.assess', now: opts.now,
+      alongside: async (version) => {
+        impact = computeWindowImpact(scenario, inventory, { ...w, version }, opts.now);
+        await upsertWindowImpact(tx, impact);
+        return { affectedSlices: impact.affected.length, touchesCritical: impact.touchesCritical, splits: impact.splits };
       },
     });
-    return impact;
+    return impact!;
   });
 }

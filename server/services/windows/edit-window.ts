@@ -3,12 +3,12 @@
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import type { WindowPatch, WindowStatus } from '../../../shared/windows';
-import { insertAuditEntry } from '../../queries/audit';
 import { deleteWindowImpact } from '../../queries/windows/impacts';
-import { replaceElements, updateWindowRow, type ElementRow } from '../../queries/windows/window-rows';
+import { replaceElements, type ElementRow } from '../../queries/windows/window-rows';
 import { clearAcceptedPlan } from '../plans/clear-accepted';
 import { checkBooking, toElementRows } from './booking-checks';
 import { StaleVersionError, WindowNotEditableError } from './errors';
+import { setWindowStatus } from './set-window-status';
 import { windowSnapshot } from './snapshot';
 import { loadWindow, type LoadedWindow } from './window-view';
 
@@ -40,7 +40,7 @@ export async function editWindow(db: Db, id: string, patch: WindowPatch, user: M
   }, user, now);
   const invalidates = c.timesChanged || c.elementsChanged;
   const reverted = invalidates && current.status !== 'draft';
-  const row = {
+  const { status, ...columns } = {
     title: patch.title ?? current.title, startsAt: c.startsAt, endsAt: c.endsAt,
     workType: patch.workType === undefined ? current.workType : patch.workType,
     notes: patch.notes === undefined ? current.notes : patch.notes,
@@ -48,15 +48,16 @@ export async function editWindow(db: Db, id: string, patch: WindowPatch, user: M
     freezeOverrideReason: c.timesChanged ? freezeReason : current.freezeOverrideReason,
   };
   await db.transaction(async (tx) => {
-    const version = await updateWindowRow(tx, id, patch.version, { ...row, now });
-    if (version === null) throw new StaleVersionError();
-    if (c.elementsChanged) await replaceElements(tx, id, c.elements);
-    const impactDropped = invalidates ? await deleteWindowImpact(tx, id) : false;
-    const planDropped = reverted ? await clearAcceptedPlan(tx, id) : null;
-    await insertAuditEntry(tx, {
-      actorId: user.id, action: 'window.update', entity: 'window', entityId: id, at: now,
-      before: windowSnapshot(current),
-      after: { ...windowSnapshot({ ...row, version, elements: c.elements }), reverted, impactDropped, planDropped },
+    await setWindowStatus(tx, {
+      windowId: id, version: patch.version, to: status, set: columns, actorId: user.id, action: 'window.update', now,
+      snapshot: { before: windowSnapshot(current), after: (version) => windowSnapshot({ ...columns, status, version, elements: c.elements }) },
+      details: { reverted },
+      alongside: async () => {
+        if (c.elementsChanged) await replaceElements(tx, id, c.elements);
+        const impactDropped = invalidates ? await deleteWindowImpact(tx, id) : false;
+        const planDropped = reverted ? await clearAcceptedPlan(tx, id) : null;
+        return { impactDropped, planDropped };
+      },
     });
   });
   return { reverted };

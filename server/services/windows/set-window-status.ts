@@ -1,43 +1,57 @@
-// The one way services outside the lifecycle route move a window to another state (plan accepted, sent for
-// sign-off, cleared, returned, notified …): checks the state it is in, bumps the version, writes the audit row.
-import { and, eq, inArray, sql } from 'drizzle-orm';
-import { windows } from '../../../db/schema';
+// The one way a window changes state (assessed, edited back to draft, plan accepted, sent for sign-off, cleared,
+// returned, notified, started, finished, withdrawn …): checks the state or version the caller relies on, moves the
+// status, bumps the version and writes the audit row, all in the caller's transaction.
 import type { WindowStatus } from '../../../shared/windows';
 import { insertAuditEntry } from '../../queries/audit';
+import { selectWindowState, updateWindowStatus, type WindowColumns } from '../../queries/windows/window-status';
 import type { Queryable } from '../../../db/client';
-import { IllegalTransitionError } from './errors';
+import { IllegalTransitionError, StaleVersionError } from './errors';
+
+type Facts = Record<string, unknown>;
 
 export interface StatusChange {
   windowId: string;
   /** the states the window may be in for this change; anything else is refused (409) */
-  from: readonly WindowStatus[];
+  from?: readonly WindowStatus[];
+  /** optimistic locking: the version the caller read; another version is refused as stale (409) */
+  version?: number;
   to: WindowStatus;
   actorId: string | null;
   /** audit action, e.g. `plan.accept`, `signoff.submit` */
   action: string;
   now: Date;
   /** extra columns to set in the same update */
-  set?: { acceptedPlanId?: string | null; reviewRound?: number };
+  set?: WindowColumns;
   /** extra facts for the audit row's `after` */
-  details?: Record<string, unknown>;
+  details?: Facts;
+  /** work that belongs to the change, run after the update and before the audit row; its facts join `after` */
+  alongside?: (version: number) => Promise<Facts | void>;
+  /** the audit row's before and after when they record the whole window (an edit), not only status and version */
+  snapshot?: { before: Facts; after: (version: number) => Facts };
+}
+
+async function lockedState(tx: Queryable, c: StatusChange) {
+  const before = await selectWindowState(tx, c.windowId, { lock: true });
+  if (c.version !== undefined && before?.version !== c.version) throw new StaleVersionError();
+  if (!before) throw new IllegalTransitionError('(missing)', c.to, `window ${c.windowId} does not exist.`);
+  if (c.from && !c.from.includes(before.status)) {
+    throw new IllegalTransitionError(before.status, c.to, `This needs the window in: ${c.from.join(', ')}.`);
+  }
+  return before;
 }
 
 /** Run inside the caller's transaction; returns the new version. */
 export async function setWindowStatus(tx: Queryable, c: StatusChange): Promise<number> {
-  const [before] = await tx.select({ status: windows.status, version: windows.version })
-    .from(windows).where(eq(windows.id, c.windowId)).for('update');
-  if (!before) throw new IllegalTransitionError('(missing)', c.to, `window ${c.windowId} does not exist.`);
-  if (!c.from.includes(before.status)) {
-    throw new IllegalTransitionError(before.status, c.to, `This needs the window in: ${c.from.join(', ')}.`);
-  }
-  const [row] = await tx.update(windows)
-    .set({ status: c.to, version: sql`${windows.version} + 1`, updatedAt: c.now, ...c.set })
-    .where(and(eq(windows.id, c.windowId), inArray(windows.status, [...c.from])))
-    .returning({ version: windows.version });
+  const before = await lockedState(tx, c);
+  const version = await updateWindowStatus(tx, c.windowId, { to: c.to, now: c.now, set: c.set }, { statuses: c.from, version: c.version });
+  if (version === null) throw new StaleVersionError();
+  const facts = (await c.alongside?.(version)) ?? {};
+  const base = c.snapshot
+    ? { before: c.snapshot.before, after: c.snapshot.after(version) }
+    : { before: { status: before.status, version: before.version }, after: { status: c.to, version, ...c.set } };
   await insertAuditEntry(tx, {
     actorId: c.actorId, action: c.action, entity: 'window', entityId: c.windowId, at: c.now,
-    before: { status: before.status, version: before.version },
-    after: { status: c.to, version: row.version, ...c.set, ...c.details },
+    before: base.before, after: { ...base.after, ...c.details, ...facts },
   });
-  return row.version;
+  return version;
 }
