@@ -4,7 +4,7 @@
 import { and, count, eq, gt } from 'drizzle-orm';
 import type { Db } from '../../db/client';
 import { auditLog } from '../../db/schema';
-import { insertAuditEntry } from '../queries/audit';
+import { insertAuditEntry } from '../queries/audit/audit-log';
 import { OtpCodeInvalidError, OtpCodeReplayedError, OtpLockedError } from './otp-errors';
 
 /** Common practice for second-factor codes: a handful of tries, then a pause (NIST SP 800-63B §5.2.2 asks for a limit; memory). */

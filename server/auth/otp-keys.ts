@@ -3,7 +3,7 @@ import { eq } from 'drizzle-orm';
 import QRCode from 'qrcode';
 import { userOtpKeys } from '../../db/schema';
 import type { OtpEnrolment, OtpStatus } from '../../shared/signoff';
-import { insertAuditEntry } from '../queries/audit';
+import { insertAuditEntry } from '../queries/audit/audit-log';
 import type { Queryable } from '../../db/client';
 import { checkOtpCode, decodeOtpKey, encodeOtpKey, newOtpKey, otpKeyUri } from './otp';
 import {

@@ -5,7 +5,7 @@ import { imports } from '../../db/schema';
 import type { Tx } from '../../db/client';
 import type { ImportApplied, ImportPreview } from '../../shared/imports';
 import { AppError } from '../errors';
-import { insertAuditEntry } from '../queries/audit';
+import { insertAuditEntry } from '../queries/audit/audit-log';
 import { loadScenario } from '../services/inventory/load-scenario';
 import { scenarioChecksum } from './canonical';
 import { diffScenarios } from './diff';

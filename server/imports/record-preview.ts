@@ -2,7 +2,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Db } from '../../db/client';
 import { imports } from '../../db/schema';
-import { insertAuditEntry } from '../queries/audit';
+import { insertAuditEntry } from '../queries/audit/audit-log';
 import type { PreviewResult } from './preview';
 
 export async function recordPreview(

@@ -3,7 +3,7 @@ import express, { type Router } from 'express';
 import { ADMIN_ROLES, OPERATOR_ROLES } from '../../shared/permissions';
 import { policiesPatchSchema, policiesResponseSchema } from '../../shared/policies';
 import { currentUser, requireRole } from '../auth/guards';
-import { insertAuditEntry } from '../queries/audit';
+import { insertAuditEntry } from '../queries/audit/audit-log';
 import { getPolicies, upsertPolicies } from '../queries/windows/policies';
 import type { RouteDeps } from './deps';
 

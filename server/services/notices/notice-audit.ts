@@ -1,5 +1,5 @@
 // Audit rows for notices: who changed which notice, from what to what.
-import { insertAuditEntry } from '../../queries/audit';
+import { insertAuditEntry } from '../../queries/audit/audit-log';
 import type { Queryable } from '../../../db/client';
 
 type NoticeState = { status: string; method: string; sequence: number; [key: string]: unknown };

@@ -2,7 +2,7 @@
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import { planReviewSchema, type PlanAccept } from '../../../shared/plans';
-import { insertAuditEntry } from '../../queries/audit';
+import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { lockForTransaction } from '../../queries/locks';
 import { markPlanAccepted, selectPlanRow } from '../../queries/plans/plan-rows';
 import { setWindowStatus } from '../windows/set-window-status';

@@ -2,7 +2,7 @@
 // `return` (and a roll-back) restores the ones from before as a further revision when it ends (DESIGN §4.3).
 import { planReviewSchema, planSettingsSchema, type PlacementView, type PlanSlice } from '../../../shared/plans';
 import type { WindowStatus } from '../../../shared/windows';
-import { insertAuditEntry } from '../../queries/audit';
+import { insertAuditEntry } from '../../queries/audit/audit-log';
 import type { Queryable } from '../../../db/client';
 import { insertCurrentPlacement, lockLatestPlacementRevision, retireCurrentPlacement } from '../../queries/plans/placement-revisions';
 import { selectPlanRow } from '../../queries/plans/plan-rows';

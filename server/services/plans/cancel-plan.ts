@@ -1,7 +1,7 @@
 // Cancels a queued or running plan run: the row says `cancelled` at once; the worker stops when it sees that.
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
-import { insertAuditEntry } from '../../queries/audit';
+import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { endPlanRun, selectPlanRow } from '../../queries/plans/plan-rows';
 import type { PlanQueue } from '../ports';
 import { PlanNotCancellableError, PlanNotFoundError } from './errors';

@@ -6,7 +6,7 @@ import type { PlanSettings } from '../../../shared/plans';
 import type { WindowStatus } from '../../../shared/windows';
 import type { ServerConfig } from '../../env';
 import type { PlanQueue } from '../ports';
-import { insertAuditEntry } from '../../queries/audit';
+import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { selectExistingFunctionIds, selectExistingSiteIds } from '../../queries/plans/plan-inputs';
 import { endPlanRun, insertPlanRow, setPlanJobId } from '../../queries/plans/plan-rows';
 import { ImpactNotCurrentError, QueueUnavailableError, UnknownPlanInputsError, WindowNotPlannableError } from './errors';

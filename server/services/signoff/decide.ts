@@ -4,7 +4,7 @@ import type { SignoffDecisionBody, SignoffDecisionResult } from '../../../shared
 import { OtpCodeRequiredError } from '../../auth/otp-errors';
 import { withOtpAttempt } from '../../auth/otp-attempts';
 import { spendOtpCode } from '../../auth/otp-keys';
-import { insertAuditEntry } from '../../queries/audit';
+import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { insertSignoffDecision, countApprovals, hasDecided } from '../../queries/signoff/signoff-decisions';
 import { selectSignoffWindow } from '../../queries/signoff/signoff-window';
 import { getUsersByIds } from '../../queries/users';

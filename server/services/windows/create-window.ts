@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import type { WindowCreate } from '../../../shared/windows';
-import { insertAuditEntry } from '../../queries/audit';
+import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { insertWindowRow, replaceElements } from '../../queries/windows/window-rows';
 import { checkBooking, toElementRows } from './booking-checks';
 import { windowSnapshot } from './snapshot';

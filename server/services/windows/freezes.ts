@@ -3,7 +3,7 @@ import { randomUUID } from 'node:crypto';
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import type { Freeze, FreezeCreate, FreezePatch } from '../../../shared/freezes';
-import { insertAuditEntry } from '../../queries/audit';
+import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { deleteFreeze, getFreeze, insertFreeze, updateFreeze, type FreezeRow } from '../../queries/windows/freezes';
 import { FreezeNotFoundError, FreezeOrderError } from './errors';
 

@@ -3,7 +3,7 @@ import type { RequestHandler } from 'express';
 import multer from 'multer';
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
-import { insertAuditEntry } from '../../queries/audit';
+import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { getWindowDocument, upsertWindowDocument } from '../../queries/windows/documents';
 import { MopMissingError, MopTooLargeError, MopTypeError } from './errors';
 

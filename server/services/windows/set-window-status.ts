@@ -2,7 +2,7 @@
 // returned, notified, started, finished, withdrawn …): checks the state or version the caller relies on, moves the
 // status, bumps the version and writes the audit row, all in the caller's transaction.
 import type { WindowStatus } from '../../../shared/windows';
-import { insertAuditEntry } from '../../queries/audit';
+import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { selectWindowState, updateWindowStatus, type WindowColumns } from '../../queries/windows/window-status';
 import type { Queryable } from '../../../db/client';
 import { IllegalTransitionError, StaleVersionError } from './errors';

@@ -1,6 +1,6 @@
 // The audit log: one row per state change (who, what, when, before, after).
-import type { Db } from '../../db/client';
-import { auditLog } from '../../db/schema';
+import type { Db } from '../../../db/client';
+import { auditLog } from '../../../db/schema';
 
 export type AuditEntry = {
   actorId: string | null;
