@@ -1,8 +1,8 @@
 // Session life cycle: create at sign-in, validate per request (inactivity expiry), invalidate at sign-out.
 import type { Db } from '../../db/client';
 import type { Me } from '../../shared/api';
-import { deleteSession, getSessionById, insertSession, touchSession } from '../queries/sessions';
-import { getUserById } from '../queries/users';
+import { deleteSession, getSessionById, insertSession, touchSession } from '../queries/auth/sessions';
+import { getUserById } from '../queries/auth/users';
 import type { SessionAuth } from './request-auth';
 import { generateSessionToken, parseSessionToken, secretMatches } from './session-token';
 

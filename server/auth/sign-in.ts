@@ -3,7 +3,7 @@ import type { Db } from '../../db/client';
 import type { Me } from '../../shared/api';
 import { BadCredentialsError } from '../errors';
 import { insertAuditEntry } from '../queries/audit/audit-log';
-import { getUserById, getUserCredentialsByEmail } from '../queries/users';
+import { getUserById, getUserCredentialsByEmail } from '../queries/auth/users';
 import { verifyDummyPassword, verifyPassword } from './password';
 import { createSession, invalidateSession } from './sessions';
 

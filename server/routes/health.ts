@@ -1,7 +1,7 @@
 // GET /api/health: 200 {"ok":true,"db":true}, or 503 {"ok":false,"db":false} when the database does not answer.
 import express, { type Router } from 'express';
 import { healthSchema } from '../../shared/api';
-import { pingDatabase } from '../queries/health';
+import { pingDatabase } from '../queries/health/ping-database';
 import type { RouteDeps } from './deps';
 
 const DB_PING_TIMEOUT_MS = 2000;

@@ -3,7 +3,7 @@ import express, { type Router } from 'express';
 import { overviewSchema } from '../../shared/api';
 import { tenantScopeOf } from '../../shared/permissions';
 import { currentUser, requireAuth } from '../auth/guards';
-import { getNetworkOverview, getTenantOverview } from '../queries/overview';
+import { getNetworkOverview, getTenantOverview } from '../queries/overview/overview-figures';
 import type { RouteDeps } from './deps';
 
 export function overviewRouter({ db, now }: RouteDeps): Router {

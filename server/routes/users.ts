@@ -3,7 +3,7 @@ import express, { type Router } from 'express';
 import { userListSchema } from '../../shared/api';
 import { ADMIN_ROLES } from '../../shared/permissions';
 import { requireRole } from '../auth/guards';
-import { listUsersWithRoles } from '../queries/users';
+import { listUsersWithRoles } from '../queries/auth/users';
 import type { RouteDeps } from './deps';
 
 export function usersRouter({ db }: RouteDeps): Router {

@@ -7,7 +7,7 @@ import { spendOtpCode } from '../../auth/otp-keys';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { insertSignoffDecision, countApprovals, hasDecided } from '../../queries/signoff/signoff-decisions';
 import { selectSignoffWindow } from '../../queries/signoff/signoff-window';
-import { getUsersByIds } from '../../queries/users';
+import { getUsersByIds } from '../../queries/auth/users';
 import { getPolicies } from '../../queries/windows/policies';
 import type { Queryable, Tx } from '../../../db/client';
 import { issueNotices } from '../notices/issue-notices';

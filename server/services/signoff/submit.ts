@@ -3,7 +3,7 @@ import type { Me } from '../../../shared/api';
 import type { SignoffSubmitResult } from '../../../shared/signoff';
 import type { Db } from '../../../db/client';
 import type { ServerConfig } from '../../env';
-import { listUsersWithRole } from '../../queries/users';
+import { listUsersWithRole } from '../../queries/auth/users';
 import type { MailQueue } from '../ports';
 import { setWindowStatus } from '../windows/set-window-status';
 import { NoAcceptedPlanError } from './errors';

@@ -5,7 +5,7 @@ import type { SignoffQueue, SignoffQueueItem, SignoffSummary } from '../../../sh
 import { selectTenantNames } from '../../queries/signoff/element-names';
 import { countApprovals, hasDecided } from '../../queries/signoff/signoff-decisions';
 import { selectWindowIdsInReview } from '../../queries/signoff/signoff-window';
-import { getUsersByIds } from '../../queries/users';
+import { getUsersByIds } from '../../queries/auth/users';
 import { getPolicies } from '../../queries/windows/policies';
 import { getWindowDocument } from '../../queries/windows/documents';
 import { selectElementsByWindow } from '../../queries/windows/window-rows';

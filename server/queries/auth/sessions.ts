@@ -1,7 +1,7 @@
 // Session rows: created at sign-in, read on every request, touched at most hourly, deleted on sign-out.
 import { eq } from 'drizzle-orm';
-import type { Db } from '../../db/client';
-import { sessions } from '../../db/schema';
+import type { Db } from '../../../db/client';
+import { sessions } from '../../../db/schema';
 
 export type SessionRow = { id: string; userId: string; secretHash: string; lastActiveAt: Date };
 

@@ -1,8 +1,8 @@
 // User look-ups for sign-in, the session, the admin user list and the people a mail goes to.
 import { and, asc, eq, inArray, sql } from 'drizzle-orm';
-import type { Db, Queryable } from '../../db/client';
-import { passwordCredentials, roleGrants, users } from '../../db/schema';
-import { ROLE_NAMES, type Me, type RoleName } from '../../shared/api';
+import type { Db, Queryable } from '../../../db/client';
+import { passwordCredentials, roleGrants, users } from '../../../db/schema';
+import { ROLE_NAMES, type Me, type RoleName } from '../../../shared/api';
 
 /** The user's id and password hash, matched case-insensitively on e-mail; null when unknown. */
 export async function getUserCredentialsByEmail(

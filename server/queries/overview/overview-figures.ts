@@ -1,7 +1,7 @@
 // Overview figures: network-wide for staff; for a tenant user, only what its own slices touch.
 import { sql, type SQL } from 'drizzle-orm';
-import type { Db } from '../../db/client';
-import type { Overview } from '../../shared/api';
+import type { Db } from '../../../db/client';
+import type { Overview } from '../../../shared/api';
 
 const NEXT_WINDOWS = 5;
 const HORIZON_DAYS = 30;

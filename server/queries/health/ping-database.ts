@@ -1,6 +1,6 @@
 // Database reachability for the health route.
 import { sql } from 'drizzle-orm';
-import type { Db } from '../../db/client';
+import type { Db } from '../../../db/client';
 
 /** True when `select 1` answers within `timeoutMs`; never throws. */
 export async function pingDatabase(db: Db, { timeoutMs }: { timeoutMs: number }): Promise<boolean> {
