@@ -12,6 +12,8 @@ export function LoadingState({ label = 'Loading…' }: { label?: string }) {
   );
 }
 
+// Callers pass `() => void query.refetch()`: React Query's refetch resolves even when the request fails (the failure
+// lands in the query's error state), so nothing is lost by not awaiting it.
 export function ErrorState({ message, onRetry }: { message: string; onRetry?: () => void }) {
   return (
     <View style={styles.centre} testID="state-error" role="alert">

@@ -12,7 +12,7 @@ export default function MainLayout() {
   const router = useRouter();
 
   if (me.isError && isApiError(me.error) && me.error.status === 401) return <Redirect href="/sign-in" />;
-  if (me.isError) return <ErrorState message={me.error.message} onRetry={() => me.refetch()} />;
+  if (me.isError) return <ErrorState message={me.error.message} onRetry={() => void me.refetch()} />;
   if (!me.data) return <LoadingState />;
   return (
     <AppShell

@@ -5,7 +5,7 @@ import { isOverviewEmpty, OverviewView } from '@/components/overview/overview-vi
 
 export default function OverviewScreen() {
   const overview = useOverviewQuery();
-  if (overview.isError) return <ErrorState message={overview.error.message} onRetry={() => overview.refetch()} />;
+  if (overview.isError) return <ErrorState message={overview.error.message} onRetry={() => void overview.refetch()} />;
   if (!overview.data) return <LoadingState label="Loading the overview…" />;
   if (isOverviewEmpty(overview.data)) {
     return <EmptyState title="No network loaded yet" hint="Import a scenario to see sites, slices and windows here." />;

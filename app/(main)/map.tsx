@@ -7,7 +7,7 @@ import { MapScreenView } from '@/components/map/map-screen-view';
 export default function MapScreen() {
   const map = useNetworkMapQuery();
   const router = useRouter();
-  if (map.isError) return <ErrorState message={map.error.message} onRetry={() => map.refetch()} />;
+  if (map.isError) return <ErrorState message={map.error.message} onRetry={() => void map.refetch()} />;
   if (!map.data) return <LoadingState label="Loading the map…" />;
   if (map.data.sites.length === 0) {
     return <EmptyState title="No network to show yet" hint="Import a scenario or a topology to see its sites and spans here." />;

@@ -72,7 +72,7 @@ export function ImpactReview({ window: w, me, timeZone, onOpenWindow }: Props) {
   if (impact.isError && isNoImpactYet(impact.error)) {
     content = <Text style={styles.bodyText} testID="impact-none">The impact of this window has not been assessed yet.</Text>;
   } else if (impact.isError) {
-    content = <ErrorState message={impact.error.message} onRetry={() => impact.refetch()} />;
+    content = <ErrorState message={impact.error.message} onRetry={() => void impact.refetch()} />;
   } else if (!impact.data) {
     content = <LoadingState label="Loading the impact…" />;
   } else {

@@ -38,7 +38,8 @@ export function UploadPanel({ kind, onKindChange, onPick, uploading, uploadError
       <View style={styles.templates}>
         <Text style={styles.label}>CSV templates</Text>
         {TEMPLATES.map((t) => (
-          <Pressable key={t.kind} role="link" testID={`import-template-${t.kind}`} onPress={() => Linking.openURL(importTemplateUrl(t.kind))}>
+          // Opening a link is fire-and-forget: it only rejects when no app can open an http URL, and a browser always can.
+          <Pressable key={t.kind} role="link" testID={`import-template-${t.kind}`} onPress={() => void Linking.openURL(importTemplateUrl(t.kind))}>
             <Text style={styles.link}>{t.label}</Text>
           </Pressable>
         ))}

@@ -17,7 +17,7 @@ export function useImportFlow() {
   const apply = useImportApplyMutation();
   const detail = useImportQuery(created?.id === currentId ? null : currentId);
 
-  const pick = async () => {
+  const pickAndUpload = async () => {
     setPickError(null);
     let file;
     try {
@@ -40,7 +40,9 @@ export function useImportFlow() {
     created && created.id === currentId ? { ...created, status: applied[created.id] ? 'applied' : 'previewed' } : (detail.data ?? null);
 
   return {
-    kind, setKind, pick, record, currentId,
+    kind, setKind, record, currentId,
+    // Fire-and-forget from a button: pickAndUpload catches its own failure and shows it as pickError.
+    pick: () => { void pickAndUpload(); },
     open: (id: string) => { apply.reset(); setCurrentId(id); },
     uploading: upload.isPending,
     uploadError: pickError ?? upload.error?.message ?? null,

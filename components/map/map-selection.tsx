@@ -66,7 +66,7 @@ function SiteSelection({ id, onClose, onOpenSlice, onOpen }: Part) {
   const d = query.data;
   return (
     <Frame title={d?.site.name ?? id} subtitle={d ? `${KIND_LABELS[d.site.kind]} site · ${id}` : 'Site'} onClose={onClose} onOpen={onOpen}>
-      {!d ? <Waiting error={query.error} onRetry={() => query.refetch()} /> : (
+      {!d ? <Waiting error={query.error} onRetry={() => void query.refetch()} /> : (
         <>
           <View style={styles.facts}>
             <Fact label="Compute used" value={`${formatUtilisation(d.site.utilisation)} of ${d.site.cpu} vCPU`} />
@@ -85,7 +85,7 @@ function SpanSelection({ id, onClose, onOpenSlice, onOpen }: Part) {
   const d = query.data;
   return (
     <Frame title={d ? `${d.span.aName} — ${d.span.bName}` : id} subtitle={`Span · ${id}`} onClose={onClose} onOpen={onOpen}>
-      {!d ? <Waiting error={query.error} onRetry={() => query.refetch()} /> : (
+      {!d ? <Waiting error={query.error} onRetry={() => void query.refetch()} /> : (
         <>
           <View style={styles.facts}>
             <Fact label="Bandwidth used" value={`${formatUtilisation(d.span.utilisation)} of ${d.span.capacityGbps} Gbit/s`} />

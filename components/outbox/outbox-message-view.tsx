@@ -49,7 +49,8 @@ export function OutboxMessageView({ message }: { message: OutboxMessage }) {
           </Text>
         ))}
       </Section>
-      <Pressable role="link" testID="outbox-raw" onPress={() => Linking.openURL(outboxRawPath(message.id))} style={styles.raw}>
+      {/* Opening a link is fire-and-forget: it only rejects when no app can open an http URL, and a browser always can. */}
+      <Pressable role="link" testID="outbox-raw" onPress={() => void Linking.openURL(outboxRawPath(message.id))} style={styles.raw}>
         <Text style={styles.rawText}>Download the raw message (.eml)</Text>
       </Pressable>
     </DetailFrame>

@@ -19,7 +19,7 @@ export default function CalendarScreen() {
   const freezes = useFreezesQuery(isStaff(roles));
   const tenants = useTenantChoicesQuery(isStaff(roles));
 
-  if (windows.isError && !windows.data) return <ErrorState message={windows.error.message} onRetry={() => windows.refetch()} />;
+  if (windows.isError && !windows.data) return <ErrorState message={windows.error.message} onRetry={() => void windows.refetch()} />;
   if (!windows.data) return <LoadingState label="Loading the calendar…" />;
   return (
     <CalendarView

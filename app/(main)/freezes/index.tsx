@@ -16,7 +16,7 @@ export default function FreezesScreen() {
 
   if (!isStaff(roles)) return <EmptyState title="Freezes are for operator staff" hint="Your planned-work notices list what affects you." />;
 
-  if (freezes.isError) return <ErrorState message={freezes.error.message} onRetry={() => freezes.refetch()} />;
+  if (freezes.isError) return <ErrorState message={freezes.error.message} onRetry={() => void freezes.refetch()} />;
   if (!freezes.data) return <LoadingState label="Loading freezes…" />;
   if (freezes.data.freezes.length === 0 && !canEdit) {
     return <EmptyState title="No freezes" hint="Windows may be booked on any day. Admins set freezes for holidays and big events." />;

@@ -11,7 +11,7 @@ export default function ImportsScreen() {
   const allowed = me.data?.roles.some((role) => (IMPORT_ROLES as readonly string[]).includes(role)) ?? false;
   const imports = useImportsQuery();
   if (me.data && !allowed) return <EmptyState title="Imports are for planners and admins" hint="Ask an admin if you need to load network data." />;
-  if (imports.isError) return <ErrorState message={imports.error.message} onRetry={() => imports.refetch()} />;
+  if (imports.isError) return <ErrorState message={imports.error.message} onRetry={() => void imports.refetch()} />;
   if (!imports.data) return <LoadingState label="Loading past imports…" />;
   return <ImportsView history={imports.data.imports} />;
 }

@@ -8,7 +8,7 @@ export default function NoticeScreen() {
   const { id = '' } = useLocalSearchParams<{ id: string }>();
   const notice = useNoticeQuery(id);
   const acknowledge = useAcknowledgeNoticeMutation(id);
-  if (notice.isError) return <ErrorState message={notice.error.message} onRetry={() => notice.refetch()} />;
+  if (notice.isError) return <ErrorState message={notice.error.message} onRetry={() => void notice.refetch()} />;
   if (!notice.data) return <LoadingState label="Loading the notice…" />;
   return (
     <NoticeView

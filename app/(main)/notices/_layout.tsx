@@ -12,7 +12,7 @@ export default function NoticesLayout() {
   const selectedId = noticeIdFromPath(pathname);
 
   let list;
-  if (work.isError) list = <ErrorState message={work.error.message} onRetry={() => work.refetch()} />;
+  if (work.isError) list = <ErrorState message={work.error.message} onRetry={() => void work.refetch()} />;
   else if (!work.data) list = <LoadingState label="Loading planned work…" />;
   else if (work.data.items.length === 0) {
     list = <EmptyState title="No planned work on your slices" hint="When maintenance touches one of your slices, it shows here with our notice." />;

@@ -7,7 +7,7 @@ import { OutboxMessageView } from '@/components/outbox/outbox-message-view';
 export default function OutboxMessageScreen() {
   const { id = '' } = useLocalSearchParams<{ id: string }>();
   const message = useOutboxMessageQuery(Number(id));
-  if (message.isError) return <ErrorState message={message.error.message} onRetry={() => message.refetch()} />;
+  if (message.isError) return <ErrorState message={message.error.message} onRetry={() => void message.refetch()} />;
   if (!/^\d+$/.test(id)) return <ErrorState message={`"${id}" is not a message number.`} />;
   if (!message.data) return <LoadingState label="Loading the message…" />;
   return <OutboxMessageView message={message.data} />;

@@ -16,7 +16,7 @@ export default function OutboxLayout() {
   const total = outbox.data?.pages[0]?.total ?? 0;
 
   let list;
-  if (outbox.isError) list = <ErrorState message={outbox.error.message} onRetry={() => outbox.refetch()} />;
+  if (outbox.isError) list = <ErrorState message={outbox.error.message} onRetry={() => void outbox.refetch()} />;
   else if (!outbox.data) list = <LoadingState label="Loading the outbox…" />;
   else if (total === 0) {
     list = (
@@ -35,7 +35,7 @@ export default function OutboxLayout() {
         onOpen={(id) => router.push({ pathname: '/outbox/[id]', params: { id: String(id) } })}
         hasMore={outbox.hasNextPage}
         loadingMore={outbox.isFetchingNextPage}
-        onLoadMore={() => outbox.fetchNextPage()}
+        onLoadMore={() => void outbox.fetchNextPage()}
       />
     );
   }

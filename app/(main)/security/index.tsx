@@ -9,7 +9,7 @@ export default function SecurityScreen() {
   const enrol = useOtpEnrolMutation();
   const confirm = useOtpConfirmMutation();
   const remove = useOtpRemoveMutation();
-  if (status.isError) return <ErrorState message={status.error.message} onRetry={() => status.refetch()} />;
+  if (status.isError) return <ErrorState message={status.error.message} onRetry={() => void status.refetch()} />;
   if (!status.data) return <LoadingState label="Loading your one-time codes…" />;
   const error = enrol.error ?? confirm.error ?? remove.error;
   return (

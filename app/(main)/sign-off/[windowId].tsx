@@ -11,7 +11,7 @@ export default function SignoffWindowScreen() {
   const summary = useSignoffSummaryQuery(windowId);
   const decision = useSignoffDecisionMutation(windowId);
   const otp = useOtpStatusQuery();
-  if (summary.isError && !summary.data) return <ErrorState message={summary.error.message} onRetry={() => summary.refetch()} />;
+  if (summary.isError && !summary.data) return <ErrorState message={summary.error.message} onRetry={() => void summary.refetch()} />;
   if (!summary.data) return <LoadingState label="Loading the plan summary…" />;
   return (
     <SignoffSummaryView

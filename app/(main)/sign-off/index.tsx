@@ -13,7 +13,7 @@ export default function SignoffQueueScreen() {
   const allowed = roles.includes('approver') || roles.includes('admin');
   const queue = useSignoffQueueQuery(allowed);
   if (!allowed) return <EmptyState title="Sign-off is for the change board" hint="Approvers decide on move plans here." />;
-  if (queue.isError) return <ErrorState message={queue.error.message} onRetry={() => queue.refetch()} />;
+  if (queue.isError) return <ErrorState message={queue.error.message} onRetry={() => void queue.refetch()} />;
   if (!queue.data) return <LoadingState label="Loading the sign-off queue…" />;
   const footer = <QueueFooter isAdmin={roles.includes('admin')} onOpenCodes={() => router.push('/security')} onOpenPolicy={() => router.push('/sign-off/policy')} />;
   if (queue.data.windows.length === 0) {

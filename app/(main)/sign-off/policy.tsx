@@ -10,7 +10,7 @@ export default function SignoffPolicyScreen() {
   const policies = useSignoffPoliciesQuery(isAdmin);
   const save = useSignoffPoliciesMutation();
   if (!isAdmin) return <EmptyState title="Only admins set the sign-off policy" />;
-  if (policies.isError) return <ErrorState message={policies.error.message} onRetry={() => policies.refetch()} />;
+  if (policies.isError) return <ErrorState message={policies.error.message} onRetry={() => void policies.refetch()} />;
   if (!policies.data) return <LoadingState label="Loading the policy…" />;
   return (
     <PageColumn narrow>

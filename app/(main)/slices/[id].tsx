@@ -7,7 +7,7 @@ import { SliceDetailView } from '@/components/inventory/slice-detail-view';
 export default function SliceScreen() {
   const { id = '' } = useLocalSearchParams<{ id: string }>();
   const slice = useSliceQuery(id);
-  if (slice.isError) return <ErrorState message={slice.error.message} onRetry={() => slice.refetch()} />;
+  if (slice.isError) return <ErrorState message={slice.error.message} onRetry={() => void slice.refetch()} />;
   if (!slice.data) return <LoadingState label="Loading the slice…" />;
   return <SliceDetailView detail={slice.data} />;
 }

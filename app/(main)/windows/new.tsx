@@ -9,7 +9,7 @@ import { canBook, detailHref, FormPage } from '@/components/windows/form-page';
 export default function NewWindowScreen() {
   const router = useRouter();
   const me = useMeQuery();
-  if (me.isError) return <ErrorState message={me.error.message} onRetry={() => me.refetch()} />;
+  if (me.isError) return <ErrorState message={me.error.message} onRetry={() => void me.refetch()} />;
   if (!me.data) return <LoadingState />;
   if (!canBook(me.data)) return <ErrorState message="Your roles do not include booking windows." />;
   return (

@@ -7,7 +7,7 @@ import { SiteDetailView } from '@/components/inventory/site-detail-view';
 export default function SiteScreen() {
   const { id = '' } = useLocalSearchParams<{ id: string }>();
   const site = useSiteQuery(id);
-  if (site.isError) return <ErrorState message={site.error.message} onRetry={() => site.refetch()} />;
+  if (site.isError) return <ErrorState message={site.error.message} onRetry={() => void site.refetch()} />;
   if (!site.data) return <LoadingState label="Loading the site…" />;
   return <SiteDetailView detail={site.data} />;
 }

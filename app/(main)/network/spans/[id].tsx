@@ -7,7 +7,7 @@ import { SpanDetailView } from '@/components/inventory/span-detail-view';
 export default function SpanScreen() {
   const { id = '' } = useLocalSearchParams<{ id: string }>();
   const span = useSpanQuery(id);
-  if (span.isError) return <ErrorState message={span.error.message} onRetry={() => span.refetch()} />;
+  if (span.isError) return <ErrorState message={span.error.message} onRetry={() => void span.refetch()} />;
   if (!span.data) return <LoadingState label="Loading the span…" />;
   return <SpanDetailView detail={span.data} />;
 }

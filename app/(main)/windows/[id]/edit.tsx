@@ -12,7 +12,7 @@ export default function EditWindowScreen() {
   const router = useRouter();
   const me = useMeQuery();
   const window = useWindowQuery(id);
-  if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => window.refetch()} />;
+  if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => void window.refetch()} />;
   if (!window.data || !me.data) return <LoadingState label="Loading the window…" />;
   return (
     <FormPage title={`Edit: ${window.data.title}`}>
@@ -20,7 +20,7 @@ export default function EditWindowScreen() {
         window={window.data}
         me={me.data}
         timeZone={viewerTimeZone()}
-        onReload={() => window.refetch()}
+        onReload={() => void window.refetch()}
         reloading={window.isFetching}
         onSaved={(outcome) => router.replace(detailHref({ ...outcome, saved: 'edited' }))}
         onCancel={() => router.replace(detailHref({ id }))}

@@ -12,7 +12,7 @@ export default function WindowImpactScreen() {
   const router = useRouter();
   const me = useMeQuery();
   const window = useWindowQuery(id);
-  if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => window.refetch()} />;
+  if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => void window.refetch()} />;
   if (!window.data || !me.data) return <LoadingState label="Loading the window…" />;
   return <ImpactReview window={window.data} me={me.data} timeZone={viewerTimeZone()} onOpenWindow={() => router.push(detailHref({ id }))} />;
 }

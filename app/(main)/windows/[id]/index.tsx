@@ -15,7 +15,7 @@ export default function WindowScreen() {
   const router = useRouter();
   const me = useMeQuery();
   const window = useWindowQuery(params.id);
-  if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => window.refetch()} />;
+  if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => void window.refetch()} />;
   if (!window.data || !me.data) return <LoadingState label="Loading the window…" />;
   return (
     <WindowDetail
