@@ -1,13 +1,13 @@
 // Accepts a finished plan run as the window's plan: re-verified on the current data, then window → planned.
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
+import { PLANNABLE_STATES } from '../../../shared/permissions';
 import { planReviewSchema, type PlanAccept } from '../../../shared/plans';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { lockForTransaction } from '../../queries/locks';
 import { markPlanAccepted, selectPlanRow } from '../../queries/plans/plan-rows';
 import { setWindowStatus } from '../windows/set-window-status';
 import { checkOutageAccepted, checkStillFits } from './accept-checks';
-import { PLANNABLE } from './enqueue-plan';
 import { PlanNotAcceptableError, PlanNotFoundError, WindowNotPlannableError } from './errors';
 import { isStale, loadWindowFacts } from './plan-view';
 
@@ -28,13 +28,13 @@ export async function acceptPlan(deps: { db: Db; now: Date }, planId: string, bo
     if (isStale(row, w)) {
       throw new PlanNotAcceptableError('PLAN_STALE', 'The window was edited or re-assessed after this run; run the plan again.');
     }
-    if (!PLANNABLE.includes(w.status)) throw new WindowNotPlannableError(w.status);
+    if (!PLANNABLE_STATES.includes(w.status)) throw new WindowNotPlannableError(w.status);
     const review = planReviewSchema.parse(row.result);
     const outageAccepted = checkOutageAccepted(review, body.outageAccepted);
     const reservedFor = await checkStillFits({ tx, pool: db }, row.windowId, review);
     await markPlanAccepted(tx, planId, { userId: user.id, outageAccepted, now });
     await setWindowStatus(tx, {
-      windowId: row.windowId, from: PLANNABLE, to: 'planned', actorId: user.id, action: 'plan.accept', now,
+      windowId: row.windowId, from: PLANNABLE_STATES, to: 'planned', actorId: user.id, action: 'plan.accept', now,
       set: { acceptedPlanId: planId }, details: { planId, outageAccepted, reservedFor },
     });
     await insertAuditEntry(tx, {

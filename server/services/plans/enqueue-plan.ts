@@ -3,7 +3,7 @@ import { randomBytes } from 'node:crypto';
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import type { PlanSettings } from '../../../shared/plans';
-import type { WindowStatus } from '../../../shared/windows';
+import { PLANNABLE_STATES } from '../../../shared/permissions';
 import type { ServerConfig } from '../../env';
 import type { PlanQueue } from '../ports';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
@@ -12,9 +12,6 @@ import { endPlanRun, insertPlanRow, setPlanJobId } from '../../queries/plans/pla
 import { ImpactNotCurrentError, QueueUnavailableError, UnknownPlanInputsError, WindowNotPlannableError } from './errors';
 import { planExpireSeconds } from './expire';
 import { loadWindowFacts } from './plan-view';
-
-/** States in which a window's plans may be run and accepted. */
-export const PLANNABLE: readonly WindowStatus[] = ['assessed', 'planned', 'returned'];
 
 export type EnqueueDeps = { db: Db; jobs: PlanQueue; config: ServerConfig; now: Date };
 
@@ -31,7 +28,7 @@ async function checkSettings(db: Db, settings: PlanSettings): Promise<void> {
 export async function enqueuePlan(deps: EnqueueDeps, windowId: string, settings: PlanSettings, user: Me): Promise<string> {
   const { db, now } = deps;
   const w = await loadWindowFacts(db, windowId);
-  if (!PLANNABLE.includes(w.status)) throw new WindowNotPlannableError(w.status);
+  if (!PLANNABLE_STATES.includes(w.status)) throw new WindowNotPlannableError(w.status);
   if (w.impactVersion === null) throw new ImpactNotCurrentError();
   await checkSettings(db, settings);
   const id = newPlanId();

@@ -1,5 +1,6 @@
 // Booking rules that need the database: the shared checks, element ids that exist, and freezes.
 import type { Me } from '../../../shared/api';
+import { canBookInsideFreeze } from '../../../shared/permissions';
 import { elementIssues, timeIssues } from '../../../shared/window-checks';
 import type { WindowElementInput } from '../../../shared/windows';
 import { findUnknownElements } from '../../queries/windows/elements';
@@ -39,7 +40,7 @@ export async function checkBooking(db: Queryable, check: BookingCheck, user: Me,
   const [freeze] = await overlappingFreezes(db, new Date(check.times.startsAt), new Date(check.times.endsAt));
   if (!freeze) return null;
   const reason = check.freezeOverrideReason?.trim();
-  if (!user.roles.includes('admin')) throw new FreezeConflictError(freeze, 'Only an admin can book inside a freeze.');
+  if (!canBookInsideFreeze(user.roles)) throw new FreezeConflictError(freeze, 'Only an admin can book inside a freeze.');
   if (!reason) throw new FreezeConflictError(freeze, 'An admin may override it by giving a written reason.');
   return reason;
 }
