@@ -4,7 +4,7 @@ import type { Scenario } from '../../shared/scenario';
 import { formatIssue, validateScenario } from '../../shared/scenario-validate';
 import { UsageError } from './args';
 
-export function loadScenario(file: string): Scenario {
+export function readScenarioFile(file: string): Scenario {
   let text: string;
   try {
     text = readFileSync(file, 'utf8');

@@ -2,26 +2,22 @@
 // Exit 0 with the plan on stdout; exit 2 with one line on stderr (and nothing on stdout) for bad input;
 // exit 1 with one line on stderr when planning itself fails.
 import { PlannerError } from '../errors';
-import { exactSolver } from '../exact/exact-plan';
-import { buildInventory, compileWindow } from '../model/build-inventory';
+import { compileWindow } from '../model/build-inventory';
 import type { PlanResult } from '../model/types';
-import { planWindow } from '../remap/plan-window';
-import { createParallelRunner } from '../workers/parallel-runner';
+import { computePlan } from '../plan/compute-plan';
+import { withParallelRunner } from '../workers/parallel-runner';
 import { parseArgs, UsageError, type PlanArgs } from './args';
 import { toJsonDocument, toTable } from './format-plan';
-import { loadScenario } from './load-scenario';
+import { readScenarioFile } from './read-scenario-file';
 
 async function run(args: PlanArgs): Promise<PlanResult> {
-  const scenario = loadScenario(args.file);
+  const scenario = readScenarioFile(args.file);
   const w = (scenario.windows ?? []).find((x) => x.id === args.window);
   if (!w) throw new UsageError(`unknown window "${args.window}" in ${args.file}`);
-  const inv = buildInventory(scenario);
-  const parallel = args.mode === 'islands' || args.mode === 'shared-eval' ? createParallelRunner() : undefined;
-  try {
-    return await planWindow(inv, compileWindow(w), { mode: args.mode, seed: args.seed, scenario, parallel, exact: exactSolver });
-  } finally {
-    await parallel?.close();
-  }
+  const window = compileWindow(w);
+  // The pool starts threads only for the parallel modes.
+  const computed = await withParallelRunner((parallel) => computePlan(scenario, window, { plan: { mode: args.mode, seed: args.seed, parallel } }));
+  return computed.result;
 }
 
 function oneLine(message: string): string {

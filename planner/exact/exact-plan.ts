@@ -170,8 +170,17 @@ export async function exactPlanWindow(
   return { ...(await exactPlan(problem, options)), problem };
 }
 
-/** planWindow's 'exact' mode hook (`options.exact`). */
-export const exactSolver: ExactSolver = async (problem, options) => {
-  const r = await exactPlan(problem, options);
-  return { next: r.next, exact: { optimal: r.optimal, gap: r.gap, bound: r.bound } };
-};
+/**
+ * planWindow's 'exact' mode hook (`options.exact`) with a path setting; `onResult` sees the solver's full result
+ * (e.g. whether every route was in the program), which the hook's answer to planWindow leaves out.
+ */
+export function exactSolverFor(paths: Partial<PathSetting> = {}, onResult?: (r: ExactResult) => void): ExactSolver {
+  return async (problem, options) => {
+    const r = await exactPlan(problem, { ...paths, timeLimitMs: options.timeLimitMs });
+    onResult?.(r);
+    return { next: r.next, exact: { optimal: r.optimal, gap: r.gap, bound: r.bound } };
+  };
+}
+
+/** planWindow's 'exact' mode hook with the default path setting. */
+export const exactSolver: ExactSolver = exactSolverFor();

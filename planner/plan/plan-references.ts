@@ -1,9 +1,9 @@
 // The reference solvers shown beside a plan run: greedy always (fast), exact (HiGHS) only on small windows.
-import { exactPlan } from '../../planner/exact/exact-plan';
-import type { PathSetting } from '../../planner/exact/exact-paths';
-import type { Inventory, PlanResult, WindowSpec } from '../../planner/model/types';
-import { planWindow, type ExactSolver, type PlanOptions } from '../../planner/remap/plan-window';
 import type { ReferenceResult } from '../../shared/plans';
+import { exactSolverFor } from '../exact/exact-plan';
+import type { PathSetting } from '../exact/exact-paths';
+import type { Inventory, PlanResult, WindowSpec } from '../model/types';
+import { planWindow, type PlanOptions } from '../remap/plan-window';
 
 /**
  * The exact reference runs only on small windows: at most EXACT_MAX_SLICES affected slices and
@@ -39,22 +39,14 @@ export function decisionCount(inv: Inventory, result: PlanResult): number {
 }
 
 export async function greedyReference(inv: Inventory, window: WindowSpec, options: Partial<PlanOptions>): Promise<ReferenceResult> {
-  const startMs = Date.now();
+  const now = options.now ?? Date.now;
+  const startMs = now();
   try {
     const r = await planWindow(inv, window, { ...options, mode: 'greedy' });
-    return { solver: 'greedy', objective: r.objective, elapsedMs: Date.now() - startMs, ...noFigures, note: null };
+    return { solver: 'greedy', objective: r.objective, elapsedMs: now() - startMs, ...noFigures, note: null };
   } catch (err) {
-    return { solver: 'greedy', objective: null, elapsedMs: Date.now() - startMs, ...noFigures, note: `Greedy found no plan: ${message(err)}` };
+    return { solver: 'greedy', objective: null, elapsedMs: now() - startMs, ...noFigures, note: `Greedy found no plan: ${message(err)}` };
   }
-}
-
-/** exactPlan behind planWindow's 'exact' hook, recording whether every route was in the program. */
-function recordingSolver(seen: { complete: boolean }): ExactSolver {
-  return async (problem, o) => {
-    const r = await exactPlan(problem, { ...EXACT_PATHS, timeLimitMs: o.timeLimitMs });
-    seen.complete = r.complete;
-    return { next: r.next, exact: { optimal: r.optimal, gap: r.gap, bound: r.bound } };
-  };
 }
 
 /** Why the exact reference does not run for this window, or null when it does. */
@@ -81,21 +73,24 @@ export async function exactReference(
 ): Promise<ReferenceResult> {
   const skip = skipped(inv, result);
   if (skip) return skip;
-  const startMs = Date.now();
+  const now = options.now ?? Date.now;
+  const startMs = now();
   const seen = { complete: false };
+  // The hook records whether every route was in the program, which planWindow's result does not carry.
+  const exact = exactSolverFor(EXACT_PATHS, (r) => { seen.complete = r.complete; });
   try {
-    const r = await planWindow(inv, window, { ...options, mode: 'exact', timeLimitMs: EXACT_TIME_LIMIT_MS, exact: recordingSolver(seen) });
-    const exact = r.exact;
+    const r = await planWindow(inv, window, { ...options, mode: 'exact', timeLimitMs: EXACT_TIME_LIMIT_MS, exact });
+    const figures = r.exact;
     const notes = [
-      exact && !exact.optimal ? `Stopped at the ${EXACT_TIME_LIMIT_MS / 1000} s limit before proving the optimum.` : '',
+      figures && !figures.optimal ? `Stopped at the ${EXACT_TIME_LIMIT_MS / 1000} s limit before proving the optimum.` : '',
       seen.complete ? '' : `The program lists the ${EXACT_PATHS.kPaths} shortest routes per tie (and its current one), so its optimum covers those routes, not every route.`,
     ].filter(Boolean);
     return {
-      solver: 'exact', objective: r.objective, elapsedMs: Date.now() - startMs,
-      optimal: exact?.optimal ?? null, gap: exact?.gap ?? null, bound: exact?.bound ?? null,
+      solver: 'exact', objective: r.objective, elapsedMs: now() - startMs,
+      optimal: figures?.optimal ?? null, gap: figures?.gap ?? null, bound: figures?.bound ?? null,
       note: notes.length > 0 ? notes.join(' ') : null,
     };
   } catch (err) {
-    return { solver: 'exact', objective: null, elapsedMs: Date.now() - startMs, ...noFigures, note: `The exact solver gave no answer: ${message(err)}` };
+    return { solver: 'exact', objective: null, elapsedMs: now() - startMs, ...noFigures, note: `The exact solver gave no answer: ${message(err)}` };
   }
 }

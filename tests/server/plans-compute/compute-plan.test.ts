@@ -6,7 +6,7 @@ import type { PlanResult } from '../../../planner/model/types';
 import { compareObjectives } from '../../../planner/plan/evaluate-plan';
 import { createRng } from '../../../planner/random/rng';
 import { computePlan, type PlanComputeInput } from '../../../server/jobs/plan-compute';
-import { EXACT_MAX_SLICES, exactReference } from '../../../server/jobs/plan-compute-references';
+import { EXACT_MAX_SLICES, exactReference } from '../../../planner/plan/plan-references';
 import { planReviewSchema, planSettingsSchema, type PlanProgress, type PlanReview } from '../../../shared/plans';
 import type { Scenario } from '../../../shared/scenario';
 import { tinyScenario } from '../../planner/fixtures/tiny-scenario';
