@@ -6,9 +6,9 @@ import { withOtpAttempt } from '../../auth/otp-attempts';
 import { spendOtpCode } from '../../auth/otp-keys';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { insertSignoffDecision, countApprovals, hasDecided } from '../../queries/signoff/signoff-decisions';
-import { selectSignoffWindow } from '../../queries/signoff/signoff-window';
 import { getUsersByIds } from '../../queries/auth/users';
 import { getPolicies } from '../../queries/windows/policies';
+import { selectWindowState } from '../../queries/windows/window-status';
 import type { Queryable, Tx } from '../../../db/client';
 import { issueNotices } from '../notices/issue-notices';
 import { setWindowStatus } from '../windows/set-window-status';
@@ -51,7 +51,8 @@ async function record(tx: Tx, deps: SignoffDeps, windowId: string, user: Me, bod
   if (approvals < quorum) return { status: 'in-review', approvals, quorum, notices: null, ctx };
   await setWindowStatus(tx, { ...change, to: 'cleared', action: 'signoff.cleared', details: { round, approvals, quorum } });
   const notices = await issueNotices(tx, { jobs: deps.jobs, config: deps.config, now: deps.now }, windowId, user.id);
-  const after = await selectSignoffWindow(tx, windowId);
+  // The row is locked since loadSignoffContext, so it is still there; issuing notices may have moved it on.
+  const after = await selectWindowState(tx, windowId);
   return { status: after!.status, approvals, quorum, notices, ctx };
 }
 
