@@ -1,6 +1,7 @@
 // The approver's one-screen summary of a window's accepted plan, and the queue of windows awaiting decisions.
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
+import { canSignOff } from '../../../shared/permissions';
 import type { SignoffQueue, SignoffQueueItem, SignoffSummary } from '../../../shared/signoff';
 import { selectTenantNames } from '../../queries/signoff/element-names';
 import { countApprovals, hasDecided } from '../../queries/signoff/signoff-decisions';
@@ -19,7 +20,7 @@ type My = SignoffSummary['me'];
 async function myState(db: Queryable, ctx: SignoffContext, user: Me): Promise<My> {
   const decided = await hasDecided(db, ctx.window.id, ctx.window.reviewRound, user.id);
   // Having decided says more to the approver than the window having moved on since.
-  const blocked: My['blocked'] = !user.roles.includes('approver') ? 'role'
+  const blocked: My['blocked'] = !canSignOff(user.roles) ? 'role'
     : decided ? 'decided'
       : ctx.window.status !== 'in-review' ? 'closed'
         : isOwnWork(user.id, ctx) ? 'self' : null;

@@ -1,6 +1,7 @@
 // Computes a window's impact with the planner, stores it for this version and moves draft → assessed.
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
+import { windowIsAssessable } from '../../../shared/permissions';
 import type { WindowImpact } from '../../../shared/window-impact';
 import { findUnknownElements } from '../../queries/windows/elements';
 import { upsertWindowImpact } from '../../queries/windows/impacts';
@@ -14,7 +15,7 @@ export async function assessWindow(
   db: Db, id: string, opts: { version?: number; user: Me; now: Date },
 ): Promise<WindowImpact> {
   const w = await loadWindow(db, id, null);
-  if (w.status !== 'draft' && w.status !== 'assessed') {
+  if (!windowIsAssessable(w.status)) {
     throw new IllegalTransitionError(w.status, 'assessed', 'Only a draft or assessed window can be (re)assessed.');
   }
   if (opts.version !== undefined && opts.version !== w.version) throw new StaleVersionError();

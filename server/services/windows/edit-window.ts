@@ -2,7 +2,8 @@
 // and drop its stored impact (DESIGN §3), and the caller is told so.
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
-import type { WindowPatch, WindowStatus } from '../../../shared/windows';
+import { windowIsEditable } from '../../../shared/permissions';
+import type { WindowPatch } from '../../../shared/windows';
 import { deleteWindowImpact } from '../../queries/windows/impacts';
 import { replaceElements, type ElementRow } from '../../queries/windows/window-rows';
 import { clearAcceptedPlan } from '../plans/clear-accepted';
@@ -11,8 +12,6 @@ import { StaleVersionError, WindowNotEditableError } from './errors';
 import { setWindowStatus } from './set-window-status';
 import { windowSnapshot } from './snapshot';
 import { loadWindow, type LoadedWindow } from './window-view';
-
-const LOCKED: WindowStatus[] = ['underway', 'done', 'rolled-back', 'withdrawn'];
 
 const sameElements = (a: ElementRow[], b: ElementRow[]) => {
   const key = (list: ElementRow[]) => list.map((e) => `${e.kind}:${e.id}:${e.effect}:${e.fraction ?? ''}`).sort().join('|');
@@ -30,7 +29,7 @@ function changes(current: LoadedWindow, patch: WindowPatch) {
 
 export async function editWindow(db: Db, id: string, patch: WindowPatch, user: Me, now: Date): Promise<{ reverted: boolean }> {
   const current = await loadWindow(db, id, null);
-  if (LOCKED.includes(current.status)) throw new WindowNotEditableError(current.status);
+  if (!windowIsEditable(current.status)) throw new WindowNotEditableError(current.status);
   if (patch.version !== current.version) throw new StaleVersionError();
   const c = changes(current, patch);
   const freezeReason = await checkBooking(db, {
