@@ -4,7 +4,7 @@ import type { Me } from '../../../shared/api';
 import { PLANNABLE_STATES } from '../../../shared/permissions';
 import { planReviewSchema, type PlanAccept } from '../../../shared/plans';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
-import { lockForTransaction } from '../../queries/locks';
+import { lockForTransaction } from '../../queries/locks/advisory-locks';
 import { markPlanAccepted, selectPlanRow } from '../../queries/plans/plan-rows';
 import { setWindowStatus } from '../windows/set-window-status';
 import { checkOutageAccepted, checkStillFits } from './accept-checks';

@@ -1,6 +1,6 @@
 // Transaction-scoped advisory locks: serialise work whose conflicts no single row lock covers.
 import { sql } from 'drizzle-orm';
-import type { Tx } from '../../db/client';
+import type { Tx } from '../../../db/client';
 
 /** Waits until no other transaction holds `key`; PostgreSQL releases it when this transaction ends. */
 export async function lockForTransaction(tx: Tx, key: number): Promise<void> {
