@@ -4,12 +4,11 @@
 // The small tier is tight: real-shape scenarios (scenarios/generate/real-shape-scenario.ts) whose capacity is
 // scarce around their window. DE figures are the search's own (`result.search`), before any greedy fallback,
 // with touched slices only (no knock-on moves), the same problem exact solves.
-import { exactPlan } from '../../planner/exact/exact-plan';
+import { exactPlanWindow } from '../../planner/exact/exact-plan';
 import { weightedObjective } from '../../planner/exact/exact-weights';
 import type { Objective } from '../../planner/model/types';
+import { computePlan } from '../../planner/plan/compute-plan';
 import { compareObjectives } from '../../planner/plan/evaluate-plan';
-import { planWindow } from '../../planner/remap/plan-window';
-import { buildRemapProblem } from '../../planner/remap/problem';
 import { buildInstance, buildRealShapeInstance, log, type Instance, type RealShapeInstance } from './instances';
 import { ms, pct, type Row } from './report';
 
@@ -39,12 +38,12 @@ interface Outcome {
 const levels = (o: Objective): Objective => ({ ...o, peakUtilisation: 0 });
 
 async function runWindow(tier: Tier, inst: Instance, w: Instance['windows'][number]): Promise<Outcome> {
-  const base = { maxCandidates: MAX_CANDIDATES, seed: 1 };
-  const greedy = await planWindow(inst.inv, w, { ...base, mode: 'greedy', knockOn: false });
-  const run = await planWindow(inst.inv, w, { ...base, mode: 'serial', knockOn: false });
+  const plan = { maxCandidates: MAX_CANDIDATES, seed: 1, mode: 'serial' as const, knockOn: false };
+  const { result: run, greedy } = await computePlan(inst.scenario, w, { inventory: inst.inv, plan, references: { greedy: true } });
   if (!run.search) throw new Error(`planWindow gave no search figures for ${inst.label} ${w.id}`);
+  if (!greedy?.objective) throw new Error(`greedy gave no plan for ${inst.label} ${w.id}: ${greedy?.note}`);
   const de = run.search.objective;
-  const ex = await exactPlan(buildRemapProblem(inst.inv, w, { maxCandidates: MAX_CANDIDATES }), { timeLimitMs: tier.exactLimitMs });
+  const ex = await exactPlanWindow(inst.inv, w, { timeLimitMs: tier.exactLimitMs, problem: { maxCandidates: MAX_CANDIDATES } });
   const deW = weightedObjective(ex.weights, de);
   const ref = ex.optimal ? ex.weighted : ex.bound;
   return {

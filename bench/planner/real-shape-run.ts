@@ -2,10 +2,10 @@
 // with knock-on moves, greedy, exact with touched slices only and exact with knock-on blocks. DE figures are
 // the search's own (`result.search`), never the greedy fallback planWindow may return instead. The serial DE
 // run also records its best-so-far over time, which the islands race compares against.
-import { exactPlan, type ExactResult } from '../../planner/exact/exact-plan';
+import { exactPlanWindow, type ExactResult } from '../../planner/exact/exact-plan';
 import type { Objective, PlanResult } from '../../planner/model/types';
-import { PLAN_DEFAULTS, planWindow } from '../../planner/remap/plan-window';
-import { buildRemapProblem } from '../../planner/remap/problem';
+import { computePlan } from '../../planner/plan/compute-plan';
+import { PLAN_DEFAULTS } from '../../planner/remap/plan-window';
 import type { RealShapeInstance } from './instances';
 import { ms } from './report';
 
@@ -63,14 +63,20 @@ export async function runShapeWindow(inst: RealShapeInstance, exact: ExactSettin
   const w = inst.windows[0];
   // DE modes keep the planner's 30 s time limit and stall stop (PLAN_DEFAULTS); seed 1 as everywhere in the bench.
   const base = { seed: 1, maxCandidates: MAX_CANDIDATES };
-  const greedy = await planWindow(inv, w, { ...base, mode: 'greedy', knockOn: false });
   const deTrace: ProgressPoint[] = [];
-  const de = await planWindow(inv, w, { ...base, mode: 'serial', knockOn: false, onProgress: (p) => deTrace.push({ ms: p.elapsedMs, best: p.best }) });
-  const deKnockOn = await planWindow(inv, w, { ...base, mode: 'serial', knockOn: true, maxKnockOnMoves: MAX_KNOCK_ON_MOVES });
-  const touchedOnly = await exactPlan(buildRemapProblem(inv, w, { maxCandidates: MAX_CANDIDATES }), exact);
-  const withKnockOn = await exactPlan(
-    buildRemapProblem(inv, w, { maxCandidates: MAX_CANDIDATES, knockOn: { maxMoves: MAX_KNOCK_ON_MOVES } }), exact,
-  );
+  const onProgress = (p: { phase: string; best: Objective | null; elapsedMs: number }) => {
+    if (p.phase === 'searching' && p.best) deTrace.push({ ms: p.elapsedMs, best: p.best });
+  };
+  const touched = await computePlan(inst.scenario, w, {
+    inventory: inv, plan: { ...base, mode: 'serial', knockOn: false }, references: { greedy: true }, onProgress,
+  });
+  const { result: de, greedy } = touched;
+  if (!greedy?.objective) throw new Error(`greedy gave no plan for ${inst.label}: ${greedy?.note}`);
+  const { result: deKnockOn } = await computePlan(inst.scenario, w, {
+    inventory: inv, plan: { ...base, mode: 'serial', knockOn: true, maxKnockOnMoves: MAX_KNOCK_ON_MOVES },
+  });
+  const touchedOnly = await exactPlanWindow(inv, w, { ...exact, problem: { maxCandidates: MAX_CANDIDATES } });
+  const withKnockOn = await exactPlanWindow(inv, w, { ...exact, problem: { maxCandidates: MAX_CANDIDATES, knockOn: { maxMoves: MAX_KNOCK_ON_MOVES } } });
   return {
     label: inst.label, sites: inv.network.sites.length, slices: inv.slices.length, affected: de.affected.length,
     peakUtilisation: inst.peakUtilisation, gate: inst.gate,
