@@ -20,7 +20,7 @@ export default function EditWindowScreen() {
         window={window.data}
         me={me.data}
         timeZone={viewerTimeZone()}
-        onReload={() => void window.refetch()}
+        onReload={() => window.refetch()}
         reloading={window.isFetching}
         onSaved={(outcome) => router.replace(detailHref({ ...outcome, saved: 'edited' }))}
         onCancel={() => router.replace(detailHref({ id }))}
