@@ -5,6 +5,7 @@ import type { Browser, Page } from 'playwright-core';
 import fs from 'node:fs';
 import path from 'node:path';
 import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
+import { eventually } from './helpers/eventually';
 const RUN = `${Date.now().toString(36)}${Math.floor(Math.random() * 1296).toString(36)}`;
 const SITE_ID = `e2e-site-${RUN}`;
 const SECOND_ID = `e2e-site-${RUN}-b`;
@@ -78,21 +79,23 @@ test('a planner fixes a bad sites CSV, applies it, and finds the new site in the
   await page.getByTestId('import-file-name').getByText(`sites-${RUN}-bad.csv`).waitFor({ timeout: 30000 });
   const errors = page.getByTestId('import-errors');
   await errors.waitFor();
-  expect(await errors.innerText()).toMatch(/row 3/);
-  expect(await errors.innerText()).toMatch(/latitude/i);
-  expect(await page.getByTestId('import-apply').getAttribute('aria-disabled')).toBe('true');
+  await eventually(async () => expect(await errors.innerText()).toMatch(/row 3/));
+  await eventually(async () => expect(await errors.innerText()).toMatch(/latitude/i));
+  await eventually(async () => expect(await page.getByTestId('import-apply').getAttribute('aria-disabled')).toBe('true'));
   await page.screenshot({ path: path.join(SHOTS, 'import-sites-bad-row-wide.png'), fullPage: true });
 
   await uploadCsv(page, `sites-${RUN}-fixed.csv`, FIXED_FILE);
   await page.getByTestId('import-file-name').getByText(`sites-${RUN}-fixed.csv`).waitFor({ timeout: 30000 });
-  expect(await page.getByTestId('import-errors').count()).toBe(0);
-  const adds = await page.getByTestId('import-adds-sites').innerText();
-  expect(adds).toContain(SITE_ID);
-  expect(adds).toContain(SECOND_ID);
+  await eventually(async () => expect(await page.getByTestId('import-errors').count()).toBe(0));
+  await eventually(async () => {
+    const adds = await page.getByTestId('import-adds-sites').innerText();
+    expect(adds).toContain(SITE_ID);
+    expect(adds).toContain(SECOND_ID);
+  });
   await page.getByTestId('import-apply').click();
   await page.getByTestId('import-confirm-apply').click();
   await page.getByTestId('import-result').waitFor({ timeout: 30000 });
-  expect(await page.getByTestId('import-result').innerText()).toMatch(/2 added/);
+  await eventually(async () => expect(await page.getByTestId('import-result').innerText()).toMatch(/2 added/));
   await page.screenshot({ path: path.join(SHOTS, 'import-sites-applied-wide.png'), fullPage: true });
 
   // The Network screen: the site in the searched list, and on the map beside it.
@@ -101,7 +104,7 @@ test('a planner fixes a bad sites CSV, applies it, and finds the new site in the
   // The search goes to the server: only the two new sites are left (the "-b" sibling's id contains this one).
   await page.getByTestId('sites-total').getByText('2 sites').waitFor({ timeout: 30000 });
   await page.getByTestId(`sites-table-row-${SITE_ID}`).waitFor({ timeout: 30000 });
-  expect(await page.getByTestId(`sites-table-row-${SITE_ID}`).innerText()).toContain(`Quillhaven Test ${RUN}`);
+  await eventually(async () => expect(await page.getByTestId(`sites-table-row-${SITE_ID}`).innerText()).toContain(`Quillhaven Test ${RUN}`));
   await page.getByTestId(`map-site-${SITE_ID}`).waitFor({ state: 'attached', timeout: 30000 });
   await page.screenshot({ path: path.join(SHOTS, 'import-sites-network-wide.png'), fullPage: true });
 

@@ -9,6 +9,7 @@ import type { APIRequestContext, Browser, BrowserContext } from 'playwright-core
 import path from 'node:path';
 import { apiAs as apiAsUser, ok, prepareSubmittedWindow, setSignoffPolicies, slotAhead, withdrawWindow } from './helpers/api';
 import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
+import { eventually } from './helpers/eventually';
 
 const PHONE = { width: 390, height: 844 };
 const TENANT_ID = 't-crannock-logistics';
@@ -64,15 +65,15 @@ test('the tenant user reads the notice for work on its slices on a phone, downlo
   await page.getByTestId('overview-sites').waitFor({ timeout: 30_000 });
   await page.getByTestId('nav-notices').click();
   await page.getByTestId(`notice-row-${own.id}`).waitFor({ timeout: 30_000 });
-  expect(await page.getByTestId(`work-state-${windowId}`).innerText()).toBe('Please acknowledge');
+  await eventually(async () => expect(await page.getByTestId(`work-state-${windowId}`).innerText()).toBe('Please acknowledge'));
   await page.screenshot({ path: path.join(SHOTS, 'notices-list-phone.png'), fullPage: true });
 
   await page.getByTestId(`notice-row-${own.id}`).click();
   await page.getByTestId('notice-view-title').waitFor({ timeout: 30_000 });
-  expect(await page.getByTestId('notice-view-title').innerText()).toBe('Planned network maintenance (hardware replacement)');
+  await eventually(async () => expect(await page.getByTestId('notice-view-title').innerText()).toBe('Planned network maintenance (hardware replacement)'));
   const slicesText = await page.getByTestId('notice-slices').innerText();
   expect(slicesText).not.toContain(SITE_ID);
-  expect(await page.getByTestId('notice-when').innerText()).toMatch(/GMT-1[\s\S]*UTC/);
+  await eventually(async () => expect(await page.getByTestId('notice-when').innerText()).toMatch(/GMT-1[\s\S]*UTC/));
 
   // The download link serves the invitation for this tenant's UID.
   const ics = await context.request.get(`${BASE_URL}/api/notices/${own.id}/ics`);
@@ -84,7 +85,7 @@ test('the tenant user reads the notice for work on its slices on a phone, downlo
 
   await page.getByTestId('notice-acknowledge').click();
   await page.getByTestId('notice-acknowledged').waitFor({ timeout: 30_000 });
-  expect(await page.getByTestId('notice-acknowledged').innerText()).toMatch(/^Acknowledged by Tess Marlow on /);
+  await eventually(async () => expect(await page.getByTestId('notice-acknowledged').innerText()).toMatch(/^Acknowledged by Tess Marlow on /));
   await page.screenshot({ path: path.join(SHOTS, 'notices-acknowledged-phone.png'), fullPage: true });
 
   const after = await ok(admin.get(`${BASE_URL}/api/windows/${windowId}/notices`), 'window notices');

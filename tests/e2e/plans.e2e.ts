@@ -5,6 +5,7 @@
 import type { Browser, Page } from 'playwright-core';
 import path from 'node:path';
 import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
+import { eventually } from './helpers/eventually';
 
 const PHONE = { width: 390, height: 844 };
 const WINDOW_ID = 'w-12';
@@ -87,22 +88,22 @@ test('a planner runs a plan for a demo window, watches it progress, reviews it a
   // The review replaces the progress on the same page: no reload, no navigation.
   await page.getByTestId('plan-review').waitFor({ timeout: RESULT_TIMEOUT_MS });
   expect(page.url()).toBe(urlWhileRunning);
-  expect(Number(await page.getByTestId('plan-total-moved').innerText())).toBeGreaterThan(0);
-  expect(await page.locator('[data-testid^="plan-move-"]').count()).toBeGreaterThan(0);
+  await eventually(async () => expect(Number(await page.getByTestId('plan-total-moved').innerText())).toBeGreaterThan(0));
+  await eventually(async () => expect(await page.locator('[data-testid^="plan-move-"]').count()).toBeGreaterThan(0));
   await page.getByTestId('plan-map').getByTestId('network-map').waitFor({ timeout: 30_000 });
-  expect(await page.getByTestId('plan-steps').isVisible()).toBe(true);
+  await eventually(async () => expect(await page.getByTestId('plan-steps').isVisible()).toBe(true));
   await page.screenshot({ path: path.join(SHOTS, 'plans-review-phone.png'), fullPage: true });
 
   // Any slice left unresolved needs its outage ticked before the plan can be accepted.
   for (const tick of await page.locator('[data-testid^="plan-outage-"]').all()) await tick.click();
   await page.getByTestId('plan-accept').click();
   await page.getByTestId('plan-accepted').waitFor({ timeout: 30_000 });
-  expect(await page.getByTestId('plan-status').innerText()).toContain('Finished');
+  await eventually(async () => expect(await page.getByTestId('plan-status').innerText()).toContain('Finished'));
 
   await page.getByTestId('plan-back').click();
   await page.getByTestId('plans-back').click();
   await page.getByTestId('window-plans-accepted').waitFor({ timeout: 30_000 });
-  expect(await page.getByTestId('window-status').innerText()).toContain('Planned');
+  await eventually(async () => expect(await page.getByTestId('window-status').innerText()).toContain('Planned'));
   await page.screenshot({ path: path.join(SHOTS, 'plans-window-planned-phone.png'), fullPage: true });
   await page.context().close();
 });

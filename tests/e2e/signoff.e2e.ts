@@ -9,6 +9,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { apiAs as apiAsUser, ok, prepareSubmittedWindow, setSignoffPolicies, slotAhead, withdrawWindow } from './helpers/api';
 import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
+import { eventually } from './helpers/eventually';
 
 const PHONE = { width: 390, height: 844 };
 const APPROVER_ID = 'user-demo-approver';
@@ -103,8 +104,8 @@ test('an approver enrols for one-time codes, opens the queue on a phone and appr
   await page.getByTestId('nav-sign-off').click();
   await page.getByTestId(`signoff-queue-item-${windowId}`).click();
   await page.getByTestId('signoff-title').waitFor({ timeout: 30_000 });
-  expect(await page.getByTestId('signoff-critical-caution').isVisible()).toBe(true);
-  expect(await page.getByTestId('signoff-moves-lead').innerText()).toMatch(/affected slices? move/);
+  await eventually(async () => expect(await page.getByTestId('signoff-critical-caution').isVisible()).toBe(true));
+  await eventually(async () => expect(await page.getByTestId('signoff-moves-lead').innerText()).toMatch(/affected slices? move/));
   await page.screenshot({ path: path.join(SHOTS, 'signoff-summary-phone.png'), fullPage: true });
 
   await page.getByTestId('signoff-comment').fill('Checked the moves and the MOP; agreed with the service operations team.');
@@ -112,9 +113,9 @@ test('an approver enrols for one-time codes, opens the queue on a phone and appr
   await page.getByTestId('signoff-code').fill(totp(key, Date.now() + 30_000));
   await page.getByTestId('signoff-approve').click();
   await page.getByTestId(`signoff-decision-1-${APPROVER_ID}`).waitFor({ timeout: 30_000 });
-  expect(await page.getByTestId(`signoff-decision-1-${APPROVER_ID}`).innerText()).toContain('confirmed with a code');
-  expect(await page.getByTestId('signoff-blocked').innerText()).toContain('You have decided');
-  expect(await page.getByTestId('signoff-status').innerText()).toMatch(/Cleared|Notified/);
+  await eventually(async () => expect(await page.getByTestId(`signoff-decision-1-${APPROVER_ID}`).innerText()).toContain('confirmed with a code'));
+  await eventually(async () => expect(await page.getByTestId('signoff-blocked').innerText()).toContain('You have decided'));
+  await eventually(async () => expect(await page.getByTestId('signoff-status').innerText()).toMatch(/Cleared|Notified/));
   await page.screenshot({ path: path.join(SHOTS, 'signoff-approved-phone.png'), fullPage: true });
 
   const w = await ok(admin.get(`${BASE_URL}/api/windows/${windowId}`), 'window');

@@ -4,6 +4,7 @@ import type { Browser, Page } from 'playwright-core';
 import fs from 'node:fs';
 import path from 'node:path';
 import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
+import { eventually } from './helpers/eventually';
 const PHONE = { width: 390, height: 844 };
 /** A zone away from UTC, so the form's local-time conversion is exercised for real. */
 const TIME_ZONE = 'Europe/Oslo';
@@ -78,22 +79,22 @@ test('an engineer books a window on a critical site; a planner assesses it and s
 
   const engineer = await signedInPage('engineer@demo.test');
   const windowId = await bookWindow(engineer, title, site);
-  expect(await engineer.getByTestId('window-title-heading').innerText()).toBe(title);
-  expect(await engineer.getByTestId('window-when').innerText()).toMatch(/01:00 – 04:30 CES?T/);
-  expect(await engineer.getByTestId('window-elements').innerText()).toContain(site.id);
+  await eventually(async () => expect(await engineer.getByTestId('window-title-heading').innerText()).toBe(title));
+  await eventually(async () => expect(await engineer.getByTestId('window-when').innerText()).toMatch(/01:00 – 04:30 CES?T/));
+  await eventually(async () => expect(await engineer.getByTestId('window-elements').innerText()).toContain(site.id));
   await engineer.screenshot({ path: path.join(SHOTS, 'window-detail-engineer-phone.png'), fullPage: true });
   await engineer.context().close();
 
   const planner = await signedInPage('planner@demo.test');
   await planner.goto(`${BASE_URL}/windows/${encodeURIComponent(windowId)}`);
-  expect(await planner.getByTestId('window-status').innerText()).toContain('Draft');
+  await eventually(async () => expect(await planner.getByTestId('window-status').innerText()).toContain('Draft'));
   await planner.getByTestId('window-assess').click();
   await planner.getByTestId('impact-affected').waitFor({ timeout: 60000 });
   await planner.getByTestId(`impact-slice-${sliceId}`).waitFor();
   const caution = planner.getByTestId('impact-critical-caution');
-  expect(await caution.isVisible()).toBe(true);
-  expect(await caution.innerText()).toMatch(/regulator/i);
-  expect(await planner.getByTestId('impact-window-status').innerText()).toContain('Assessed');
+  await eventually(async () => expect(await caution.isVisible()).toBe(true));
+  await eventually(async () => expect(await caution.innerText()).toMatch(/regulator/i));
+  await eventually(async () => expect(await planner.getByTestId('impact-window-status').innerText()).toContain('Assessed'));
   await planner.screenshot({ path: path.join(SHOTS, 'window-impact-planner-phone.png'), fullPage: true });
   await planner.context().close();
 });
