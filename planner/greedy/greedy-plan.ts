@@ -4,9 +4,9 @@
 // reproducible as a DE seed. Knock-on candidates stay where they are: greedy makes no knock-on moves.
 import type { SlicePlacement } from '../model/types';
 import { fits } from '../model/tolerance';
-import { createBookingState, releaseHeld, type BookingState } from '../remap/booking';
+import { createClaimState, releaseHeld, type ClaimState } from '../remap/claims';
 import { CELL_MIDDLE, KEEP_IN, LEAVE_OUT, stayPutGenes } from '../remap/decoder';
-import { bookPlacement, placeSlice } from '../remap/place-slice';
+import { claimPlacement, placeSlice } from '../remap/place-slice';
 import type { RemapProblem, RemapSlice } from '../remap/remap-types';
 import { grcRank } from './grc';
 
@@ -31,7 +31,7 @@ function pickCandidate(candidates: Int32Array, current: number, free: (site: num
 }
 
 /** A candidate index per function that fits the CPU left (functions of the slice counted together), or null. */
-function chooseSites(problem: RemapProblem, state: BookingState, block: RemapSlice, rank: Float64Array, how: Choice): number[] | null {
+function chooseSites(problem: RemapProblem, state: ClaimState, block: RemapSlice, rank: Float64Array, how: Choice): number[] | null {
   const taken = new Map<number, number>();
   const picks: number[] = [];
   for (const k of block.functions) {
@@ -47,7 +47,7 @@ function chooseSites(problem: RemapProblem, state: BookingState, block: RemapSli
 }
 
 /** Tries the ranked choice, then the nearest one; writes the first that places into `genes`. */
-function placeGreedily(problem: RemapProblem, state: BookingState, block: RemapSlice, rank: Float64Array, genes: Float64Array): SlicePlacement | null {
+function placeGreedily(problem: RemapProblem, state: ClaimState, block: RemapSlice, rank: Float64Array, genes: Float64Array): SlicePlacement | null {
   const sites = new Int32Array(block.functions.length);
   for (const how of ['ranked', 'nearest'] as const) {
     const picks = chooseSites(problem, state, block, rank, how);
@@ -60,14 +60,14 @@ function placeGreedily(problem: RemapProblem, state: BookingState, block: RemapS
 }
 
 export function greedyPlan(problem: RemapProblem): GreedyResult {
-  const state = createBookingState(problem);
+  const state = createClaimState(problem);
   const rank = grcRank(problem.inv.network, state.cpu, state.gbps);
   const next = new Map<number, SlicePlacement | null>();
   const genes = stayPutGenes(problem);
   for (const block of problem.slices) {
     releaseHeld(state, block);
     if (!block.touched) {
-      bookPlacement(problem, state, block.slice, problem.inv.placements[block.slice]);
+      claimPlacement(problem, state, block.slice, problem.inv.placements[block.slice]);
       next.set(block.slice, problem.inv.placements[block.slice]);
       continue;
     }

@@ -1,19 +1,19 @@
 // Capacity promised to the accepted plans of windows that overlap this one in time (DESIGN §4.2), as a Reservation.
 //
-// Why these amounts — the rule is "never double-book", so every choice errs on the side of reserving more:
+// Why these amounts — the rule is "never claim the same capacity twice", so every choice errs on the side of reserving more:
 // - During the overlap, a slice an accepted plan moved or rerouted sits on its NEW placement. The parts of that
 //   placement equal to today's (functions that stay, ties on the same path, spans both paths share) are already
 //   counted: this run subtracts today's load of every slice it does not re-place. So only what the plan ADDS is
 //   reserved: a moved function's vCPU at its new site, a changed tie's Gbit/s on the spans of its new path that
 //   the old path did not use (shared-explicit make-before-break, RFC 3209 §2.5 (secondary): spans on both paths
-//   are booked once). What the plan frees (old sites, old spans, unresolved slices) is NOT given back.
+//   are claimed once). What the plan frees (old sites, old spans, unresolved slices) is NOT given back.
 //   Reserving the whole new placement instead would count the unchanged parts twice and make busy elements
 //   look squeezed, dragging unrelated slices into this run.
 // - The other window's elements are out during the overlap too, so nothing of this run may use them: a down
 //   site or span (and every span touching a down site) is reserved in full, a reduced one loses the share its
 //   window takes away (capacity × (1 − fraction)). Slices that sit on those elements today then count as
 //   squeezed in this run and get re-placed away from both windows' elements; their other plan's additions
-//   stay reserved as well, which costs spare capacity but can never double-book.
+//   stay reserved as well, which costs spare capacity but can never claim the same capacity twice.
 // - Several windows blocking the same element reserve it once (the largest share), not once per window;
 //   additions of different plans are summed.
 // Ids the inventory no longer knows are skipped: there is no capacity left to promise on them.
@@ -52,7 +52,7 @@ function addPlanAdditions(inv: Inventory, plan: SlicePlan, into: Tally): void {
   });
   slice.ties.forEach((t, i) => {
     const old = new Set(current.paths[i].map((x) => spans[x].id));
-    // A path that repeats a span books it each time, as placementLoad does.
+    // A path that repeats a span claims it each time, as placementLoad does.
     for (const span of plan.paths[t.id] ?? []) {
       if (!old.has(span) && spanIndex.has(span)) add(into.spanGbps, span, t.bandwidthGbps);
     }

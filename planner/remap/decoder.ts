@@ -1,11 +1,11 @@
-// Genome → placements: orders the blocks by their random keys and books each on the sites and paths its genes
+// Genome → placements: orders the blocks by their random keys and claims each on the sites and paths its genes
 // pick. A touched slice that cannot be placed whole is left unresolved; an untouched (knock-on) slice that
 // cannot be re-placed, or would exceed the knock-on cap, keeps its current placement.
 import type { DEProblem, Fitness } from '../de/differential-evolution';
 import type { Objective, SlicePlacement } from '../model/types';
 import { sliceWeight } from '../plan/evaluate-plan';
-import { createBookingState, loadBookingState, releaseHeld, resetBookingState, saveBookingState, type BookingState } from './booking';
-import { bookPlacement, placeSlice } from './place-slice';
+import { createClaimState, loadClaimState, releaseHeld, resetClaimState, saveClaimState, type ClaimState } from './claims';
+import { claimPlacement, placeSlice } from './place-slice';
 import type { RemapProblem, RemapSlice } from './remap-types';
 
 /** Genes at the middle of their cell, so small DE steps do not flip them. */
@@ -22,7 +22,7 @@ export interface Decoded {
 export interface Decoder {
   evaluate(genes: Float64Array): Fitness;
   decode(genes: Float64Array): Decoded;
-  /** evaluate, saving the booking state before each decode position for evaluateFrom */
+  /** evaluate, saving the claim state before each decode position for evaluateFrom */
   evaluateSaving(genes: Float64Array): Fitness;
   /**
    * evaluate for genes that differ from those of the last evaluateSaving call only in the blocks listed:
@@ -34,7 +34,7 @@ export interface Decoder {
 }
 
 /** Objective vector order: the lexicographic keys, then counts as tie-breakers (fewer is better there too). */
-function toFitness(s: BookingState): Fitness {
+function toFitness(s: ClaimState): Fitness {
   return {
     objective: [s.unresolvedWeight, s.moveCost, s.usage, s.peakUtilisation, s.unresolved, s.moved, s.rerouted],
     violation: s.violation,
@@ -53,7 +53,7 @@ function sortByKeys(problem: RemapProblem, genes: Float64Array, order: Int32Arra
   order.sort((a, b) => key(a) - key(b) || a - b);
 }
 
-function decodeBlock(problem: RemapProblem, state: BookingState, block: RemapSlice, genes: Float64Array, sites: Int32Array): SlicePlacement | null {
+function decodeBlock(problem: RemapProblem, state: ClaimState, block: RemapSlice, genes: Float64Array, sites: Int32Array): SlicePlacement | null {
   releaseHeld(state, block);
   if (block.touched) {
     const placed = block.blockedReason === undefined && genes[block.keepGene] >= 0.5 ? placeSlice(problem, state, block, genes, sites) : null;
@@ -67,7 +67,7 @@ function decodeBlock(problem: RemapProblem, state: BookingState, block: RemapSli
   const placed = mayMove ? placeSlice(problem, state, block, genes, sites) : null;
   if (placed !== null) return placed;
   const current = problem.inv.placements[block.slice];
-  bookPlacement(problem, state, block.slice, current);
+  claimPlacement(problem, state, block.slice, current);
   return current;
 }
 
@@ -78,11 +78,11 @@ interface Run {
   next?: Map<number, SlicePlacement | null>;
 }
 
-function run(problem: RemapProblem, state: BookingState, sites: Int32Array, genes: Float64Array, r: Run): void {
-  if (r.from > 0 && r.saves) loadBookingState(state, r.saves[r.from]);
-  else resetBookingState(problem, state);
+function run(problem: RemapProblem, state: ClaimState, sites: Int32Array, genes: Float64Array, r: Run): void {
+  if (r.from > 0 && r.saves) loadClaimState(state, r.saves[r.from]);
+  else resetClaimState(problem, state);
   for (let p = r.from; p < r.order.length; p += 1) {
-    if (r.saves && r.from === 0) r.saves[p] = saveBookingState(state, r.saves[p]);
+    if (r.saves && r.from === 0) r.saves[p] = saveClaimState(state, r.saves[p]);
     const block = problem.slices[r.order[p]];
     const placed = decodeBlock(problem, state, block, genes, sites);
     r.next?.set(block.slice, placed);
@@ -91,7 +91,7 @@ function run(problem: RemapProblem, state: BookingState, sites: Int32Array, gene
 
 /** A decoder with its own scratch buffers (one per thread; not re-entrant). */
 export function createDecoder(problem: RemapProblem): Decoder {
-  const state = createBookingState(problem);
+  const state = createClaimState(problem);
   let widest = 1;
   for (const block of problem.slices) widest = Math.max(widest, block.functions.length);
   const sites = new Int32Array(widest);

@@ -2,12 +2,12 @@
 import { fits } from '../model/tolerance';
 import type { SlicePlacement } from '../model/types';
 import { shortestLatencyPath } from '../paths/shortest-path';
-import { createBookingState, type BookingState } from './booking';
-import { bookPlacement } from './place-slice';
+import { createClaimState, type ClaimState } from './claims';
+import { claimPlacement } from './place-slice';
 import type { RemapProblem, RemapSlice } from './remap-types';
 
 /** Nearest candidate per function with enough CPU left after the plan, or the reason there is none. */
-function nearestSites(problem: RemapProblem, state: BookingState, block: RemapSlice): Int32Array | string {
+function nearestSites(problem: RemapProblem, state: ClaimState, block: RemapSlice): Int32Array | string {
   const sites = new Int32Array(block.functions.length);
   for (let fn = 0; fn < block.functions.length; fn += 1) {
     const f = problem.functions[block.functions[fn]];
@@ -22,7 +22,7 @@ function nearestSites(problem: RemapProblem, state: BookingState, block: RemapSl
   return sites;
 }
 
-function tieReason(problem: RemapProblem, state: BookingState, block: RemapSlice, sites: Int32Array): string {
+function tieReason(problem: RemapProblem, state: ClaimState, block: RemapSlice, sites: Int32Array): string {
   const slice = problem.inv.slices[block.slice];
   for (const t of slice.ties) {
     const opts = { spanDown: problem.spanDown, siteDown: problem.siteDown };
@@ -42,10 +42,10 @@ function tieReason(problem: RemapProblem, state: BookingState, block: RemapSlice
 
 /** Reasons keyed by slice index, for the slices `next` leaves unresolved. */
 export function explainUnresolved(problem: RemapProblem, next: Map<number, SlicePlacement | null>): Map<number, string> {
-  const state = createBookingState(problem);
+  const state = createClaimState(problem);
   for (const block of problem.slices) {
     const placement = next.get(block.slice);
-    if (placement) bookPlacement(problem, state, block.slice, placement);
+    if (placement) claimPlacement(problem, state, block.slice, placement);
   }
   const reasons = new Map<number, string>();
   for (const block of problem.slices) {

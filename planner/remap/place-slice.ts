@@ -4,7 +4,7 @@ import { fits } from '../model/tolerance';
 import type { SlicePlacement } from '../model/types';
 import { REROUTE_COST } from '../plan/evaluate-plan';
 import { shortestLatencyPath } from '../paths/shortest-path';
-import { bookCpu, bookPath, commit, mark, undoSince, type BookingState } from './booking';
+import { claimCpu, claimPath, commit, mark, undoSince, type ClaimState } from './claims';
 import type { PathList } from './path-catalog';
 import type { RemapProblem, RemapSlice } from './remap-types';
 
@@ -28,7 +28,7 @@ function availability(problem: RemapProblem, path: readonly number[]): number {
 const REPAIR_PATHS = 3;
 
 /** The gene's path when it fits; else one of the catalogue's first paths that fits around later slices' paths, then anywhere. */
-function pickFromCatalogue(list: PathList, gene: number, gbps: number, state: BookingState): readonly number[] | null {
+function pickFromCatalogue(list: PathList, gene: number, gbps: number, state: ClaimState): readonly number[] | null {
   const chosen = list.at(Math.max(0, Math.floor(gene)));
   if (chosen === null) return null;
   if (pathFits(chosen.spans, gbps, state.gbps)) return chosen.spans;
@@ -46,7 +46,7 @@ function pickFromCatalogue(list: PathList, gene: number, gbps: number, state: Bo
  * still qualifies and fits: the catalogue starts with it, so this skips building the list (most slices keep
  * their paths).
  */
-function keptPath(problem: RemapProblem, state: BookingState, block: RemapSlice, tie: number, sites: Int32Array, gene: number): readonly number[] | null {
+function keptPath(problem: RemapProblem, state: ClaimState, block: RemapSlice, tie: number, sites: Int32Array, gene: number): readonly number[] | null {
   const t = problem.inv.slices[block.slice].ties[tie];
   const current = problem.inv.placements[block.slice];
   if (gene >= 1 || sites[t.from] !== current.sites[t.from] || sites[t.to] !== current.sites[t.to]) return null;
@@ -61,8 +61,8 @@ function keptPath(problem: RemapProblem, state: BookingState, block: RemapSlice,
   return path;
 }
 
-/** Routes tie `tie` of the block between the chosen sites; null when nothing fits. Books nothing. */
-function routeTie(problem: RemapProblem, state: BookingState, block: RemapSlice, tie: number, sites: Int32Array, gene: number): readonly number[] | null {
+/** Routes tie `tie` of the block between the chosen sites; null when nothing fits. Claims nothing. */
+function routeTie(problem: RemapProblem, state: ClaimState, block: RemapSlice, tie: number, sites: Int32Array, gene: number): readonly number[] | null {
   const kept = keptPath(problem, state, block, tie, sites, gene);
   if (kept !== null) return kept;
   const t = problem.inv.slices[block.slice].ties[tie];
@@ -87,7 +87,7 @@ function samePath(a: readonly number[], b: readonly number[]): boolean {
 }
 
 /** Move cost and counts of a placed slice against its current placement; true when it differs. */
-function tally(problem: RemapProblem, state: BookingState, slice: number, sites: ArrayLike<number>, paths: readonly (readonly number[])[]): boolean {
+function tally(problem: RemapProblem, state: ClaimState, slice: number, sites: ArrayLike<number>, paths: readonly (readonly number[])[]): boolean {
   const info = problem.inv.slices[slice];
   const current = problem.inv.placements[slice];
   let moved = false;
@@ -104,10 +104,10 @@ function tally(problem: RemapProblem, state: BookingState, slice: number, sites:
 }
 
 /**
- * Books the block on the sites and paths its genes pick (repaired where a pick does not fit). Returns the
- * placement, or null after taking back every booking when some function or tie cannot be placed.
+ * Claims the block on the sites and paths its genes pick (repaired where a pick does not fit). Returns the
+ * placement, or null after taking back every claim when some function or tie cannot be placed.
  */
-export function placeSlice(problem: RemapProblem, state: BookingState, block: RemapSlice, genes: Float64Array, sites: Int32Array): SlicePlacement | null {
+export function placeSlice(problem: RemapProblem, state: ClaimState, block: RemapSlice, genes: Float64Array, sites: Int32Array): SlicePlacement | null {
   const slice = problem.inv.slices[block.slice];
   const m = mark(state);
   for (let fn = 0; fn < block.functions.length; fn += 1) {
@@ -117,13 +117,13 @@ export function placeSlice(problem: RemapProblem, state: BookingState, block: Re
     if (!fits(cpu, state.cpu[f.candidates[i]])) i = f.candidates.findIndex((site) => fits(cpu, state.cpu[site]));
     if (i < 0) { undoSince(state, m); return null; }
     sites[fn] = f.candidates[i];
-    bookCpu(state, sites[fn], cpu);
+    claimCpu(state, sites[fn], cpu);
   }
   const paths: number[][] = [];
   for (let tie = 0; tie < block.ties.length; tie += 1) {
     const path = routeTie(problem, state, block, tie, sites, genes[problem.ties[block.ties[tie]].gene]);
     if (path === null) { undoSince(state, m); return null; }
-    bookPath(problem, state, path, slice.ties[tie].bandwidthGbps);
+    claimPath(problem, state, path, slice.ties[tie].bandwidthGbps);
     paths.push(path as number[]);
   }
   commit(state);
@@ -133,23 +133,23 @@ export function placeSlice(problem: RemapProblem, state: BookingState, block: Re
 }
 
 /**
- * Books a given placement as it is, e.g. an untouched slice kept where it is. What does not fit is booked anyway
+ * Claims a given placement as it is, e.g. an untouched slice kept where it is. What does not fit is claimed anyway
  * and counted as violation (the share of the demand that does not fit), so Deb's rules steer away from it.
  */
-export function bookPlacement(problem: RemapProblem, state: BookingState, slice: number, placement: SlicePlacement): void {
+export function claimPlacement(problem: RemapProblem, state: ClaimState, slice: number, placement: SlicePlacement): void {
   const info = problem.inv.slices[slice];
   info.functions.forEach((f, fn) => {
     const site = placement.sites[fn];
     const free = Math.max(0, state.cpu[site]);
     if (!fits(f.cpu, free)) state.violation += (f.cpu - free) / f.cpu;
-    bookCpu(state, site, f.cpu);
+    claimCpu(state, site, f.cpu);
   });
   info.ties.forEach((t, tie) => {
     for (const span of placement.paths[tie]) {
       const free = Math.max(0, state.gbps[span]);
       if (!fits(t.bandwidthGbps, free)) state.violation += (t.bandwidthGbps - free) / t.bandwidthGbps;
     }
-    bookPath(problem, state, placement.paths[tie], t.bandwidthGbps);
+    claimPath(problem, state, placement.paths[tie], t.bandwidthGbps);
   });
   commit(state);
 }

@@ -4,7 +4,8 @@ import type { Objective, PlanMode, Reservation, SlicePlacement } from '../model/
 import type { ParallelRunner } from './parallel-runner';
 import type { RemapProblem } from './remap-types';
 
-export interface PlanProgress {
+/** The search's figures after a generation (DE) or a migration (islands); the plan run's own progress, with phases, is shared/plans PlanProgress. */
+export interface SearchProgress {
   generation: number;
   evaluations: number;
   best: Objective;
@@ -40,7 +41,7 @@ export interface PlanOptions {
   reservations?: Reservation;
   pinned?: string[];
   excludedSites?: string[];
-  onProgress?: (p: PlanProgress) => void;
+  onProgress?: (p: SearchProgress) => void;
   now?: () => number;
   /** 'islands' and 'shared-eval' */
   parallel?: ParallelRunner;

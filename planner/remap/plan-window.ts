@@ -17,7 +17,7 @@ import { localSearch } from './local-search';
 import { perturbedSeeds } from './seeding';
 import type { RemapProblem } from './remap-types';
 
-export { PLAN_DEFAULTS, type PlanOptions, type PlanProgress, type ExactSolver, type ExactOutcome } from './plan-options';
+export { PLAN_DEFAULTS, type PlanOptions, type SearchProgress, type ExactSolver, type ExactOutcome } from './plan-options';
 
 /** rng stream for the initial members, apart from the DE's own stream */
 const SEEDING_STREAM = 0x5eed;

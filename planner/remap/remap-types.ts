@@ -46,7 +46,7 @@ export interface RemapSlice {
   touched: boolean;
   /** genome position of the keep-out gene (< 0.5 = leave the slice unresolved); -1 for knock-on candidates */
   keepGene: number;
-  /** genome position of the random key that sets the decode order (smaller keys book first) */
+  /** genome position of the random key that sets the decode order (smaller keys claim first) */
   orderGene: number;
   /** indices into RemapProblem.functions, in the slice's function order */
   functions: number[];

@@ -1,5 +1,5 @@
 // Orders a plan's steps make-before-break: each step holds old and new resources at once, so it must fit first.
-// Reference: RFC 3209 §2.5 make-before-break with shared-explicit reservation (spans on both paths are booked once).
+// Reference: RFC 3209 §2.5 make-before-break with shared-explicit reservation (spans on both paths are claimed once).
 import { fits } from '../model/tolerance';
 import type { Inventory, Reservation, SlicePlacement, WindowSpec } from '../model/types';
 import { placementLoad } from '../model/window-capacity';
@@ -45,7 +45,7 @@ function fitsNow(inv: Inventory, step: PendingStep, ledger: Ledger): boolean {
   return step.toSpans.every((x) => old.has(x) || fits(gbps, ledger.freeGbps[x]));
 }
 
-/** Books the new resources and releases the old ones (the step is complete). */
+/** Claims the new resources and releases the old ones (the step is complete). */
 function apply(inv: Inventory, step: PendingStep, ledger: Ledger): void {
   const slice = inv.slices[step.slice];
   if (step.kind === 'move-function') {

@@ -9,7 +9,7 @@ export interface LoadTally {
 /**
  * Every slice counts: one with an entry at its planned placement (none when that is null: unresolved or not
  * mappable), every other at its current placement. A span is shared by both directions, and a path that
- * crosses a span twice books it twice.
+ * crosses a span twice claims it twice.
  */
 export function tallyLoad(inv: Inventory, planned: ReadonlyMap<number, SlicePlacement | null>): LoadTally {
   const siteCpu = new Float64Array(inv.network.sites.length);

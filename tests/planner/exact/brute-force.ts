@@ -87,12 +87,12 @@ export function bruteForce(p: RemapProblem, maxCombinations = 50_000): BruteOpti
   const chosen = new Map<number, SlicePlacement | null>();
   let best: BruteOptimum = { key: [Infinity, Infinity, Infinity], next: new Map(), combinations: 0 };
   let combinations = 0;
-  const book = (slice: number, pl: SlicePlacement, sign: number) => {
+  const claim = (slice: number, pl: SlicePlacement, sign: number) => {
     const s = p.inv.slices[slice];
     s.functions.forEach((f, i) => (cpu[pl.sites[i]] -= sign * f.cpu));
     s.ties.forEach((t, i) => pl.paths[i].forEach((x) => (gbps[x] -= sign * t.bandwidthGbps)));
   };
-  // A resource fits when nothing is booked on it beyond its residual (one left untouched always fits).
+  // A resource fits when nothing is claimed on it beyond its residual (one left untouched always fits).
   const ok = (left: Float64Array, residual: Float64Array) =>
     left.every((v, i) => v === residual[i] || v >= -EPS * Math.max(1, Math.abs(residual[i])));
   const fitsAll = () => ok(cpu, p.residualCpu) && ok(gbps, p.residualGbps);
@@ -106,12 +106,12 @@ export function bruteForce(p: RemapProblem, maxCombinations = 50_000): BruteOpti
     chosen.set(b.slice, null);
     walk(i + 1, [key[0] + sliceWeight(p.inv.slices[b.slice].priority), key[1], key[2]]);
     for (const c of b.choices) {
-      book(b.slice, c.placement, 1);
+      claim(b.slice, c.placement, 1);
       if (fitsAll()) {
         chosen.set(b.slice, c.placement);
         walk(i + 1, [key[0], key[1] + c.move, key[2] + c.usage]);
       }
-      book(b.slice, c.placement, -1);
+      claim(b.slice, c.placement, -1);
     }
     chosen.delete(b.slice);
   };

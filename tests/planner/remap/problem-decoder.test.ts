@@ -78,7 +78,7 @@ describe('decode', () => {
     expect(d.objective.unresolvedWeight).toBe(5);
   });
 
-  it('leaves a touched slice that cannot be placed whole unresolved, taking back what it had booked', () => {
+  it('leaves a touched slice that cannot be placed whole unresolved, taking back what it had claimed', () => {
     const { inv, problem } = tiny('w-site-b');
     expect(decode(problem, stayPutGenes(problem)).objective.unresolved).toBe(0);
     problem.residualCpu.fill(0); // every site now full: no function fits anywhere

@@ -1,5 +1,5 @@
 // overlapReservations: what an accepted plan of an overlapping window reserves, and — as a property — that two
-// overlapping windows planned one after the other never book more than the network has during the overlap.
+// overlapping windows planned one after the other never claim more than the network has during the overlap.
 import fc from 'fast-check';
 import { randomWindow } from '../../../scenarios/generate/random-window';
 import { buildScenario } from '../../../scenarios/generate/scenario-builder';
@@ -99,7 +99,7 @@ function overlapProblems(net: Inventory, a: WindowSpec, b: WindowSpec, plans: Ma
 }
 
 describe('overlapReservations (property)', () => {
-  it('two overlapping windows planned one after the other never double-book: the later plan verifies and both fit together', async () => {
+  it('two overlapping windows planned one after the other never double-claim: the later plan verifies and both fit together', async () => {
     const arb = fc.record({ seed: fc.integer({ min: 1, max: 1_000_000 }), sites: fc.integer({ min: 6, max: 12 }), slices: fc.integer({ min: 4, max: 16 }) });
     await fc.assert(fc.asyncProperty(arb, async ({ seed, sites, slices }) => {
       const scenario = buildScenario({ sites, slices, seed, windows: 0 });

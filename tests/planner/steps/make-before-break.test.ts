@@ -43,7 +43,7 @@ describe('orderSteps', () => {
     expect(order.needsSpare).toBe(0);
   });
 
-  it('books spans shared by the old and new path once (shared-explicit make-before-break)', () => {
+  it('claims spans shared by the old and new path once (shared-explicit make-before-break)', () => {
     // 8 Gbit/s on de (10 Gbit/s) would need 16 if counted twice.
     const inv = buildInventory(scenarioWith([
       { id: 's1', functions: { a: ['A', 1], e: ['E', 1] }, ties: [['a-e', 'a', 'e', 8, 5, ['ab', 'bd', 'de']]] },

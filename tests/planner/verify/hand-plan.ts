@@ -15,7 +15,7 @@ interface Room {
   gbps: Float64Array;
 }
 
-function book(inv: Inventory, s: number, p: SlicePlacement, room: Room, sign: 1 | -1): void {
+function claim(inv: Inventory, s: number, p: SlicePlacement, room: Room, sign: 1 | -1): void {
   inv.slices[s].functions.forEach((f, i) => { room.cpu[p.sites[i]] -= sign * f.cpu; });
   inv.slices[s].ties.forEach((t, i) => p.paths[i].forEach((x) => { room.gbps[x] -= sign * t.bandwidthGbps; }));
 }
@@ -24,7 +24,7 @@ const sameSites = (a: SlicePlacement, b: SlicePlacement) => a.sites.every((x, i)
 const samePaths = (a: SlicePlacement, b: SlicePlacement) =>
   a.paths.every((p, i) => p.length === b.paths[i].length && p.every((x, k) => x === b.paths[i][k]));
 
-/** A new placement for slice s within `room` (booked on success), or null. */
+/** A new placement for slice s within `room` (claimed on success), or null. */
 function place(inv: Inventory, s: number, room: Room, down: { site: Uint8Array; span: Uint8Array }, rnd: () => number): SlicePlacement | null {
   const slice = inv.slices[s];
   const current = inv.placements[s];
@@ -51,7 +51,7 @@ function place(inv: Inventory, s: number, room: Room, down: { site: Uint8Array; 
       spanDown: down.span, siteDown: down.site, residualGbps: room.gbps, minGbps: t.bandwidthGbps, maxLatencyMs: t.maxLatencyMs,
     });
     if (found === null) {
-      book(inv, s, { sites, paths: paths.concat(slice.ties.slice(i).map(() => [])) }, room, -1);
+      claim(inv, s, { sites, paths: paths.concat(slice.ties.slice(i).map(() => [])) }, room, -1);
       return null;
     }
     paths.push([...found.spans]);
@@ -88,15 +88,15 @@ export function handPlan(inv: Inventory, window: WindowSpec, rnd: () => number):
   for (let k = 0; k < KNOCK_ON_TRIES && affected.length > 0 && untouched.length > 0; k++) {
     const s = untouched[Math.floor(rnd() * untouched.length)];
     if (entries.some((e) => e.slice === inv.slices[s].id)) continue;
-    book(inv, s, inv.placements[s], room, -1);
+    claim(inv, s, inv.placements[s], room, -1);
     const p = place(inv, s, room, down, rnd);
     const entry = toEntry(inv, s, p);
     if (entry.outcome === 'move' || entry.outcome === 'reroute') {
       entries.push({ ...entry, madeRoomFor: [inv.slices[affected[Math.floor(rnd() * affected.length)]].id] });
       continue;
     }
-    if (p !== null) book(inv, s, p, room, -1);
-    book(inv, s, inv.placements[s], room, 1);
+    if (p !== null) claim(inv, s, p, room, -1);
+    claim(inv, s, inv.placements[s], room, 1);
   }
   for (const s of affected) entries.push(toEntry(inv, s, place(inv, s, room, down, rnd)));
   return { affected: affected.map((s) => inv.slices[s].id), slices: entries };

@@ -57,7 +57,7 @@ describe('tallyLoad', () => {
     expect(load.spanGbps[span('cd')]).toBe(1);
   });
 
-  it('books a span once per crossing when a path repeats it', () => {
+  it('claims a span once per crossing when a path repeats it', () => {
     const hosted = inv.sliceIndex.get('s-hosted')!;
     const detour: SlicePlacement = { sites: [site('B'), site('A')], paths: [[span('ab'), span('ab'), span('ab')]] };
     expect(tallyLoad(inv, new Map([[hosted, detour]])).spanGbps[span('ab')]).toBe(3 * 2 + 5);

@@ -1,13 +1,13 @@
-// The decoder's running state: residual capacity that bookings consume, objective totals, and an undo log so a
+// The decoder's running state: residual capacity that claims consume, objective totals, and an undo log so a
 // slice that cannot be placed whole is taken back without trace.
 import type { PathOptions } from '../paths/shortest-path';
 import type { RemapProblem, RemapSlice } from './remap-types';
 
-/** Running totals of one decode; the residual arrays are working copies that bookings consume. */
-export interface BookingState {
+/** Running totals of one decode; the residual arrays are working copies that claims consume. */
+export interface ClaimState {
   cpu: Float64Array;
   gbps: Float64Array;
-  /** gbps minus the current paths of the blocks not yet booked (see RemapProblem.protectedGbps) */
+  /** gbps minus the current paths of the blocks not yet claimed (see RemapProblem.protectedGbps) */
   protectedGbps: Float64Array;
   pathOptions: PathOptions;
   protectedOptions: PathOptions;
@@ -21,12 +21,12 @@ export interface BookingState {
   peakUtilisation: number;
   /** knock-on candidates placed away from their current placement so far */
   knockOnMoves: number;
-  /** bookings of the slice being placed: site (≥ 0) or span (encoded −1 − span), and the amount */
+  /** claims of the slice being placed: site (≥ 0) or span (encoded −1 − span), and the amount */
   undoWhere: number[];
   undoAmount: number[];
 }
 
-export function createBookingState(problem: RemapProblem): BookingState {
+export function createClaimState(problem: RemapProblem): ClaimState {
   const cpu = Float64Array.from(problem.residualCpu);
   const gbps = Float64Array.from(problem.residualGbps);
   const protectedGbps = Float64Array.from(problem.protectedGbps);
@@ -40,7 +40,7 @@ export function createBookingState(problem: RemapProblem): BookingState {
 }
 
 /** Back to the problem's residuals and zero totals, without allocating. */
-export function resetBookingState(problem: RemapProblem, state: BookingState): void {
+export function resetClaimState(problem: RemapProblem, state: ClaimState): void {
   state.cpu.set(problem.residualCpu);
   state.gbps.set(problem.residualGbps);
   state.protectedGbps.set(problem.protectedGbps);
@@ -60,7 +60,7 @@ export function resetBookingState(problem: RemapProblem, state: BookingState): v
 const TOTALS = 9;
 
 /** A copy of the state's arrays and totals in one buffer (reused when `into` has the right size). */
-export function saveBookingState(state: BookingState, into?: Float64Array): Float64Array {
+export function saveClaimState(state: ClaimState, into?: Float64Array): Float64Array {
   const a = state.cpu.length;
   const b = state.gbps.length;
   const out = into && into.length === a + 2 * b + TOTALS ? into : new Float64Array(a + 2 * b + TOTALS);
@@ -74,7 +74,7 @@ export function saveBookingState(state: BookingState, into?: Float64Array): Floa
   return out;
 }
 
-export function loadBookingState(state: BookingState, saved: Float64Array): void {
+export function loadClaimState(state: ClaimState, saved: Float64Array): void {
   const a = state.cpu.length;
   const b = state.gbps.length;
   state.cpu.set(saved.subarray(0, a));
@@ -88,13 +88,13 @@ export function loadBookingState(state: BookingState, saved: Float64Array): void
   state.undoAmount.length = 0;
 }
 
-export function bookCpu(state: BookingState, site: number, cpu: number): void {
+export function claimCpu(state: ClaimState, site: number, cpu: number): void {
   state.cpu[site] -= cpu;
   state.undoWhere.push(site);
   state.undoAmount.push(cpu);
 }
 
-export function bookPath(problem: RemapProblem, state: BookingState, path: readonly number[], gbps: number): void {
+export function claimPath(problem: RemapProblem, state: ClaimState, path: readonly number[], gbps: number): void {
   const spans = problem.inv.network.spans;
   for (const span of path) {
     state.gbps[span] -= gbps;
@@ -107,14 +107,14 @@ export function bookPath(problem: RemapProblem, state: BookingState, path: reado
   }
 }
 
-/** Marks the start of one slice's bookings; `undoSince` takes them back. */
+/** Marks the start of one slice's claims; `undoSince` takes them back. */
 export interface Mark { log: number; usage: number; peak: number }
 
-export function mark(state: BookingState): Mark {
+export function mark(state: ClaimState): Mark {
   return { log: state.undoWhere.length, usage: state.usage, peak: state.peakUtilisation };
 }
 
-export function undoSince(state: BookingState, m: Mark): void {
+export function undoSince(state: ClaimState, m: Mark): void {
   for (let i = state.undoWhere.length - 1; i >= m.log; i -= 1) {
     const where = state.undoWhere[i];
     const amount = state.undoAmount[i];
@@ -130,13 +130,13 @@ export function undoSince(state: BookingState, m: Mark): void {
   state.peakUtilisation = m.peak;
 }
 
-/** The slice's bookings are final: forget them from the undo log. */
-export function commit(state: BookingState): void {
+/** The slice's claims are final: forget them from the undo log. */
+export function commit(state: ClaimState): void {
   state.undoWhere.length = 0;
   state.undoAmount.length = 0;
 }
 
 /** The block's turn has come: its current paths no longer need protecting from the others' new routes. */
-export function releaseHeld(state: BookingState, block: RemapSlice): void {
+export function releaseHeld(state: ClaimState, block: RemapSlice): void {
   for (let i = 0; i < block.heldSpans.length; i += 1) state.protectedGbps[block.heldSpans[i]] += block.heldGbps[i];
 }
