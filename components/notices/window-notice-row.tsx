@@ -3,6 +3,7 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { RoleName } from '@/shared/api';
+import { canAdminister, canResendNotices } from '@/shared/permissions';
 import type { NoticeStatusRow } from '@/shared/notices';
 import { Button } from '@/components/button';
 import { Badge } from '@/components/inventory/badges';
@@ -31,8 +32,8 @@ function facts(row: NoticeStatusRow, timeZone: string): string[] {
 export function WindowNoticeRow({ row, roles, timeZone, busy, onResend, onOverride }: Props) {
   const [reason, setReason] = useState('');
   const state = sendingLabel(row);
-  const canResend = row.status === 'failed' && roles.some((r) => r === 'admin' || r === 'planner');
-  const canOverride = row.status === 'blocked' && row.method === 'REQUEST' && roles.includes('admin');
+  const canResend = row.status === 'failed' && canResendNotices(roles);
+  const canOverride = row.status === 'blocked' && row.method === 'REQUEST' && canAdminister(roles);
   return (
     <View style={styles.row} testID={`window-notice-${row.tenantId}`}>
       <View style={styles.top}>

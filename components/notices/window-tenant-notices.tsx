@@ -1,16 +1,15 @@
 // The window page's block on tenant notices (staff: admin, planner, approver): one row per tenant with its
 // sending state; hidden until the window has notices.
 import { StyleSheet, Text } from 'react-native';
-import type { Me, RoleName } from '@/shared/api';
+import type { Me } from '@/shared/api';
+import { canReadWindowNotices } from '@/shared/permissions';
 import { useNoticeActionMutation, useWindowNoticesQuery } from '@/hooks/queries/notices';
 import { Section } from '@/components/windows/section';
 import { colors, type } from '@/constants/theme';
 import { WindowNoticeRow } from './window-notice-row';
 
-const NOTICE_STAFF: readonly RoleName[] = ['admin', 'planner', 'approver'];
-
 export function WindowTenantNotices({ windowId, me, timeZone }: { windowId: string; me: Me; timeZone: string }) {
-  const staff = me.roles.some((r) => NOTICE_STAFF.includes(r));
+  const staff = canReadWindowNotices(me.roles);
   const notices = useWindowNoticesQuery(windowId, staff);
   const action = useNoticeActionMutation();
   if (!staff || !notices.data || notices.data.notices.length === 0) return null;

@@ -8,7 +8,7 @@ import { formatInstant } from '@/components/time';
 import { settingsSummary } from '@/components/plans/plan-format';
 import { PlanProgressView } from '@/components/plans/plan-progress';
 import { PlanReviewView, type PlanLinks } from '@/components/plans/plan-review';
-import { canPlan } from '@/components/plans/plan-roles';
+import { canRunPlans } from '@/shared/permissions';
 import { PlanPage } from '@/components/plans/plan-page';
 import { PlanMarks, PlanStatusPill } from '@/components/plans/plan-status-pill';
 import { colors, radii, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
@@ -17,7 +17,7 @@ type Props = PlanLinks & { plan: Plan; windowTitle: string; me: Me; timeZone: st
 
 function Body({ plan, me, wide, ...links }: PlanLinks & { plan: Plan; me: Me; wide: boolean }) {
   const cancel = usePlanCancelMutation(plan.windowId);
-  const canAct = canPlan(me.roles);
+  const canAct = canRunPlans(me.roles);
   if (plan.status === 'queued' || plan.status === 'running') {
     return (
       <PlanProgressView

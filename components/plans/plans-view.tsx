@@ -9,7 +9,7 @@ import { EmptyState } from '@/components/screen-states';
 import { PlanPage } from '@/components/plans/plan-page';
 import { PlanRunForm } from '@/components/plans/plan-run-form';
 import { PlanRunList } from '@/components/plans/plan-run-list';
-import { canPlan, windowTakesRuns } from '@/components/plans/plan-roles';
+import { canRunPlans, windowTakesRuns } from '@/shared/permissions';
 import { useRunOptions } from '@/components/plans/use-run-options';
 import { Section } from '@/components/windows/section';
 import { StatusBadge } from '@/components/windows/status-badge';
@@ -29,7 +29,7 @@ type Props = {
 function NewRun({ window: w, me, adjustFrom, onOpenPlan, startOpen }: Pick<Props, 'window' | 'me' | 'adjustFrom' | 'onOpenPlan'> & { startOpen: boolean }) {
   const [open, setOpen] = useState(startOpen || !!adjustFrom);
   const options = useRunOptions(w.id);
-  if (!canPlan(me.roles)) return null;
+  if (!canRunPlans(me.roles)) return null;
   if (!windowTakesRuns(w.status)) {
     return <Text style={styles.muted} testID="plans-not-plannable">New runs need a window whose impact is assessed and whose work has not started.</Text>;
   }
@@ -53,7 +53,7 @@ export function PlansView({ window: w, me, plans, timeZone, adjustFrom, onOpenPl
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_LAYOUT_MIN_WIDTH_PX;
   const runs: ReactNode = plans.length === 0
-    ? <EmptyState title="No runs yet" hint={canPlan(me.roles) ? 'Start a run to see where the affected slices could go.' : 'A planner has not run the re-mapper for this window yet.'} />
+    ? <EmptyState title="No runs yet" hint={canRunPlans(me.roles) ? 'Start a run to see where the affected slices could go.' : 'A planner has not run the re-mapper for this window yet.'} />
     : <PlanRunList plans={plans} timeZone={timeZone} onOpen={onOpenPlan} />;
   const form = <NewRun window={w} me={me} adjustFrom={adjustFrom} onOpenPlan={onOpenPlan} startOpen={wide} />;
   return (

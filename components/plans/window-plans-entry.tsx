@@ -4,7 +4,7 @@ import type { Me } from '@/shared/api';
 import { useWindowPlansQuery } from '@/hooks/queries/plans';
 import { Button } from '@/components/button';
 import { formatCost } from '@/components/plans/plan-format';
-import { canReadPlans } from '@/components/plans/plan-roles';
+import { canReadPlans } from '@/shared/permissions';
 import { Section } from '@/components/windows/section';
 import { colors, space, type } from '@/constants/theme';
 

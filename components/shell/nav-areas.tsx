@@ -2,6 +2,7 @@
 import type { ComponentType } from 'react';
 import type { Href } from 'expo-router';
 import type { RoleName } from '@/shared/api';
+import { ADMIN_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, SIGNOFF_QUEUE_ROLES, TENANT_PORTAL_ROLES } from '@/shared/permissions';
 import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, NoticeIcon, OutboxIcon, OverviewIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
 
 export type NavArea = {
@@ -11,7 +12,7 @@ export type NavArea = {
   /** Path prefixes that count as being inside this area. */
   matches: (pathname: string) => boolean;
   Icon: ComponentType<{ size?: number; color?: string }>;
-  /** Only users holding one of these roles see the area (the API checks again); unset = everyone signed in. */
+  /** Only users holding one of these roles (a set from shared/permissions) see the area (the API checks again); unset = everyone signed in. */
   roles?: readonly RoleName[];
 };
 
@@ -31,29 +32,29 @@ export const NAV_AREAS: readonly NavArea[] = [
   {
     key: 'freezes', label: 'Freezes', href: '/freezes', matches: (pathname) => pathname.startsWith('/freezes'),
     // Operator staff only: the API does not show freezes to tenant users.
-    Icon: FreezeIcon, roles: ['admin', 'engineer', 'planner', 'approver'],
+    Icon: FreezeIcon, roles: OPERATOR_ROLES,
   },
   {
     key: 'imports', label: 'Imports', href: '/imports', matches: (pathname) => pathname.startsWith('/imports'),
-    Icon: ImportIcon, roles: ['admin', 'planner'],
+    Icon: ImportIcon, roles: INVENTORY_IMPORT_ROLES,
   },
   {
     key: 'outbox', label: 'Outbox', href: '/outbox', matches: (pathname) => pathname.startsWith('/outbox'),
-    Icon: OutboxIcon, roles: ['admin'],
+    Icon: OutboxIcon, roles: ADMIN_ROLES,
   },
   {
     key: 'sign-off', label: 'Sign-off', href: '/sign-off', matches: (pathname) => pathname.startsWith('/sign-off') || pathname.startsWith('/security'),
     // Approvers decide; admins read the queue and set the sign-off policy.
-    Icon: SignoffIcon, roles: ['approver', 'admin'],
+    Icon: SignoffIcon, roles: SIGNOFF_QUEUE_ROLES,
   },
   {
     key: 'notices', label: 'Notices', href: '/notices', matches: (pathname) => pathname.startsWith('/notices'),
     // The tenant portal; staff follow notices on each window's page.
-    Icon: NoticeIcon, roles: ['tenant'],
+    Icon: NoticeIcon, roles: TENANT_PORTAL_ROLES,
   },
 ];
 
 /** The areas a user with these roles may open. */
 export function areasFor(roles: readonly RoleName[]): NavArea[] {
-  return NAV_AREAS.filter((area) => !area.roles || area.roles.some((role) => roles.includes(role)));
+  return NAV_AREAS.filter((area) => !area.roles || holdsAnyRole(roles, area.roles));
 }

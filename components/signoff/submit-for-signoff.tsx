@@ -1,6 +1,7 @@
 // The window page's sign-off block: a planner submits a planned window; anyone on staff opens its sign-off once submitted.
 import { StyleSheet, Text, View } from 'react-native';
 import type { Me } from '@/shared/api';
+import { canSubmitForSignoff, isOperator } from '@/shared/permissions';
 import type { Window } from '@/shared/windows';
 import { useSubmitForSignoffMutation } from '@/hooks/queries/signoff';
 import { Button } from '@/components/button';
@@ -13,8 +14,8 @@ type Props = { window: Window; me: Me; onOpenSignoff: () => void };
 
 export function SubmitForSignoff({ window: w, me, onOpenSignoff }: Props) {
   const submit = useSubmitForSignoffMutation(w.id);
-  const planner = me.roles.includes('planner');
-  const staff = me.roles.some((r) => r !== 'tenant');
+  const planner = canSubmitForSignoff(me.roles);
+  const staff = isOperator(me.roles);
   if (w.status === 'planned' && planner) {
     return (
       <Section title="Sign-off" testID="window-signoff">

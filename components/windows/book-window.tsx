@@ -1,5 +1,6 @@
 // Booking a new window: sends the form, then the MOP if one was chosen, and hands the new window's id on.
 import type { Me } from '@/shared/api';
+import { canBookInsideFreeze } from '@/shared/permissions';
 import { useBookingPolicies, useWindowCreateMutation, useWindowMopUploadMutation } from '@/hooks/queries/windows';
 import { WindowForm, type WindowSubmission } from '@/components/windows/window-form';
 import { EMPTY_FORM } from '@/components/windows/window-form-state';
@@ -36,7 +37,7 @@ export function BookWindow({ me, timeZone, onSaved, onCancel }: Props) {
       submitLabel="Book window"
       submitting={create.isPending || upload.isPending}
       saveError={create.error}
-      canOverrideFreeze={me.roles.includes('admin')}
+      canOverrideFreeze={canBookInsideFreeze(me.roles)}
       onSubmit={(submission) => void save(submission)}
       onCancel={onCancel}
     />

@@ -2,6 +2,7 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { Me } from '@/shared/api';
+import { canBookInsideFreeze } from '@/shared/permissions';
 import type { Window } from '@/shared/windows';
 import { useBookingPolicies, useWindowMopUploadMutation, useWindowPatchMutation } from '@/hooks/queries/windows';
 import { Button } from '@/components/button';
@@ -72,7 +73,7 @@ export function EditWindow({ window, me, timeZone, onReload, reloading, onSaved,
       submitLabel="Save changes"
       submitting={patch.isPending || upload.isPending}
       saveError={stale ? null : patch.error}
-      canOverrideFreeze={me.roles.includes('admin')}
+      canOverrideFreeze={canBookInsideFreeze(me.roles)}
       storedMopName={window.mop?.fileName ?? null}
       onSubmit={(submission) => void save(submission)}
       onCancel={onCancel}

@@ -1,7 +1,6 @@
 // Frame of the booking and edit screens, and the small route helpers they share with the window page.
 import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, Text, View } from 'react-native';
-import type { Me } from '@/shared/api';
 import type { WindowFlash } from '@/components/windows/window-notices';
 import { colors, space, type } from '@/constants/theme';
 
@@ -17,10 +16,6 @@ export function FormPage({ title, children }: { title: string; children: ReactNo
       </View>
     </ScrollView>
   );
-}
-
-export function canBook(me: Me): boolean {
-  return me.roles.some((role) => role === 'engineer' || role === 'planner' || role === 'admin');
 }
 
 /** The window page's address, with what the save reported as search parameters (read back by flashFromParams). */

@@ -1,5 +1,6 @@
 // A window's lifecycle in plain words (DESIGN §3), and which actions a person may take on it now.
 import type { RoleName } from '@/shared/api';
+import { canBookWindows, windowIsAssessable, windowIsEditable } from '@/shared/permissions';
 import type { WindowStatus } from '@/shared/windows';
 
 export const STATUS_LABELS: Record<WindowStatus, string> = {
@@ -34,19 +35,15 @@ export const STATUS_SENTENCES: Record<WindowStatus, string> = {
 /** The usual path through the lifecycle, for the step line on the detail screen. */
 export const MAIN_PATH: readonly WindowStatus[] = ['draft', 'assessed', 'planned', 'in-review', 'cleared', 'notified', 'underway', 'done'];
 
-const BEFORE_WORK: readonly WindowStatus[] = ['draft', 'assessed', 'planned', 'in-review', 'cleared', 'returned', 'notified'];
-const ASSESSABLE: readonly WindowStatus[] = ['draft', 'assessed'];
-const BOOKERS: readonly RoleName[] = ['engineer', 'planner', 'admin'];
-
 export type WindowActions = { edit: boolean; assess: boolean; withdraw: boolean; viewImpact: boolean };
 
 export function windowActions(roles: readonly RoleName[], status: WindowStatus): WindowActions {
-  const books = roles.some((r) => BOOKERS.includes(r));
-  const beforeWork = BEFORE_WORK.includes(status);
+  const books = canBookWindows(roles);
+  const beforeWork = windowIsEditable(status);
   return {
     edit: books && beforeWork,
     // The server lets anyone who books also assess (engineers check their own bookings).
-    assess: books && ASSESSABLE.includes(status),
+    assess: books && windowIsAssessable(status),
     withdraw: books && beforeWork,
     // Tenants see their own slices in the impact too (the server trims it to them).
     viewImpact: status !== 'withdrawn',

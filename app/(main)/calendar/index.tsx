@@ -7,7 +7,7 @@ import { ErrorState, LoadingState } from '@/components/screen-states';
 import { CalendarView } from '@/components/calendar/calendar-view';
 import { useCalendarState } from '@/components/calendar/use-calendar-state';
 import { listParams } from '@/components/calendar/window-filters';
-import { canBookWindows, isStaff } from '@/components/calendar/roles';
+import { canBookWindows, isOperator } from '@/shared/permissions';
 import { viewerTimeZone, visibleRange } from '@/components/time';
 
 export default function CalendarScreen() {
@@ -16,8 +16,8 @@ export default function CalendarScreen() {
   const state = useCalendarState(timeZone);
   const roles = useMeQuery().data?.roles ?? [];
   const windows = useWindowsListQuery(listParams(visibleRange(state.month, timeZone), state.filters));
-  const freezes = useFreezesQuery(isStaff(roles));
-  const tenants = useTenantChoicesQuery(isStaff(roles));
+  const freezes = useFreezesQuery(isOperator(roles));
+  const tenants = useTenantChoicesQuery(isOperator(roles));
 
   if (windows.isError && !windows.data) return <ErrorState message={windows.error.message} onRetry={() => void windows.refetch()} />;
   if (!windows.data) return <LoadingState label="Loading the calendar…" />;

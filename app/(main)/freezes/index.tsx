@@ -4,17 +4,17 @@ import { useFreezesQuery } from '@/hooks/queries/freezes';
 import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states';
 import { FreezesView } from '@/components/freezes/freezes-view';
 import { useFreezeEditor } from '@/components/freezes/use-freeze-editor';
-import { canEditFreezes, isStaff } from '@/components/calendar/roles';
+import { canAdminister, isOperator } from '@/shared/permissions';
 import { viewerTimeZone } from '@/components/time';
 
 export default function FreezesScreen() {
   const roles = useMeQuery().data?.roles ?? [];
-  const freezes = useFreezesQuery(isStaff(roles));
+  const freezes = useFreezesQuery(isOperator(roles));
   const editor = useFreezeEditor();
-  const canEdit = canEditFreezes(roles);
+  const canEdit = canAdminister(roles);
   const timeZone = viewerTimeZone();
 
-  if (!isStaff(roles)) return <EmptyState title="Freezes are for operator staff" hint="Your planned-work notices list what affects you." />;
+  if (!isOperator(roles)) return <EmptyState title="Freezes are for operator staff" hint="Your planned-work notices list what affects you." />;
 
   if (freezes.isError) return <ErrorState message={freezes.error.message} onRetry={() => void freezes.refetch()} />;
   if (!freezes.data) return <LoadingState label="Loading freezes…" />;

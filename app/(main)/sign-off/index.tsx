@@ -1,6 +1,7 @@
 // Sign-off queue (approvers; admins read it too): windows in review, soonest first.
 import { useRouter } from 'expo-router';
 import { useMeQuery } from '@/hooks/queries/me';
+import { canAdminister, canOpenSignoffQueue } from '@/shared/permissions';
 import { useSignoffQueueQuery } from '@/hooks/queries/signoff';
 import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states';
 import { QueueFooter } from '@/components/signoff/queue-footer';
@@ -10,12 +11,12 @@ import { viewerTimeZone } from '@/components/time';
 export default function SignoffQueueScreen() {
   const router = useRouter();
   const roles = useMeQuery().data?.roles ?? [];
-  const allowed = roles.includes('approver') || roles.includes('admin');
+  const allowed = canOpenSignoffQueue(roles);
   const queue = useSignoffQueueQuery(allowed);
   if (!allowed) return <EmptyState title="Sign-off is for the change board" hint="Approvers decide on move plans here." />;
   if (queue.isError) return <ErrorState message={queue.error.message} onRetry={() => void queue.refetch()} />;
   if (!queue.data) return <LoadingState label="Loading the sign-off queue…" />;
-  const footer = <QueueFooter isAdmin={roles.includes('admin')} onOpenCodes={() => router.push('/security')} onOpenPolicy={() => router.push('/sign-off/policy')} />;
+  const footer = <QueueFooter isAdmin={canAdminister(roles)} onOpenCodes={() => router.push('/security')} onOpenPolicy={() => router.push('/sign-off/policy')} />;
   if (queue.data.windows.length === 0) {
     return (
       <>

@@ -1,12 +1,13 @@
 // Sign-off policy (admin): approvals needed by risk class, and whether decisions need a one-time code.
 import { useMeQuery } from '@/hooks/queries/me';
+import { canAdminister } from '@/shared/permissions';
 import { useSignoffPoliciesMutation, useSignoffPoliciesQuery } from '@/hooks/queries/signoff';
 import { PageColumn } from '@/components/page-column';
 import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states';
 import { SignoffPolicyForm } from '@/components/signoff/signoff-policy-form';
 
 export default function SignoffPolicyScreen() {
-  const isAdmin = useMeQuery().data?.roles.includes('admin') ?? false;
+  const isAdmin = canAdminister(useMeQuery().data?.roles ?? []);
   const policies = useSignoffPoliciesQuery(isAdmin);
   const save = useSignoffPoliciesMutation();
   if (!isAdmin) return <EmptyState title="Only admins set the sign-off policy" />;

@@ -1,17 +1,18 @@
 // Book a maintenance window (engineers, planners, admins); on success, open the new window's page.
 import { useRouter } from 'expo-router';
+import { canBookWindows } from '@/shared/permissions';
 import { useMeQuery } from '@/hooks/queries/me';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { viewerTimeZone } from '@/components/time';
 import { BookWindow } from '@/components/windows/book-window';
-import { canBook, detailHref, FormPage } from '@/components/windows/form-page';
+import { detailHref, FormPage } from '@/components/windows/form-page';
 
 export default function NewWindowScreen() {
   const router = useRouter();
   const me = useMeQuery();
   if (me.isError) return <ErrorState message={me.error.message} onRetry={() => void me.refetch()} />;
   if (!me.data) return <LoadingState />;
-  if (!canBook(me.data)) return <ErrorState message="Your roles do not include booking windows." />;
+  if (!canBookWindows(me.data.roles)) return <ErrorState message="Your roles do not include booking windows." />;
   return (
     <FormPage title="Book a window">
       <BookWindow
