@@ -1,10 +1,8 @@
 // Wrong one-time codes are counted: each is audited (committed on its own, the decision's transaction rolls
 // back), and after OTP_MAX_FAILURES within OTP_FAILURE_WINDOW_MS the user's codes are refused for a while, so
 // the ~3-in-a-million chance per guess (three accepted 30-s steps) cannot be multiplied by trying fast.
-import { and, count, eq, gt } from 'drizzle-orm';
 import type { Db } from '../../db/client';
-import { auditLog } from '../../db/schema';
-import { insertAuditEntry } from '../queries/audit/audit-log';
+import { countAuditEntriesSince, insertAuditEntry } from '../queries/audit/audit-log';
 import { OtpCodeInvalidError, OtpCodeReplayedError, OtpLockedError } from './otp-errors';
 
 /** Common practice for second-factor codes: a handful of tries, then a pause (NIST SP 800-63B §5.2.2 asks for a limit; memory). */
@@ -14,9 +12,7 @@ const FAILED_ACTION = 'otp.code-failed';
 
 export async function recentOtpFailures(db: Db, userId: string, now: Date): Promise<number> {
   const since = new Date(now.getTime() - OTP_FAILURE_WINDOW_MS);
-  const [row] = await db.select({ n: count() }).from(auditLog)
-    .where(and(eq(auditLog.entity, 'user'), eq(auditLog.entityId, userId), eq(auditLog.action, FAILED_ACTION), gt(auditLog.at, since)));
-  return row?.n ?? 0;
+  return countAuditEntriesSince(db, { action: FAILED_ACTION, entity: 'user', entityId: userId, since });
 }
 
 /** Runs `attempt` (which checks a code) unless the user is locked out; a wrong or reused code is recorded. */

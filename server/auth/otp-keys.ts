@@ -1,10 +1,9 @@
 // Each user's TOTP key: enrol (unconfirmed), confirm with a first code, remove, and spend a code on a decision.
-import { eq } from 'drizzle-orm';
 import QRCode from 'qrcode';
-import { userOtpKeys } from '../../db/schema';
 import type { OtpEnrolment, OtpStatus } from '../../shared/signoff';
 import { insertAuditEntry } from '../queries/audit/audit-log';
 import type { Queryable } from '../../db/client';
+import { deleteOtpKey, selectOtpKey, updateOtpKeyStep, upsertOtpKey } from '../queries/auth/otp-keys';
 import { checkOtpCode, decodeOtpKey, encodeOtpKey, newOtpKey, otpKeyUri } from './otp';
 import {
   OtpAlreadyEnrolledError, OtpCodeInvalidError, OtpCodeReplayedError, OtpNotEnrolledError, OtpNotStartedError,
@@ -12,25 +11,18 @@ import {
 
 type Actor = { id: string; email: string };
 
-async function keyRow(db: Queryable, userId: string, lock = false) {
-  const query = db.select().from(userOtpKeys).where(eq(userOtpKeys.userId, userId));
-  const [row] = lock ? await query.for('update') : await query;
-  return row ?? null;
-}
-
 export async function getOtpStatus(db: Queryable, userId: string): Promise<OtpStatus> {
-  const row = await keyRow(db, userId);
+  const row = await selectOtpKey(db, userId);
   return { enrolled: row?.confirmedAt != null, confirmedAt: row?.confirmedAt?.toISOString() ?? null };
 }
 
 /** A new unconfirmed key (replacing an unconfirmed one); a confirmed key must be removed first. */
 export async function enrolOtp(db: Queryable, user: Actor, now: Date): Promise<OtpEnrolment> {
-  const existing = await keyRow(db, user.id, true);
+  const existing = await selectOtpKey(db, user.id, { lock: true });
   if (existing?.confirmedAt) throw new OtpAlreadyEnrolledError();
   const key = newOtpKey();
   const keyBase32 = encodeOtpKey(key);
-  await db.insert(userOtpKeys).values({ userId: user.id, keyBase32, createdAt: now })
-    .onConflictDoUpdate({ target: userOtpKeys.userId, set: { keyBase32, confirmedAt: null, lastUsedStep: null, createdAt: now } });
+  await upsertOtpKey(db, { userId: user.id, keyBase32, now });
   await insertAuditEntry(db, { actorId: user.id, action: 'otp.enrol', entity: 'user', entityId: user.id, at: now });
   const uri = otpKeyUri(user.email, key);
   // Margin of 2 modules: enough quiet zone for phone cameras on a white card.
@@ -40,19 +32,19 @@ export async function enrolOtp(db: Queryable, user: Actor, now: Date): Promise<O
 
 /** The first good code proves the authenticator holds the key; from then on decisions can require codes. */
 export async function confirmOtp(db: Queryable, userId: string, code: string, now: Date): Promise<OtpStatus> {
-  const row = await keyRow(db, userId, true);
+  const row = await selectOtpKey(db, userId, { lock: true });
   if (!row) throw new OtpNotStartedError();
   if (row.confirmedAt) throw new OtpAlreadyEnrolledError();
   const step = stepOf(row, code, now);
-  await db.update(userOtpKeys).set({ confirmedAt: now, lastUsedStep: step }).where(eq(userOtpKeys.userId, userId));
+  await updateOtpKeyStep(db, userId, { confirmedAt: now, lastUsedStep: step });
   await insertAuditEntry(db, { actorId: userId, action: 'otp.confirm', entity: 'user', entityId: userId, at: now });
   return { enrolled: true, confirmedAt: now.toISOString() };
 }
 
 export async function removeOtp(db: Queryable, userId: string, actorId: string, now: Date): Promise<boolean> {
-  const removed = await db.delete(userOtpKeys).where(eq(userOtpKeys.userId, userId)).returning({ userId: userOtpKeys.userId });
-  if (removed.length > 0) await insertAuditEntry(db, { actorId, action: 'otp.remove', entity: 'user', entityId: userId, at: now });
-  return removed.length > 0;
+  const removed = await deleteOtpKey(db, userId);
+  if (removed) await insertAuditEntry(db, { actorId, action: 'otp.remove', entity: 'user', entityId: userId, at: now });
+  return removed;
 }
 
 /**
@@ -60,10 +52,10 @@ export async function removeOtp(db: Queryable, userId: string, actorId: string, 
  * (the row is locked, so two requests cannot spend the same code). Throws on a bad or reused code.
  */
 export async function spendOtpCode(tx: Queryable, userId: string, code: string, now: Date): Promise<void> {
-  const row = await keyRow(tx, userId, true);
+  const row = await selectOtpKey(tx, userId, { lock: true });
   if (!row?.confirmedAt) throw new OtpNotEnrolledError();
   const step = stepOf(row, code, now);
-  await tx.update(userOtpKeys).set({ lastUsedStep: step }).where(eq(userOtpKeys.userId, userId));
+  await updateOtpKeyStep(tx, userId, { lastUsedStep: step });
 }
 
 function stepOf(row: { keyBase32: string; lastUsedStep: number | null }, code: string, now: Date): number {

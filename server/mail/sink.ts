@@ -4,8 +4,8 @@ import type { AddressInfo } from 'node:net';
 import { simpleParser } from 'mailparser';
 import { SMTPServer, type SMTPServerDataStream, type SMTPServerSession } from 'smtp-server';
 import type { Db } from '../../db/client';
-import { sinkMessages } from '../../db/schema';
 import type { ServerConfig } from '../env';
+import { insertSinkMessage } from '../queries/mail/sink-messages';
 
 /** Largest message the sink accepts (advertised with SIZE, RFC 1870); larger ones get 552. */
 export const SINK_MAX_BYTES = 10 * 1024 * 1024;
@@ -83,7 +83,7 @@ async function receive(db: Db, stream: SMTPServerDataStream, session: SMTPServer
   // PostgreSQL text cannot hold NUL; mail should never contain it (RFC 5322 §2.3), so drop any.
   const raw = bytes.toString('utf8').replace(/\0/g, '');
   const from = session.envelope.mailFrom;
-  await db.insert(sinkMessages).values({
+  await insertSinkMessage(db, {
     envelopeFrom: from ? from.address : null,
     envelopeTo: session.envelope.rcptTo.map((r) => r.address),
     subject: await subjectOf(raw),

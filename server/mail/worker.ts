@@ -5,8 +5,9 @@ import type PgBoss from 'pg-boss';
 import type { Db } from '../../db/client';
 import type { ServerConfig } from '../env';
 import { QUEUES, type MailJob } from '../jobs/queue';
+import { markNoticeAttemptFailed, markNoticeFailed, markNoticeSent } from '../queries/mail/notice-sending';
 import { composeMail } from './compose';
-import { markNoticeAttemptFailed, markNoticeFailed, markNoticeSent, noticeVersionState } from './notice-state';
+import { noticeVersionState } from './notice-state';
 import { createMailTransport } from './transport';
 
 export type MailWorkerDeps = {

@@ -6,7 +6,7 @@ import { ADMIN_ROLES } from '../../shared/permissions';
 import { staffOnlyRoute } from '../auth/guards';
 import { domainError } from '../errors';
 import { parseSinkMessage } from '../mail/parse-message';
-import { getSinkMessage, listSinkMessages, type SinkMessageRow } from '../mail/sink-messages';
+import { getSinkMessage, listSinkMessages, type SinkMessageRow } from '../queries/mail/sink-messages';
 import type { RouteDeps } from './deps';
 
 export class OutboxMessageNotFoundError extends domainError('MESSAGE_NOT_FOUND', 404,

@@ -1,5 +1,6 @@
 // The audit log: one row per state change (who, what, when, before, after).
-import type { Db } from '../../../db/client';
+import { and, count, eq, gt } from 'drizzle-orm';
+import type { Db, Queryable } from '../../../db/client';
 import { auditLog } from '../../../db/schema';
 
 export type AuditEntry = {
@@ -23,4 +24,13 @@ export async function insertAuditEntry(db: Pick<Db, 'insert'>, entry: AuditEntry
     after: entry.after ?? null,
     at: entry.at,
   });
+}
+
+/** How many rows record `action` on one entity since `since` (e.g. failed codes within the lock-out window). */
+export async function countAuditEntriesSince(
+  db: Queryable, f: { action: string; entity: string; entityId: string; since: Date },
+): Promise<number> {
+  const [row] = await db.select({ n: count() }).from(auditLog)
+    .where(and(eq(auditLog.entity, f.entity), eq(auditLog.entityId, f.entityId), eq(auditLog.action, f.action), gt(auditLog.at, f.since)));
+  return row?.n ?? 0;
 }

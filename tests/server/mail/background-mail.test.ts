@@ -6,7 +6,7 @@ import pg from 'pg';
 import type { Db } from '../../../db/client';
 import { startBackground } from '../../../server/background';
 import { startSinkIfConfigured } from '../../../server/mail/start-sink';
-import { readSinkMessages } from '../../../server/mail/sink-messages';
+import { readSinkMessages } from '../../../server/queries/mail/sink-messages';
 import { testConfig } from '../helpers/test-app';
 import { openMailTestDb, uniqueRecipient } from './mail-test-db';
 import { waitFor } from './test-boss';

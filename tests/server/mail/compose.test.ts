@@ -4,7 +4,7 @@ import { simpleParser } from 'mailparser';
 import type { MailJob } from '../../../server/jobs/queue';
 import { composeMail } from '../../../server/mail/compose';
 import { parseSinkMessage } from '../../../server/mail/parse-message';
-import { readSinkMessages } from '../../../server/mail/sink-messages';
+import { readSinkMessages } from '../../../server/queries/mail/sink-messages';
 import { createMailTransport } from '../../../server/mail/transport';
 import { uniqueRecipient, useMailSink } from './mail-test-db';
 

@@ -5,7 +5,7 @@ import { outboxListSchema, outboxMessageSchema } from '../../../shared/outbox';
 import type { MailJob } from '../../../server/jobs/queue';
 import { composeMail } from '../../../server/mail/compose';
 import { startMailSink, type MailSink } from '../../../server/mail/sink';
-import { readSinkMessages } from '../../../server/mail/sink-messages';
+import { readSinkMessages } from '../../../server/queries/mail/sink-messages';
 import { createMailTransport } from '../../../server/mail/transport';
 import { signInAs } from '../helpers/sign-in';
 import { setupTestApp, type TestContext, type TestUsers } from '../helpers/test-app';

@@ -1,7 +1,7 @@
 // The local SMTP sink: listens on loopback, keeps what nodemailer sends, refuses what is too large.
 import nodemailer from 'nodemailer';
 import { SINK_MAX_BYTES, startMailSink } from '../../../server/mail/sink';
-import { readSinkMessages } from '../../../server/mail/sink-messages';
+import { readSinkMessages } from '../../../server/queries/mail/sink-messages';
 import { createMailTransport } from '../../../server/mail/transport';
 import { uniqueRecipient, useMailSink } from './mail-test-db';
 

@@ -5,7 +5,7 @@ import { randomUUID } from 'node:crypto';
 import { eq } from 'drizzle-orm';
 import { notices, tenants, windows } from '../../../db/schema';
 import { QUEUES, type MailJob } from '../../../server/jobs/queue';
-import { readSinkMessages } from '../../../server/mail/sink-messages';
+import { readSinkMessages } from '../../../server/queries/mail/sink-messages';
 import { readableMailError, registerMailWorker } from '../../../server/mail/worker';
 import { testConfig } from '../helpers/test-app';
 import { uniqueRecipient, useMailSink } from './mail-test-db';

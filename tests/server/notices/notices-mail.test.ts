@@ -6,7 +6,7 @@ import { simpleParser, type ParsedMail } from 'mailparser';
 import { notices } from '../../../db/schema';
 import { QUEUES, type JobQueue, type MailJob } from '../../../server/jobs/queue';
 import { startMailSink, type MailSink } from '../../../server/mail/sink';
-import { readSinkMessages } from '../../../server/mail/sink-messages';
+import { readSinkMessages } from '../../../server/queries/mail/sink-messages';
 import { registerMailWorker } from '../../../server/mail/worker';
 import { issueNotices } from '../../../server/services/notices/issue-notices';
 import { withdrawNotices } from '../../../server/services/notices/withdraw-notices';

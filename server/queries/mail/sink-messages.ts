@@ -1,10 +1,14 @@
-// Queries on `sink_messages`: the Outbox list and detail, and readSinkMessages for tests.
+// Queries on `sink_messages`: the sink's insert, the Outbox list and detail, and readSinkMessages for tests.
 import { and, count, desc, eq, gte, sql, type SQL } from 'drizzle-orm';
-import type { Db } from '../../db/client';
-import { sinkMessages } from '../../db/schema';
-import type { OutboxListQuery, OutboxSummary } from '../../shared/outbox';
+import type { Db } from '../../../db/client';
+import { sinkMessages } from '../../../db/schema';
+import type { OutboxListQuery, OutboxSummary } from '../../../shared/outbox';
 
 export type SinkMessageRow = typeof sinkMessages.$inferSelect;
+
+export async function insertSinkMessage(db: Db, message: typeof sinkMessages.$inferInsert): Promise<void> {
+  await db.insert(sinkMessages).values(message);
+}
 
 /** Every message the sink kept, oldest first; `to` matches one envelope recipient (case-insensitive). */
 export async function readSinkMessages(db: Db, filter: { to?: string; since?: Date } = {}): Promise<SinkMessageRow[]> {
