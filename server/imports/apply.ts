@@ -1,18 +1,16 @@
 // Applies a previewed import in one transaction, or refuses / fails leaving the inventory exactly as it was.
-import { eq, sql } from 'drizzle-orm';
-import type { Db } from '../../db/client';
-import { imports } from '../../db/schema';
-import type { Tx } from '../../db/client';
+import type { Db, Tx } from '../../db/client';
 import type { ImportApplied, ImportPreview } from '../../shared/imports';
 import { AppError } from '../errors';
 import { insertAuditEntry } from '../queries/audit/audit-log';
-import { loadScenario } from '../services/inventory/load-scenario';
+import { getImportRow, updateImportStatus, type ImportRow } from '../queries/imports/import-rows';
+import { writeTarget } from '../queries/imports/write-target';
+import { lockForTransaction } from '../queries/locks/advisory-locks';
+import { loadNetworkScenario } from '../services/inventory/load-network-scenario';
 import { scenarioChecksum } from './canonical';
 import { diffScenarios } from './diff';
 import { ImportApplyFailedError, ImportNotFoundError, ImportRefusedError } from './errors';
 import type { ImportPayload } from './preview';
-import { getImportRow, type ImportRow } from './import-records';
-import { writeTarget } from './write-target';
 
 /** Serialises applies across server processes: two imports computed against the same state cannot both land. */
 const APPLY_LOCK_KEY = 7_342_019;
@@ -30,17 +28,17 @@ function refuseUnlessPending(row: ImportRow): ImportPayload {
 type Outcome = { applied: ImportApplied } | { stale: true };
 
 async function applyInTx(tx: Tx, id: string, userId: string | null, now: Date): Promise<Outcome> {
-  await tx.execute(sql`select pg_advisory_xact_lock(${APPLY_LOCK_KEY})`);
-  const [row] = await tx.select().from(imports).where(eq(imports.id, id)).for('update');
+  await lockForTransaction(tx, APPLY_LOCK_KEY);
+  const row = await getImportRow(tx, id, { lock: true });
   if (!row) throw new ImportNotFoundError(id);
   const payload = refuseUnlessPending(row);
-  const before = await loadScenario(tx);
+  const before = await loadNetworkScenario(tx);
   if (scenarioChecksum(before) !== payload.beforeChecksum) {
-    await tx.update(imports).set({ status: 'superseded' }).where(eq(imports.id, id));
+    await updateImportStatus(tx, id, { status: 'superseded' });
     return { stale: true };
   }
   await writeTarget(tx, payload.target, diffScenarios(before, payload.target), userId, now);
-  await tx.update(imports).set({ status: 'applied', appliedBy: userId, appliedAt: now }).where(eq(imports.id, id));
+  await updateImportStatus(tx, id, { status: 'applied', appliedBy: userId, appliedAt: now });
   const counts = (row.preview as ImportPreview).counts;
   await insertAuditEntry(tx as unknown as Db, {
     actorId: userId, action: 'import.apply', entity: 'import', entityId: id, at: now,
@@ -53,7 +51,7 @@ async function applyInTx(tx: Tx, id: string, userId: string | null, now: Date): 
 /** Marks the import failed (outside the rolled-back transaction) and records the failure in the audit log. */
 async function markFailed(db: Db, id: string, reason: string, userId: string | null, now: Date): Promise<void> {
   await db.transaction(async (tx) => {
-    await tx.update(imports).set({ status: 'failed', failureReason: reason }).where(eq(imports.id, id));
+    await updateImportStatus(tx, id, { status: 'failed', failureReason: reason });
     await insertAuditEntry(tx as unknown as Db, { actorId: userId, action: 'import.apply-failed', entity: 'import', entityId: id, at: now, after: { reason } });
   });
 }

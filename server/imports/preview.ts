@@ -3,7 +3,7 @@ import type { ImportIssue, ImportKind, ImportPreview } from '../../shared/import
 import type { Scenario } from '../../shared/scenario';
 import { validateScenario } from '../../shared/scenario-validate';
 import type { Queryable } from '../../db/client';
-import { loadScenario } from '../services/inventory/load-scenario';
+import { loadNetworkScenario } from '../services/inventory/load-network-scenario';
 import { scenarioChecksum } from './canonical';
 import { decodeUpload } from './decode-upload';
 import { detectKind } from './detect-kind';
@@ -54,7 +54,7 @@ export async function buildPreview(
   const parsed = PARSERS[kind](text, fileName);
   const errors = [...parsed.errors];
   const warnings = [...parsed.warnings];
-  const before = await loadScenario(db);
+  const before = await loadNetworkScenario(db);
   const merged = WHOLE_STATE.has(kind) && errors.length > 0 ? { target: null, errors: [] } : mergeImport(before, parsed.content, fileName);
   errors.push(...merged.errors);
   if (!merged.target) return { kind, preview: toPreview(emptyDiff(), errors, warnings), payload: null };

@@ -4,7 +4,7 @@ import type { Db } from '../../db/client';
 import type { PlanRow } from '../queries/plans/plan-rows';
 import { buildInventory } from '../../planner/model/build-inventory';
 import { planSettingsSchema } from '../../shared/plans';
-import { loadScenario } from '../services/inventory/load-scenario';
+import { loadNetworkScenario } from '../services/inventory/load-network-scenario';
 import { reservationsFor } from '../services/plans/reservations';
 import { WindowNotFoundError } from '../services/windows/errors';
 import { loadWindow, type LoadedWindow } from '../services/windows/window-view';
@@ -36,7 +36,7 @@ export async function loadPlanInput(db: Db, plan: PlanRow): Promise<PlanThreadIn
     throw new RunRefusedError(`The run's settings are not valid: ${settings.error.issues.map((i) => i.message).join('; ')}`);
   }
   const w = await loadCurrentWindow(db, plan);
-  const scenario = await loadScenario(db);
+  const scenario = await loadNetworkScenario(db);
   // The scenario just read is the current inventory: compiled only if an overlapping accepted plan needs it.
   const { reservations, reservedFor } = await reservationsFor(db, w.id, () => buildInventory(scenario));
   return {

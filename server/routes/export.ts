@@ -5,7 +5,7 @@ import { formatIssue, validateScenario } from '../../shared/scenario-validate';
 import { requireRole } from '../auth/guards';
 import { ExportInvalidError } from '../services/inventory/errors';
 import { scenarioToGraphml } from '../services/inventory/graphml-export';
-import { loadScenario } from '../services/inventory/load-scenario';
+import { loadNetworkScenario } from '../services/inventory/load-network-scenario';
 import type { RouteDeps } from './deps';
 
 function attachment(res: Response, fileName: string, contentType: string): void {
@@ -17,7 +17,7 @@ export function exportRouter({ db, now }: RouteDeps): Router {
   const router = express.Router();
   const stamp = () => now().toISOString().slice(0, 10);
   router.get('/scenario', requireRole(...INVENTORY_EXPORT_ROLES), async (_req, res) => {
-    const result = validateScenario(await loadScenario(db));
+    const result = validateScenario(await loadNetworkScenario(db));
     // Refuse to hand out a file our own import would reject.
     if (!result.ok) throw new ExportInvalidError(formatIssue(result.errors[0]));
     attachment(res, `slackwater-scenario-${stamp()}.json`, 'application/json; charset=utf-8');
@@ -25,7 +25,7 @@ export function exportRouter({ db, now }: RouteDeps): Router {
   });
   router.get('/graphml', requireRole(...INVENTORY_EXPORT_ROLES), async (_req, res) => {
     attachment(res, `slackwater-network-${stamp()}.graphml`, 'application/graphml+xml; charset=utf-8');
-    res.send(scenarioToGraphml(await loadScenario(db)));
+    res.send(scenarioToGraphml(await loadNetworkScenario(db)));
   });
   return router;
 }

@@ -5,7 +5,7 @@ import { placementLoad } from '../../../planner/model/window-capacity';
 import type { Scenario, ScenarioSite, ScenarioSlice, ScenarioSpan } from '../../../shared/scenario';
 import { selectScenarioTables, type ScenarioTables } from '../../queries/inventory/scenario-tables';
 import type { Queryable } from '../../../db/client';
-import { tablesToScenario } from './load-scenario';
+import { tablesToScenario } from './load-network-scenario';
 import { buildUseIndex, type UseIndex } from './slice-uses';
 
 export interface InventoryView {

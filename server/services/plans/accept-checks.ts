@@ -4,7 +4,7 @@ import { verifyPlan } from '../../../planner/verify/verify-plan';
 import type { PlacementView, PlanReview, PlanSlice } from '../../../shared/plans';
 import type { Scenario } from '../../../shared/scenario';
 import type { Queryable } from '../../../db/client';
-import { loadInventory } from '../inventory/load-scenario';
+import { loadInventory } from '../inventory/load-network-scenario';
 import { windowSpecOf } from '../windows/window-spec';
 import { loadWindow } from '../windows/window-view';
 import { OutageNotAcceptedError, PlanNotAcceptableError } from './errors';

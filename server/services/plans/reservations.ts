@@ -4,7 +4,7 @@ import { overlapReservations, type OverlappingPlan } from '../../../planner/plan
 import type { Inventory, Reservation, SlicePlan } from '../../../planner/model/types';
 import type { PlanSlice } from '../../../shared/plans';
 import { ACTIVE_WINDOW_STATUSES } from '../../../shared/windows';
-import { loadInventory } from '../inventory/load-scenario';
+import { loadInventory } from '../inventory/load-network-scenario';
 import { selectOverlappingAcceptedPlans } from '../../queries/plans/overlapping-plans';
 import { selectWindowTimes } from '../../queries/plans/plan-window';
 import { selectElementsByWindow } from '../../queries/windows/window-rows';

@@ -5,7 +5,7 @@ import { windowIsAssessable } from '../../../shared/permissions';
 import type { WindowImpact } from '../../../shared/window-impact';
 import { findUnknownElements } from '../../queries/windows/elements';
 import { upsertWindowImpact } from '../../queries/windows/impacts';
-import { loadInventory } from '../inventory/load-scenario';
+import { loadInventory } from '../inventory/load-network-scenario';
 import { computeWindowImpact } from './compute-impact';
 import { IllegalTransitionError, StaleVersionError, UnknownElementsError } from './errors';
 import { setWindowStatus } from './set-window-status';

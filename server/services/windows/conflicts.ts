@@ -8,7 +8,7 @@ import {
   selectActiveOverlapping, selectElementsByWindow, selectWindowRows, type ElementRow,
 } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
-import { loadInventory } from '../inventory/load-scenario';
+import { loadInventory } from '../inventory/load-network-scenario';
 import { outageOf, pairConflictReasons, strandMessage, type Outage } from './pair-conflicts';
 
 export type ConflictSubject = { id: string; title: string; startsAt: Date; endsAt: Date; status: string; elements: ElementRow[] };

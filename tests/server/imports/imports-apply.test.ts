@@ -2,7 +2,7 @@
 import request from 'supertest';
 import { importCreatedSchema } from '../../../shared/imports';
 import { tenants, users } from '../../../db/schema';
-import { loadScenario } from '../../../server/services/inventory/load-scenario';
+import { loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
 import { signInAs } from '../helpers/sign-in';
 import { apply, csv, inventoryFingerprint, setupScratchApp, upload, type ImportsContext } from './helpers/scratch-app';
 
@@ -41,7 +41,7 @@ test('an apply the database refuses rolls back everything and marks the import f
   // A scenario that adds a site AND removes a tenant; a user account attached to the tenant after the
   // preview makes the tenant delete fail at the very end of the transaction (users are not in the checksum).
   await ctx.db.insert(tenants).values({ id: 't-doomed', name: 'Doomed Ltd', noticeDays: 3 });
-  const s = await loadScenario(ctx.db);
+  const s = await loadNetworkScenario(ctx.db);
   const target = { ...s, tenants: s.tenants.filter((t) => t.id !== 't-doomed'), sites: [...s.sites, { id: 'fail-site', name: 'Never', kind: 'edge' as const, lat: 55, lon: -25, cpu: 4 }] };
   const preview = await previewOf(JSON.stringify(target), 'target.json');
   expect(preview.preview.errors).toEqual([]);
@@ -62,7 +62,7 @@ test('an apply the database refuses rolls back everything and marks the import f
 });
 
 test('removing a tenant that user accounts belong to is a preview error', async () => {
-  const s = await loadScenario(ctx.db);
+  const s = await loadNetworkScenario(ctx.db);
   const target = { ...s, tenants: s.tenants.filter((t) => t.id !== 't-doomed') };
   const { preview } = await previewOf(JSON.stringify(target), 'target.json');
   expect(preview.errors).toContainEqual(expect.objectContaining({ path: 'tenants[t-doomed]', message: expect.stringMatching(/1 user account/) }));

@@ -2,7 +2,7 @@
 import type { Scenario } from '../../../shared/scenario';
 import { importCreatedSchema } from '../../../shared/imports';
 import { jsonPath } from '../../../shared/scenario-validate-context';
-import { loadScenario } from '../../../server/services/inventory/load-scenario';
+import { loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
 import {
   apply, csv, importRowCount, inventoryFingerprint, setupScratchApp, upload, type ImportsContext,
 } from './helpers/scratch-app';
@@ -12,7 +12,7 @@ let current: Scenario;
 let fingerprint: Record<string, string>;
 beforeAll(async () => {
   ctx = await setupScratchApp({ seedDemo: true });
-  current = await loadScenario(ctx.db);
+  current = await loadNetworkScenario(ctx.db);
   fingerprint = await inventoryFingerprint(ctx.pool);
 }, 60_000);
 afterEach(async () => {

@@ -2,7 +2,7 @@
 // errored preview can never be applied.
 import fc from 'fast-check';
 import { importCreatedSchema } from '../../../shared/imports';
-import { loadScenario } from '../../../server/services/inventory/load-scenario';
+import { loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
 import { apply, csv, importRowCount, inventoryFingerprint, setupScratchApp, upload, type ImportsContext } from './helpers/scratch-app';
 
 let ctx: ImportsContext;
@@ -11,7 +11,7 @@ let scenarioJson: string;
 let fingerprint: Record<string, string>;
 beforeAll(async () => {
   ctx = await setupScratchApp({ seedDemo: true });
-  const current = await loadScenario(ctx.db);
+  const current = await loadNetworkScenario(ctx.db);
   const header = ['id', 'name', 'kind', 'lat', 'lon', 'cpu', 'mtbfHours', 'mttrHours'];
   sitesCsv = csv([header, ...current.sites.slice(0, 6).map((s) => header.map((h) => s[h as keyof typeof s] as string | number)),
     ['prop-new', 'Lantern Rock', 'cell-site', 55.3, -25.2, 8, '', '']]);

@@ -1,7 +1,7 @@
 // Every import kind with a valid file: preview lists the right adds/changes/removes, apply writes them in one go.
 import request from 'supertest';
 import { importCreatedSchema, importDetailSchema, importListSchema } from '../../../shared/imports';
-import { loadScenario } from '../../../server/services/inventory/load-scenario';
+import { loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
 import { apply, csv, inventoryFingerprint, setupScratchApp, upload, type ImportsContext } from './helpers/scratch-app';
 
 let ctx: ImportsContext;
@@ -43,7 +43,7 @@ test('export → import round trip of the GraphML export previews zero changes (
 });
 
 test('sites CSV: adds a new site and changes an existing one; apply writes both and an audit row', async () => {
-  const before = (await loadScenario(ctx.db)).sites[0];
+  const before = (await loadNetworkScenario(ctx.db)).sites[0];
   const text = csv([
     ['id', 'name', 'kind', 'lat', 'lon', 'cpu', 'mtbfHours', 'mttrHours'],
     ['site-new-1', 'Gullstrand', 'edge', 55.61, -25.4, 48, '', ''],
@@ -67,7 +67,7 @@ test('sites CSV: adds a new site and changes an existing one; apply writes both 
 });
 
 test('spans CSV: adds a span between existing sites (latency left to the length)', async () => {
-  const s = await loadScenario(ctx.db);
+  const s = await loadNetworkScenario(ctx.db);
   const text = csv([
     ['id', 'a', 'b', 'capacityGbps', 'lengthKm', 'latencyMs', 'srlg'],
     ['sp-new-1', s.sites[0].id, 'site-new-1', 40, 12.5, '', 'duct-x;duct-y'],
@@ -81,7 +81,7 @@ test('spans CSV: adds a span between existing sites (latency left to the length)
 });
 
 test('slices CSV: a new slice with functions, ties and placement; a moved function makes a new placement revision', async () => {
-  const s = await loadScenario(ctx.db);
+  const s = await loadNetworkScenario(ctx.db);
   const span = s.spans.find((x) => x.id === 'sp-new-1')!;
   const existing = s.slices[0];
   const placement = s.placements.find((p) => p.slice === existing.id)!;
@@ -110,7 +110,7 @@ test('slices CSV: a new slice with functions, ties and placement; a moved functi
 });
 
 test('scenario file: removing a slice and its now-unused span applies both; list and detail show the import', async () => {
-  const s = await loadScenario(ctx.db);
+  const s = await loadNetworkScenario(ctx.db);
   const target = { ...s, slices: s.slices.filter((x) => x.id !== 'sl-new-1'), placements: s.placements.filter((p) => p.slice !== 'sl-new-1') };
   target.spans = target.spans.filter((x) => x.id !== 'sp-new-1');
   const body = importCreatedSchema.parse((await upload(ctx, { text: JSON.stringify(target), name: 'smaller.json' })).body);

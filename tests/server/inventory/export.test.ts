@@ -5,7 +5,7 @@ import request from 'supertest';
 import { createDb } from '../../../db/client';
 import { migrateDatabase } from '../../../db/migrate';
 import { seedDemo } from '../../../db/seed';
-import { loadScenario } from '../../../server/services/inventory/load-scenario';
+import { loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
 import { scenarioToGraphml } from '../../../server/services/inventory/graphml-export';
 import type { Scenario } from '../../../shared/scenario';
 import { validateScenario } from '../../../shared/scenario-validate';
@@ -48,7 +48,7 @@ test('the scenario export is an attachment that validates and re-imports to the 
     const again = createDb(url, { max: 2 });
     try {
       await seedDemo(again.db, exported, { now: NOW });
-      expect(await loadScenario(again.db)).toEqual(exported);
+      expect(await loadNetworkScenario(again.db)).toEqual(exported);
     } finally {
       await again.pool.end();
     }

@@ -4,7 +4,7 @@ import { plans, placements, sites, sliceFunctions, sliceTies, slices, spans, ten
 import { buildInventory } from '../../../planner/model/build-inventory';
 import { computePlan } from '../../../server/jobs/plan-compute';
 import { scenarioWindowOf } from '../../../server/services/windows/window-spec';
-import { loadScenario } from '../../../server/services/inventory/load-scenario';
+import { loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
 import { reservationsFor } from '../../../server/services/plans/reservations';
 import { loadWindow } from '../../../server/services/windows/window-view';
 import { planSettingsSchema, type PlanReview, type PlanSettingsInput } from '../../../shared/plans';
@@ -112,7 +112,7 @@ export async function storeFinishedPlan(
   ctx: TestContext, windowId: string, opts: { settings?: PlanSettingsInput; reserve?: boolean } = {},
 ): Promise<{ planId: string; review: PlanReview }> {
   const settings = planSettingsSchema.parse({ timeLimitSeconds: 1, ...opts.settings });
-  const current = await loadScenario(ctx.db);
+  const current = await loadNetworkScenario(ctx.db);
   const scenario = { ...current, windows: [scenarioWindowOf(await loadWindow(ctx.db, windowId, null))] };
   const held = opts.reserve === false
     ? { reservations: {}, reservedFor: [] }

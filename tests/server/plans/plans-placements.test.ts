@@ -1,6 +1,6 @@
 // After acceptance: starting the work makes the plan's placements current (a new revision per moved slice);
 // finishing with `return` or rolling back restores the ones from before; `keep` leaves the plan's in place.
-import { loadScenario } from '../../../server/services/inventory/load-scenario';
+import { loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
 import type { PlacementView } from '../../../shared/plans';
 import { bookAssessed, closePlansApp, setupPlansNetwork, storeFinishedPlan, windowRow, type PlansContext } from './helpers';
 
@@ -85,6 +85,6 @@ test('done with `keep` leaves the plan\'s placement current, with no further rev
   expect(placementOf(all.at(-1)!)).toEqual(s3.after);
   expect(all.filter((r) => r.current)).toHaveLength(1);
   // The inventory every later impact and plan is computed from now has the kept placement as today's.
-  const today = (await loadScenario(ctx.db)).placements.find((p) => p.slice === s3Id);
+  const today = (await loadNetworkScenario(ctx.db)).placements.find((p) => p.slice === s3Id);
   expect({ sites: today?.sites, paths: today?.paths }).toEqual(s3.after);
 });

@@ -88,12 +88,12 @@ export function tablesToScenario(t: ScenarioTables): Scenario {
 }
 
 /** The current network, tenants, slices and current placements, plus network_meta's name and outline. */
-export async function loadScenario(db: Queryable): Promise<Scenario> {
+export async function loadNetworkScenario(db: Queryable): Promise<Scenario> {
   return tablesToScenario(await selectScenarioTables(db));
 }
 
 /** The scenario and its planner compilation (throws the planner's errors on dangling references). */
 export async function loadInventory(db: Queryable): Promise<{ scenario: Scenario; inventory: Inventory }> {
-  const scenario = await loadScenario(db);
+  const scenario = await loadNetworkScenario(db);
   return { scenario, inventory: buildInventory(scenario) };
 }

@@ -1,6 +1,6 @@
-// loadScenario / loadInventory: the seeded demo comes back as the same scenario (windows aside).
+// loadNetworkScenario / loadInventory: the seeded demo comes back as the same scenario (windows aside).
 import { placements } from '../../../db/schema';
-import { loadInventory, loadScenario } from '../../../server/services/inventory/load-scenario';
+import { loadInventory, loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
 import { validateScenario } from '../../../shared/scenario-validate';
 import { and, eq } from 'drizzle-orm';
 import { normalised } from './helpers/demo-expectations';
@@ -11,7 +11,7 @@ beforeAll(async () => { ctx = await setupInventoryApp('load'); }, 60_000);
 afterAll(() => ctx.close());
 
 test('the seeded demo loads back equal to the file, with its name and outline and without windows', async () => {
-  const loaded = await loadScenario(ctx.db);
+  const loaded = await loadNetworkScenario(ctx.db);
   expect(loaded.windows).toBeUndefined();
   expect(loaded.name).toBe(ctx.demo.name);
   expect(loaded.outline).toEqual(ctx.demo.outline);
@@ -23,7 +23,7 @@ test('the seeded demo loads back equal to the file, with its name and outline an
 });
 
 test('functions follow their slice\'s chain of ties, as people read them', async () => {
-  const loaded = await loadScenario(ctx.db);
+  const loaded = await loadNetworkScenario(ctx.db);
   const fromFile = ctx.demo.slices.find((s) => s.ties.length >= 2)!;
   const back = loaded.slices.find((s) => s.id === fromFile.id)!;
   expect(back.functions.map((f) => f.id)).toEqual(fromFile.functions.map((f) => f.id));
