@@ -1,8 +1,8 @@
 // Stores a preview as an `imports` row (status previewed) with its audit entry, in one transaction.
 import { randomUUID } from 'node:crypto';
 import type { Db } from '../../db/client';
-import { imports } from '../../db/schema';
 import { insertAuditEntry } from '../queries/audit/audit-log';
+import { insertImportRow } from '../queries/imports/import-rows';
 import type { PreviewResult } from './preview';
 
 export async function recordPreview(
@@ -11,7 +11,7 @@ export async function recordPreview(
   const id = `imp-${randomUUID()}`;
   const { kind, preview, payload, fileName, sizeBytes, userId, now } = input;
   await db.transaction(async (tx) => {
-    await tx.insert(imports).values({
+    await insertImportRow(tx, {
       id, kind, fileName, sizeBytes, status: 'previewed', preview, payload, errorCount: preview.errors.length,
       createdBy: userId, createdAt: now,
     });

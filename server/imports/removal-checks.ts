@@ -1,9 +1,9 @@
 // Removals the target would make but must not: elements that placements or open windows still use, tenants with accounts.
-import { and, eq, inArray, notInArray } from 'drizzle-orm';
 import type { Queryable } from '../../db/client';
-import { users, windowElements, windows } from '../../db/schema';
 import type { ImportIssue } from '../../shared/imports';
 import type { Scenario } from '../../shared/scenario';
+import { selectUsersOfTenants } from '../queries/auth/tenant-users';
+import { selectWindowsUsingElements } from '../queries/windows/elements';
 import type { ScenarioDiff } from './diff';
 
 const CLOSED_WINDOW_STATES = ['done', 'rolled-back', 'withdrawn'] as const;
@@ -32,13 +32,11 @@ export async function removalErrors(db: Queryable, target: Scenario, diff: Scena
   }
   const elements = [...removedSites, ...removedSpans];
   if (elements.length > 0) {
-    const open = await db.selectDistinct({ windowId: windowElements.windowId, elementId: windowElements.elementId })
-      .from(windowElements).innerJoin(windows, eq(windows.id, windowElements.windowId))
-      .where(and(inArray(windowElements.elementId, elements), notInArray(windows.status, [...CLOSED_WINDOW_STATES])));
+    const open = await selectWindowsUsingElements(db, elements, CLOSED_WINDOW_STATES);
     for (const w of open) errors.push({ file: fileName, message: `"${w.elementId}" would be removed, but maintenance window "${w.windowId}" (not yet done) takes it out` });
   }
   if (diff.tenants.removes.length > 0) {
-    const accounts = await db.select({ id: users.id, tenantId: users.tenantId }).from(users).where(inArray(users.tenantId, diff.tenants.removes));
+    const accounts = await selectUsersOfTenants(db, diff.tenants.removes);
     for (const tenantId of new Set(accounts.map((a) => a.tenantId))) {
       const n = accounts.filter((a) => a.tenantId === tenantId).length;
       errors.push({ file: fileName, path: `tenants[${tenantId}]`, message: `tenant "${tenantId}" would be removed, but ${n} user account(s) belong to it` });
