@@ -7,7 +7,7 @@ import { SCENARIO_FORMAT } from '../shared/scenario';
 import { formatIssue, validateScenario } from '../shared/scenario-validate';
 import { makeCoast, makeSites, outlinePolygon } from './generate/geography';
 import { DemoNetwork } from './generate/network';
-import { mulberry32 } from './generate/random';
+import { createRng } from '../planner/random/rng';
 import { makeSlice } from './generate/slices';
 import { PROFILES } from './generate/tenants';
 import { makeSpans, tagSharedDucts } from './generate/topology';
@@ -16,7 +16,7 @@ import { makeWindows } from './generate/windows';
 const SEED = 20261203;
 
 export function generateDemo(seed = SEED): Scenario {
-  const rng = mulberry32(seed);
+  const rng = createRng(seed);
   const coast = makeCoast(rng);
   const sites = makeSites(coast, rng);
   const spans = makeSpans(sites, rng);

@@ -3,7 +3,8 @@ import { buildInventory, compileWindow } from '../../../planner/model/build-inve
 import type { Inventory, Reservation, WindowSpec } from '../../../planner/model/types';
 import type { PlanToVerify } from '../../../planner/verify/verify-plan';
 import type { Scenario } from '../../../shared/scenario';
-import { randomScenario, seededRandom } from '../fixtures/random-scenario';
+import { createRng } from '../../../planner/random/rng';
+import { randomScenario } from '../fixtures/random-scenario';
 import { handPlan } from './hand-plan';
 
 export interface Case {
@@ -54,7 +55,7 @@ function fitToLoad(scenario: Scenario, rnd: () => number): Scenario {
  */
 export function plannedCase(p: CaseParams): Case {
   const { scenario, window: w } = randomScenario(p.seed, { sites: p.sites, extraSpans: Math.ceil(p.sites / 2), slices: p.slices });
-  const rnd = seededRandom(p.seed ^ 0x2545f491);
+  const rnd = createRng(p.seed ^ 0x2545f491);
   fitToLoad(scenario, rnd);
   const inv = buildInventory(scenario);
   const window = compileWindow(w);
