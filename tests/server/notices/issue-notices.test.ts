@@ -18,9 +18,11 @@ const rowsOf = (windowId: string) => ctx.db.select().from(notices).where(eq(noti
 const statusOf = async (windowId: string) => (await ctx.db.select({ s: windows.status }).from(windows).where(eq(windows.id, windowId)))[0].s;
 
 describe('issueNotices', () => {
+  // Each test issues notices for a window of its own, so any one of them can run alone.
   let windowId: string;
-  beforeAll(async () => {
-    windowId = await insertClearedWindow(ctx, 'compose', 20);
+  let made = 0;
+  beforeEach(async () => {
+    windowId = await insertClearedWindow(ctx, `compose-${++made}`, 20);
     ctx.queue.mails.length = 0;
     expect(await issue(windowId)).toEqual({ queued: 2, blocked: 0 });
   });

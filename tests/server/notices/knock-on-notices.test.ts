@@ -52,8 +52,10 @@ describe('issueNotices with a knock-on move', () => {
   const rowsOf = () => ctx.db.select().from(notices).where(eq(notices.windowId, windowId));
   const quayRow = async () => (await rowsOf()).find((r) => r.tenantId === quayTenantId)!;
 
-  beforeAll(async () => {
-    windowId = await insertClearedWindow(ctx, 'knock-on', 20, [...planSlices(ctx.id, ctx.tenantId, ctx.otherTenantId), knockOnEntry()]);
+  // Each test issues notices for a window of its own, so any one of them can run alone.
+  let made = 0;
+  beforeEach(async () => {
+    windowId = await insertClearedWindow(ctx, `knock-on-${++made}`, 20, [...planSlices(ctx.id, ctx.tenantId, ctx.otherTenantId), knockOnEntry()]);
     ctx.queue.mails.length = 0;
     await ctx.db.transaction((tx) => issueNotices(tx, { jobs: ctx.queue, config: ctx.config, now: NOW }, windowId, ctx.users.planner.id));
   });

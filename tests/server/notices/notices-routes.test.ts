@@ -15,16 +15,21 @@ const issue = (windowId: string) => ctx.db.transaction((tx) =>
 const noticeOf = async (windowId: string, tenantId: string) =>
   (await ctx.db.select().from(notices).where(and(eq(notices.windowId, windowId), eq(notices.tenantId, tenantId))))[0];
 const windowStatus = async (id: string) => (await ctx.db.select({ s: windows.status }).from(windows).where(eq(windows.id, id)))[0].s;
+// Each test gets a window of its own (a fresh key per call), so any one of them can run alone.
+let made = 0;
+const freshWindow = (key: string, startDays: number) => insertClearedWindow(ctx, `${key}-${++made}`, startDays);
 
 describe('lead time', () => {
   let windowId: string;
-  beforeAll(async () => {
-    windowId = await insertClearedWindow(ctx, 'late', 5);
+  let issued: Awaited<ReturnType<typeof issue>>;
+  beforeEach(async () => {
+    windowId = await freshWindow('late', 5);
     ctx.queue.mails.length = 0;
+    issued = await issue(windowId);
   });
 
   it('blocks notices later than the lead time (the policy floor of 7 days beats a 3-day contract) and keeps the window cleared', async () => {
-    expect(await issue(windowId)).toEqual({ queued: 0, blocked: 2 });
+    expect(issued).toEqual({ queued: 0, blocked: 2 });
     expect(ctx.queue.mails).toHaveLength(0);
     expect(await windowStatus(windowId)).toBe('cleared');
     const other = await noticeOf(windowId, ctx.otherTenantId);
@@ -55,8 +60,11 @@ describe('lead time', () => {
   });
 
   it('notifies the window once the last blocked notice is overridden, and refuses a second override', async () => {
+    const own = await noticeOf(windowId, ctx.tenantId);
     const other = await noticeOf(windowId, ctx.otherTenantId);
     const admin = await ctx.as('admin');
+    expect((await admin('post', `/api/notices/${own.id}/override`).send({ reason: 'Storm damage repair cannot wait' })).status).toBe(200);
+    expect(await windowStatus(windowId)).toBe('cleared');
     expect((await admin('post', `/api/notices/${other.id}/override`).send({ reason: 'Agreed by phone with the desk' })).status).toBe(200);
     expect(await windowStatus(windowId)).toBe('notified');
     const again = await admin('post', `/api/notices/${other.id}/override`).send({ reason: 'Agreed by phone with the desk' });
@@ -66,8 +74,8 @@ describe('lead time', () => {
 
 describe('staff view and resend', () => {
   let windowId: string;
-  beforeAll(async () => {
-    windowId = await insertClearedWindow(ctx, 'staff', 30);
+  beforeEach(async () => {
+    windowId = await freshWindow('staff', 30);
     await issue(windowId);
   });
 
@@ -99,8 +107,8 @@ describe('tenant portal', () => {
   let windowId: string;
   let ownId: string;
   let otherId: string;
-  beforeAll(async () => {
-    windowId = await insertClearedWindow(ctx, 'portal', 25);
+  beforeEach(async () => {
+    windowId = await freshWindow('portal', 25);
     await issue(windowId);
     ownId = (await noticeOf(windowId, ctx.tenantId)).id;
     otherId = (await noticeOf(windowId, ctx.otherTenantId)).id;
