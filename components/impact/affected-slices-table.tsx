@@ -2,7 +2,8 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { AffectedSlice } from '@/shared/window-impact';
-import { formatRiskPercent, serviceTypeLabel, sortAffected } from '@/components/impact/impact-format';
+import { formatRiskPercent, sortAffected } from '@/components/impact/impact-format';
+import { sstName } from '@/shared/slice-service-type';
 import { ReasonChips } from '@/components/impact/reason-chips';
 import { SeverityPill } from '@/components/impact/severity-pill';
 import { calendarColors, colors, radii, space, type } from '@/constants/theme';
@@ -27,7 +28,7 @@ function WideRow({ slice }: { slice: AffectedSlice }) {
   const cells = [
     <SliceName key="n" slice={slice} />,
     <ReasonChips key="r" reasons={slice.reasons} />,
-    <Text key="s" style={styles.body}>{serviceTypeLabel(slice.sst)}</Text>,
+    <Text key="s" style={styles.body}>{sstName(slice.sst)}</Text>,
     <Text key="p" style={styles.body}>{slice.priority}</Text>,
     <SeverityPill key="v" severity={slice.severity} />,
     <Text key="k" style={[styles.body, styles.figure]}>{formatRiskPercent(slice.failureProbability)}</Text>,
@@ -48,7 +49,7 @@ function Card({ slice }: { slice: AffectedSlice }) {
       </View>
       <ReasonChips reasons={slice.reasons} />
       <Text style={styles.muted}>
-        {serviceTypeLabel(slice.sst)} · priority {slice.priority} · risk {formatRiskPercent(slice.failureProbability)}
+        {sstName(slice.sst)} · priority {slice.priority} · risk {formatRiskPercent(slice.failureProbability)}
       </Text>
     </View>
   );

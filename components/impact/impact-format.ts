@@ -1,12 +1,5 @@
-// Words and figures for an impact: service types by 3GPP SST, risk as a percentage, the order slices are listed in.
+// Words and figures for an impact: risk as a percentage, the order slices are listed in.
 import type { AffectedSlice, WindowImpact } from '@/shared/window-impact';
-
-/** Standardized SST values, 3GPP TS 23.501 Table 5.15.2.2-1 (secondary): 1 eMBB, 2 URLLC, 3 MIoT, 4 V2X, 5 HMTC. */
-const SST_NAMES: Record<number, string> = { 1: 'eMBB', 2: 'URLLC', 3: 'MIoT', 4: 'V2X', 5: 'HMTC' };
-
-export function serviceTypeLabel(sst: number): string {
-  return SST_NAMES[sst] ?? `SST ${sst}`;
-}
 
 export const REASON_LABELS: Record<AffectedSlice['reasons'][number], string> = {
   hosted: 'Hosted',

@@ -1,13 +1,7 @@
 // How inventory figures read on screen: units in every label, service types by their 3GPP names.
 import type { SITE_KINDS } from '@/shared/scenario';
 
-/** Standardized SST values, 3GPP TS 23.501 Table 5.15.2.2-1 (secondary; 6 and 7 from memory of later releases). */
-const SST_NAMES: Record<number, string> = { 1: 'eMBB', 2: 'URLLC', 3: 'MIoT', 4: 'V2X', 5: 'HMTC', 6: 'HDLLC', 7: 'GBRSS' };
-
-/** SST 128–255 are operator-specific (TS 24.501 §9.11.2.8); anything unnamed shows its number. */
-export function sstName(sst: number): string {
-  return SST_NAMES[sst] ?? (sst >= 128 ? `Operator ${sst}` : `SST ${sst}`);
-}
+export { sstName } from '@/shared/slice-service-type';
 
 /** S-NSSAI as SST-SD in hex, or the SST alone when the slice has no SD (FFFFFF on the wire). */
 export function formatSnssai(sst: number, sd: string | null): string {

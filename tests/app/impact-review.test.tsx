@@ -4,7 +4,8 @@ import { screen, within } from '@testing-library/react-native';
 import type { AffectedSlice, WindowImpact } from '@/shared/window-impact';
 import { ImpactBody } from '@/components/impact/impact-review';
 import { CRITICAL_CAUTION_POINTS } from '@/components/critical-caution';
-import { affectedPathElements, formatRiskPercent, serviceTypeLabel, sortAffected } from '@/components/impact/impact-format';
+import { affectedPathElements, formatRiskPercent, sortAffected } from '@/components/impact/impact-format';
+import { sstName } from '@/shared/slice-service-type';
 import { clearQueries, renderWithQueries, routedFetch } from './window-test-kit';
 
 afterEach(clearQueries);
@@ -75,6 +76,6 @@ test('critical slices are listed first, then by severity and risk; risk reads as
   expect(formatRiskPercent(0.00004)).toBe('< 0.01 %');
   expect(formatRiskPercent(0.1234)).toBe('12.3 %');
   // 3GPP TS 23.501 Table 5.15.2.2-1 (secondary): SST 1 eMBB, 2 URLLC, 3 MIoT, 4 V2X.
-  expect([1, 2, 3, 4, 200].map(serviceTypeLabel)).toEqual(['eMBB', 'URLLC', 'MIoT', 'V2X', 'SST 200']);
+  expect([1, 2, 3, 4, 200].map(sstName)).toEqual(['eMBB', 'URLLC', 'MIoT', 'V2X', 'SST 200']);
   expect(affectedPathElements(impact([]))).toEqual({ sites: ['cell-pellow-sands', 'edge-b'], spans: ['sp-1', 'sp-2'] });
 });
