@@ -1,10 +1,9 @@
 // Issues tenant notices for a window that has just been cleared: one per affected tenant, queued for sending
 // when within the tenant's lead time, else left `blocked` for an admin to override. With none blocked, the
 // window moves on to `notified`. Runs inside the caller's transaction (the one that reached the quorum).
-import { eq } from 'drizzle-orm';
-import { notices } from '../../../db/schema';
 import { DEFAULT_TENANT_TIME_ZONE } from '../../../shared/notices';
 import type { Queryable } from '../../../db/client';
+import { lockWindowNotices, type NoticeRow } from '../../queries/notices/notice-rows';
 import { setWindowStatus } from '../windows/set-window-status';
 import { composeNotice } from './compose-notice';
 import { NoticeStateError } from './errors';
@@ -23,7 +22,6 @@ export function isLate(startsAt: Date, now: Date, leadDays: number): boolean {
   return startsAt.getTime() - now.getTime() < leadDays * DAY_MS;
 }
 
-type NoticeRow = typeof notices.$inferSelect;
 type Tally = { queued: number; blocked: number; failed: number };
 
 async function issueOne(tx: Queryable, deps: NoticeDeps, inputs: WindowNoticeInputs, tenant: NoticeTenant, prev: NoticeRow | undefined, actorId: string, tally: Tally) {
@@ -57,7 +55,7 @@ export async function issueNotices(
 ): Promise<{ queued: number; blocked: number }> {
   const inputs = await loadWindowNoticeInputs(tx, windowId);
   if (inputs.window.status !== 'cleared') throw new NoticeStateError(`Notices go out for cleared windows; this one is ${inputs.window.status}.`);
-  const existing = await tx.select().from(notices).where(eq(notices.windowId, windowId)).for('update');
+  const existing = await lockWindowNotices(tx, windowId);
   const prevByTenant = new Map(existing.map((n) => [n.tenantId, n]));
   const tally: Tally = { queued: 0, blocked: 0, failed: 0 };
   for (const tenant of [...inputs.tenants.values()].sort((a, b) => a.id.localeCompare(b.id))) {

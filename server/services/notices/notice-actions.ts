@@ -1,10 +1,9 @@
 // Changes to one notice after it was issued: an admin's lead-time override, a resend after a failure, and the
 // tenant's acknowledgement. Each writes an audit row in the same transaction.
-import { and, eq } from 'drizzle-orm';
-import type { Db } from '../../../db/client';
-import { notices, windows } from '../../../db/schema';
+import type { Db, Queryable } from '../../../db/client';
 import { noticeContentSchema } from '../../../shared/notices';
-import type { Queryable } from '../../../db/client';
+import { lockNoticeRow, selectBlockedInvitationIds, updateNoticeRow, type NoticeRow } from '../../queries/notices/notice-rows';
+import { selectWindowState } from '../../queries/windows/window-status';
 import { NoticeStateError } from './errors';
 import { markNotified } from './issue-notices';
 import { auditNotice, stateOf } from './notice-audit';
@@ -12,10 +11,8 @@ import { loadTenants } from './notice-inputs';
 import { queueNoticeMail, storeNoticeVersion, type NoticeDeps } from './notice-version';
 import { findVisibleNotice } from './notice-views';
 
-type NoticeRow = typeof notices.$inferSelect;
-
 async function lockNotice(tx: Queryable, id: string): Promise<NoticeRow> {
-  await tx.select({ id: notices.id }).from(notices).where(eq(notices.id, id)).for('update');
+  await lockNoticeRow(tx, id);
   return findVisibleNotice(tx, id, null);
 }
 
@@ -30,9 +27,8 @@ async function requeue(tx: Queryable, deps: NoticeDeps, row: NoticeRow, leadOver
 
 /** When the last blocked notice of a cleared window goes out, the window is notified. */
 async function notifyWhenNoneBlocked(tx: Queryable, deps: NoticeDeps, windowId: string, actorId: string) {
-  const [w] = await tx.select({ status: windows.status }).from(windows).where(eq(windows.id, windowId));
-  const blocked = await tx.select({ id: notices.id }).from(notices)
-    .where(and(eq(notices.windowId, windowId), eq(notices.status, 'blocked'), eq(notices.method, 'REQUEST')));
+  const w = await selectWindowState(tx, windowId);
+  const blocked = await selectBlockedInvitationIds(tx, windowId);
   if (w?.status === 'cleared' && blocked.length === 0) await markNotified(tx, deps, windowId, actorId, { after: 'lead-time override' });
 }
 
@@ -60,10 +56,10 @@ export async function resendNotice(db: Db, deps: NoticeDeps, id: string, actorId
 /** Records the first acknowledgement (time and user); acknowledging again changes nothing. */
 export async function acknowledgeNotice(db: Db, id: string, user: { id: string; tenantId: string }, now: Date): Promise<void> {
   await db.transaction(async (tx) => {
-    await tx.select({ id: notices.id }).from(notices).where(eq(notices.id, id)).for('update');
+    await lockNoticeRow(tx, id);
     const row = await findVisibleNotice(tx, id, user.tenantId);
     if (row.acknowledgedAt) return;
-    await tx.update(notices).set({ acknowledgedAt: now, acknowledgedBy: user.id, updatedAt: now }).where(eq(notices.id, id));
+    await updateNoticeRow(tx, id, { acknowledgedAt: now, acknowledgedBy: user.id, updatedAt: now });
     await auditNotice(tx, {
       actorId: user.id, action: 'notice.acknowledge', noticeId: id, at: now,
       before: { ...stateOf(row), acknowledgedAt: null }, after: { ...stateOf(row), acknowledgedAt: now.toISOString() },

@@ -1,11 +1,12 @@
 // Reads what composing a window's notices needs: the window, its accepted plan's review, the tenants with
 // their recipients and lead time, and the look-ups that turn sites, spans and ties into tenant-facing words.
-import { eq, inArray } from 'drizzle-orm';
-import { plans, sites, sliceFunctions, sliceTies, slices, spans, tenants, users, windows } from '../../../db/schema';
 import { planReviewSchema, planSettingsSchema, type PlanSlice } from '../../../shared/plans';
 import { spanLatencyMs } from '../../../shared/scenario';
-import { getPolicies } from '../../queries/windows/policies';
 import type { Queryable } from '../../../db/client';
+import { selectUsersOfTenants } from '../../queries/auth/tenant-users';
+import { selectNoticeWindow, selectSlicesByIds, selectTenantsByIds, selectWordingRows } from '../../queries/notices/notice-inputs';
+import { selectPlanRow } from '../../queries/plans/plan-rows';
+import { getPolicies } from '../../queries/windows/policies';
 import { NoticeStateError } from './errors';
 import type { NoticeLookups } from './slice-wording';
 
@@ -21,10 +22,7 @@ export type WindowNoticeInputs = {
 };
 
 export async function loadNoticeWindow(db: Queryable, windowId: string) {
-  const [w] = await db.select({
-    id: windows.id, startsAt: windows.startsAt, endsAt: windows.endsAt, workType: windows.workType,
-    status: windows.status, acceptedPlanId: windows.acceptedPlanId,
-  }).from(windows).where(eq(windows.id, windowId));
+  const w = await selectNoticeWindow(db, windowId);
   if (!w) throw new NoticeStateError(`No window ${windowId}.`);
   return w;
 }
@@ -32,8 +30,7 @@ export async function loadNoticeWindow(db: Queryable, windowId: string) {
 /** Affected slices of the accepted plan; slices listed as affected without an entry count as staying. */
 async function acceptedPlanSlices(db: Queryable, planId: string | null) {
   if (!planId) throw new NoticeStateError('The window has no accepted plan.');
-  const [p] = await db.select({ result: plans.result, settings: plans.settings, outageAccepted: plans.outageAccepted })
-    .from(plans).where(eq(plans.id, planId));
+  const p = await selectPlanRow(db, planId);
   if (!p?.result) throw new NoticeStateError(`The accepted plan ${planId} has no result.`);
   const review = planReviewSchema.parse(p.result);
   const settings = planSettingsSchema.safeParse(p.settings ?? {});
@@ -48,7 +45,7 @@ async function acceptedPlanSlices(db: Queryable, planId: string | null) {
 async function missingSlices(db: Queryable, affected: string[], listed: Set<string>): Promise<PlanSlice[]> {
   const ids = affected.filter((id) => !listed.has(id));
   if (ids.length === 0) return [];
-  const rows = await db.select().from(slices).where(inArray(slices.id, ids));
+  const rows = await selectSlicesByIds(db, ids);
   return rows.map((r) => ({
     slice: r.id, name: r.name, tenantId: r.tenantId, critical: r.critical, priority: r.priority, sst: r.sst,
     reasons: [], outcome: 'stays', moves: [], reroutes: [], before: { sites: {}, paths: {} }, after: null, unresolvedReason: null,
@@ -57,10 +54,9 @@ async function missingSlices(db: Queryable, affected: string[], listed: Set<stri
 }
 
 export async function loadTenants(db: Queryable, ids: string[]): Promise<Map<string, NoticeTenant>> {
-  const list = ids.length > 0 ? ids : [''];
   // One after another: inside a transaction there is one connection (pg refuses overlapping queries on it).
-  const rows = await db.select().from(tenants).where(inArray(tenants.id, list));
-  const tenantUsers = await db.select({ tenantId: users.tenantId, email: users.email }).from(users).where(inArray(users.tenantId, list));
+  const rows = await selectTenantsByIds(db, ids);
+  const tenantUsers = await selectUsersOfTenants(db, ids.length > 0 ? ids : ['']);
   const policy = await getPolicies(db);
   const out = new Map<string, NoticeTenant>();
   for (const t of rows) {
@@ -75,13 +71,7 @@ async function loadLookups(db: Queryable, planSlices: PlanSlice[]): Promise<Noti
   const sliceIds = planSlices.map((s) => s.slice);
   const siteIds = planSlices.flatMap((s) => s.moves.flatMap((m) => [m.from, m.to]));
   const spanIds = planSlices.flatMap((s) => s.reroutes.flatMap((r) => [...r.from, ...r.to]));
-  const any = (xs: string[]) => (xs.length > 0 ? xs : ['']);
-  const siteRows = await db.select({ id: sites.id, lat: sites.lat, lon: sites.lon }).from(sites).where(inArray(sites.id, any(siteIds)));
-  const spanRows = await db.select({ id: spans.id, latencyMs: spans.latencyMs, lengthKm: spans.lengthKm })
-    .from(spans).where(inArray(spans.id, any(spanIds)));
-  const fnRows = await db.select({ id: sliceFunctions.id, name: sliceFunctions.name })
-    .from(sliceFunctions).where(inArray(sliceFunctions.sliceId, any(sliceIds)));
-  const tieRows = await db.select().from(sliceTies).where(inArray(sliceTies.sliceId, any(sliceIds)));
+  const { siteRows, spanRows, fnRows, tieRows } = await selectWordingRows(db, { siteIds, spanIds, sliceIds });
   return {
     sites: new Map(siteRows.map((s) => [s.id, { lat: s.lat, lon: s.lon }])),
     spanLatencyMs: new Map(spanRows.map((s) => [s.id, spanLatencyMs({ latencyMs: s.latencyMs ?? undefined, lengthKm: s.lengthKm })])),

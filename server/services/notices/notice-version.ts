@@ -1,11 +1,10 @@
 // One version of a notice: renders subject, text and invitation from its content, stores them on the row,
 // and queues the e-mail. Every send of a changed notice is a new version (SEQUENCE + 1, RFC 5545 §3.8.7.4).
 import { randomUUID } from 'node:crypto';
-import { eq } from 'drizzle-orm';
-import { notices } from '../../../db/schema';
 import type { NoticeContent, NoticeMethod } from '../../../shared/notices';
 import type { ServerConfig } from '../../env';
 import type { Queryable } from '../../../db/client';
+import { insertNoticeRow, updateNoticeRow } from '../../queries/notices/notice-rows';
 import type { MailQueue } from '../ports';
 import { buildNoticeIcs } from './notice-ics';
 import { noticeBody, noticeSubject } from './render-notice';
@@ -43,8 +42,7 @@ export function renderNotice(v: NoticeVersion, deps: Pick<NoticeDeps, 'config' |
 /** Queues the stored version's e-mail; a tenant without any address cannot be told, which is a failure to fix. */
 export async function queueNoticeMail(tx: Queryable, deps: NoticeDeps, v: NoticeVersion, r: { subject: string; body: string; ics: string }): Promise<'queued' | 'failed'> {
   if (v.recipients.length === 0) {
-    await tx.update(notices).set({ status: 'failed', lastError: 'The tenant has no notice contacts or users to send to.', updatedAt: deps.now })
-      .where(eq(notices.id, v.id));
+    await updateNoticeRow(tx, v.id, { status: 'failed', lastError: 'The tenant has no notice contacts or users to send to.', updatedAt: deps.now });
     return 'failed';
   }
   await deps.jobs.sendMail({
@@ -66,9 +64,9 @@ export async function storeNoticeVersion(tx: Queryable, deps: Pick<NoticeDeps, '
     attempts: 0, lastError: null, sentAt: null, acknowledgedAt: null, acknowledgedBy: null, updatedAt: deps.now,
   };
   if (isNew) {
-    await tx.insert(notices).values({ id: v.id, windowId: v.content.windowId, tenantId: v.content.tenantId, createdAt: deps.now, ...values });
+    await insertNoticeRow(tx, { id: v.id, windowId: v.content.windowId, tenantId: v.content.tenantId, createdAt: deps.now, ...values });
   } else {
-    await tx.update(notices).set(values).where(eq(notices.id, v.id));
+    await updateNoticeRow(tx, v.id, values);
   }
   return rendered;
 }

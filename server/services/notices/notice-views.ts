@@ -1,16 +1,16 @@
 // Read side of notices: one notice for its tenant (or staff), a window's notices for staff, the tenant portal.
-import { and, asc, eq, gt, inArray, ne } from 'drizzle-orm';
-import { notices, tenants, users, windows } from '../../../db/schema';
 import {
   DEFAULT_TENANT_TIME_ZONE, noticeContentSchema, type Notice, type NoticeStatusRow, type PortalWork,
 } from '../../../shared/notices';
+import { getUsersByIds } from '../../queries/auth/users';
+import {
+  selectNotice, selectSentNoticesOfOpenWindows, selectWindowNoticesWithTenant, type NoticeRow,
+} from '../../queries/notices/notice-rows';
 import { selectWindowRows } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
 import { summaryOf } from './compose-notice';
 import { NoticeNotFoundError } from './errors';
 import { loadTenants } from './notice-inputs';
-
-type NoticeRow = typeof notices.$inferSelect;
 
 function toNotice(row: NoticeRow, acknowledgedByName: string | null): Notice {
   return {
@@ -22,10 +22,8 @@ function toNotice(row: NoticeRow, acknowledgedByName: string | null): Notice {
 }
 
 async function noticesWithAckNames(db: Queryable, rows: NoticeRow[]): Promise<Notice[]> {
-  const ids = [...new Set(rows.map((r) => r.acknowledgedBy).filter((x): x is string => !!x))];
-  const names = ids.length === 0 ? [] : await db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, ids));
-  const byId = new Map(names.map((u) => [u.id, u.name]));
-  return rows.map((r) => toNotice(r, r.acknowledgedBy ? byId.get(r.acknowledgedBy) ?? null : null));
+  const byId = await getUsersByIds(db, rows.map((r) => r.acknowledgedBy));
+  return rows.map((r) => toNotice(r, r.acknowledgedBy ? byId.get(r.acknowledgedBy)?.name ?? null : null));
 }
 
 /**
@@ -33,7 +31,7 @@ async function noticesWithAckNames(db: Queryable, rows: NoticeRow[]): Promise<No
  * tenant), is "not found" for a tenant user — the same answer as an id that does not exist.
  */
 export async function findVisibleNotice(db: Queryable, id: string, scopeTenant: string | null): Promise<NoticeRow> {
-  const [row] = await db.select().from(notices).where(eq(notices.id, id));
+  const row = await selectNotice(db, id);
   if (!row) throw new NoticeNotFoundError(id);
   if (scopeTenant !== null && (row.tenantId !== scopeTenant || row.status === 'blocked')) throw new NoticeNotFoundError(id);
   return row;
@@ -45,9 +43,7 @@ export async function noticeView(db: Queryable, id: string, scopeTenant: string 
 }
 
 export async function windowNoticeRows(db: Queryable, windowId: string): Promise<NoticeStatusRow[]> {
-  const rows = await db.select({ n: notices, tenantName: tenants.name }).from(notices)
-    .innerJoin(tenants, eq(tenants.id, notices.tenantId))
-    .where(eq(notices.windowId, windowId)).orderBy(asc(tenants.name));
+  const rows = await selectWindowNoticesWithTenant(db, windowId);
   const recipients = await loadTenants(db, rows.map((r) => r.n.tenantId));
   return rows.map(({ n, tenantName }) => ({
     id: n.id, tenantId: n.tenantId, tenantName, status: n.status, method: n.method, sequence: n.sequence,
@@ -61,8 +57,7 @@ export async function windowNoticeRows(db: Queryable, windowId: string): Promise
 /** Upcoming work on the tenant's slices (not yet over), each with the notice the tenant was sent, if any. */
 export async function portalWork(db: Queryable, tenantId: string, now: Date): Promise<PortalWork> {
   const touching = await selectWindowRows(db, { from: now, scopeTenant: tenantId });
-  const sent = await db.select().from(notices).innerJoin(windows, eq(windows.id, notices.windowId))
-    .where(and(eq(notices.tenantId, tenantId), ne(notices.status, 'blocked'), gt(windows.endsAt, now)));
+  const sent = await selectSentNoticesOfOpenWindows(db, tenantId, now);
   const byWindow = new Map((await noticesWithAckNames(db, sent.map((r) => r.notices))).map((n) => [n.windowId, n]));
   const items = new Map<string, PortalWork['items'][number]>();
   for (const w of touching) {

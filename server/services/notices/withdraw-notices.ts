@@ -1,14 +1,12 @@
 // Withdrawal: every tenant that was sent an invitation for the window gets a cancellation with the same UID,
 // SEQUENCE + 1 and STATUS:CANCELLED (RFC 5546 §3.2.5). Runs in the transaction that withdraws the window.
-import { and, eq } from 'drizzle-orm';
-import { notices } from '../../../db/schema';
 import { noticeContentSchema } from '../../../shared/notices';
 import type { Queryable } from '../../../db/client';
+import { lockWindowNotices, type NoticeRow } from '../../queries/notices/notice-rows';
 import { auditNotice, stateOf } from './notice-audit';
 import { loadTenants } from './notice-inputs';
 import { queueNoticeMail, storeNoticeVersion, type NoticeDeps } from './notice-version';
 
-type NoticeRow = typeof notices.$inferSelect;
 /** What a caller outside the notices service passes for sending (the time comes with the change). */
 export type NoticeMailDeps = Omit<NoticeDeps, 'now'>;
 
@@ -29,8 +27,7 @@ export async function cancelNotice(tx: Queryable, deps: NoticeDeps, row: NoticeR
 }
 
 export async function withdrawNotices(tx: Queryable, deps: NoticeDeps, windowId: string, actorId: string): Promise<{ cancelled: number }> {
-  const rows = await tx.select().from(notices)
-    .where(and(eq(notices.windowId, windowId), eq(notices.method, 'REQUEST'))).for('update');
+  const rows = await lockWindowNotices(tx, windowId, { method: 'REQUEST' });
   let cancelled = 0;
   for (const row of rows) {
     if ((await cancelNotice(tx, deps, row, actorId)) === 'queued') cancelled += 1;
