@@ -18,7 +18,7 @@ export async function getOtpStatus(db: Queryable, userId: string): Promise<OtpSt
 
 /** A new unconfirmed key (replacing an unconfirmed one); a confirmed key must be removed first. */
 export async function enrolOtp(db: Queryable, user: Actor, now: Date): Promise<OtpEnrolment> {
-  const existing = await selectOtpKey(db, user.id, { lock: true });
+  const existing = await selectOtpKey(db, user.id, { forUpdate: true });
   if (existing?.confirmedAt) throw new OtpAlreadyEnrolledError();
   const key = newOtpKey();
   const keyBase32 = encodeOtpKey(key);
@@ -32,7 +32,7 @@ export async function enrolOtp(db: Queryable, user: Actor, now: Date): Promise<O
 
 /** The first good code proves the authenticator holds the key; from then on decisions can require codes. */
 export async function confirmOtp(db: Queryable, userId: string, code: string, now: Date): Promise<OtpStatus> {
-  const row = await selectOtpKey(db, userId, { lock: true });
+  const row = await selectOtpKey(db, userId, { forUpdate: true });
   if (!row) throw new OtpNotStartedError();
   if (row.confirmedAt) throw new OtpAlreadyEnrolledError();
   const step = stepOf(row, code, now);
@@ -52,7 +52,7 @@ export async function removeOtp(db: Queryable, userId: string, actorId: string, 
  * (the row is locked, so two requests cannot spend the same code). Throws on a bad or reused code.
  */
 export async function spendOtpCode(tx: Queryable, userId: string, code: string, now: Date): Promise<void> {
-  const row = await selectOtpKey(tx, userId, { lock: true });
+  const row = await selectOtpKey(tx, userId, { forUpdate: true });
   if (!row?.confirmedAt) throw new OtpNotEnrolledError();
   const step = stepOf(row, code, now);
   await updateOtpKeyStep(tx, userId, { lastUsedStep: step });

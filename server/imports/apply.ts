@@ -29,7 +29,7 @@ type Outcome = { applied: ImportApplied } | { stale: true };
 
 async function applyInTx(tx: Tx, id: string, userId: string | null, now: Date): Promise<Outcome> {
   await lockForTransaction(tx, APPLY_LOCK_KEY);
-  const row = await getImportRow(tx, id, { lock: true });
+  const row = await getImportRow(tx, id, { forUpdate: true });
   if (!row) throw new ImportNotFoundError(id);
   const payload = refuseUnlessPending(row);
   const before = await loadNetworkScenario(tx);

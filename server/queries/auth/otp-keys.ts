@@ -5,10 +5,10 @@ import { userOtpKeys } from '../../../db/schema';
 
 export type OtpKeyRow = typeof userOtpKeys.$inferSelect;
 
-/** The user's key; `lock` holds the row until the transaction ends (two requests cannot spend one code). */
-export async function selectOtpKey(db: Queryable, userId: string, opts: { lock?: boolean } = {}): Promise<OtpKeyRow | null> {
+/** The user's key; `forUpdate` holds the row until the transaction ends (two requests cannot spend one code). */
+export async function selectOtpKey(db: Queryable, userId: string, opts: { forUpdate?: boolean } = {}): Promise<OtpKeyRow | null> {
   const query = db.select().from(userOtpKeys).where(eq(userOtpKeys.userId, userId));
-  const [row] = opts.lock ? await query.for('update') : await query;
+  const [row] = opts.forUpdate ? await query.for('update') : await query;
   return row ?? null;
 }
 

@@ -6,10 +6,10 @@ import { imports } from '../../../db/schema';
 export type ImportRow = typeof imports.$inferSelect;
 export type NewImportRow = typeof imports.$inferInsert;
 
-/** The import; `lock` holds the row until the transaction ends. */
-export async function getImportRow(db: Queryable, id: string, opts: { lock?: boolean } = {}): Promise<ImportRow | null> {
+/** The import; `forUpdate` holds the row until the transaction ends. */
+export async function getImportRow(db: Queryable, id: string, opts: { forUpdate?: boolean } = {}): Promise<ImportRow | null> {
   const query = db.select().from(imports).where(eq(imports.id, id));
-  const [row] = opts.lock ? await query.for('update') : await query;
+  const [row] = opts.forUpdate ? await query.for('update') : await query;
   return row ?? null;
 }
 

@@ -10,10 +10,10 @@ export type WindowState = { status: WindowStatus; version: number };
 /** Columns a status change may set alongside the status. */
 export type WindowColumns = Partial<Omit<WindowWrite, 'status'>> & { acceptedPlanId?: string | null; reviewRound?: number };
 
-/** The window's status and version; `lock` holds the row until the transaction ends. Null when it does not exist. */
-export async function selectWindowState(db: Queryable, id: string, opts: { lock?: boolean } = {}): Promise<WindowState | null> {
+/** The window's status and version; `forUpdate` holds the row until the transaction ends. Null when it does not exist. */
+export async function selectWindowState(db: Queryable, id: string, opts: { forUpdate?: boolean } = {}): Promise<WindowState | null> {
   const query = db.select({ status: windows.status, version: windows.version }).from(windows).where(eq(windows.id, id));
-  const [row] = opts.lock ? await query.for('update') : await query;
+  const [row] = opts.forUpdate ? await query.for('update') : await query;
   return row ?? null;
 }
 

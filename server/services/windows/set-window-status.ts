@@ -31,7 +31,7 @@ export interface StatusChange {
 }
 
 async function lockedState(tx: Queryable, c: StatusChange) {
-  const before = await selectWindowState(tx, c.windowId, { lock: true });
+  const before = await selectWindowState(tx, c.windowId, { forUpdate: true });
   if (c.version !== undefined && before?.version !== c.version) throw new StaleVersionError();
   if (!before) throw new IllegalTransitionError('(missing)', c.to, `window ${c.windowId} does not exist.`);
   if (c.from && !c.from.includes(before.status)) {
