@@ -18,7 +18,7 @@ export interface ExactOutcome {
   exact: { optimal: boolean; gap: number; bound: number };
 }
 
-/** 'exact' mode's solver (exactPlan behind an adapter), injected so the DE code does not load HiGHS. */
+/** 'exact' mode's solver (exactSolverFor in planner/exact), passed in so the DE modes never load HiGHS. */
 export type ExactSolver = (problem: RemapProblem, options: { timeLimitMs: number }) => Promise<ExactOutcome>;
 
 export interface PlanOptions {
@@ -42,12 +42,13 @@ export interface PlanOptions {
   pinned?: string[];
   excludedSites?: string[];
   onProgress?: (p: SearchProgress) => void;
+  /** the clock, passed in so tests can fix time */
   now?: () => number;
-  /** 'islands' and 'shared-eval' */
+  /** the worker-thread runner the 'islands' and 'shared-eval' modes search on; the caller owns and closes it */
   parallel?: ParallelRunner;
   /** 'islands' and 'shared-eval': the scenario the inventory was built from, for the worker threads */
   scenario?: Scenario;
-  /** 'exact' */
+  /** the solver 'exact' mode runs */
   exact?: ExactSolver;
 }
 
