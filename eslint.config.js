@@ -68,6 +68,18 @@ module.exports = tseslint.config(
     rules: { 'no-restricted-imports': ['error', { patterns: patterns }] },
   })),
   {
+    // Where is the SQL? In server/queries/<area>/ only: the rest of the server imports no drizzle and no schema
+    // (the Db/Tx/Queryable types and createDb from db/client are fine).
+    files: ['server/**/*.ts'],
+    ignores: ['server/queries/**'],
+    rules: {
+      'no-restricted-imports': ['error', { patterns: [...rules['server/**'], {
+        regex: '^drizzle-orm(/|$)|/db/schema(/|$)',
+        message: 'SQL lives in server/queries/<area>/: call a named query function there instead.',
+      }] }],
+    },
+  },
+  {
     // The worker wrapper and the command line are planner's only doors to the outside world.
     files: ['planner/workers/**/*.ts', 'planner/cli/**/*.ts'],
     rules: { 'no-restricted-imports': ['error', { patterns: rules['planner/**'].slice(0, 2) }] },
