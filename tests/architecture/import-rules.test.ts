@@ -35,15 +35,16 @@ const FORBIDDEN: [string, string][] = [
   ['db/x.ts', "import { planWindow } from '../planner/remap/plan-window';\nexport const a = planWindow;\n"],
   ['app/x.tsx', "import { createDb } from '@/db/client';\nexport const a = createDb;\n"],
   ['components/x.tsx', "import { createApp } from '@/server/app';\nexport const a = createApp;\n"],
-  ['server/services/x.ts', "import { eq } from 'drizzle-orm';\nexport const a = eq;\n"],
-  ['server/services/x.ts', "import { windows } from '../../db/schema';\nexport const a = windows;\n"],
+  // Typed linting parses only files its TypeScript project knows, so the server cases borrow real file paths.
+  ['server/services/windows/lifecycle.ts', "import { eq } from 'drizzle-orm';\nexport const a = eq;\n"],
+  ['server/services/windows/lifecycle.ts', "import { windows } from '../../../db/schema';\nexport const a = windows;\n"],
 ];
 const ALLOWED: [string, string][] = [
   ['planner/model/x.ts', "import Graph from 'graphology';\nimport type { Scenario } from '../../shared/scenario';\nexport type S = Scenario;\nexport const g = Graph;\n"],
   ['planner/workers/x.ts', "import { Worker } from 'node:worker_threads';\nexport const w = Worker;\n"],
   ['shared/x.ts', "import { z } from 'zod';\nimport { scenarioSchema } from './scenario';\nexport const a = [z, scenarioSchema];\n"],
   ['server/x.ts', "import { createDb } from '../db/client';\nexport const a = createDb;\n"],
-  ['server/queries/x/y.ts', "import { eq } from 'drizzle-orm';\nimport { windows } from '../../../db/schema';\nexport const a = [eq, windows];\n"],
+  ['server/queries/windows/elements.ts', "import { eq } from 'drizzle-orm';\nimport { windows } from '../../../db/schema';\nexport const a = [eq, windows];\n"],
 ];
 
 describe('folder import rules', () => {
