@@ -41,6 +41,29 @@ const rules = {
   ],
 };
 
+/**
+ * Layers inside server/: routes → services → queries → db. Where is the SQL? In server/queries/<area>/ only (the
+ * Db/Tx/Queryable types and createDb from db/client are fine elsewhere). Services take plain ports: no Express, no
+ * routes, no job-queue or HTTP code. Queries know nothing above them. Each block repeats the server-wide patterns
+ * because a later block's no-restricted-imports replaces an earlier one's for the same file.
+ */
+function serverLayerBlocks() {
+  const sql = { regex: '^drizzle-orm(/|$)|/db/schema(/|$)', message: 'SQL lives in server/queries/<area>/: call a named query function there instead.' };
+  // Relative paths only: `../../auth/x` from server/queries/<area>/ is server/auth, `../auth/x` is queries/auth.
+  const notAbove = (layer, folders, up) => ({
+    regex: `^(\\.\\./){${up},}(${folders.join('|')})/|^(express|multer)$`,
+    message: `server/${layer}/ must not reach up to ${folders.join(', ')} or Express: ${layer === 'services'
+      ? 'declare the port it needs (services/ports.ts) and let the route or job pass it in.' : 'it is the bottom layer above db/.'}`,
+  });
+  const base = rules['server/**'];
+  const block = (files, ignores, patterns) => ({ files, ignores, rules: { 'no-restricted-imports': ['error', { patterns }] } });
+  return [
+    block(['server/**/*.ts'], ['server/queries/**', 'server/services/**'], [...base, sql]),
+    block(['server/services/**/*.ts'], [], [...base, sql, notAbove('services', ['routes', 'jobs', 'http'], 1)]),
+    block(['server/queries/**/*.ts'], [], [...base, notAbove('queries', ['services', 'routes', 'jobs', 'http', 'mail', 'imports', 'auth'], 2)]),
+  ];
+}
+
 module.exports = tseslint.config(
   { ignores: ['node_modules/', 'dist/', '.data/', '.expo/', 'web-build/', 'coverage/', 'test-results/', '**/*.js', '!eslint.config.js'] },
   ...tseslint.configs.recommended,
@@ -67,18 +90,7 @@ module.exports = tseslint.config(
     ignores: files === 'planner/**' ? ['planner/workers/**', 'planner/cli/**'] : [],
     rules: { 'no-restricted-imports': ['error', { patterns: patterns }] },
   })),
-  {
-    // Where is the SQL? In server/queries/<area>/ only: the rest of the server imports no drizzle and no schema
-    // (the Db/Tx/Queryable types and createDb from db/client are fine).
-    files: ['server/**/*.ts'],
-    ignores: ['server/queries/**'],
-    rules: {
-      'no-restricted-imports': ['error', { patterns: [...rules['server/**'], {
-        regex: '^drizzle-orm(/|$)|/db/schema(/|$)',
-        message: 'SQL lives in server/queries/<area>/: call a named query function there instead.',
-      }] }],
-    },
-  },
+  ...serverLayerBlocks(),
   {
     // The worker wrapper and the command line are planner's only doors to the outside world.
     files: ['planner/workers/**/*.ts', 'planner/cli/**/*.ts'],

@@ -63,6 +63,11 @@ export const importPreviewSchema = z.object({
 });
 export type ImportPreview = z.infer<typeof importPreviewSchema>;
 
+/** One entity kind's difference between the current state and an import's target, by id. */
+export type EntityDiff = { adds: string[]; changes: EntityChange[]; removes: string[] };
+/** The whole difference an import would write, per entity kind. */
+export type ScenarioDiff = Record<keyof ImportPreview['adds'], EntityDiff>;
+
 /** 201 answer of POST /api/imports. */
 export const importCreatedSchema = z.object({
   id: z.string(),

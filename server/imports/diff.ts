@@ -1,12 +1,11 @@
 // Adds, changes (field by field, before → after) and removes between the current state and the target.
-import type { EntityChange, FieldChange, ImportPreview } from '../../shared/imports';
+import type { EntityChange, EntityDiff, FieldChange, ScenarioDiff } from '../../shared/imports';
 import type { Scenario } from '../../shared/scenario';
 import {
   canonicalNetwork, canonicalPlacement, canonicalSite, canonicalSlice, canonicalSpan, canonicalTenant,
 } from './canonical';
 
-export type EntityDiff = { adds: string[]; changes: EntityChange[]; removes: string[] };
-export type ScenarioDiff = Record<keyof ImportPreview['adds'], EntityDiff>;
+export type { EntityDiff, ScenarioDiff };
 
 type Leaf = string | number | boolean | null | unknown[];
 

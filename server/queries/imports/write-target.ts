@@ -4,9 +4,9 @@ import type { PgColumn, PgTable, PgUpdateSetSource } from 'drizzle-orm/pg-core';
 import type { Tx } from '../../../db/client';
 import { scenarioRows } from '../../../db/seed/scenario-rows';
 import { networkMeta, placements, sites, sliceFunctions, slices, sliceTies, spans, tenants } from '../../../db/schema';
+import type { ScenarioDiff } from '../../../shared/imports';
 import type { Scenario } from '../../../shared/scenario';
 import { NETWORK_META_ID } from '../inventory/scenario-tables';
-import type { ScenarioDiff } from '../../imports/diff';
 
 const CHUNK_ROWS = 500; // stays far below PostgreSQL's 65 535 bind parameters per statement
 

@@ -5,7 +5,8 @@ import { OPERATOR_ROLES, WINDOW_BOOKER_ROLES } from '../../../shared/permissions
 import { currentUser, requireRole } from '../../auth/guards';
 import { getWindowDocument } from '../../queries/windows/documents';
 import { MopNotFoundError } from '../../services/windows/errors';
-import { mopUpload, storeMop } from '../../services/windows/mop';
+import { storeMop } from '../../services/windows/mop';
+import { mopUpload } from '../../http/mop-upload';
 import { loadWindow } from '../../services/windows/window-view';
 import type { RouteDeps } from '../deps';
 

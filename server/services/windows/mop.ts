@@ -1,24 +1,15 @@
-// The method-of-procedure upload: multipart parsing with a size cap, type sniffing, storage with an audit row.
-import type { RequestHandler } from 'express';
-import multer from 'multer';
+// The method-of-procedure document: type sniffing and storage with an audit row (parsing: server/http/mop-upload.ts).
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { getWindowDocument, upsertWindowDocument } from '../../queries/windows/documents';
-import { MopMissingError, MopTooLargeError, MopTypeError } from './errors';
+import { MopMissingError, MopTypeError } from './errors';
 
 export const MOP_MAX_BYTES = 10 * 1024 * 1024;
 const PDF_MAGIC = Buffer.from('%PDF-');
 
-/** multer in memory, one file in field "file"; its errors become our domain errors. */
-export function mopUpload(maxBytes = MOP_MAX_BYTES): RequestHandler {
-  const single = multer({ storage: multer.memoryStorage(), limits: { fileSize: maxBytes, files: 1 } }).single('file');
-  return (req, res, next) => single(req, res, (err: unknown) => {
-    if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') return next(new MopTooLargeError(maxBytes));
-    if (err instanceof multer.MulterError) return next(new MopMissingError());
-    next(err);
-  });
-}
+/** An uploaded file as the HTTP layer hands it over (multer's in-memory file has this shape). */
+export type UploadedFile = { buffer: Buffer; mimetype: string; originalname: string };
 
 /** Trusts the bytes, not the browser's label: a PDF must start with %PDF-, text must be UTF-8 without NULs. */
 export function sniffMopType(file: { buffer: Buffer; mimetype: string }): 'application/pdf' | 'text/plain' {
@@ -36,7 +27,7 @@ export function sniffMopType(file: { buffer: Buffer; mimetype: string }): 'appli
 }
 
 export async function storeMop(
-  db: Db, windowId: string, file: Express.Multer.File | undefined, user: Me, now: Date,
+  db: Db, windowId: string, file: UploadedFile | undefined, user: Me, now: Date,
 ): Promise<void> {
   if (!file) throw new MopMissingError();
   const mime = sniffMopType(file);
