@@ -1,33 +1,7 @@
 // The folder import rules (DEVELOPERS.md "Architecture") are live: ESLint rejects a wrong arrow.
-import { execFileSync } from 'node:child_process';
-import path from 'node:path';
+import { lintCases } from './lint-cases';
 
-const root = path.resolve(__dirname, '../..');
-
-// ESLint loads its flat config through dynamic import(), which jest's VM does not allow, so the
-// cases are linted in one plain node process. Typed linting is switched off for them: it parses only files its
-// TypeScript project knows, and these made-up files exist only to show where each import arrow is refused.
-const LINT_SCRIPT = `
-const { ESLint } = require('eslint');
-const path = require('node:path');
-(async () => {
-  const cases = JSON.parse(require('node:fs').readFileSync(0, 'utf8'));
-  const eslint = new ESLint({ cwd: process.cwd(), overrideConfig: {
-    languageOptions: { parserOptions: { projectService: false } },
-    rules: { '@typescript-eslint/no-floating-promises': 'off', '@typescript-eslint/no-misused-promises': 'off' },
-  } });
-  const out = [];
-  for (const [file, code] of cases) {
-    const [r] = await eslint.lintText(code, { filePath: path.join(process.cwd(), file) });
-    out.push(r.messages.filter((m) => m.ruleId === 'no-restricted-imports').map((m) => m.message));
-  }
-  process.stdout.write(JSON.stringify(out));
-})();`;
-
-function lintAll(cases: [string, string][]): string[][] {
-  const out = execFileSync(process.execPath, ['-e', LINT_SCRIPT], { cwd: root, input: JSON.stringify(cases) });
-  return JSON.parse(out.toString()) as string[][];
-}
+const lintAll = (cases: [string, string][]) => lintCases('no-restricted-imports', cases);
 
 const FORBIDDEN: [string, string][] = [
   ['planner/model/x.ts', "import pg from 'pg';\nexport const a = pg;\n"],
