@@ -1,5 +1,5 @@
 // Users, credentials, sessions and role grants.
-import { pgTable, text, timestamp, primaryKey, uniqueIndex, index } from 'drizzle-orm/pg-core';
+import { pgTable, text, timestamp, primaryKey, uniqueIndex, index, bigserial } from 'drizzle-orm/pg-core';
 import { tenants } from './network';
 
 export const ROLES = ['admin', 'engineer', 'planner', 'approver', 'tenant'] as const;
@@ -38,8 +38,27 @@ export const sessions = pgTable(
       .references(() => users.id, { onDelete: 'cascade' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     lastActiveAt: timestamp('last_active_at', { withTimezone: true }).notNull().defaultNow(),
+    /** a short label of the browser at sign-in ("Firefox on Linux"), shown in the owner's session list */
+    userAgent: text('user_agent'),
+    /** the client address at sign-in, shown in the owner's session list */
+    address: text('address'),
   },
   (t) => [index('sessions_user_idx').on(t.userId)],
+);
+
+export const SIGN_IN_KEY_KINDS = ['account', 'address'] as const;
+
+/** One row per counted sign-in attempt; rows older than the limit's window no longer count and are pruned. */
+export const signInFailures = pgTable(
+  'sign_in_failures',
+  {
+    id: bigserial('id', { mode: 'number' }).primaryKey(),
+    keyKind: text('key_kind', { enum: SIGN_IN_KEY_KINDS }).notNull(),
+    /** the normalised e-mail address (account) or the client address or IPv6 prefix (address) */
+    key: text('key').notNull(),
+    at: timestamp('at', { withTimezone: true }).notNull(),
+  },
+  (t) => [index('sign_in_failures_key_idx').on(t.keyKind, t.key, t.at), index('sign_in_failures_at_idx').on(t.at)],
 );
 
 export const roleGrants = pgTable(
