@@ -1,10 +1,18 @@
-// Import errors with fixed codes: unreadable uploads (400/413, nothing written) and refused applies (404/409/422).
+// Import errors with fixed codes: unreadable uploads (400/413/422, nothing written) and refused applies (404/409/422).
 import { AppError } from '../errors';
 
 /** The upload cannot be read as the kind of file it claims to be; nothing is written. */
 export class ImportFileError extends AppError {
   readonly status = 400;
   constructor(readonly code: string, message: string) {
+    super(message);
+  }
+}
+
+/** The file would cost the server too much to read (nesting, time or memory over the budget); nothing is written. */
+export class ImportTooComplexError extends AppError {
+  readonly status = 422;
+  constructor(readonly code: 'IMPORT_FILE_TOO_COMPLEX' | 'IMPORT_PARSE_TIMEOUT', message: string) {
     super(message);
   }
 }
