@@ -23,7 +23,7 @@ export function otpRouter({ db, now }: RouteDeps): Router {
     const { code } = otpConfirmBodySchema.parse(req.body);
     const { id } = currentUser(req);
     const at = now();
-    const status = await withOtpAttempt(db, id, at, () => db.transaction((tx) => confirmOtp(tx, id, code, at)));
+    const status = await withOtpAttempt(db, id, at, (tx) => confirmOtp(tx, id, code, at));
     res.json(otpStatusSchema.parse(status));
   });
   // A confirmed key is removed only with a current code: otherwise a stolen session could swap in its own
@@ -31,12 +31,12 @@ export function otpRouter({ db, now }: RouteDeps): Router {
   router.delete('/', operator, async (req, res) => {
     const { id } = currentUser(req);
     const at = now();
-    await withOtpAttempt(db, id, at, () => db.transaction(async (tx) => {
+    await withOtpAttempt(db, id, at, async (tx) => {
       if ((await getOtpStatus(tx, id)).enrolled) {
         await spendOtpCode(tx, id, otpConfirmBodySchema.parse(req.body ?? {}).code, at);
       }
       await removeOtp(tx, id, id, at);
-    }));
+    });
     res.status(204).end();
   });
   return router;

@@ -57,9 +57,9 @@ async function record(tx: Tx, deps: SignoffDeps, windowId: string, user: Me, bod
 }
 
 export async function decideSignoff(deps: SignoffDeps, windowId: string, user: Me, body: SignoffDecisionBody): Promise<SignoffDecisionResult> {
-  const decide = () => deps.db.transaction((tx) => record(tx, deps, windowId, user, body));
-  // A decision carrying a code counts towards the wrong-code limit (the transaction itself rolls back).
-  const { ctx, ...result } = body.code ? await withOtpAttempt(deps.db, user.id, deps.now, decide) : await decide();
+  const decide = (tx: Tx) => record(tx, deps, windowId, user, body);
+  // A decision carrying a code counts towards the wrong-code limit (a refused decision's changes roll back).
+  const { ctx, ...result } = body.code ? await withOtpAttempt(deps.db, user.id, deps.now, decide) : await deps.db.transaction(decide);
   if (result.status === 'returned') {
     // The planner who accepted the plan and the window's owner hear of it, with the approver's words.
     const people = await getUsersByIds(deps.db, [ctx.plan?.acceptedBy ?? null, ctx.window.ownerId]);
