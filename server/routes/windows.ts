@@ -1,19 +1,21 @@
 // /api/windows: list, book, read, edit (optimistic locking), assess, lifecycle, impact, conflicts; the sub-resources
-// (MOP, sign-off submission, plans, notices) live in routes/windows/ and are mounted here.
+// (MOP, sign-off submission, plans, notices) live in routes/windows/ and are mounted here. A tenant user reads only
+// tenant views (list and one window, from its notices); everything else about a window is not found for it.
 import express, { type Request, type Router } from 'express';
 import { windowCreateSchema, windowListQuerySchema, windowListSchema, windowMutationSchema,
   windowPatchSchema, windowSchema, windowStatusSchema, windowTransitionSchema, windowVersionSchema } from '../../shared/windows';
 import { windowConflictsSchema, windowImpactSchema } from '../../shared/window-impact';
 import { tenantScopeOf, WINDOW_BOOKER_ROLES, WINDOW_READER_ROLES } from '../../shared/permissions';
-import { currentUser, requireRole } from '../auth/guards';
+import { tenantWindowListSchema, tenantWindowViewSchema } from '../../shared/tenant-windows';
+import { currentUser, hideFromTenants, requireRole } from '../auth/guards';
 import { getWindowImpact } from '../queries/windows/impacts';
 import type { WindowFilter } from '../queries/windows/window-rows';
+import { tenantWindowView, tenantWindowViews } from '../services/notices/tenant-window-views';
 import { assessWindow } from '../services/windows/assess-window';
-import { scopeImpact } from '../services/windows/compute-impact';
 import { conflictsByWindow } from '../services/windows/conflicts';
 import { createWindow } from '../services/windows/create-window';
 import { editWindow } from '../services/windows/edit-window';
-import { ImpactNotFoundError } from '../services/windows/errors';
+import { ImpactNotFoundError, WindowNotFoundError } from '../services/windows/errors';
 import { transitionWindow } from '../services/windows/transition-window';
 import { loadWindow, windowView, windowViews } from '../services/windows/window-view';
 import type { RouteDeps } from './deps';
@@ -25,6 +27,8 @@ import { windowSubmitRouter } from './windows/submit';
 const anyRole = requireRole(...WINDOW_READER_ROLES);
 const booking = requireRole(...WINDOW_BOOKER_ROLES);
 const idOf = (req: Request) => String(req.params.id);
+/** Impact and conflicts name sites, spans, paths and other windows: for a tenant user the window is not found. */
+const staffOnly = hideFromTenants((req) => new WindowNotFoundError(idOf(req)));
 
 function listFilter(req: Request): WindowFilter {
   const q = windowListQuerySchema.parse(req.query);
@@ -37,6 +41,12 @@ function listFilter(req: Request): WindowFilter {
   };
 }
 
+/** A tenant user's list: tenant views of the work it was notified of (services/notices/tenant-window-views.ts). */
+function tenantList(req: Request) {
+  const q = windowListQuerySchema.parse(req.query);
+  return { from: new Date(q.from), to: new Date(q.to), mine: q.mine === 'true', element: q.element, tenant: q.tenant };
+}
+
 export function windowsRouter(deps: RouteDeps): Router {
   const { db, now, jobs, config } = deps;
   const router = express.Router();
@@ -47,6 +57,11 @@ export function windowsRouter(deps: RouteDeps): Router {
   };
 
   router.get('/', anyRole, async (req, res) => {
+    const tenant = scope(req);
+    if (tenant !== null) {
+      res.json(tenantWindowListSchema.parse({ windows: await tenantWindowViews(db, tenant, tenantList(req)) }));
+      return;
+    }
     res.json(windowListSchema.parse({ windows: await windowViews(db, listFilter(req)) }));
   });
   router.post('/', booking, async (req, res) => {
@@ -54,7 +69,12 @@ export function windowsRouter(deps: RouteDeps): Router {
     res.status(201).json(await mutation(id, false));
   });
   router.get('/:id', anyRole, async (req, res) => {
-    res.json(windowSchema.parse(await windowView(db, idOf(req), scope(req))));
+    const tenant = scope(req);
+    if (tenant !== null) {
+      res.json(tenantWindowViewSchema.parse(await tenantWindowView(db, tenant, idOf(req))));
+      return;
+    }
+    res.json(windowSchema.parse(await windowView(db, idOf(req), null)));
   });
   router.patch('/:id', booking, async (req, res) => {
     const { reverted } = await editWindow(db, idOf(req), windowPatchSchema.parse(req.body), currentUser(req), now());
@@ -68,16 +88,15 @@ export function windowsRouter(deps: RouteDeps): Router {
     const version = req.body?.version === undefined ? undefined : windowVersionSchema.parse(req.body).version;
     res.json(windowImpactSchema.parse(await assessWindow(db, idOf(req), { version, user: currentUser(req), now: now() })));
   });
-  router.get('/:id/impact', anyRole, async (req, res) => {
-    await loadWindow(db, idOf(req), scope(req));
+  router.get('/:id/impact', staffOnly, anyRole, async (req, res) => {
+    await loadWindow(db, idOf(req), null);
     const impact = await getWindowImpact(db, idOf(req));
     if (!impact) throw new ImpactNotFoundError();
-    const tenant = scope(req);
-    res.json(windowImpactSchema.parse(tenant === null ? impact : scopeImpact(impact, tenant)));
+    res.json(windowImpactSchema.parse(impact));
   });
-  router.get('/:id/conflicts', anyRole, async (req, res) => {
-    const w = await loadWindow(db, idOf(req), scope(req));
-    const conflicts = (await conflictsByWindow(db, [w], scope(req))).get(w.id) ?? [];
+  router.get('/:id/conflicts', staffOnly, anyRole, async (req, res) => {
+    const w = await loadWindow(db, idOf(req), null);
+    const conflicts = (await conflictsByWindow(db, [w], null)).get(w.id) ?? [];
     res.json(windowConflictsSchema.parse({ windowId: w.id, conflicts }));
   });
   // Each sub-resource router holds full '/:id/...' paths, so none shadows another or the routes above.

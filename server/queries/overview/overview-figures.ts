@@ -1,16 +1,18 @@
-// Overview figures: network-wide for staff; for a tenant user, only what its own slices touch.
+// Overview figures: network-wide for staff; for a tenant user, only its own slices and what they use.
 import { sql, type SQL } from 'drizzle-orm';
 import type { Db } from '../../../db/client';
 import type { Overview } from '../../../shared/api';
 
 const NEXT_WINDOWS = 5;
-const HORIZON_DAYS = 30;
+/** "Windows in the next 30 days": the same horizon for staff and tenant overviews. */
+export const HORIZON_DAYS = 30;
 
 type Figures = Omit<Overview, 'nextWindows'>;
 
 /**
  * A tenant's footprint: sites hosting its functions or at either end of a span its ties cross
  * (a transit site going down breaks the path too), and the spans on its ties' paths; current placements only.
+ * Its windows are not counted here: a tenant reads only the work it was notified of (services/notices/tenant-window-views.ts).
  */
 function tenantFootprint(tenantId: string): SQL {
   return sql`
@@ -23,13 +25,7 @@ function tenantFootprint(tenantId: string): SQL {
     footprint_sites as (
       select fn.value as id from tenant_placements tp, jsonb_each_text(tp.sites) fn
       union select s.site_a from spans s join footprint_spans f on f.id = s.id
-      union select s.site_b from spans s join footprint_spans f on f.id = s.id),
-    scoped_windows as (
-      select w.id, w.title, w.starts_at, w.ends_at, w.status from windows w
-      where w.status <> 'withdrawn' and exists (
-        select 1 from window_elements we where we.window_id = w.id and (
-          (we.element_kind = 'site' and we.element_id in (select id from footprint_sites)) or
-          (we.element_kind = 'span' and we.element_id in (select id from footprint_spans)))))`;
+      union select s.site_b from spans s join footprint_spans f on f.id = s.id)`;
 }
 
 const allWindows = sql`
@@ -72,13 +68,14 @@ export async function getNetworkOverview(db: Db, { now }: { now: Date }): Promis
   return { ...figures, nextWindows: await getNextWindows(db, allWindows, now) };
 }
 
-export async function getTenantOverview(db: Db, { tenantId, now }: { tenantId: string; now: Date }): Promise<Overview> {
-  const ctes = tenantFootprint(tenantId);
-  const figures = await getFigures(db, sql`with ${ctes} select
+export type TenantFigures = Omit<Figures, 'windowsNext30Days'>;
+
+export async function getTenantFigures(db: Db, { tenantId }: { tenantId: string }): Promise<TenantFigures> {
+  const { rows } = await db.execute(sql`with ${tenantFootprint(tenantId)} select
     (select count(distinct id) from footprint_sites)::int as sites, (select count(*) from footprint_spans)::int as spans,
     (select count(*) from tenants where id = ${tenantId})::int as tenants,
     (select count(*) from slices where tenant_id = ${tenantId})::int as slices,
-    (select count(*) from slices where tenant_id = ${tenantId} and critical)::int as critical_slices,
-    ${windowsSoon(now)} as windows_next_30_days`);
-  return { ...figures, nextWindows: await getNextWindows(db, ctes, now) };
+    (select count(*) from slices where tenant_id = ${tenantId} and critical)::int as critical_slices`);
+  const row = rows[0] as Record<string, number>;
+  return { sites: row.sites, spans: row.spans, tenants: row.tenants, slices: row.slices, criticalSlices: row.critical_slices };
 }

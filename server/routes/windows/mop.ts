@@ -2,19 +2,21 @@
 import express, { type Request, type Router } from 'express';
 import { mopInfoSchema } from '../../../shared/windows';
 import { OPERATOR_ROLES, WINDOW_BOOKER_ROLES } from '../../../shared/permissions';
-import { currentUser, requireRole } from '../../auth/guards';
+import { currentUser, hideFromTenants, requireRole } from '../../auth/guards';
 import { getWindowDocument } from '../../queries/windows/documents';
-import { MopNotFoundError } from '../../services/windows/errors';
+import { MopNotFoundError, WindowNotFoundError } from '../../services/windows/errors';
 import { storeMop } from '../../services/windows/mop';
 import { mopUpload } from '../../http/mop-upload';
 import { loadWindow } from '../../services/windows/window-view';
 import type { RouteDeps } from '../deps';
 
 const idOf = (req: Request) => String(req.params.id);
+/** The MOP is internal: for a tenant user the window is not found (404, as on every internal window route). */
+const windowHidden = hideFromTenants((req) => new WindowNotFoundError(idOf(req)));
 
 export function windowMopRouter({ db, now }: RouteDeps): Router {
   const router = express.Router();
-  router.put('/:id/mop', requireRole(...WINDOW_BOOKER_ROLES), async (req, _res, next) => {
+  router.put('/:id/mop', windowHidden, requireRole(...WINDOW_BOOKER_ROLES), async (req, _res, next) => {
     await loadWindow(db, idOf(req), null);
     next();
   }, mopUpload(), async (req, res) => {
@@ -22,7 +24,7 @@ export function windowMopRouter({ db, now }: RouteDeps): Router {
     const doc = await getWindowDocument(db, idOf(req));
     res.json(mopInfoSchema.parse({ fileName: doc!.fileName, mime: doc!.mime, sizeBytes: doc!.sizeBytes, uploadedAt: doc!.uploadedAt.toISOString() }));
   });
-  router.get('/:id/mop', requireRole(...OPERATOR_ROLES), async (req, res) => {
+  router.get('/:id/mop', windowHidden, requireRole(...OPERATOR_ROLES), async (req, res) => {
     await loadWindow(db, idOf(req), null);
     const doc = await getWindowDocument(db, idOf(req));
     if (!doc) throw new MopNotFoundError();
