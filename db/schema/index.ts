@@ -5,3 +5,4 @@ export * from './imports';
 export * from './policies';
 export * from './plans';
 export * from './signoff';
+export * from './idempotency';
