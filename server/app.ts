@@ -10,6 +10,7 @@ import type { ServerConfig } from './env';
 import { RouteNotFoundError } from './errors';
 import { noJobQueue, type JobQueue } from './jobs/queue';
 import { errorHandler } from './http/error-handler';
+import { inputHygiene } from './http/input-hygiene';
 import { originCheck } from './http/origin-check';
 import { securityHeaders } from './http/security-headers';
 import { webApp } from './http/web-app';
@@ -91,6 +92,8 @@ export function createApp(deps: AppDeps): express.Application {
   app.use('/api/health', noStore, healthRouter({ db, config, now, jobs: deps.jobs ?? noJobQueue }));
   app.use(express.json({ limit: config.jsonBodyLimit }));
   app.use(cookieParser());
+  // After body parsing, before any router: NUL, lone surrogates and broken percent-encoding never reach a handler.
+  app.use(inputHygiene());
   app.use(originCheck({ allowedOrigins: config.allowedOrigins }));
   // Only the API needs to know who is asking; static files skip the session look-up.
   app.use('/api', sessionMiddleware({ db, config, now }), apiRouter({ db, config, now, signInLimit, jobs: deps.jobs ?? noJobQueue }));

@@ -1,7 +1,11 @@
 // The one error middleware: every failure leaves as { error: { code, message } } (+ details for validation).
-import type { ErrorRequestHandler } from 'express';
+// Errors carrying a 4xx status answer with it and a code, never 500. Only a real 500 is logged, and only as the
+// route's pattern, a fixed message and the error's own description (describeError): never request values.
+import type { ErrorRequestHandler, Request } from 'express';
 import { ZodError } from 'zod';
 import { AppError } from '../errors';
+import { describeError } from './error-log';
+import { knownFailure } from './error-status';
 
 type ErrorBody = { error: { code: string; message: string; details?: { path: string; message: string }[] } };
 
@@ -9,36 +13,30 @@ function zodPath(path: PropertyKey[]): string {
   return path.reduce<string>((out, key) => (typeof key === 'number' ? `${out}[${key}]` : `${out}.${String(key)}`), '$');
 }
 
-/** Errors raised by express.json() carry a `type` and an HTTP status. */
-function bodyParserError(err: unknown): { status: number; code: string; message: string } | null {
-  const type = (err as { type?: unknown })?.type;
-  if (type === 'entity.parse.failed') return { status: 400, code: 'BAD_JSON', message: 'The request body is not valid JSON.' };
-  if (type === 'entity.too.large') return { status: 413, code: 'PAYLOAD_TOO_LARGE', message: 'The request body is too large.' };
-  return null;
+/** The matched route's pattern (`/api/windows/:id`), never the URL with its values; "(no route)" before matching. */
+function routeOf(req: Request): string {
+  const pattern = (req.route as { path?: unknown } | undefined)?.path;
+  return `${req.method} ${typeof pattern === 'string' ? `${req.baseUrl}${pattern}` : '(no route)'}`;
+}
+
+function answerFor(err: unknown): { status: number; body: ErrorBody } | null {
+  if (err instanceof AppError) return { status: err.status, body: { error: { code: err.code, message: err.message } } };
+  if (err instanceof ZodError) {
+    const details = err.issues.map((issue) => ({ path: zodPath(issue.path), message: issue.message }));
+    const message = details.map((d) => `${d.path}: ${d.message}`).join('; ');
+    return { status: 400, body: { error: { code: 'VALIDATION_FAILED', message, details } } };
+  }
+  const known = knownFailure(err);
+  return known ? { status: known.status, body: { error: { code: known.code, message: known.message } } } : null;
 }
 
 export function errorHandler({ log }: { log: (message: string, err: unknown) => void }): ErrorRequestHandler {
-  return (err, _req, res, next) => {
-    let status = 500;
-    let body: ErrorBody = { error: { code: 'INTERNAL', message: 'Something went wrong on the server.' } };
-    const parserError = bodyParserError(err);
-    if (err instanceof AppError) {
-      status = err.status;
-      body = { error: { code: err.code, message: err.message } };
-    } else if (err instanceof ZodError) {
-      const details = err.issues.map((issue) => ({ path: zodPath(issue.path), message: issue.message }));
-      status = 400;
-      body = {
-        error: { code: 'VALIDATION_FAILED', message: details.map((d) => `${d.path}: ${d.message}`).join('; '), details },
-      };
-    } else if (parserError) {
-      status = parserError.status;
-      body = { error: { code: parserError.code, message: parserError.message } };
-    } else {
-      log('unhandled error', err);
-    }
+  return (err, req, res, next) => {
+    const answer = answerFor(err);
+    if (!answer) log(`INTERNAL on ${routeOf(req)}: unhandled error`, describeError(err));
     // Too late for our body: Express's default handler closes the connection.
     if (res.headersSent) return next(err);
+    const { status, body } = answer ?? { status: 500, body: { error: { code: 'INTERNAL', message: 'Something went wrong on the server.' } } };
     res.status(status).json(body);
   };
 }
