@@ -10,6 +10,8 @@ const envSchema = z.object({
     .regex(/^postgres(ql)?:\/\//, 'DATABASE_URL must start with postgres:// or postgresql://'),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   SESSION_INACTIVITY_SECONDS: z.coerce.number().int().min(60).default(7 * DAY_SECONDS),
+  /** Absolute session lifetime in days from sign-in: the session ends then even while in use. */
+  SESSION_MAX_DAYS: z.coerce.number().int().min(1).max(365).default(30),
   WEB_DIST: z.string().min(1).default('dist'),
   /** `auto`: Secure cookies except when the request's host is loopback (local http use). */
   COOKIE_SECURE: z.enum(['auto', 'always', 'never']).default('auto'),
@@ -17,7 +19,10 @@ const envSchema = z.object({
   ALLOWED_ORIGINS: z.string().default(''),
   JSON_BODY_LIMIT: z.string().regex(/^\d+(b|kb|mb)$/i, 'JSON_BODY_LIMIT looks like 2mb or 500kb').default('2mb'),
   SIGN_IN_LIMIT_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60 * 1000),
-  SIGN_IN_LIMIT_MAX: z.coerce.number().int().min(1).default(10),
+  /** Failed sign-ins per e-mail address in the window (OWASP's Authentication Cheat Sheet: lock out after a few). */
+  SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().min(1).default(5),
+  /** Failed sign-ins per client address in the window: more than one account's share (offices behind one NAT). */
+  SIGN_IN_LIMIT_PER_ADDRESS: z.coerce.number().int().min(1).default(20),
   /** Largest file POST /api/imports accepts, in bytes (default 5 MB). */
   IMPORT_MAX_BYTES: z.coerce.number().int().min(1024).default(5 * 1024 * 1024),
   /** `true`: the API process also works the job queue (plan runs, mail); `false`: only `npm run worker` does. */
@@ -45,11 +50,12 @@ export type ServerConfig = {
   databaseUrl: string;
   nodeEnv: 'development' | 'production' | 'test';
   sessionInactivitySeconds: number;
+  sessionMaxAgeSeconds: number;
   webDist: string;
   cookieSecure: 'auto' | 'always' | 'never';
   allowedOrigins: string[];
   jsonBodyLimit: string;
-  signInLimit: { windowMs: number; max: number };
+  signInLimit: { windowMs: number; perAccount: number; perAddress: number };
   importMaxBytes: number;
   workerInProcess: boolean;
   planExpireMarginSeconds: number;
@@ -77,11 +83,14 @@ export function parseEnv(source: Record<string, string | undefined> = process.en
     databaseUrl: env.DATABASE_URL,
     nodeEnv: env.NODE_ENV,
     sessionInactivitySeconds: env.SESSION_INACTIVITY_SECONDS,
+    sessionMaxAgeSeconds: env.SESSION_MAX_DAYS * DAY_SECONDS,
     webDist: env.WEB_DIST,
     cookieSecure: env.COOKIE_SECURE,
     allowedOrigins: env.ALLOWED_ORIGINS.split(',').map((o) => o.trim()).filter(Boolean),
     jsonBodyLimit: env.JSON_BODY_LIMIT,
-    signInLimit: { windowMs: env.SIGN_IN_LIMIT_WINDOW_MS, max: env.SIGN_IN_LIMIT_MAX },
+    signInLimit: {
+      windowMs: env.SIGN_IN_LIMIT_WINDOW_MS, perAccount: env.SIGN_IN_LIMIT_PER_ACCOUNT, perAddress: env.SIGN_IN_LIMIT_PER_ADDRESS,
+    },
     importMaxBytes: env.IMPORT_MAX_BYTES,
     workerInProcess: env.WORKER_IN_PROCESS === 'true',
     planExpireMarginSeconds: env.PLAN_EXPIRE_MARGIN_SECONDS,

@@ -10,7 +10,10 @@ export function sessionMiddleware(deps: { db: Db; config: ServerConfig; now: () 
   return async (req, res, next) => {
     const token = readSessionCookie(req);
     if (!token) return next();
-    const auth = await validateSessionToken(db, token, { now: now(), inactivitySeconds: config.sessionInactivitySeconds });
+    const at = now();
+    const auth = await validateSessionToken(db, token, {
+      now: at, inactivitySeconds: config.sessionInactivitySeconds, maxAgeSeconds: config.sessionMaxAgeSeconds,
+    });
     if (!auth) {
       // A stale or forged cookie is dropped so the browser stops sending it.
       clearSessionCookie(req, res, config.cookieSecure);
@@ -19,7 +22,9 @@ export function sessionMiddleware(deps: { db: Db; config: ServerConfig; now: () 
     req.auth = auth;
     req.user = auth.user;
     if (auth.refreshed) {
-      setSessionCookie(req, res, { token, maxAgeSeconds: config.sessionInactivitySeconds, secureMode: config.cookieSecure });
+      // The cookie lives as long as the session can: never past the absolute lifetime.
+      const maxAgeSeconds = Math.ceil((auth.expiresAt.getTime() - at.getTime()) / 1000);
+      setSessionCookie(req, res, { token, maxAgeSeconds, secureMode: config.cookieSecure });
     }
     next();
   };

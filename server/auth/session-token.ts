@@ -44,3 +44,11 @@ export function secretMatches(secret: string, storedHashHex: string): boolean {
   const presented = sha256(new TextEncoder().encode(secret));
   return stored.length === presented.length && constantTimeEqual(presented, stored);
 }
+
+/**
+ * The name a session goes by in its owner's list: derived from the id by SHA-256, so the list carries no part of
+ * the token itself (the id is half of the cookie's value).
+ */
+export function sessionHandle(sessionId: string): string {
+  return encodeHexLowerCase(sha256(new TextEncoder().encode(`session-handle:${sessionId}`))).slice(0, 32);
+}

@@ -1,4 +1,4 @@
-// Session life cycle: create at sign-in, validate per request (inactivity expiry), invalidate at sign-out.
+// Session life cycle: create at sign-in, validate per request (inactivity and absolute expiry), invalidate at sign-out.
 import type { Db } from '../../db/client';
 import type { Me } from '../../shared/api';
 import { deleteSession, getSessionById, insertSession, touchSession } from '../queries/auth/sessions';
@@ -11,25 +11,37 @@ export const SESSION_REFRESH_MS = 60 * 60 * 1000;
 
 export async function createSession(
   db: Db,
-  { userId, now }: { userId: string; now: Date },
+  { userId, now, userAgent = null, address = null }:
+    { userId: string; now: Date; userAgent?: string | null; address?: string | null },
 ): Promise<{ sessionId: string; token: string }> {
   const { id, token, secretHash } = generateSessionToken();
-  await insertSession(db, { id, secretHash, userId, now });
+  await insertSession(db, { id, secretHash, userId, now, userAgent, address });
   return { sessionId: id, token };
+}
+
+export type SessionLifetime = { inactivitySeconds: number; maxAgeSeconds: number };
+
+/** When a session ends unless used again: idle expiry, capped by the absolute lifetime from sign-in. */
+export function sessionExpiresAt(session: { createdAt: Date; lastActiveAt: Date }, lifetime: SessionLifetime): Date {
+  const idleEndMs = session.lastActiveAt.getTime() + lifetime.inactivitySeconds * 1000;
+  const absoluteEndMs = session.createdAt.getTime() + lifetime.maxAgeSeconds * 1000;
+  return new Date(Math.min(idleEndMs, absoluteEndMs));
 }
 
 /** The session and its user, or null for any bad, unknown, tampered or expired token. */
 export async function validateSessionToken(
   db: Db,
   token: string,
-  { now, inactivitySeconds }: { now: Date; inactivitySeconds: number },
+  { now, ...lifetime }: { now: Date } & SessionLifetime,
 ): Promise<SessionAuth | null> {
   const parsed = parseSessionToken(token);
   if (!parsed) return null;
   const session = await getSessionById(db, { id: parsed.id });
   if (!session || !secretMatches(parsed.secret, session.secretHash)) return null;
   const idleMs = now.getTime() - session.lastActiveAt.getTime();
-  if (idleMs >= inactivitySeconds * 1000) {
+  // WARNING: the absolute lifetime ends a session even while it is used, so a stolen cookie is not good forever.
+  const ageMs = now.getTime() - session.createdAt.getTime();
+  if (idleMs >= lifetime.inactivitySeconds * 1000 || ageMs >= lifetime.maxAgeSeconds * 1000) {
     await deleteSession(db, { id: session.id });
     return null;
   }
@@ -37,7 +49,9 @@ export async function validateSessionToken(
   if (!user) return null;
   const refreshed = idleMs >= SESSION_REFRESH_MS;
   if (refreshed) await touchSession(db, { id: session.id, lastActiveAt: now });
-  return { sessionId: session.id, user, lastActiveAt: refreshed ? now : session.lastActiveAt, refreshed };
+  const lastActiveAt = refreshed ? now : session.lastActiveAt;
+  const expiresAt = sessionExpiresAt({ createdAt: session.createdAt, lastActiveAt }, lifetime);
+  return { sessionId: session.id, user, lastActiveAt, expiresAt, refreshed };
 }
 
 export async function invalidateSession(db: Db, { sessionId }: { sessionId: string }): Promise<void> {

@@ -1,4 +1,4 @@
-// Sign-in and sign-out as services: check the password, open or close a session, write the audit row.
+// Sign-in and sign-out as services: check the limits and the password, open or close a session, write the audit row.
 import type { Db } from '../../db/client';
 import type { Me } from '../../shared/api';
 import { BadCredentialsError } from '../errors';
@@ -6,11 +6,24 @@ import { insertAuditEntry } from '../queries/audit/audit-log';
 import { getUserById, getUserCredentialsByEmail } from '../queries/auth/users';
 import { verifyDummyPassword, verifyPassword } from './password';
 import { createSession, invalidateSession } from './sessions';
+import { displayAddress } from './user-agent-label';
+import { releaseSignInAttempt, reserveSignInAttempt, signInKeys, type SignInLimit } from './sign-in-limit';
 
-export async function signIn(
-  db: Db,
-  { email, password, now }: { email: string; password: string; now: Date },
-): Promise<{ token: string; sessionId: string; user: Me }> {
+export type SignInInput = {
+  email: string;
+  password: string;
+  now: Date;
+  /** the client address (req.ip) the per-address limit counts under */
+  address?: string;
+  /** a short label of the browser, kept with the session */
+  userAgent?: string | null;
+  limit: SignInLimit;
+};
+
+export async function signIn(db: Db, input: SignInInput): Promise<{ token: string; sessionId: string; user: Me }> {
+  const { email, password, now } = input;
+  // Before the password check: a limited attempt costs no hashing and learns nothing about the password.
+  const reservation = await reserveSignInAttempt(db, { keys: signInKeys(email, input.address), limit: input.limit, now });
   const credentials = await getUserCredentialsByEmail(db, { email });
   const passwordOk = credentials
     ? await verifyPassword(credentials.passwordHash, password)
@@ -24,7 +37,10 @@ export async function signIn(
     });
     throw new BadCredentialsError();
   }
-  const { token, sessionId } = await createSession(db, { userId: user.id, now });
+  await releaseSignInAttempt(db, reservation);
+  const { token, sessionId } = await createSession(db, {
+    userId: user.id, now, userAgent: input.userAgent ?? null, address: displayAddress(input.address),
+  });
   await insertAuditEntry(db, { actorId: user.id, action: 'sign-in', entity: 'session', entityId: sessionId, at: now });
   return { token, sessionId, user };
 }

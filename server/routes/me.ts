@@ -1,14 +1,16 @@
-// GET /api/me: the signed-in user; its one-time codes under /api/me/otp (routes/me/otp.ts).
+// GET /api/me: the signed-in user; its one-time codes under /api/me/otp, its sessions under /api/me/sessions.
 import express, { type Router } from 'express';
 import { meSchema } from '../../shared/api';
 import { currentUser, requireAuth } from '../auth/guards';
 import { toPublicSession } from '../auth/sessions';
 import type { RouteDeps } from './deps';
 import { otpRouter } from './me/otp';
+import { sessionsRouter } from './me/sessions';
 
 export function meRouter(deps: RouteDeps): Router {
   const router = express.Router();
   router.use('/otp', otpRouter(deps));
+  router.use('/sessions', sessionsRouter(deps));
   router.get('/', requireAuth, (req, res) => {
     res.json(meSchema.parse(toPublicSession({ user: currentUser(req) }).user));
   });

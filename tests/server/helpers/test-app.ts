@@ -95,7 +95,7 @@ export async function setupTestApp(): Promise<TestContext> {
   const { tenantId, users: testUsers } = await insertTestUsers(db, prefix);
   const config = testConfig();
   const makeApp = (overrides: Partial<AppDeps> = {}) =>
-    createApp({ db, pool, config, signInLimit: { windowMs: 60_000, max: 1000 }, ...overrides });
+    createApp({ db, pool, config, signInLimit: { windowMs: 60_000, perAccount: 1000, perAddress: 1000 }, ...overrides });
   return { db, pool, prefix, tenantId, users: testUsers, config, app: makeApp(), makeApp, close: () => pool.end() };
 }
 
