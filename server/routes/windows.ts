@@ -8,12 +8,13 @@ import { windowConflictsSchema, windowImpactSchema } from '../../shared/window-i
 import { tenantScopeOf, WINDOW_BOOKER_ROLES, WINDOW_READER_ROLES } from '../../shared/permissions';
 import { tenantWindowListSchema, tenantWindowViewSchema } from '../../shared/tenant-windows';
 import { currentUser, hideFromTenants, requireRole } from '../auth/guards';
+import { idempotencyKeyOf } from '../http/idempotency-key';
 import { getWindowImpact } from '../queries/windows/impacts';
 import type { WindowFilter } from '../queries/windows/window-rows';
 import { tenantWindowView, tenantWindowViews } from '../services/notices/tenant-window-views';
 import { assessWindow } from '../services/windows/assess-window';
 import { conflictsByWindow } from '../services/windows/conflicts';
-import { createWindow } from '../services/windows/create-window';
+import { bookWindowOnce } from '../services/windows/book-once';
 import { editWindow } from '../services/windows/edit-window';
 import { ImpactNotFoundError, WindowNotFoundError } from '../services/windows/errors';
 import { transitionWindow } from '../services/windows/transition-window';
@@ -64,9 +65,10 @@ export function windowsRouter(deps: RouteDeps): Router {
     }
     res.json(windowListSchema.parse({ windows: await windowViews(db, listFilter(req)) }));
   });
+  // With an Idempotency-Key a repeat of the same booking answers 200 with the first request's window.
   router.post('/', booking, async (req, res) => {
-    const id = await createWindow(db, windowCreateSchema.parse(req.body), currentUser(req), now());
-    res.status(201).json(await mutation(id, false));
+    const { id, created } = await bookWindowOnce(db, windowCreateSchema.parse(req.body), currentUser(req), now(), idempotencyKeyOf(req));
+    res.status(created ? 201 : 200).json(await mutation(id, false));
   });
   router.get('/:id', anyRole, async (req, res) => {
     const tenant = scope(req);
