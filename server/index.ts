@@ -4,6 +4,7 @@ import { createDb } from '../db/client';
 import { createApp } from './app';
 import { startBackground } from './background';
 import { parseEnvOrExit } from './env';
+import { uploadChecks } from './imports/check-thread';
 
 async function main(): Promise<void> {
   const config = parseEnvOrExit();
@@ -26,7 +27,7 @@ async function main(): Promise<void> {
     console.log(`${signal}: closing`);
     // A plan run in progress goes back to the queue (another worker or the next start picks it up).
     const stopped = new Promise<void>((resolve) => server.close(() => resolve()));
-    Promise.all([stopped, background.stop()])
+    Promise.all([stopped, background.stop(), uploadChecks.close()])
       .catch((err: unknown) => console.error(`shutdown: ${err instanceof Error ? err.message : String(err)}`))
       .finally(() => pool.end().finally(() => process.exit(0)));
     // Keep-alive connections may hold close() open; do not hang the caller's Ctrl-C.

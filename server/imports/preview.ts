@@ -1,32 +1,18 @@
-// The preview of an upload: read the file, lay it over the current data, validate the result, list what changes.
+// The preview of an upload: read the file (in a check thread), lay it over the current data, validate the result, list what changes.
 import type { ImportIssue, ImportKind, ImportPreview } from '../../shared/imports';
 import type { Scenario } from '../../shared/scenario';
 import { validateScenario } from '../../shared/scenario-validate';
 import type { Queryable } from '../../db/client';
 import { loadNetworkScenario } from '../services/inventory/load-network-scenario';
 import { scenarioChecksum } from './canonical';
-import { decodeUpload } from './decode-upload';
-import { detectKind } from './detect-kind';
+import { uploadChecks } from './check-thread';
 import { diffScenarios, emptyDiff, type ScenarioDiff } from './diff';
 import { mergeImport } from './merge';
-import { parseSitesCsv, parseSpansCsv } from './parse-csv-network';
-import { parseSlicesCsv } from './parse-csv-slices';
-import { parseGraphmlFile } from './parse-graphml';
-import { parseScenarioFile } from './parse-scenario-file';
 import { removalErrors } from './removal-checks';
-import type { ParsedImport } from './types';
 
 /** What apply needs: the state the preview was computed against (as a checksum) and the target to write. */
 export type ImportPayload = { beforeChecksum: string; target: Scenario };
 export type PreviewResult = { kind: ImportKind; preview: ImportPreview; payload: ImportPayload | null };
-
-const PARSERS: Record<ImportKind, (text: string, fileName: string) => ParsedImport> = {
-  scenario: parseScenarioFile,
-  graphml: parseGraphmlFile,
-  'csv-sites': parseSitesCsv,
-  'csv-spans': parseSpansCsv,
-  'csv-slices': parseSlicesCsv,
-};
 
 /** Whole-state kinds remove what the file lacks, so a partly read file must not be merged at all. */
 const WHOLE_STATE: ReadonlySet<ImportKind> = new Set(['scenario', 'graphml']);
@@ -49,9 +35,8 @@ export async function buildPreview(
   db: Queryable, input: { fileName: string; bytes: Buffer; requestedKind?: string },
 ): Promise<PreviewResult> {
   const { fileName } = input;
-  const text = decodeUpload(input.bytes);
-  const kind = detectKind(fileName, text, input.requestedKind);
-  const parsed = PARSERS[kind](text, fileName);
+  // The file alone decides what reading it costs: that happens in a check thread with a time and memory budget.
+  const { kind, parsed } = await uploadChecks.read({ fileName, bytes: input.bytes, requestedKind: input.requestedKind });
   const errors = [...parsed.errors];
   const warnings = [...parsed.warnings];
   const before = await loadNetworkScenario(db);

@@ -3,6 +3,7 @@ import { randomUUID } from 'node:crypto';
 import pg from 'pg';
 import request from 'supertest';
 import { seedDemo } from '../../../../db/seed';
+import { uploadChecks } from '../../../../server/imports/check-thread';
 import demo from '../../../../scenarios/demo.json';
 import { signInAs } from '../../helpers/sign-in';
 import { setupTestApp, testDatabaseUrl, type TestContext } from '../../helpers/test-app';
@@ -24,6 +25,8 @@ export async function setupScratchApp(options: { seedDemo: boolean }): Promise<I
   if (options.seedDemo) await seedDemo(ctx.db, demo);
   const dropDatabase = async () => {
     await ctx.close();
+    // Upload check threads are per process; none may outlive the file's tests.
+    await uploadChecks.close();
     const client = new pg.Client({ connectionString: baseUrl });
     await client.connect();
     await client.query(`drop database if exists ${name} with (force)`);
