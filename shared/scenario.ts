@@ -1,12 +1,16 @@
 // The `slackwater-scenario/1` file format: the one contract for imports, the demo, tests and the planner CLI.
 import { z } from 'zod';
+import { BAD_TEXT_MESSAGE, badTextReason, safeText } from './safe-text';
 
 export const SCENARIO_FORMAT = 'slackwater-scenario/1';
 
 /** Fibre planning value: 5 µs/km one way (ITU-T G.114 Table A.1, provisional there). */
 export const FIBRE_MS_PER_KM = 0.005;
 
-const id = z.string().min(1, 'must be a non-empty id');
+const id = safeText().min(1, 'must be a non-empty id');
+/** A record whose keys are checked as a whole: a zod key issue would put the bad key itself into the issue's path. */
+const safeKeys = <T extends z.ZodType>(value: T) => z.record(z.string(), value)
+  .refine((r) => Object.keys(r).every((k) => badTextReason(k) === null), `keys ${BAD_TEXT_MESSAGE}`);
 const finite = z.number().refine(Number.isFinite, 'must be a finite number');
 const positive = finite.refine((n) => n > 0, 'must be greater than 0');
 const latitude = finite.refine((n) => n >= -90 && n <= 90, 'latitude must be within −90…90');
@@ -23,7 +27,7 @@ export const outlineSchema = z.union([
 export const SITE_KINDS = ['core', 'aggregation', 'edge', 'cell-site'] as const;
 export const siteSchema = z.object({
   id,
-  name: z.string().min(1),
+  name: safeText().min(1),
   kind: z.enum(SITE_KINDS),
   lat: latitude,
   lon: longitude,
@@ -41,14 +45,14 @@ export const spanSchema = z.object({
   latencyMs: positive.optional(),
   mtbfHours: hours,
   mttrHours: hours,
-  srlg: z.array(z.string().min(1)).optional(),
+  srlg: z.array(safeText().min(1)).optional(),
 });
 
 export const tenantSchema = z.object({
   id,
-  name: z.string().min(1),
+  name: safeText().min(1),
   noticeDays: z.number().int('must be a whole number of days').min(0),
-  contacts: z.array(z.object({ name: z.string().min(1), email: z.email() })).optional(),
+  contacts: z.array(z.object({ name: safeText().min(1), email: z.email() })).optional(),
 });
 
 export const anchorSchema = z.union([
@@ -58,7 +62,7 @@ export const anchorSchema = z.union([
 
 export const functionSchema = z.object({
   id,
-  name: z.string().optional(),
+  name: safeText().optional(),
   cpu: positive,
   anchor: anchorSchema.optional(),
   moveCost: finite.refine((n) => n >= 0, 'must be ≥ 0').optional(),
@@ -77,7 +81,7 @@ export const tieSchema = z.object({
 export const sliceSchema = z.object({
   id,
   tenant: id,
-  name: z.string().min(1),
+  name: safeText().min(1),
   sst: z.number().int().min(1).max(255),
   sd: z.string().regex(/^[0-9A-Fa-f]{6}$/, 'SD must be 6 hex digits').optional(),
   priority: z.number().int().min(1).max(5),
@@ -88,8 +92,8 @@ export const sliceSchema = z.object({
 
 export const placementSchema = z.object({
   slice: id,
-  sites: z.record(z.string(), id),
-  paths: z.record(z.string(), z.array(id)),
+  sites: safeKeys(id),
+  paths: safeKeys(z.array(id)),
 });
 
 const isoWithOffset = z.iso.datetime({ offset: true, message: 'must be ISO 8601 with a time-zone offset' });
@@ -99,17 +103,17 @@ export const reducedSchema = z.union([
 ]);
 export const scenarioWindowSchema = z.object({
   id,
-  title: z.string().min(1),
+  title: safeText().min(1),
   start: isoWithOffset,
   end: isoWithOffset,
   down: z.object({ sites: z.array(id), spans: z.array(id) }),
   reduced: z.array(reducedSchema).optional(),
-  workType: z.string().optional(),
+  workType: safeText().optional(),
 });
 
 export const scenarioSchema = z.object({
   format: z.literal(SCENARIO_FORMAT),
-  name: z.string().optional(),
+  name: safeText().optional(),
   outline: outlineSchema.optional(),
   sites: z.array(siteSchema),
   spans: z.array(spanSchema),

@@ -8,6 +8,7 @@ import { ImportFileError, ImportNotFoundError } from '../imports/errors';
 import { toDetail, toSummary } from '../imports/import-records';
 import { getImportRow, listImportRows } from '../queries/imports/import-rows';
 import { buildPreview } from '../imports/preview';
+import { printablePreview } from '../imports/printable-preview';
 import { recordPreview } from '../imports/record-preview';
 import { isTemplateKind, templateFile } from '../imports/templates';
 import { singleFileUpload } from '../imports/upload';
@@ -21,7 +22,8 @@ export function importsRouter({ db, config, now }: RouteDeps): express.Router {
     if (!req.file) throw new ImportFileError('NO_FILE', 'Send the file in the multipart field "file".');
     const fileName = req.file.originalname || 'upload';
     const kind = typeof req.body?.kind === 'string' ? req.body.kind : undefined;
-    const result = await buildPreview(db, { fileName, bytes: req.file.buffer, requestedKind: kind });
+    // Issues quote the file; a NUL or lone surrogate there is escaped so the preview can be stored.
+    const result = printablePreview(await buildPreview(db, { fileName, bytes: req.file.buffer, requestedKind: kind }));
     const id = await recordPreview(db, { ...result, fileName, sizeBytes: req.file.size, userId: currentUser(req).id, now: now() });
     res.status(201).json({ id, kind: result.kind, fileName, preview: result.preview });
   });
