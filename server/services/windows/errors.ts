@@ -53,6 +53,9 @@ export class MopMissingError extends domainError('MOP_MISSING', 400,
 export class MopFileNameError extends domainError('MOP_BAD_FILE_NAME', 400,
   () => 'The document\'s file name contains a NUL character; rename the file and upload it again.') {}
 
+export class MopUploadUnreadableError extends domainError('MOP_BAD_UPLOAD', 400,
+  (reason: string) => `The upload could not be read (${reason}); send the document as multipart form data in the field "file".`) {}
+
 export class FreezeNotFoundError extends domainError('FREEZE_NOT_FOUND', 404, (id: string) => `No freeze ${id}.`) {}
 
 /** A lifecycle step that exists but needs work from a later stage (a plan, a sign-off, notices). */
