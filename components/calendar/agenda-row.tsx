@@ -24,7 +24,7 @@ export function AgendaRow({ window, timeZone, onOpen }: Props) {
     <Pressable
       role="link"
       testID={`agenda-window-${window.id}`}
-      accessibilityLabel={`${window.title}, ${window.status}`}
+      accessibilityLabel={`${window.title}, ${window.statusLabel ?? window.status}`}
       onPress={() => onOpen(window.id)}
       style={({ pressed }) => [styles.row, pressed && styles.pressed]}
     >
@@ -34,14 +34,13 @@ export function AgendaRow({ window, timeZone, onOpen }: Props) {
           <Text style={styles.title} numberOfLines={2}>
             {window.title}
           </Text>
-          <Text style={[styles.status, { borderColor: tone, color: colors.ink }]}>{window.status}</Text>
+          <Text style={[styles.status, { borderColor: tone, color: colors.ink }]}>{window.statusLabel ?? window.status}</Text>
         </View>
         <Text style={styles.when} testID={`agenda-window-${window.id}-when`}>
           {formatWindowRange(window.startsAt, window.endsAt, timeZone)} · {formatDuration(durationMs)}
         </Text>
         <Text style={styles.elements} numberOfLines={1}>
-          {window.workType ? `${window.workType} · ` : ''}
-          {elementSummary(window)}
+          {window.detail ?? `${window.workType ? `${window.workType} · ` : ''}${elementSummary(window)}`}
         </Text>
         <WindowBadges window={window} />
       </View>

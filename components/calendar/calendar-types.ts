@@ -6,7 +6,12 @@ import type { Window } from '@/shared/windows';
 export type CalendarWindow = Pick<
   Window,
   'id' | 'title' | 'startsAt' | 'endsAt' | 'status' | 'conflictCount' | 'touchesCritical' | 'elements' | 'workType'
-> & { owner?: Window['owner'] };
+> & {
+  owner?: Window['owner'];
+  /** a tenant's view: the line shown instead of the elements, and the stage shown instead of the state */
+  detail?: string;
+  statusLabel?: string;
+};
 
 export type CalendarFreeze = Pick<Freeze, 'id' | 'title' | 'startsAt' | 'endsAt'>;
 

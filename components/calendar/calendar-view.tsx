@@ -23,6 +23,8 @@ export type CalendarViewProps = {
   /** a later load failed; the data shown may be stale */
   refreshError?: string;
   canBook: boolean;
+  /** false for a tenant user: its list is its notified work, which the staff filters do not apply to */
+  showFilters?: boolean;
   onBook: () => void;
   onOpenWindow: (id: string) => void;
 };
@@ -60,7 +62,9 @@ export function CalendarView(props: CalendarViewProps) {
   );
   const side = (
     <>
-      <CalendarFilters filters={state.filters} onChange={state.setFilters} tenants={props.tenants} initiallyOpen={false} />
+      {props.showFilters === false ? null : (
+        <CalendarFilters filters={state.filters} onChange={state.setFilters} tenants={props.tenants} initiallyOpen={false} />
+      )}
       {refreshError ? (
         <Text style={styles.stale} role="alert" testID="calendar-refresh-error">
           Could not load this month: {refreshError}

@@ -14,7 +14,7 @@ const FIGURES: readonly { key: FigureKey; label: string; hint: string }[] = [
   { key: 'windowsNext30Days', label: 'Windows', hint: 'in the next 30 days' },
 ];
 
-export function FigureTiles({ overview, columns }: { overview: Overview; columns: number }) {
+export function FigureTiles({ overview, columns }: { overview: Pick<Overview, FigureKey>; columns: number }) {
   const basis = `${100 / columns}%` as const;
   return (
     <View style={styles.grid}>

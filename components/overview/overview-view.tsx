@@ -1,16 +1,19 @@
 // The overview screen's data view: figure tiles above the list of coming windows, in a readable column.
 import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
-import type { Overview } from '@/shared/api';
+import { isTenantOverview, type AnyOverview } from '@/shared/tenant-windows';
 import { FigureTiles } from '@/components/overview/figure-tiles';
 import { NextWindows } from '@/components/overview/next-windows';
+import { NextWork } from '@/components/overview/next-work';
 import { colors, CONTENT_MAX_WIDTH_PX, space, type } from '@/constants/theme';
 
 /** True when there is nothing to summarise yet (no network loaded); the screen then shows its empty state. */
-export function isOverviewEmpty(overview: Overview): boolean {
-  return overview.sites === 0 && overview.slices === 0 && overview.nextWindows.length === 0;
+export function isOverviewEmpty(overview: AnyOverview): boolean {
+  const upcoming = isTenantOverview(overview) ? overview.nextWork : overview.nextWindows;
+  return overview.sites === 0 && overview.slices === 0 && upcoming.length === 0;
 }
 
-export function OverviewView({ overview }: { overview: Overview }) {
+/** A tenant user's overview lists its notified work, each row opening the notice (`onOpenNotice`). */
+export function OverviewView({ overview, onOpenNotice }: { overview: AnyOverview; onOpenNotice: (noticeId: string) => void }) {
   const { width } = useWindowDimensions();
   const columns = width >= 1100 ? 3 : 2;
   return (
@@ -20,7 +23,9 @@ export function OverviewView({ overview }: { overview: Overview }) {
           Overview
         </Text>
         <FigureTiles overview={overview} columns={columns} />
-        <NextWindows windows={overview.nextWindows} />
+        {isTenantOverview(overview)
+          ? <NextWork work={overview.nextWork} onOpenNotice={onOpenNotice} />
+          : <NextWindows windows={overview.nextWindows} />}
       </View>
     </ScrollView>
   );

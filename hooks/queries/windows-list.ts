@@ -35,10 +35,12 @@ export function windowListPath(params: WindowListParams): string {
   return `/api/windows?${query.toString()}`;
 }
 
-export function useWindowsListQuery(params: WindowListParams) {
+/** `enabled` is false for tenant users, whose list holds tenant views (hooks/queries/tenant-windows.ts). */
+export function useWindowsListQuery(params: WindowListParams, enabled = true) {
   return useQuery({
     queryKey: windowsListKey(params),
     queryFn: () => apiFetch(windowListPath(params), windowListSchema),
+    enabled,
     // Keep last month's bars on screen while the next month loads, instead of flashing a spinner.
     placeholderData: keepPreviousData,
   });

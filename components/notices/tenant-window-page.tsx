@@ -1,0 +1,47 @@
+// What a tenant user sees on an internal window address (/windows/...): the work in its notice's words with a
+// way to the notice, or a clear "not available" when it was not notified of that window. The internal window
+// pages never render for tenants (app/(main)/_layout.tsx).
+import { StyleSheet, Text, View } from 'react-native';
+import { useTenantWindowQuery } from '@/hooks/queries/tenant-windows';
+import { Button } from '@/components/button';
+import { EmptyState, LoadingState } from '@/components/screen-states';
+import { colors, space, type } from '@/constants/theme';
+
+/** The window id in `/windows/<id>/...`, or null for `/windows/new` and other addresses. */
+export function windowIdFromPath(pathname: string): string | null {
+  const match = /^\/windows\/([^/]+)/.exec(pathname);
+  if (!match || match[1] === 'new') return null;
+  return decodeURIComponent(match[1]);
+}
+
+const NOT_AVAILABLE = {
+  title: 'This page is not available to tenants',
+  hint: 'Planned work on your slices is under Notices once we have sent you its notice.',
+};
+
+export function TenantWindowPage({ pathname, onOpenNotice }: { pathname: string; onOpenNotice: (noticeId: string) => void }) {
+  const id = windowIdFromPath(pathname);
+  if (id === null) return <EmptyState {...NOT_AVAILABLE} />;
+  return <TenantWindowSummary id={id} onOpenNotice={onOpenNotice} />;
+}
+
+function TenantWindowSummary({ id, onOpenNotice }: { id: string; onOpenNotice: (noticeId: string) => void }) {
+  const view = useTenantWindowQuery(id);
+  if (view.isError) return <EmptyState {...NOT_AVAILABLE} />;
+  if (!view.data) return <LoadingState label="Loading the planned work…" />;
+  const work = view.data;
+  return (
+    <View style={styles.page} testID="tenant-window">
+      <Text style={styles.title} role="heading" aria-level={1}>{work.summary}</Text>
+      <Text style={styles.body}>{work.whenLocal}</Text>
+      <Text style={styles.body}>{work.effectText}</Text>
+      <Button label="Open the notice" onPress={() => onOpenNotice(work.noticeId)} testID="tenant-window-open-notice" />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  page: { padding: space.lg, gap: space.md, maxWidth: 640 },
+  title: { ...type.title, color: colors.ink },
+  body: { ...type.body, color: colors.ink },
+});
