@@ -191,5 +191,7 @@ export const planListResponseSchema = z.object({ plans: z.array(planListItemSche
 /** Accepting: every slice the plan leaves unresolved must be listed, so the outage is a conscious choice. */
 export const planAcceptSchema = z.object({
   outageAccepted: z.array(id).max(10_000).default([]),
+  /** the window's accepted plan this one replaces: without it, accepting while another plan is accepted is refused */
+  replacesPlanId: id.optional(),
 }).strict();
 export type PlanAccept = z.infer<typeof planAcceptSchema>;

@@ -8,10 +8,14 @@ import { lockForTransaction } from '../../queries/locks/advisory-locks';
 import { markPlanAccepted, selectPlanRow } from '../../queries/plans/plan-rows';
 import { setWindowStatus } from '../windows/set-window-status';
 import { checkOutageAccepted, checkStillFits } from './accept-checks';
-import { PlanNotAcceptableError, PlanNotFoundError, WindowNotPlannableError } from './errors';
+import { PlanAlreadyAcceptedError, PlanNotAcceptableError, PlanNotFoundError, WindowNotPlannableError } from './errors';
 import { isStale, loadWindowFacts } from './plan-view';
 
 /**
+ * Accepting the window's accepted plan again (a retry, a double click) changes nothing and answers as the first
+ * did; accepting another run of a `planned` window must name the accepted plan it replaces (`replacesPlanId`), so
+ * two people (or two requests) accepting different runs at once cannot silently overwrite each other. A
+ * `returned` window's plan was sent back, so a new run replaces it without naming it.
  * WARNING: accepts are serialised. Each verifies against the capacity other accepted plans hold; two accepts
  * of overlapping windows checked side by side could each fit alone and double-book together.
  */
@@ -29,6 +33,11 @@ export async function acceptPlan(deps: { db: Db; now: Date }, planId: string, bo
       throw new PlanNotAcceptableError('PLAN_STALE', 'The window was edited or re-assessed after this run; run the plan again.');
     }
     if (!PLANNABLE_STATES.includes(w.status)) throw new WindowNotPlannableError(w.status);
+    // Checked under the window's row lock, so of parallel accepts of one window's runs only the first wins.
+    if (w.status === 'planned' && w.acceptedPlanId === planId) return;
+    if (w.status === 'planned' && w.acceptedPlanId !== null && body.replacesPlanId !== w.acceptedPlanId) {
+      throw new PlanAlreadyAcceptedError(w.acceptedPlanId);
+    }
     const review = planReviewSchema.parse(row.result);
     const outageAccepted = checkOutageAccepted(review, body.outageAccepted);
     const reservedFor = await checkStillFits({ tx, pool: db }, row.windowId, review);

@@ -37,6 +37,11 @@ export class PlanNotAcceptableError extends AppError {
   }
 }
 
+/** Another run is the window's accepted plan and the request did not name it as the one it replaces. */
+export class PlanAlreadyAcceptedError extends domainError('PLAN_ALREADY_ACCEPTED', 409,
+  (acceptedPlanId: string) => `Another plan (${acceptedPlanId}) is already accepted for this window; `
+    + `to replace it, accept again with replacesPlanId set to ${acceptedPlanId}.`) {}
+
 /** Every slice a plan leaves unresolved must be named in outageAccepted (and nothing else). */
 export class OutageNotAcceptedError extends AppError {
   readonly code = 'OUTAGE_NOT_ACCEPTED';
