@@ -13,7 +13,13 @@ export function singleFileUpload(maxBytes: number): RequestHandler {
   }).single('file');
   return (req, res, next) => {
     handle(req, res, (err: unknown) => {
-      if (!err) return next();
+      if (!err) {
+        // PostgreSQL text cannot hold NUL, and no file system names a file with one.
+        if (req.file?.originalname.includes('\0')) {
+          return next(new ImportFileError('BAD_FILE_NAME', 'The file name contains a NUL character; rename the file and upload it again.'));
+        }
+        return next();
+      }
       if (err instanceof multer.MulterError) {
         if (err.code === 'LIMIT_FILE_SIZE') return next(new FileTooLargeError(maxBytes));
         return next(new ImportFileError('BAD_UPLOAD', `Upload refused (${err.message}); send one file in the multipart field "file".`));

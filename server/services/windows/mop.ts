@@ -3,7 +3,7 @@ import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { getWindowDocument, upsertWindowDocument } from '../../queries/windows/documents';
-import { MopMissingError, MopTypeError } from './errors';
+import { MopFileNameError, MopMissingError, MopTypeError } from './errors';
 
 export const MOP_MAX_BYTES = 10 * 1024 * 1024;
 const PDF_MAGIC = Buffer.from('%PDF-');
@@ -30,6 +30,8 @@ export async function storeMop(
   db: Db, windowId: string, file: UploadedFile | undefined, user: Me, now: Date,
 ): Promise<void> {
   if (!file) throw new MopMissingError();
+  // PostgreSQL text cannot hold NUL, and no file system names a file with one: refused, not silently changed.
+  if (file.originalname.includes('\0')) throw new MopFileNameError();
   const mime = sniffMopType(file);
   const fileName = file.originalname.replace(/[\\/\r\n]/g, '_').slice(0, 200) || 'mop';
   await db.transaction(async (tx) => {
