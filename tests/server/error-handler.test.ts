@@ -16,7 +16,7 @@ function appThrowing(err: unknown, logged: string[]) {
 }
 
 /** Shaped like drizzle-orm's DrizzleQueryError wrapping a pg DatabaseError. */
-function queryError(cause: Record<string, unknown>): Error {
+function queryError(cause: object): Error {
   const err = new Error('Failed query: insert into "windows" ("title") values ($1)\nparams: secret-title');
   err.name = 'DrizzleQueryError';
   Object.assign(err, { query: 'insert into "windows" ("title") values ($1)', params: ['secret-title'], cause });

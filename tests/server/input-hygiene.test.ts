@@ -73,7 +73,7 @@ test.each([
 describe('bodies the parser cannot read', () => {
   const post = async (encoding: string | null, data: Buffer | string, type = 'application/json') => {
     // serialize: send the bytes as given (superagent would JSON-encode a Buffer under a JSON type).
-    const req = (await as('planner'))('post', '/api/windows').set('Content-Type', type).serialize((bytes: unknown) => bytes);
+    const req = (await as('planner'))('post', '/api/windows').set('Content-Type', type).serialize((bytes: string) => bytes);
     return (encoding ? req.set('Content-Encoding', encoding) : req).send(data);
   };
   const json = JSON.stringify(windowBody({ title: 'Zipped' }));
