@@ -1,6 +1,8 @@
 // Booking a new window: sends the form, then the MOP if one was chosen, and hands the new window's id on.
+import { useRef } from 'react';
 import type { Me } from '@/shared/api';
 import { canBookInsideFreeze } from '@/shared/permissions';
+import { newIdempotencyKey } from '@/hooks/idempotency-key';
 import { useBookingPolicies, useWindowCreateMutation, useWindowMopUploadMutation } from '@/hooks/queries/windows';
 import { WindowForm, type WindowSubmission } from '@/components/windows/window-form';
 import { EMPTY_FORM } from '@/components/windows/window-form-state';
@@ -13,11 +15,15 @@ export function BookWindow({ me, timeZone, onSaved, onCancel }: Props) {
   const policy = useBookingPolicies();
   const create = useWindowCreateMutation();
   const upload = useWindowMopUploadMutation();
+  // One key per opened form, kept across retries of its submit (a refused booking leaves it unused on the
+  // server), so a double click or a retry after a lost answer books one window; a new one after a success.
+  const idempotencyKey = useRef(newIdempotencyKey());
 
   const save = async ({ output, freezeOverrideReason, mop }: WindowSubmission) => {
     let saved;
     try {
-      saved = await create.mutateAsync({ ...output, freezeOverrideReason });
+      saved = await create.mutateAsync({ input: { ...output, freezeOverrideReason }, idempotencyKey: idempotencyKey.current });
+      idempotencyKey.current = newIdempotencyKey();
     } catch {
       return; // The form shows create.error beside its fields; every input stays.
     }

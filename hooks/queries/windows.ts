@@ -52,7 +52,9 @@ function invalidateWindowViews(queryClient: QueryClient) {
 export function useWindowCreateMutation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: WindowCreate) => apiFetch('/api/windows', windowMutationSchema, jsonBody('POST', input)),
+    // The key makes a retried or doubled submit of one booking book one window (the server answers with it again).
+    mutationFn: ({ input, idempotencyKey }: { input: WindowCreate; idempotencyKey: string }) =>
+      apiFetch('/api/windows', windowMutationSchema, { ...jsonBody('POST', input), headers: { 'Idempotency-Key': idempotencyKey } }),
     onSuccess: ({ window }) => {
       queryClient.setQueryData(windowKey(window.id), window);
       invalidateWindowViews(queryClient);

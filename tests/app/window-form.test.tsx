@@ -87,7 +87,7 @@ test('a valid booking posts local times as ISO with the zone offset and hands th
 test('a freeze refusal keeps the input; an admin must give a reason, which is then sent', async () => {
   const freeze = { status: 409, body: { error: { code: 'FREEZE_CONFLICT', message: 'The window falls inside the freeze "Harbour festival".' } } };
   const booked = { status: 201, body: { window: windowFixture({ id: 'w-2' }), reverted: false, conflictCount: 0 } };
-  const { calls } = routedFetch([
+  const { calls, fetchMock } = routedFetch([
     { method: 'GET', path: /^\/api\/sites\?/, reply: () => ({ status: 200, body: siteList }) },
     { method: 'POST', path: /^\/api\/windows$/, reply: (init) => (JSON.parse(String(init?.body)).freezeOverrideReason ? booked : freeze) },
   ]);
@@ -112,6 +112,12 @@ test('a freeze refusal keeps the input; an admin must give a reason, which is th
   expect(calls.filter((c) => c.method === 'POST')[1].body).toMatchObject({
     freezeOverrideReason: 'Batteries failed their test; the site would drop at the next outage.',
   });
+  // Both submits of this one form carry the same key: the refused one booked nothing, so the key is still free.
+  const keys = fetchMock.mock.calls.filter(([, init]) => init?.method === 'POST')
+    .map(([, init]) => (init?.headers as Record<string, string>)['Idempotency-Key']);
+  expect(keys).toHaveLength(2);
+  expect(keys[0]).toMatch(/^[0-9a-zA-Z-]{16,}$/);
+  expect(keys[1]).toBe(keys[0]);
 });
 
 test('a server validation error is shown beside its field', async () => {
