@@ -1,28 +1,18 @@
-// Security: set up (or remove) one-time codes for confirming sign-off decisions.
-import { useOtpConfirmMutation, useOtpEnrolMutation, useOtpRemoveMutation, useOtpStatusQuery } from '@/hooks/queries/signoff';
+// Security: one-time codes for sign-off decisions (operators), and where you are signed in, with sign out everywhere.
+import { useRouter } from 'expo-router';
+import { useMeQuery } from '@/hooks/queries/me';
 import { PageColumn } from '@/components/page-column';
-import { ErrorState, LoadingState } from '@/components/screen-states';
-import { OtpEnrolmentView } from '@/components/signoff/otp-enrolment';
+import { OtpSection } from '@/components/security/otp-section';
+import { SessionsPanel } from '@/components/security/sessions-panel';
+import { isOperator } from '@/shared/permissions';
 
 export default function SecurityScreen() {
-  const status = useOtpStatusQuery();
-  const enrol = useOtpEnrolMutation();
-  const confirm = useOtpConfirmMutation();
-  const remove = useOtpRemoveMutation();
-  if (status.isError) return <ErrorState message={status.error.message} onRetry={() => void status.refetch()} />;
-  if (!status.data) return <LoadingState label="Loading your one-time codes…" />;
-  const error = enrol.error ?? confirm.error ?? remove.error;
+  const router = useRouter();
+  const me = useMeQuery();
   return (
     <PageColumn narrow>
-      <OtpEnrolmentView
-        status={status.data}
-        enrolment={status.data.enrolled ? null : enrol.data ?? null}
-        starting={enrol.isPending} confirming={confirm.isPending} removing={remove.isPending}
-        error={error?.message ?? null}
-        onStart={() => enrol.mutate()}
-        onConfirm={(code) => confirm.mutate(code)}
-        onRemove={(code) => remove.mutate(code, { onSuccess: () => enrol.reset() })}
-      />
+      {me.data && isOperator(me.data.roles) ? <OtpSection /> : null}
+      <SessionsPanel onSignedOutEverywhere={() => router.replace('/sign-in')} />
     </PageColumn>
   );
 }
