@@ -11,16 +11,25 @@ import { verifyPlan } from '../../../planner/verify/verify-plan';
 import { islandSizes } from '../../../planner/workers/islands';
 import { createParallelRunner } from '../../../planner/workers/parallel-runner';
 
-jest.setTimeout(60_000);
+// Four searches in worker threads per test: on two shared cores under load a test can take over a minute. The
+// bound is a safety net only; nothing here measures speed.
+jest.setTimeout(240_000);
 
 const scenario = buildScenario({ sites: 24, slices: 120, seed: 21 });
 const inv = buildInventory(scenario);
 // the window with the most affected slices, so the search has something to do
 const window = compileWindow(scenario.windows![0]);
-const runner = createParallelRunner();
-const de = { generations: 12, stallGenerations: 1000, timeLimitMs: 60_000, population: 16, workers: 2, scenario, parallel: runner };
-
-afterAll(() => runner.close());
+// Each test has its own pool, so a test that fails mid-run cannot leave the next one a busy runner.
+let runner: ReturnType<typeof createParallelRunner>;
+let de: { generations: number; stallGenerations: number; timeLimitMs: number; population: number; workers: number;
+  scenario: typeof scenario; parallel: typeof runner };
+beforeEach(() => {
+  runner = createParallelRunner();
+  // Runs end on their generation and evaluation budgets, never on the time limit (which would make the same seed
+  // give different plans on a busy machine): the limit is far above any run's length.
+  de = { generations: 12, stallGenerations: 1000, timeLimitMs: 600_000, population: 16, workers: 2, scenario, parallel: runner };
+});
+afterEach(() => runner.close());
 
 describe('parallel runner', () => {
   it('shared-eval follows the serial run exactly for the same seed', async () => {
