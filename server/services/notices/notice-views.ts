@@ -6,9 +6,7 @@ import { getUsersByIds } from '../../queries/auth/users';
 import {
   selectNotice, selectSentNoticesOfOpenWindows, selectWindowNoticesWithTenant, type NoticeRow,
 } from '../../queries/notices/notice-rows';
-import { selectWindowRows } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
-import { summaryOf } from './compose-notice';
 import { NoticeNotFoundError } from './errors';
 import { loadTenants } from './notice-inputs';
 
@@ -54,28 +52,22 @@ export async function windowNoticeRows(db: Queryable, windowId: string): Promise
   }));
 }
 
-/** Upcoming work on the tenant's slices (not yet over), each with the notice the tenant was sent, if any. */
+/**
+ * Upcoming work on the tenant's slices that it was notified of (not yet over), each with its notice. Work without a
+ * notice that went out to the tenant (none issued yet, or held back for lead time) is not listed: tenants learn of
+ * work from its notice. A withdrawn window stays (its cancellation is news), and so does one that moves a slice of
+ * the tenant's only to make room (a knock-on move).
+ */
 export async function portalWork(db: Queryable, tenantId: string, now: Date): Promise<PortalWork> {
-  const touching = await selectWindowRows(db, { from: now, scopeTenant: tenantId });
   const sent = await selectSentNoticesOfOpenWindows(db, tenantId, now);
   const byWindow = new Map((await noticesWithAckNames(db, sent.map((r) => r.notices))).map((n) => [n.windowId, n]));
-  const items = new Map<string, PortalWork['items'][number]>();
-  for (const w of touching) {
-    items.set(w.id, {
-      windowId: w.id, summary: summaryOf(w.workType), startsAt: w.startsAt.toISOString(), endsAt: w.endsAt.toISOString(),
-      critical: !!w.touchesCritical, notice: byWindow.get(w.id) ?? null,
-    });
-  }
-  // Windows the touching list misses whose notice still concerns the tenant: a withdrawn one (its cancellation is
-  // news), or one that moves a slice of the tenant's only to make room (a knock-on move; impact does not list it).
-  for (const { windows: w } of sent) {
-    if (items.has(w.id)) continue;
+  const items = sent.map(({ windows: w }) => {
     const notice = byWindow.get(w.id)!;
-    items.set(w.id, {
-      windowId: w.id, summary: summaryOf(w.workType), startsAt: w.startsAt.toISOString(), endsAt: w.endsAt.toISOString(),
+    return {
+      windowId: w.id, summary: notice.content.summary, startsAt: notice.content.startsAt, endsAt: notice.content.endsAt,
       critical: notice.content.slices.some((s) => s.critical), notice,
-    });
-  }
-  const list = [...items.values()].sort((a, b) => a.startsAt.localeCompare(b.startsAt) || a.windowId.localeCompare(b.windowId));
+    };
+  });
+  const list = items.sort((a, b) => a.startsAt.localeCompare(b.startsAt) || a.windowId.localeCompare(b.windowId));
   return { timeZone: DEFAULT_TENANT_TIME_ZONE, items: list };
 }

@@ -52,7 +52,7 @@ export async function setupTenantViews(): Promise<TenantViewsContext> {
   }
   await issue(notified);
   await issue(blocked);
-  const tenantless = { id: `${ctx.prefix}-tenantless`, email: `tenantless.${ctx.prefix}@test.example` };
+  const tenantless = { id: `${ctx.prefix}-nobody`, email: `nobody.${ctx.prefix}@test.example` };
   await insertUser(ctx.db, { ...tenantless, name: 'Tenantless user', tenantId: null, roles: ['tenant'] });
   const emails: Record<TenantWho, string> = {
     tenant: ctx.users.tenant.email, otherTenant: ctx.otherTenantUser.email, tenantless: tenantless.email,
