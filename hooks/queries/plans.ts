@@ -4,6 +4,8 @@ import {
   planListResponseSchema, planResponseSchema, type PlanAccept, type PlanRunStatus, type PlanSettingsInput,
 } from '@/shared/plans';
 import { apiFetch, jsonBody } from '@/hooks/api-fetch';
+
+type PlanListResponse = ReturnType<typeof planListResponseSchema.parse>;
 import { overviewKey } from '@/hooks/queries/overview';
 import { windowKey } from '@/hooks/queries/windows';
 
@@ -77,12 +79,22 @@ export function usePlanCancelMutation(windowId: string) {
   });
 }
 
-/** Accepts a run as the window's plan; the server verifies it again and may refuse with the reason. */
+/**
+ * Accepts a run as the window's plan; the server verifies it again and may refuse with the reason. Accepting
+ * another run than the accepted one names the accepted run as listed on screen (`replacesPlanId`): if someone
+ * accepted a different run meanwhile, the server refuses (PLAN_ALREADY_ACCEPTED) and the refreshed list shows it.
+ */
 export function usePlanAcceptMutation(windowId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ planId, body }: { planId: string; body: PlanAccept }) =>
-      apiFetch(`${planPath(planId)}/accept`, planResponseSchema, jsonBody('POST', body)),
+    mutationFn: ({ planId, body }: { planId: string; body: PlanAccept }) => {
+      const listed = queryClient.getQueryData<PlanListResponse>(windowPlansKey(windowId))?.plans;
+      const replacesPlanId = listed?.find((p) => p.accepted && p.id !== planId)?.id;
+      const sent: PlanAccept = replacesPlanId ? { ...body, replacesPlanId } : body;
+      return apiFetch(`${planPath(planId)}/accept`, planResponseSchema, jsonBody('POST', sent));
+    },
     onSuccess: (_reply, { planId }) => invalidatePlanViews(queryClient, windowId, planId),
+    // A refusal may mean the window's accepted run changed: the list shows the current one again.
+    onError: () => void queryClient.invalidateQueries({ queryKey: windowPlansKey(windowId) }),
   });
 }
