@@ -6,6 +6,7 @@ import { planReviewSchema, type PlanAccept } from '../../../shared/plans';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { lockForTransaction } from '../../queries/locks/advisory-locks';
 import { markPlanAccepted, selectPlanRow } from '../../queries/plans/plan-rows';
+import { oneAtATime } from '../one-at-a-time';
 import { setWindowStatus } from '../windows/set-window-status';
 import { checkOutageAccepted, checkStillFits } from './accept-checks';
 import { PlanAlreadyAcceptedError, PlanNotAcceptableError, PlanNotFoundError, WindowNotPlannableError } from './errors';
@@ -20,10 +21,16 @@ import { isStale, loadWindowFacts } from './plan-view';
  * of overlapping windows checked side by side could each fit alone and double-book together.
  */
 const ACCEPT_LOCK_KEY = 6_170_331;
+/**
+ * WARNING: one accept at a time per process, before a connection is taken. The check reads the inventory
+ * through a second pool connection while its transaction waits on or holds the lock; with as many parallel
+ * accepts as pool connections, all would wait on the lock and the holder would never get its second connection.
+ */
+const queued = oneAtATime();
 
 export async function acceptPlan(deps: { db: Db; now: Date }, planId: string, body: PlanAccept, user: Me): Promise<void> {
   const { db, now } = deps;
-  await db.transaction(async (tx) => {
+  await queued(() => db.transaction(async (tx) => {
     await lockForTransaction(tx, ACCEPT_LOCK_KEY);
     const row = await selectPlanRow(tx, planId, { forUpdate: true });
     if (!row) throw new PlanNotFoundError(planId);
@@ -50,5 +57,5 @@ export async function acceptPlan(deps: { db: Db; now: Date }, planId: string, bo
       actorId: user.id, action: 'plan.accept', entity: 'plan', entityId: planId, at: now,
       before: { accepted: false, previousPlanId: w.acceptedPlanId }, after: { accepted: true, outageAccepted, reservedFor },
     });
-  });
+  }));
 }
