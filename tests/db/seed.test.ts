@@ -109,9 +109,15 @@ test('an invalid scenario is refused with its errors and writes nothing', async 
 });
 
 test('a failure late in the transaction rolls back everything written before it', async () => {
-  const s = smallScenario();
-  // PostgreSQL text cannot hold NUL; the validator allows it, so the insert of windows (last) fails.
-  s.windows![1].title = 'Power\u0000work';
-  await expect(seedDemo(t.db, s, { now: NOW })).rejects.toThrow(/insert into "windows"/);
-  expect(await countSeededRows(t.db)).toEqual(await zeroCounts());
+  // Windows are inserted last; a trigger on this file's scratch database makes that insert fail, so every earlier
+  // insert of the transaction has already been written when the failure comes.
+  await t.pool.query(`create or replace function fail_window_insert() returns trigger language plpgsql as $$
+    begin raise exception 'window insert refused for the test'; end $$`);
+  await t.pool.query('create trigger fail_window_insert before insert on windows for each row execute function fail_window_insert()');
+  try {
+    await expect(seedDemo(t.db, smallScenario(), { now: NOW })).rejects.toThrow(/insert into "windows"/);
+    expect(await countSeededRows(t.db)).toEqual(await zeroCounts());
+  } finally {
+    await t.pool.query('drop trigger fail_window_insert on windows');
+  }
 });
