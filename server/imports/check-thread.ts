@@ -14,6 +14,9 @@ export type CheckLimits = { timeoutMs: number; maxOldGenerationSizeMb: number; t
 /** WARNING: a legitimate 5 MB GraphML reads in about 3 s on one core; lower the budget and it is refused. */
 export const CHECK_LIMITS: CheckLimits = { timeoutMs: 4000, maxOldGenerationSizeMb: 256, threads: 2, idleMs: 10_000 };
 
+/** A reply the thread sent (as opposed to an error raised about the thread). */
+const isReply = (r: unknown): r is CheckReply => typeof r === 'object' && r !== null && 'ok' in r && 'id' in r;
+
 /** A domain error again from what crossed the thread boundary; anything else is a plain (500) error. */
 function rebuild(error: Extract<CheckReply, { ok: false }>['error']): Error {
   if (error.code && error.status === 400) return new ImportFileError(error.code, error.message);
@@ -73,7 +76,9 @@ class CheckThread {
         this.settle = null;
         clearTimeout(timer);
         if (reply instanceof AppError) return reject(reply);
-        if (reply instanceof Error) {
+        // Told apart by shape, not instanceof: Node's own worker errors (out of memory, a crash) come from its core
+        // realm, which is not the realm of this module under jest's VM.
+        if (!isReply(reply)) {
           const oom = (reply as { code?: string }).code === 'ERR_WORKER_OUT_OF_MEMORY';
           return reject(oom ? new ImportTooComplexError('IMPORT_FILE_TOO_COMPLEX',
             `"${input.fileName}" needs more than ${this.limits.maxOldGenerationSizeMb} MB of memory to read and was refused.`) : reply);
