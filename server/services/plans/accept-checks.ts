@@ -43,18 +43,19 @@ export function changedSlices(scenario: Scenario, slices: PlanSlice[]): string[]
 
 /**
  * Throws NETWORK_CHANGED or PLAN_NO_LONGER_FITS with the reason; returns the windows whose plans were reserved.
- * The inventory is read through `pool`: its tables are read in parallel, which one transaction's connection
- * cannot do; under READ COMMITTED that sees the same committed rows the transaction would.
+ * WARNING: everything is read through the accept's own transaction. A second pool connection taken while the
+ * transaction holds the accept lock and the window's row lock can wait forever once other requests of the process
+ * hold every pool connection while waiting on those same locks.
  */
-export async function checkStillFits(db: { tx: Queryable; pool: Queryable }, windowId: string, review: PlanReview): Promise<string[]> {
-  const { scenario, inventory } = await loadInventory(db.pool);
+export async function checkStillFits(tx: Queryable, windowId: string, review: PlanReview): Promise<string[]> {
+  const { scenario, inventory } = await loadInventory(tx);
   const changed = changedSlices(scenario, review.slices);
   if (changed.length > 0) {
     throw new PlanNotAcceptableError('NETWORK_CHANGED',
       `The placements of these slices changed after the run: ${changed.join(', ')}. Run the plan again.`);
   }
-  const spec = windowSpecOf(await loadWindow(db.tx, windowId, null));
-  const { reservations, reservedFor } = await reservationsFor(db.tx, windowId, inventory);
+  const spec = windowSpecOf(await loadWindow(tx, windowId, null));
+  const { reservations, reservedFor } = await reservationsFor(tx, windowId, inventory);
   const verdict = verifyPlan(inventory, spec, { affected: review.affected, slices: review.slices.map(toSlicePlan) }, reservations);
   if (!verdict.ok) {
     const listed = verdict.violations.slice(0, LISTED_VIOLATIONS).map((v) => (v.slice ? `${v.slice}: ${v.message}` : v.message));

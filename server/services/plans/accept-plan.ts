@@ -6,7 +6,6 @@ import { planReviewSchema, type PlanAccept } from '../../../shared/plans';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { lockForTransaction } from '../../queries/locks/advisory-locks';
 import { markPlanAccepted, selectPlanRow } from '../../queries/plans/plan-rows';
-import { oneAtATime } from '../one-at-a-time';
 import { setWindowStatus } from '../windows/set-window-status';
 import { checkOutageAccepted, checkStillFits } from './accept-checks';
 import { PlanAlreadyAcceptedError, PlanNotAcceptableError, PlanNotFoundError, WindowNotPlannableError } from './errors';
@@ -21,16 +20,10 @@ import { isStale, loadWindowFacts } from './plan-view';
  * of overlapping windows checked side by side could each fit alone and double-book together.
  */
 const ACCEPT_LOCK_KEY = 6_170_331;
-/**
- * WARNING: one accept at a time per process, before a connection is taken. The check reads the inventory
- * through a second pool connection while its transaction waits on or holds the lock; with as many parallel
- * accepts as pool connections, all would wait on the lock and the holder would never get its second connection.
- */
-const queued = oneAtATime();
 
 export async function acceptPlan(deps: { db: Db; now: Date }, planId: string, body: PlanAccept, user: Me): Promise<void> {
   const { db, now } = deps;
-  await queued(() => db.transaction(async (tx) => {
+  await db.transaction(async (tx) => {
     await lockForTransaction(tx, ACCEPT_LOCK_KEY);
     const row = await selectPlanRow(tx, planId, { forUpdate: true });
     if (!row) throw new PlanNotFoundError(planId);
@@ -47,7 +40,7 @@ export async function acceptPlan(deps: { db: Db; now: Date }, planId: string, bo
     }
     const review = planReviewSchema.parse(row.result);
     const outageAccepted = checkOutageAccepted(review, body.outageAccepted);
-    const reservedFor = await checkStillFits({ tx, pool: db }, row.windowId, review);
+    const reservedFor = await checkStillFits(tx, row.windowId, review);
     await markPlanAccepted(tx, planId, { userId: user.id, outageAccepted, now });
     await setWindowStatus(tx, {
       windowId: row.windowId, from: PLANNABLE_STATES, to: 'planned', actorId: user.id, action: 'plan.accept', now,
@@ -57,5 +50,5 @@ export async function acceptPlan(deps: { db: Db; now: Date }, planId: string, bo
       actorId: user.id, action: 'plan.accept', entity: 'plan', entityId: planId, at: now,
       before: { accepted: false, previousPlanId: w.acceptedPlanId }, after: { accepted: true, outageAccepted, reservedFor },
     });
-  }));
+  });
 }
