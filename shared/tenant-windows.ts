@@ -2,7 +2,7 @@
 // notice (no window title, owner, element ids, notes, MOP or freeze-override reason), from the time it was notified.
 import { z } from 'zod';
 import { overviewSchema } from './api';
-import { noticeEffectSchema } from './notices';
+import { noticeEffectSchema, noticeSliceSchema } from './notices';
 
 /** Where the work stands, in the tenant's terms (the operator's internal states are not shown). */
 export const TENANT_WORK_STAGES = ['planned', 'underway', 'finished', 'cancelled'] as const;
@@ -10,14 +10,7 @@ export const tenantWorkStageSchema = z.enum(TENANT_WORK_STAGES);
 export type TenantWorkStage = z.infer<typeof tenantWorkStageSchema>;
 
 /** One of the tenant's own slices, by its name, and what the work does to it. */
-export const tenantWorkSliceSchema = z.object({
-  name: z.string(),
-  critical: z.boolean(),
-  outcome: z.enum(['stays', 'reroute', 'move', 'unresolved']),
-  changes: z.array(z.string()),
-  effect: noticeEffectSchema,
-  effectText: z.string(),
-}).strict();
+export const tenantWorkSliceSchema = noticeSliceSchema.omit({ slice: true }).strict();
 
 /** GET /api/windows/:id (and each entry of GET /api/windows) for a tenant user. */
 export const tenantWindowViewSchema = z.object({
