@@ -29,6 +29,3 @@ export class BadOriginError extends domainError('BAD_ORIGIN', 403, () => 'Cross-
 
 export class RouteNotFoundError extends domainError('ROUTE_NOT_FOUND', 404,
   (method: string, path: string) => `No API route for ${method} ${path}.`) {}
-
-export class RateLimitedError extends domainError('RATE_LIMITED', 429,
-  () => 'Too many sign-in attempts. Wait a few minutes and try again.') {}

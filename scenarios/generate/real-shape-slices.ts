@@ -5,7 +5,7 @@ import type { ScenarioFunction, ScenarioSlice, ScenarioTie } from '../../shared/
 import type { NetworkModel } from '../../planner/model/types';
 import { shortestLatencyPath } from '../../planner/paths/shortest-path';
 import { randomInt, type Rng } from '../../planner/random/rng';
-import { neighbourhood, placementOf, round, tieEnds, type LoadedSlices } from './slice-loader';
+import { collectSlices, neighbourhood, round, tieEnds, type LoadedSlices } from './slice-loader';
 
 export interface RealShapeSliceOptions {
   count: number;
@@ -106,13 +106,5 @@ function makeSlice(index: number, net: NetworkModel, rng: Rng, o: Options) {
 /** `count` slices placed on `net`; deterministic for the rng's seed. */
 export function loadRealShapeSlices(net: NetworkModel, rng: Rng, options: RealShapeSliceOptions): LoadedSlices {
   const o: Options = { ...REAL_SHAPE_SLICE_DEFAULTS, ...options };
-  const out: LoadedSlices = { slices: [], placements: [], pathSpans: [], functionSites: [] };
-  for (let i = 0; i < o.count; i += 1) {
-    const { slice, sites, paths } = makeSlice(i, net, rng, o);
-    out.slices.push(slice);
-    out.functionSites.push(sites);
-    out.pathSpans.push(paths);
-  }
-  for (let i = 0; i < out.slices.length; i += 1) out.placements.push(placementOf(net, out, i));
-  return out;
+  return collectSlices(net, o.count, (i) => makeSlice(i, net, rng, o));
 }

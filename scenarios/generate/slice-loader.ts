@@ -110,17 +110,24 @@ function makeSlice(index: number, net: NetworkModel, rng: Rng, opts: SliceLoader
   return { slice, sites, paths };
 }
 
-/** Slices with placements on `net` (routed on the shortest-latency path); demands are rescaled later. */
-export function loadSlices(net: NetworkModel, rng: Rng, opts: SliceLoaderOptions): LoadedSlices {
+type MadeSlice = { slice: LoadedSlices['slices'][number]; sites: LoadedSlices['functionSites'][number]; paths: LoadedSlices['pathSpans'][number] };
+
+/** `count` slices from `make`, then each one's placement on `net` (shared by every slice generator). */
+export function collectSlices(net: NetworkModel, count: number, make: (index: number) => MadeSlice): LoadedSlices {
   const out: LoadedSlices = { slices: [], placements: [], pathSpans: [], functionSites: [] };
-  for (let i = 0; i < opts.count; i += 1) {
-    const { slice, sites, paths } = makeSlice(i, net, rng, opts);
+  for (let i = 0; i < count; i += 1) {
+    const { slice, sites, paths } = make(i);
     out.slices.push(slice);
     out.functionSites.push(sites);
     out.pathSpans.push(paths);
   }
   for (let i = 0; i < out.slices.length; i += 1) out.placements.push(placementOf(net, out, i));
   return out;
+}
+
+/** Slices with placements on `net` (routed on the shortest-latency path); demands are rescaled later. */
+export function loadSlices(net: NetworkModel, rng: Rng, opts: SliceLoaderOptions): LoadedSlices {
+  return collectSlices(net, opts.count, (i) => makeSlice(i, net, rng, opts));
 }
 
 export function placementOf(net: NetworkModel, loaded: LoadedSlices, i: number): ScenarioPlacement {

@@ -40,13 +40,3 @@ export function computeWindowImpact(scenario: Scenario, inv: Inventory, w: Impac
       .map((p) => ({ slice: p.slice, sites: p.sites, paths: p.paths })),
   };
 }
-
-/** What a tenant user may see of an impact: its own slices only, no other tenant's loads. */
-export function scopeImpact(impact: WindowImpact, tenantId: string): WindowImpact {
-  const affected = impact.affected.filter((a) => a.tenant.id === tenantId);
-  const own = new Set(affected.map((a) => a.slice));
-  return {
-    ...impact, affected, touchesCritical: affected.some((a) => a.critical),
-    overloaded: [], currentPaths: impact.currentPaths.filter((p) => own.has(p.slice)),
-  };
-}
