@@ -1,4 +1,4 @@
-// "Where you are signed in": the list of one's own sessions with loading, error and empty states, and
+// "Your open sessions": the list of one's own sessions with loading, error and empty states, and
 // "Sign out everywhere" behind a confirmation.
 import { useState } from 'react';
 import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
@@ -66,7 +66,7 @@ function Body(props: SessionsSectionProps) {
 export function SessionsSection(props: SessionsSectionProps) {
   return (
     <View style={styles.block}>
-      <Text style={styles.title} role="heading" aria-level={2}>Where you are signed in</Text>
+      <Text style={styles.title} role="heading" aria-level={2}>Your open sessions</Text>
       <Text style={styles.body}>Each browser you sign in with has its own session. Sign out any you do not recognise.</Text>
       {props.actionError ? <Text style={styles.warning} role="alert" testID="sessions-action-error">{props.actionError}</Text> : null}
       <Body {...props} />

@@ -1,4 +1,4 @@
-// Security: one-time codes for sign-off decisions (operators), and where you are signed in, with sign out everywhere.
+// Security: one-time codes for sign-off decisions (operators), and your open sessions, with sign out everywhere.
 import { useRouter } from 'expo-router';
 import { useMeQuery } from '@/hooks/queries/me';
 import { PageColumn } from '@/components/page-column';
