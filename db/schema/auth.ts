@@ -13,6 +13,8 @@ export const users = pgTable(
     name: text('name').notNull(),
     /** set for users holding the `tenant` role: the one tenant they belong to */
     tenantId: text('tenant_id').references(() => tenants.id, { onDelete: 'restrict' }),
+    /** IANA zone the user reads times in; null = the network's zone (shared/time-zone.ts) */
+    timeZone: text('time_zone'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex('users_email_key').on(t.email)],
