@@ -11,6 +11,8 @@ import { AffectedSlicesTable } from '@/components/impact/affected-slices-table';
 import { CriticalCaution } from '@/components/critical-caution';
 import { ImpactMap } from '@/components/impact/impact-map';
 import { OverloadedSpans, SplitsBanner } from '@/components/impact/network-effects';
+import { TouchCountsView } from '@/components/impact/touch-counts';
+import { touchCounts, touchedFromImpact } from '@/shared/touch-counts';
 import { windowActions } from '@/components/windows/lifecycle';
 import { Section } from '@/components/windows/section';
 import { StatusBadge } from '@/components/windows/status-badge';
@@ -32,7 +34,8 @@ function AssessAction({ window: w, me }: Pick<Props, 'window' | 'me'>) {
 export function ImpactBody({ impact, wide }: { impact: WindowImpact; wide: boolean }) {
   const critical = impact.affected.filter((s) => s.critical).map((s) => s.name);
   const slices = (
-    <Section title="Affected slices" aside={<Text style={styles.muted}>{impact.affected.length}</Text>}>
+    <Section title="Touched slices" aside={<Text style={styles.muted}>{impact.affected.length}</Text>}>
+      <TouchCountsView counts={touchCounts(touchedFromImpact(impact.affected), null)} showDefinitions />
       <AffectedSlicesTable slices={impact.affected} />
     </Section>
   );
