@@ -24,6 +24,10 @@ export const meSchema = z.object({
   name: z.string(),
   roles: z.array(roleSchema),
   tenantId: z.string().nullable(),
+  /** the IANA zone this user reads times in: their own choice, else the network's zone (shared/time-zone.ts) */
+  timeZone: z.string().optional(),
+  /** whether `timeZone` is the user's own choice rather than the network's default */
+  timeZoneChosen: z.boolean().optional(),
 });
 export type Me = z.infer<typeof meSchema>;
 

@@ -60,6 +60,6 @@ export async function invalidateSession(db: Db, { sessionId }: { sessionId: stri
 
 /** What leaves the server about a session: the user's public fields, never ids or hashes of the session. */
 export function toPublicSession(auth: { user: Me }): { user: Me } {
-  const { id, email, name, roles, tenantId } = auth.user;
-  return { user: { id, email, name, roles: [...roles], tenantId } };
+  const { id, email, name, roles, tenantId, timeZone, timeZoneChosen } = auth.user;
+  return { user: { id, email, name, roles: [...roles], tenantId, timeZone, timeZoneChosen } };
 }

@@ -1,4 +1,5 @@
-// GET /api/me: the signed-in user; its one-time codes under /api/me/otp, its sessions under /api/me/sessions.
+// GET /api/me: the signed-in user; its one-time codes under /api/me/otp, its sessions under /api/me/sessions,
+// its time zone under /api/me/time-zone.
 import express, { type Router } from 'express';
 import { meSchema } from '../../shared/api';
 import { currentUser, requireAuth } from '../auth/guards';
@@ -6,11 +7,13 @@ import { toPublicSession } from '../auth/sessions';
 import type { RouteDeps } from './deps';
 import { otpRouter } from './me/otp';
 import { sessionsRouter } from './me/sessions';
+import { timeZoneRouter } from './me/time-zone';
 
 export function meRouter(deps: RouteDeps): Router {
   const router = express.Router();
   router.use('/otp', otpRouter(deps));
   router.use('/sessions', sessionsRouter(deps));
+  router.use('/time-zone', timeZoneRouter(deps));
   router.get('/', requireAuth, (req, res) => {
     res.json(meSchema.parse(toPublicSession({ user: currentUser(req) }).user));
   });

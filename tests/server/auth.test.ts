@@ -3,6 +3,7 @@ import { and, eq } from 'drizzle-orm';
 import request from 'supertest';
 import { auditLog, sessions } from '../../db/schema';
 import { apiErrorSchema, meSchema, signInResponseSchema } from '../../shared/api';
+import { NETWORK_TIME_ZONE } from '../../shared/time-zone';
 import { signInAs } from './helpers/sign-in';
 import { sessionCookieFrom, sessionSetCookie, setupTestApp, TEST_PASSWORD, type TestContext } from './helpers/test-app';
 
@@ -18,7 +19,7 @@ describe('POST /api/auth/sign-in', () => {
     const res = await request(ctx.app).post('/api/auth/sign-in').send({ email: tenant.email, password: TEST_PASSWORD });
     expect(res.status).toBe(200);
     const body = signInResponseSchema.strict().parse(res.body);
-    expect(body.user).toEqual({ id: tenant.id, email: tenant.email, name: `User ${tenant.id}`, roles: ['tenant'], tenantId: ctx.tenantId });
+    expect(body.user).toEqual({ id: tenant.id, email: tenant.email, name: `User ${tenant.id}`, roles: ['tenant'], tenantId: ctx.tenantId, timeZone: NETWORK_TIME_ZONE, timeZoneChosen: false });
     const cookie = sessionSetCookie(res)!;
     expect(cookie).toMatch(/^slackwater_session=[a-z2-7]{32}\.[a-z2-7]{32};/);
     expect(cookie).toMatch(/; HttpOnly/i);
@@ -77,12 +78,13 @@ describe('POST /api/auth/sign-in', () => {
 });
 
 describe('GET /api/me', () => {
-  test('with a session cookie: 200 with exactly id, email, name, roles, tenantId', async () => {
+  test('with a session cookie: 200 with exactly id, email, name, roles, tenantId and the time zone', async () => {
     const cookie = await signInAs(ctx.app, ctx.users.planner.email);
     const res = await request(ctx.app).get('/api/me').set('Cookie', cookie);
     expect(res.status).toBe(200);
     expect(meSchema.strict().parse(res.body)).toEqual({
       id: ctx.users.planner.id, email: ctx.users.planner.email, name: `User ${ctx.users.planner.id}`, roles: ['planner'], tenantId: null,
+      timeZone: NETWORK_TIME_ZONE, timeZoneChosen: false,
     });
   });
 

@@ -3,6 +3,7 @@ import { and, asc, eq, inArray, sql } from 'drizzle-orm';
 import type { Db, Queryable } from '../../../db/client';
 import { passwordCredentials, roleGrants, users } from '../../../db/schema';
 import { ROLE_NAMES, type Me, type RoleName } from '../../../shared/api';
+import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 
 /** The user's id and password hash, matched case-insensitively on e-mail; null when unknown. */
 export async function getUserCredentialsByEmail(
@@ -32,19 +33,33 @@ async function getRolesByUserIds(db: Db, userIds: string[]): Promise<Map<string,
   return roles;
 }
 
-const userColumns = { id: users.id, email: users.email, name: users.name, tenantId: users.tenantId };
+const userColumns = { id: users.id, email: users.email, name: users.name, tenantId: users.tenantId, timeZone: users.timeZone };
+
+type UserRow = { id: string; email: string; name: string; tenantId: string | null; timeZone: string | null };
+
+/** A user row as the app reads it: a user who has not chosen a zone reads times in the network's zone. */
+function toMe(row: UserRow, roles: RoleName[]): Me {
+  return { ...row, roles, timeZone: row.timeZone ?? NETWORK_TIME_ZONE, timeZoneChosen: row.timeZone !== null };
+}
 
 export async function getUserById(db: Db, { id }: { id: string }): Promise<Me | null> {
   const rows = await db.select(userColumns).from(users).where(eq(users.id, id)).limit(1);
   if (!rows[0]) return null;
   const roles = await getRolesByUserIds(db, [id]);
-  return { ...rows[0], roles: roles.get(id) ?? [] };
+  return toMe(rows[0], roles.get(id) ?? []);
 }
 
 export async function listUsersWithRoles(db: Db): Promise<Me[]> {
   const rows = await db.select(userColumns).from(users).orderBy(asc(users.email));
   const roles = await getRolesByUserIds(db, rows.map((row) => row.id));
-  return rows.map((row) => ({ ...row, roles: roles.get(row.id) ?? [] }));
+  return rows.map((row) => toMe(row, roles.get(row.id) ?? []));
+}
+
+/** Sets (or with null clears) the zone `id` reads times in; returns the zone it had before. */
+export async function setUserTimeZone(db: Queryable, { id, timeZone }: { id: string; timeZone: string | null }): Promise<{ before: string | null }> {
+  const [row] = await db.select({ timeZone: users.timeZone }).from(users).where(eq(users.id, id)).for('update');
+  await db.update(users).set({ timeZone }).where(eq(users.id, id));
+  return { before: row?.timeZone ?? null };
 }
 
 export type UserContact = { id: string; email: string; name: string };
