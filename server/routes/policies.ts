@@ -5,6 +5,7 @@ import { policiesPatchSchema, policiesResponseSchema } from '../../shared/polici
 import { currentUser, requireRole } from '../auth/guards';
 import { insertAuditEntry } from '../queries/audit/audit-log';
 import { getPolicies, upsertPolicies } from '../queries/windows/policies';
+import { QuorumOrderError } from '../services/signoff/errors';
 import type { RouteDeps } from './deps';
 
 export function policiesRouter({ db, now }: RouteDeps): Router {
@@ -17,6 +18,10 @@ export function policiesRouter({ db, now }: RouteDeps): Router {
     const at = now();
     const policies = await db.transaction(async (tx) => {
       const before = await getPolicies(tx);
+      // Checked on the merged values: a patch may change only one of the two quorums.
+      const low = patch.signoffQuorumLow ?? before.signoffQuorumLow;
+      const high = patch.signoffQuorumHigh ?? before.signoffQuorumHigh;
+      if (high < low) throw new QuorumOrderError(low, high);
       await upsertPolicies(tx, patch, currentUser(req).id, at);
       const after = await getPolicies(tx);
       await insertAuditEntry(tx, { actorId: currentUser(req).id, action: 'policy.update', entity: 'policy', at, before, after });

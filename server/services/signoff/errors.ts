@@ -15,3 +15,9 @@ export class NoAcceptedPlanError extends domainError('NO_ACCEPTED_PLAN', 409,
 
 export class SignoffNotFoundError extends domainError('SIGNOFF_NOT_FOUND', 404,
   (windowId: string) => `Window ${windowId} has no accepted plan to sign off.`) {}
+
+/** A high-risk plan must never need fewer approvals than a low-risk one. */
+export class QuorumOrderError extends domainError('QUORUM_ORDER', 400,
+  (low: number, high: number) =>
+    `High-risk plans would need ${high} approval${high === 1 ? '' : 's'}, fewer than the ${low} low-risk plans need; `
+    + `set high risk to ${low} or more, or lower low risk.`) {}
