@@ -14,18 +14,20 @@ import { OverloadedSpans, SplitsBanner } from '@/components/impact/network-effec
 import { TouchCountsView } from '@/components/impact/touch-counts';
 import { touchCounts, touchedFromImpact } from '@/shared/touch-counts';
 import { windowActions } from '@/components/windows/lifecycle';
+import { WindowNextStep } from '@/components/windows/window-next-step';
 import { Section } from '@/components/windows/section';
 import { StatusBadge } from '@/components/windows/status-badge';
 import { colors, CONTENT_MAX_WIDTH_PX, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
 
 type Props = { window: Window; me: Me; timeZone: string; onOpenWindow: () => void };
 
+/** Re-assessing is a side action; the first assessment is the next-step bar's. */
 function AssessAction({ window: w, me }: Pick<Props, 'window' | 'me'>) {
   const assess = useWindowAssessMutation(w.id);
-  if (!windowActions(me.roles, w.status).assess) return null;
+  if (!windowActions(me.roles, w.status).assess || !w.impactStored) return null;
   return (
     <View style={styles.row}>
-      <Button label={w.impactStored ? 'Assess again' : 'Assess impact'} onPress={() => assess.mutate(w.version)} busy={assess.isPending} testID="impact-assess" />
+      <Button label="Assess again" variant="quiet" onPress={() => assess.mutate(w.version)} busy={assess.isPending} testID="impact-assess" />
       {assess.isError ? <Text style={styles.error} role="alert">{assess.error.message}</Text> : null}
     </View>
   );
@@ -97,6 +99,7 @@ export function ImpactReview({ window: w, me, timeZone, onOpenWindow }: Props) {
           <StatusBadge status={w.status} testID="impact-window-status" />
           <Text style={styles.muted}>{formatWindowRange(w.startsAt, w.endsAt, timeZone)}</Text>
         </View>
+        <WindowNextStep window={w} me={me} here={{ screen: 'impact' }} />
         <AssessAction window={w} me={me} />
         {content}
       </View>

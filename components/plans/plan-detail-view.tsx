@@ -1,4 +1,5 @@
 // One run: its settings, then progress while it computes, the review when done, or why it failed or stopped.
+import type { ReactNode } from 'react';
 import { StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import type { Me } from '@/shared/api';
 import type { Plan } from '@/shared/plans';
@@ -13,7 +14,11 @@ import { PlanPage } from '@/components/plans/plan-page';
 import { PlanMarks, PlanStatusPill } from '@/components/plans/plan-status-pill';
 import { colors, radii, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
 
-type Props = PlanLinks & { plan: Plan; windowTitle: string; me: Me; timeZone: string; onOpenRuns: () => void };
+type Props = PlanLinks & {
+  plan: Plan; windowTitle: string; me: Me; timeZone: string; onOpenRuns: () => void;
+  /** the window's next-step bar */
+  next?: ReactNode;
+};
 
 function Body({ plan, me, wide, ...links }: PlanLinks & { plan: Plan; me: Me; wide: boolean }) {
   const cancel = usePlanCancelMutation(plan.windowId);
@@ -42,11 +47,11 @@ function Body({ plan, me, wide, ...links }: PlanLinks & { plan: Plan; me: Me; wi
   );
 }
 
-export function PlanDetailView({ plan, windowTitle, me, timeZone, onOpenRuns, ...links }: Props) {
+export function PlanDetailView({ plan, windowTitle, me, timeZone, onOpenRuns, next, ...links }: Props) {
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_LAYOUT_MIN_WIDTH_PX;
   return (
-    <PlanPage back={{ label: '‹ All runs of this window', onPress: onOpenRuns, testID: 'plan-back' }} title={`Move plan: ${windowTitle}`}>
+    <PlanPage back={{ label: '‹ All runs of this window', onPress: onOpenRuns, testID: 'plan-back' }} title={`Move plan: ${windowTitle}`} next={next}>
       <View style={styles.row}>
         <PlanStatusPill status={plan.status} testID="plan-status" />
         <PlanMarks accepted={plan.accepted} stale={plan.stale} />

@@ -24,6 +24,8 @@ type Props = {
   adjustFrom?: PlanSettings;
   onOpenPlan: (planId: string) => void;
   onOpenWindow: () => void;
+  /** the window's next-step bar */
+  next?: ReactNode;
 };
 
 function NewRun({ window: w, me, adjustFrom, onOpenPlan, startOpen }: Pick<Props, 'window' | 'me' | 'adjustFrom' | 'onOpenPlan'> & { startOpen: boolean }) {
@@ -49,7 +51,7 @@ function NewRun({ window: w, me, adjustFrom, onOpenPlan, startOpen }: Pick<Props
   );
 }
 
-export function PlansView({ window: w, me, plans, timeZone, adjustFrom, onOpenPlan, onOpenWindow }: Props) {
+export function PlansView({ window: w, me, plans, timeZone, adjustFrom, onOpenPlan, onOpenWindow, next }: Props) {
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_LAYOUT_MIN_WIDTH_PX;
   const runs: ReactNode = plans.length === 0
@@ -57,7 +59,7 @@ export function PlansView({ window: w, me, plans, timeZone, adjustFrom, onOpenPl
     : <PlanRunList plans={plans} timeZone={timeZone} onOpen={onOpenPlan} />;
   const form = <NewRun window={w} me={me} adjustFrom={adjustFrom} onOpenPlan={onOpenPlan} startOpen={wide} />;
   return (
-    <PlanPage back={{ label: '‹ Back to the window', onPress: onOpenWindow, testID: 'plans-back' }} title={`Move plans: ${w.title}`}>
+    <PlanPage back={{ label: '‹ Back to the window', onPress: onOpenWindow, testID: 'plans-back' }} title={`Move plans: ${w.title}`} next={next}>
       <StatusBadge status={w.status} testID="plans-window-status" />
       {wide ? (
         <View style={styles.columns}>

@@ -1,4 +1,5 @@
-// The actions a person may take on a window now (by role and state); withdrawing asks once more.
+// The quiet actions on a window beside its next step (by role and state); withdrawing asks once more.
+// The one filled button is the next-step bar's; everything here is secondary.
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { Button } from '@/components/button';
@@ -32,11 +33,12 @@ export function WindowActionsBar(props: Props) {
   }
   return (
     <View style={styles.row}>
-      {actions.assess ? (
-        <Button label={props.impactStored ? 'Assess again' : 'Assess impact'} onPress={props.onAssess} busy={props.assessing} testID="window-assess" />
-      ) : null}
       {actions.viewImpact && props.impactStored ? (
-        <Button label="Impact review" variant={actions.assess ? 'quiet' : 'primary'} onPress={props.onOpenImpact} testID="window-open-impact" />
+        <Button label="Impact review" variant="quiet" onPress={props.onOpenImpact} testID="window-open-impact" />
+      ) : null}
+      {/* Before the first assessment the next-step bar offers it; afterwards re-assessing is a side action. */}
+      {actions.assess && props.impactStored ? (
+        <Button label="Assess again" variant="quiet" onPress={props.onAssess} busy={props.assessing} testID="window-assess" />
       ) : null}
       {actions.edit ? <Button label="Edit" variant="quiet" onPress={props.onEdit} testID="window-edit" /> : null}
       {actions.withdraw ? <Button label="Withdraw" variant="quiet" onPress={() => setConfirming(true)} testID="window-withdraw" /> : null}

@@ -8,6 +8,9 @@ import { affectedPathElements, formatRiskPercent, sortAffected } from '@/compone
 import { sstName } from '@/shared/slice-service-type';
 import { clearQueries, renderWithQueries, routedFetch } from './window-test-kit';
 
+// The impact screen's next-step bar navigates with expo-router; these tests only render the body.
+jest.mock('expo-router', () => ({ useRouter: () => ({ push: jest.fn() }) }));
+
 afterEach(clearQueries);
 
 function slice(id: string, extra: Partial<AffectedSlice> = {}): AffectedSlice {
