@@ -9,6 +9,7 @@ import type { RoleName } from '@/shared/api';
 import { MoreIcon } from '@/components/icons';
 import { areasFor } from '@/components/shell/nav-areas';
 import { MoreSheet } from '@/components/shell/more-sheet';
+import { labelWithBadge, NavBadge, useNavBadges, type NavBadgeInfo } from '@/components/shell/nav-badges';
 import { splitPhoneAreas } from '@/components/shell/phone-areas';
 import { colors, space, type } from '@/constants/theme';
 
@@ -16,14 +17,18 @@ export function BottomTabs({ pathname, roles }: { pathname: string; roles: reado
   const insets = useSafeAreaInsets();
   const [moreOpen, setMoreOpen] = useState(false);
   const { tabs, more } = splitPhoneAreas(areasFor(roles));
+  const badges = useNavBadges(roles);
   // More reads as active while the user is inside one of the areas it holds.
   const moreActive = more.some((area) => area.matches(pathname));
   return (
     <View style={[styles.bar, { paddingBottom: insets.bottom + space.xs }]} role="tablist" testID="bottom-tabs">
       {tabs.map(({ key, label, href, matches, Icon }) => (
         <Link key={key} href={href} asChild>
-          <Pressable testID={`nav-${key}`} role="tab" aria-selected={matches(pathname)} style={styles.pressable}>
-            <TabFace label={label} Icon={Icon} active={matches(pathname)} />
+          <Pressable
+            testID={`nav-${key}`} role="tab" aria-selected={matches(pathname)} style={styles.pressable}
+            accessibilityLabel={labelWithBadge(label, badges[key])}
+          >
+            <TabFace label={label} Icon={Icon} active={matches(pathname)} areaKey={key} badge={badges[key]} />
           </Pressable>
         </Link>
       ))}
@@ -40,14 +45,17 @@ export function BottomTabs({ pathname, roles }: { pathname: string; roles: reado
   );
 }
 
-type FaceProps = { label: string; Icon: ComponentType<{ color?: string }>; active: boolean };
+type FaceProps = { label: string; Icon: ComponentType<{ color?: string }>; active: boolean; areaKey?: string; badge?: NavBadgeInfo };
 
-function TabFace({ label, Icon, active }: FaceProps) {
+function TabFace({ label, Icon, active, areaKey, badge }: FaceProps) {
   const tint = active ? colors.primary : colors.inkMuted;
   return (
     <View style={styles.tab}>
       <View style={[styles.mark, active && styles.markActive]} />
-      <Icon color={tint} />
+      <View>
+        <Icon color={tint} />
+        {badge && areaKey ? <View style={styles.badge}><NavBadge areaKey={areaKey} badge={badge} /></View> : null}
+      </View>
       <Text style={[styles.label, { color: tint }]} numberOfLines={1}>{label}</Text>
     </View>
   );
@@ -66,4 +74,6 @@ const styles = StyleSheet.create({
   mark: { width: 24, height: 3, borderRadius: 2, backgroundColor: 'transparent', marginBottom: space.xxs },
   markActive: { backgroundColor: colors.buoy },
   label: { ...type.caption },
+  // Over the icon's top-right corner, as phones show unread counts.
+  badge: { position: 'absolute', top: -space.sm, left: space.md },
 });

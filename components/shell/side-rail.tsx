@@ -3,6 +3,7 @@ import { Link } from 'expo-router';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { LogoMark } from '@/components/icons';
 import { areasFor } from '@/components/shell/nav-areas';
+import { labelWithBadge, NavBadge, useNavBadges } from '@/components/shell/nav-badges';
 import { UserSummary } from '@/components/shell/user-summary';
 import type { Me } from '@/shared/api';
 import { colors, radii, space, type } from '@/constants/theme';
@@ -10,6 +11,7 @@ import { colors, radii, space, type } from '@/constants/theme';
 type Props = { user: Me; pathname: string; onSignOut: () => void; signingOut: boolean };
 
 export function SideRail({ user, pathname, onSignOut, signingOut }: Props) {
+  const badges = useNavBadges(user.roles);
   return (
     <View style={styles.rail} role="navigation" aria-label="Main" testID="side-rail">
       <View style={styles.brand}>
@@ -19,14 +21,19 @@ export function SideRail({ user, pathname, onSignOut, signingOut }: Props) {
       <View style={styles.areas}>
         {areasFor(user.roles).map(({ key, label, href, matches, Icon }) => {
           const active = matches(pathname);
+          const badge = badges[key];
           return (
             <Link key={key} href={href} asChild>
-              <Pressable testID={`nav-${key}`} aria-current={active ? 'page' : undefined} style={styles.pressable}>
+              <Pressable
+                testID={`nav-${key}`} aria-current={active ? 'page' : undefined} style={styles.pressable}
+                accessibilityLabel={labelWithBadge(label, badge)}
+              >
                 {/* Layout on an inner View: Link's asChild merge does not keep a Pressable style function. */}
                 <View style={[styles.item, active && styles.itemActive]}>
                   <View style={[styles.mark, active && styles.markActive]} />
                   <Icon color={active ? colors.onAbyss : colors.onAbyssMuted} />
                   <Text style={[styles.label, active && styles.labelActive]}>{label}</Text>
+                  {badge ? <View style={styles.badge}><NavBadge areaKey={key} badge={badge} /></View> : null}
                 </View>
               </Pressable>
             </Link>
@@ -52,5 +59,6 @@ const styles = StyleSheet.create({
   markActive: { backgroundColor: colors.buoy },
   label: { ...type.bodyStrong, color: colors.onAbyssMuted },
   labelActive: { color: colors.onAbyss },
+  badge: { marginLeft: 'auto' },
   foot: { borderTopWidth: 1, borderTopColor: colors.ink, paddingTop: space.lg },
 });

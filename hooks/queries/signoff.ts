@@ -7,6 +7,7 @@ import {
   otpEnrolmentSchema, otpStatusSchema, signoffDecisionResultSchema, signoffQueueSchema, signoffSubmitResultSchema,
   signoffSummarySchema, type SignoffDecisionBody,
 } from '@/shared/signoff';
+import { decidedByMeSchema, signoffWaitingCountSchema } from '@/shared/signoff-mine';
 import { apiFetch, jsonBody } from '@/hooks/api-fetch';
 import { overviewKey } from '@/hooks/queries/overview';
 import { windowsKey } from '@/hooks/queries/windows-list';
@@ -15,6 +16,8 @@ const ROOT = ['signoff'] as const;
 export const signoffQueueKey = () => [...ROOT, 'queue'] as const;
 export const signoffSummaryKey = (windowId: string) => [...ROOT, 'summary', windowId] as const;
 export const otpStatusKey = () => [...ROOT, 'otp'] as const;
+export const signoffWaitingKey = () => [...ROOT, 'waiting-count'] as const;
+export const decidedByMeKey = () => [...ROOT, 'decided-by-me'] as const;
 export const signoffPoliciesKey = () => ['policies'] as const;
 
 const summaryPath = (windowId: string) => `/api/signoff/${encodeURIComponent(windowId)}`;
@@ -22,6 +25,20 @@ const summaryPath = (windowId: string) => `/api/signoff/${encodeURIComponent(win
 export function useSignoffQueueQuery(enabled = true) {
   // Other approvers decide meanwhile; a phone coming back to the queue should show the counts as they are now.
   return useQuery({ queryKey: signoffQueueKey(), queryFn: () => apiFetch('/api/signoff/queue', signoffQueueSchema), enabled, refetchOnWindowFocus: true });
+}
+
+/** Planners submit windows from elsewhere; a badge a minute behind is soon enough and costs one counting query. */
+const WAITING_REFRESH_MS = 60_000;
+
+export function useSignoffWaitingCountQuery(enabled = true) {
+  return useQuery({
+    queryKey: signoffWaitingKey(), queryFn: () => apiFetch('/api/signoff/waiting-count', signoffWaitingCountSchema),
+    enabled, refetchOnWindowFocus: true, refetchInterval: enabled ? WAITING_REFRESH_MS : false,
+  });
+}
+
+export function useDecidedByMeQuery(enabled = true) {
+  return useQuery({ queryKey: decidedByMeKey(), queryFn: () => apiFetch('/api/signoff/decided-by-me', decidedByMeSchema), enabled });
 }
 
 export function useSignoffSummaryQuery(windowId: string) {

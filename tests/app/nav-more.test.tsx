@@ -1,10 +1,11 @@
 // The phone tab bar: at most five tabs, a More tab listing the remaining areas, and those areas still navigate.
 import type { ReactElement } from 'react';
-import { fireEvent, render, screen, within } from '@testing-library/react-native';
+import { fireEvent, screen, within } from '@testing-library/react-native';
 import { Text } from 'react-native';
 import type { Me } from '@/shared/api';
 import { AppShell } from '@/components/shell/app-shell';
 import { NAV_AREAS, areasFor } from '@/components/shell/nav-areas';
+import { clearQueries, renderWithQueries } from './window-test-kit';
 
 // Link stands in for expo-router's: pressing its child runs Link's onPress, then "navigates" by recording href.
 const mockPush = jest.fn();
@@ -24,7 +25,8 @@ const planner: Me = { id: 'u-pl', email: 'planner@demo.test', name: 'Pat Planner
 const tenant: Me = { id: 'u-te', email: 'tenant@demo.test', name: 'Tia Tenant', roles: ['tenant'], tenantId: 't1' };
 
 function renderShell(user: Me, pathname = '/') {
-  render(
+  // The shell reads the sign-off badge through the query client (disabled for these non-approvers).
+  renderWithQueries(
     <AppShell user={user} pathname={pathname} onSignOut={() => undefined} signingOut={false}>
       <Text>page</Text>
     </AppShell>,
@@ -34,6 +36,8 @@ function renderShell(user: Me, pathname = '/') {
 function tabKeys(): string[] {
   return within(screen.getByTestId('bottom-tabs')).queryAllByRole('tab').map((tab) => String(tab.props.testID));
 }
+
+afterEach(clearQueries);
 
 beforeEach(() => {
   mockPush.mockReset();
