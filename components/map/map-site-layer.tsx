@@ -4,7 +4,7 @@ import { formatUtilisation, utilisationColour } from '@/components/map/colour-sc
 import type { PlacedSite } from '@/components/map/map-geometry';
 import type { EmphasisLookup } from '@/components/map/map-highlight';
 import type { MapSiteKind } from '@/components/map/map-types';
-import { LABEL_GAP_PX, type LabelSide } from '@/components/map/map-labels';
+import { labelAnchor, type LabelSide } from '@/components/map/map-labels';
 import { GLYPH_RADIUS_PX, glyphPath, KIND_LABELS, KIND_ORDER } from '@/components/map/site-glyphs';
 import { TONE_COLOURS } from '@/components/map/map-tones';
 import { fonts, MAP_DIMMED_OPACITY, mapColors } from '@/constants/theme';
@@ -54,7 +54,7 @@ export function MapSiteLayer({ sites, emphasis, selectedId, compact, labelled, o
               strokeWidth={tone ? 2 : 1.2}
             />
             {labelled.has(site.id) && (selected || !dimmed) ? (
-              <SiteLabel x={site.x} y={site.y + 4} offset={r + LABEL_GAP_PX} side={labelled.get(site.id)!} name={site.name} />
+              <SiteLabel id={site.id} name={site.name} {...labelAnchor(site, r, labelled.get(site.id)!)} />
             ) : null}
             <Circle cx={site.x} cy={site.y} r={SITE_HIT_RADIUS_PX} fill="transparent" />
           </G>
@@ -65,16 +65,10 @@ export function MapSiteLayer({ sites, emphasis, selectedId, compact, labelled, o
 }
 
 // A halo of the land colour under the name keeps it readable across spans and coastline.
-function SiteLabel({ x, y, offset, side, name }: { x: number; y: number; offset: number; side: LabelSide; name: string }) {
-  const common = {
-    x: side === 'right' ? x + offset : x - offset,
-    y,
-    fontSize: 12,
-    fontFamily: fonts.medium,
-    textAnchor: side === 'right' ? ('start' as const) : ('end' as const),
-  };
+function SiteLabel({ id, name, x, y, anchor }: { id: string; name: string } & ReturnType<typeof labelAnchor>) {
+  const common = { x, y, fontSize: 12, fontFamily: fonts.medium, textAnchor: anchor };
   return (
-    <G>
+    <G testID={`map-label-${id}`}>
       <SvgText {...common} stroke={mapColors.labelHalo} strokeWidth={3} strokeLinejoin="round" fill={mapColors.labelHalo}>
         {name}
       </SvgText>

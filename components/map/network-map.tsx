@@ -11,7 +11,9 @@ import { MapSiteLayer, siteRadiusPx } from '@/components/map/map-site-layer';
 import { pickLabels } from '@/components/map/map-labels';
 import { MapSpanLayer } from '@/components/map/map-span-layer';
 import type { MapSelection, NetworkMapData } from '@/components/map/map-types';
-import { HOME_VIEW, labelledKindCount, zoomAround, ZOOM_STEP, type MapView } from '@/components/map/map-view';
+import { HOME_VIEW, labelledKindCount, zoomAround, ZOOM_STEP } from '@/components/map/map-view';
+import type { MapFocus } from '@/components/map/map-focus';
+import { useMapView } from '@/components/map/use-map-view';
 import type { Point } from '@/components/map/projection';
 import { useMapGestures } from '@/components/map/use-map-gestures';
 import { useWheelZoom } from '@/components/map/use-wheel-zoom';
@@ -29,6 +31,10 @@ export type NetworkMapProps = {
   compact?: boolean;
   /** Legend words for the tones when a screen gives them its own meaning (a plan's before and after). */
   toneLabels?: Partial<Record<HighlightTone, string>>;
+  /** The area to open on (a window's equipment, a plan's moves): zoomed to it and its neighbours, its sites named. */
+  focus?: MapFocus;
+  /** A fixed height for the drawing (the legend goes under it), for maps inside a scrolling page. */
+  heightPx?: number;
 };
 
 // Until the first layout arrives (and in tests, where none does) the map draws at a phone-like size.
@@ -46,18 +52,17 @@ function usedTones(...highlights: (MapHighlight | undefined)[]): HighlightTone[]
   return [...new Set(tones.filter((t): t is HighlightTone => t !== null))];
 }
 
-export function NetworkMap({ data, highlight, secondaryHighlight, selected = null, onSelect, compact = false, toneLabels }: NetworkMapProps) {
-  const [size, setSize] = useState(FALLBACK_SIZE);
-  const [view, setView] = useState<MapView>(HOME_VIEW);
+export function NetworkMap(props: NetworkMapProps) {
+  const { data, highlight, secondaryHighlight, selected = null, onSelect, compact = false, toneLabels, focus, heightPx } = props;
+  const [size, setSize] = useState(heightPx ? { ...FALLBACK_SIZE, heightPx } : FALLBACK_SIZE);
   const surface = useRef<View>(null);
-  const gestures = useMapGestures({ view, size, setView });
-  useWheelZoom(surface, useCallback((factor: number, focus: Point) => setView((v) => zoomAround(v, factor, focus)), []));
-
   const narrow = size.widthPx < NARROW_MAP_MAX_WIDTH_PX;
-  const projection = useMemo(
-    () => fitNetwork(data, size, FIT_PADDING_PX, narrow ? CONTROLS_ROW_HEIGHT_PX - FIT_PADDING_PX / 2 : 0),
-    [data, size, narrow],
-  );
+  const topInsetPx = narrow ? CONTROLS_ROW_HEIGHT_PX - FIT_PADDING_PX / 2 : 0;
+  const projection = useMemo(() => fitNetwork(data, size, FIT_PADDING_PX, topInsetPx), [data, size, topInsetPx]);
+  const { view, setView, focusIds } = useMapView({ data, projection, size, focus, topInsetPx });
+  const gestures = useMapGestures({ view, size, setView });
+  useWheelZoom(surface, useCallback((factor: number, at: Point) => setView((v) => zoomAround(v, factor, at)), [setView]));
+
   const geometry = useMemo(() => placeNetwork(data, projection, view), [data, projection, view]);
   const emphasis = useMemo(() => emphasisFor(highlight, secondaryHighlight), [highlight, secondaryHighlight]);
   // Wide maps have room for more names at the same zoom.
@@ -65,10 +70,11 @@ export function NetworkMap({ data, highlight, secondaryHighlight, selected = nul
   const labelled = useMemo(() => {
     const kinds = compact ? 0 : labelledKindCount(view.zoom * Math.max(1, size.widthPx / 400));
     const toned = (id: string) => emphasis.site(id).tone !== null;
-    // The selected site first, then highlighted ones, whatever their kind.
-    const pinOf = (s: { id: string }) => (s.id === selectedSite ? 0 : toned(s.id) ? 1 : null);
+    const inFocus = new Set(focusIds);
+    // The selected site first, then highlighted ones in the focus area, then other highlighted ones, whatever their kind.
+    const pinOf = (s: { id: string }) => (s.id === selectedSite ? 0 : toned(s.id) ? (inFocus.has(s.id) ? 1 : 2) : null);
     return pickLabels(geometry.sites, kinds, (s) => siteRadiusPx(s.kind, compact, toned(s.id)), size, pinOf);
-  }, [geometry, compact, view.zoom, size, emphasis, selectedSite]);
+  }, [geometry, compact, view.zoom, size, emphasis, selectedSite, focusIds]);
 
   const onLayout = (e: LayoutChangeEvent) => {
     const { width, height } = e.nativeEvent.layout;
@@ -81,8 +87,13 @@ export function NetworkMap({ data, highlight, secondaryHighlight, selected = nul
   const centre = { x: size.widthPx / 2, y: size.heightPx / 2 };
 
   return (
-    <View style={[styles.frame, !compact && styles.fill]} testID="network-map">
-      <View ref={surface} style={[styles.surface, compact ? styles.compactSurface : styles.fill]} onLayout={onLayout} {...gestures.panHandlers}>
+    <View style={[styles.frame, !compact && !heightPx && styles.fill]} testID="network-map">
+      <View
+        ref={surface}
+        style={[styles.surface, heightPx ? { height: heightPx } : compact ? styles.compactSurface : styles.fill]}
+        onLayout={onLayout}
+        {...gestures.panHandlers}
+      >
         <Svg width={size.widthPx} height={size.heightPx} accessibilityLabel={`Map of ${data.name ?? "the network"}`}>
           <Rect x={0} y={0} width={size.widthPx} height={size.heightPx} fill={mapColors.sea} />
           {geometry.outlinePath ? (

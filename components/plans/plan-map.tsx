@@ -1,15 +1,14 @@
 // Old and new positions on the network map: today's paths in one tone, the plan's in another, with a legend.
 // Every slice of the plan is drawn, knock-on moves of untouched slices included.
-import { useMemo } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { useMemo, useState } from 'react';
+import { StyleSheet, Text, useWindowDimensions, View, type LayoutChangeEvent } from 'react-native';
 import type { PlanSlice } from '@/shared/plans';
 import { useNetworkMapQuery } from '@/hooks/queries/network-map';
+import { pageMapHeightPx } from '@/components/map/map-height';
 import { NetworkMap } from '@/components/map/network-map';
 import { planMapElements } from '@/components/plans/plan-review-data';
 import { colors, space, type } from '@/constants/theme';
 
-/** Tall enough for the coast and the legend on a phone, short enough to scroll past. */
-const MAP_HEIGHT_PX = 420;
 const TONE_WORDS = { placement: 'Before (today)', alternative: 'After (planned)' } as const;
 
 /** The caption without a chosen slice; knock-on moves are named so the extra paths are not a surprise. */
@@ -26,15 +25,28 @@ export function PlanMap({ slices, selectedSlice }: Props) {
   // The plan's new positions are drawn on top: where old and new share a span, it reads as kept.
   const after = useMemo(() => ({ ...elements.after, tone: 'alternative' as const }), [elements]);
   const before = useMemo(() => ({ ...elements.before, tone: 'placement' as const }), [elements]);
+  // The area to open on: everything the plan leaves and everything it goes to.
+  const focus = useMemo(
+    () => ({ sites: [...elements.before.sites, ...elements.after.sites], spans: [...elements.before.spans, ...elements.after.spans] }),
+    [elements],
+  );
+  const [columnWidthPx, setColumnWidthPx] = useState<number | null>(null);
+  const screen = useWindowDimensions();
+  const onLayout = (e: LayoutChangeEvent) => setColumnWidthPx(e.nativeEvent.layout.width);
   if (map.isError) return <Text style={styles.muted}>The map could not be loaded: {map.error.message}</Text>;
   if (!map.data) return <Text style={styles.muted}>Loading the map…</Text>;
   const knockOn = slices.filter((s) => s.madeRoomFor.length > 0).length;
   const chosen = selectedSlice ? slices.find((s) => s.slice === selectedSlice)?.name ?? selectedSlice : null;
   return (
-    <View style={styles.box} testID="plan-map">
-      <View style={styles.frame}>
-        <NetworkMap data={map.data} highlight={after} secondaryHighlight={before} toneLabels={TONE_WORDS} />
-      </View>
+    <View style={styles.box} testID="plan-map" onLayout={onLayout}>
+      <NetworkMap
+        data={map.data}
+        highlight={after}
+        secondaryHighlight={before}
+        toneLabels={TONE_WORDS}
+        focus={focus}
+        heightPx={pageMapHeightPx(columnWidthPx ?? screen.width, screen.height)}
+      />
       <Text style={styles.muted} testID="plan-map-caption">
         {chosen ? `${chosen}: its whole placement before and after the move.` : everyChange(knockOn)}
       </Text>
@@ -43,7 +55,6 @@ export function PlanMap({ slices, selectedSlice }: Props) {
 }
 
 const styles = StyleSheet.create({
-  box: { gap: space.xs },
-  frame: { height: MAP_HEIGHT_PX },
+  box: { gap: space.xs, width: '100%' },
   muted: { ...type.caption, color: colors.inkMuted },
 });
