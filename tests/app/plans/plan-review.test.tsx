@@ -64,14 +64,16 @@ test('Accept stays disabled until the unresolved slice is ticked, then sends it 
 
   fireEvent.press(screen.getByTestId('plan-outage-sl-plc'));
   expect(screen.getByTestId('plan-accept')).not.toBeDisabled();
-  await act(async () => fireEvent.press(screen.getByTestId('plan-accept')));
+  fireEvent.press(screen.getByTestId('plan-accept'));
+  await act(async () => fireEvent.press(screen.getByTestId('plan-accept-yes')));
   await waitFor(() => expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ outageAccepted: ['sl-plc'] }));
 });
 
 test('a refusal shows the reason; the three choices for unresolved slices lead on', async () => {
   show({ status: 409, body: { error: { code: 'PLAN_NO_LONGER_FITS', message: 'Span sp-3 is now full because another plan was accepted.' } } });
   fireEvent.press(screen.getByTestId('plan-outage-sl-plc'));
-  await act(async () => fireEvent.press(screen.getByTestId('plan-accept')));
+  fireEvent.press(screen.getByTestId('plan-accept'));
+  await act(async () => fireEvent.press(screen.getByTestId('plan-accept-yes')));
   await waitFor(() => expect(screen.getByTestId('plan-accept-error')).toHaveTextContent(/sp-3 is now full/));
   fireEvent.press(screen.getByTestId('plan-choice-reschedule'));
   fireEvent.press(screen.getByTestId('plan-choice-capacity'));
