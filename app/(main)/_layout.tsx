@@ -4,8 +4,6 @@ import { useMeQuery, useSignOutMutation } from '@/hooks/queries/me';
 import { isApiError } from '@/hooks/api-fetch';
 import { AppShell } from '@/components/shell/app-shell';
 import { ErrorState, LoadingState } from '@/components/screen-states';
-import { TenantWindowPage } from '@/components/notices/tenant-window-page';
-import { tenantScopeOf } from '@/shared/permissions';
 
 export default function MainLayout() {
   const me = useMeQuery();
@@ -23,10 +21,8 @@ export default function MainLayout() {
       signingOut={signOut.isPending}
       onSignOut={() => signOut.mutate(undefined, { onSuccess: () => router.replace('/sign-in') })}
     >
-      {/* The internal window pages are staff's; a tenant user reaching one by address gets its tenant view. */}
-      {tenantScopeOf(me.data) !== null && pathname.startsWith('/windows') ? (
-        <TenantWindowPage pathname={pathname} onOpenNotice={(id) => router.push({ pathname: '/notices/[id]', params: { id } })} />
-      ) : <Slot />}
+      {/* Always mounted: a Slot swapped out and back in by address crashes on going back (see split-view.tsx). */}
+      <Slot />
     </AppShell>
   );
 }

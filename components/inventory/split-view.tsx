@@ -1,5 +1,7 @@
 // List and detail: side by side from WIDE_LAYOUT_MIN_WIDTH_PX, otherwise one at a time (list, then detail).
-// On phones the list stays mounted while hidden, so its search, sort and scroll survive a visit to a detail.
+// On phones the list stays mounted while hidden, so its search, sort and scroll survive a visit to a detail, and
+// the detail stays mounted while hidden too: it holds the area's navigator (a Slot), and a navigator unmounted and
+// mounted again under the same route loops on its state (React error #185, "maximum update depth").
 import type { ReactNode } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { colors, space, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
@@ -19,7 +21,7 @@ export function SplitView({ list, detail, showDetail }: Props) {
   return (
     <View style={styles.narrow} testID="split-narrow">
       <View style={[styles.narrowPane, showDetail && styles.hidden]}>{list}</View>
-      {showDetail ? <View style={styles.narrowPane}>{detail}</View> : null}
+      <View style={[styles.narrowPane, !showDetail && styles.hidden]}>{detail}</View>
     </View>
   );
 }

@@ -1,10 +1,13 @@
 // What a tenant user sees on an internal window address (/windows/...): the work in its notice's words with a
 // way to the notice, or a clear "not available" when it was not notified of that window. The internal window
-// pages never render for tenants (app/(main)/_layout.tsx).
+// pages never render for tenants (app/(main)/windows/_layout.tsx).
 import { StyleSheet, Text, View } from 'react-native';
 import { useTenantWindowQuery } from '@/hooks/queries/tenant-windows';
 import { Button } from '@/components/button';
 import { EmptyState, LoadingState } from '@/components/screen-states';
+import { timesInLabel } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
+import { ZonedWhen } from '@/components/time/zoned-when';
 import { colors, space, type } from '@/constants/theme';
 
 /** The window id in `/windows/<id>/...`, or null for `/windows/new` and other addresses. */
@@ -27,13 +30,15 @@ export function TenantWindowPage({ pathname, onOpenNotice }: { pathname: string;
 
 function TenantWindowSummary({ id, onOpenNotice }: { id: string; onOpenNotice: (noticeId: string) => void }) {
   const view = useTenantWindowQuery(id);
+  const timeZone = useViewerTimeZone();
   if (view.isError) return <EmptyState {...NOT_AVAILABLE} />;
   if (!view.data) return <LoadingState label="Loading the planned work…" />;
   const work = view.data;
   return (
     <View style={styles.page} testID="tenant-window">
       <Text style={styles.title} role="heading" aria-level={1}>{work.summary}</Text>
-      <Text style={styles.body}>{work.whenLocal}</Text>
+      <Text style={styles.body}>{timesInLabel(timeZone)}</Text>
+      <ZonedWhen startsAt={work.startsAt} endsAt={work.endsAt} timeZone={timeZone} style={styles.body} testID="tenant-window-when" />
       <Text style={styles.body}>{work.effectText}</Text>
       <Button label="Open the notice" onPress={() => onOpenNotice(work.noticeId)} testID="tenant-window-open-notice" />
     </View>

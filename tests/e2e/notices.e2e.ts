@@ -7,7 +7,7 @@
 // the window is withdrawn at the end (which also sends the cancellations).
 import type { APIRequestContext, Browser, BrowserContext } from 'playwright-core';
 import path from 'node:path';
-import { apiAs as apiAsUser, ok, prepareSubmittedWindow, setSignoffPolicies, slotAhead, withdrawWindow } from './helpers/api';
+import { apiAs as apiAsUser, ok, prepareNotifiedWindow as prepareNotifiedWindowAs, setSignoffPolicies, slotAhead, withdrawWindow } from './helpers/api';
 import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
 import { eventually } from './helpers/eventually';
 
@@ -24,15 +24,10 @@ const apiAs = (email: string) => apiAsUser(browser, email, contexts);
 
 /** Planned → in review → cleared (→ notified); returns the window id. */
 async function prepareNotifiedWindow(): Promise<string> {
-  const windowId = await prepareSubmittedWindow(await apiAs('planner@demo.test'), {
+  return prepareNotifiedWindowAs(await apiAs('planner@demo.test'), await apiAs('approver@demo.test'), {
     title: `E2E notices ${Date.now().toString(36)}`, ...slotAhead(DAYS_AHEAD, 2), workType: 'hardware replacement',
     elements: [{ kind: 'site', id: SITE_ID, effect: 'down' }],
   });
-  const approver = await apiAs('approver@demo.test');
-  await ok(approver.post(`${BASE_URL}/api/signoff/${windowId}/decision`, {
-    data: { decision: 'approve', comment: 'Moves checked; the tenant is owed its notice.' },
-  }), 'approve');
-  return windowId;
 }
 
 let admin: APIRequestContext;

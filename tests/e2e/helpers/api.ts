@@ -58,6 +58,18 @@ export async function prepareSubmittedWindow(planner: APIRequestContext, booking
   return windowId;
 }
 
+/**
+ * As prepareSubmittedWindow, then one approval: with a quorum of one and no code required (setSignoffPolicies),
+ * the window is cleared and its notices go out. Returns the window id.
+ */
+export async function prepareNotifiedWindow(planner: APIRequestContext, approver: APIRequestContext, booking: Booking): Promise<string> {
+  const windowId = await prepareSubmittedWindow(planner, booking);
+  await ok(approver.post(`${BASE_URL}/api/signoff/${windowId}/decision`, {
+    data: { decision: 'approve', comment: 'Moves checked; the tenant is owed its notice.' },
+  }), 'approve');
+  return windowId;
+}
+
 /** Sets sign-off policies as the admin; returns their earlier values, for putting back after the test. */
 export async function setSignoffPolicies(admin: APIRequestContext, values: Record<(typeof SIGNOFF_POLICY_KEYS)[number], unknown>) {
   const before = (await ok(admin.get(`${BASE_URL}/api/policies`), 'policies')).policies;
