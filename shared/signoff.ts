@@ -2,6 +2,7 @@
 // decisions, and one-time-code enrolment.
 import { z } from 'zod';
 import type { PlanReview } from './plans';
+import { touchCountsSchema } from './touch-counts';
 
 export const riskClassSchema = z.enum(['low', 'high']);
 export type RiskClass = z.infer<typeof riskClassSchema>;
@@ -75,12 +76,16 @@ export const signoffSummarySchema = z.object({
   }),
   plan: z.object({ id: z.string(), href: z.string(), acceptedAt: z.string().nullable(), acceptedBy: person.nullable() }),
   /**
-   * per tenant: slices affected and how many of them move (function moves or ties rerouted), and its slices the
-   * window does not touch that are moved to make room (knock-on moves, not counted in affected / moving)
+   * per tenant, every tenant with a touched slice or a knock-on move: its touched slices (`affected`), how many of
+   * them move (function moves or ties rerouted), how many only lose protection, and its slices the window does not
+   * touch that are moved to make room (knock-on moves, not counted in affected / moving)
    */
   tenants: z.array(z.object({
     id: z.string(), name: z.string(), affected: z.number().int(), moving: z.number().int(), knockOn: z.number().int().default(0),
+    protectionLost: z.number().int().default(0),
   })),
+  /** the shared counts (shared/touch-counts.ts), the same the impact screen and the plan review show */
+  touch: touchCountsSchema.optional(),
   totals: z.object({
     affected: z.number().int(), moving: z.number().int(), stays: z.number().int(), unresolved: z.number().int(),
     knockOn: z.number().int().default(0),
@@ -91,7 +96,7 @@ export const signoffSummarySchema = z.object({
   })).default([]),
   unresolved: z.array(z.object({ slice: z.string(), name: z.string(), tenantName: z.string(), reason: z.string().nullable(), outageAccepted: z.boolean() })),
   riskClass: riskClassSchema,
-  /** the highest slice risks, worst first */
+  /** every slice risk of the plan, worst first (the screen shows the first few and offers the rest) */
   highestRisks: z.array(z.object({
     slice: z.string(), name: z.string(), severity: z.enum(['low', 'medium', 'high', 'critical']),
     failureProbability: z.number(), unprotected: z.boolean(),

@@ -6,12 +6,13 @@ import { formatRiskPercent, sortAffected } from '@/components/impact/impact-form
 import { sstName } from '@/shared/slice-service-type';
 import { ReasonChips } from '@/components/impact/reason-chips';
 import { SeverityPill } from '@/components/impact/severity-pill';
+import { SeverityScale } from '@/components/impact/severity-scale';
 import { calendarColors, colors, radii, space, type } from '@/constants/theme';
 
 /** Below this pane width the columns would truncate every value, so each slice becomes a card. */
 const COLUMNS_MIN_WIDTH_PX = 640;
 
-const HEADERS = ['Slice', 'Why', 'Service', 'Priority', 'Severity', 'Risk'] as const;
+const HEADERS = ['Slice', 'Why', 'Service', 'Priority', 'Severity', 'Risk of failure'] as const;
 const FLEX = [3, 2.4, 1.1, 0.9, 1.1, 1] as const;
 
 function SliceName({ slice }: { slice: AffectedSlice }) {
@@ -49,7 +50,7 @@ function Card({ slice }: { slice: AffectedSlice }) {
       </View>
       <ReasonChips reasons={slice.reasons} />
       <Text style={styles.muted}>
-        {sstName(slice.sst)} · priority {slice.priority} · risk {formatRiskPercent(slice.failureProbability)}
+        {sstName(slice.sst)} · priority {slice.priority} · {formatRiskPercent(slice.failureProbability)} risk of failure
       </Text>
     </View>
   );
@@ -68,6 +69,7 @@ export function AffectedSlicesTable({ slices }: { slices: readonly AffectedSlice
         </View>
       ) : null}
       {sorted.map((slice) => (wide ? <WideRow key={slice.slice} slice={slice} /> : <Card key={slice.slice} slice={slice} />))}
+      <SeverityScale testID="impact-severity-scale" />
     </View>
   );
 }

@@ -53,3 +53,14 @@ export function windowElementIds(impact: Pick<WindowImpact, 'elements'>): { site
     spans: impact.elements.filter((e) => e.kind === 'span').map((e) => e.id),
   };
 }
+
+/**
+ * Where Low…Critical come from (planner/impact/severity.ts): the slice itself, not its risk figure. A slice that
+ * keeps running and only loses its backup path is rated one level lower.
+ */
+export const SEVERITY_SCALE =
+  'Severity rates the slice, not the risk figure: Critical = public-safety, health or utility service; High = priority 1 or a latency-critical service (URLLC, V2X); Medium = priority 2–3; Low = priority 4–5; one level lower when it only loses its backup path.';
+
+/** What the percentage beside each slice is. */
+export const RISK_FIGURE_MEANING =
+  'Risk = chance that equipment the slice still uses fails unplanned during the window, from each site’s and span’s mean time between failures.';

@@ -1,7 +1,11 @@
 // The facts of a plan an approver weighs: who is moved (and moved to make room), what stays unresolved, and the
 // highest risks.
+import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { SignoffSummary } from '@/shared/signoff';
+import { Button } from '@/components/button';
+import { TouchCountsView } from '@/components/impact/touch-counts';
+import { SeverityScale } from '@/components/impact/severity-scale';
 import { formatRiskPercent } from '@/components/impact/impact-format';
 import { SeverityPill } from '@/components/impact/severity-pill';
 import { madeRoomSentence } from '@/components/plans/plan-format';
@@ -12,8 +16,12 @@ import { colors, space, type } from '@/constants/theme';
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
+/** A phone screen shows a handful of risks first; the rest are one tap away. */
+export const RISKS_SHOWN_FIRST = 5;
+
 function tenantLine(t: SignoffSummary['tenants'][number]): string {
-  const parts = t.affected > 0 ? [`${t.moving} of ${t.affected} move`] : [];
+  const parts = t.affected > 0 ? [`${plural(t.affected, 'touched slice', 'touched slices')}: ${t.moving} move`] : [];
+  if (t.protectionLost > 0) parts.push(`${t.protectionLost} lose protection but stay up`);
   if (t.knockOn > 0) parts.push(`${t.knockOn} moved to make room`);
   return parts.join(' · ');
 }
@@ -23,10 +31,11 @@ export function MovesFacts({ summary: s }: { summary: SignoffSummary }) {
   return (
     <Section title="Who is moved" testID="signoff-moves">
       <Text style={styles.lead} testID="signoff-moves-lead">
-        {s.totals.moving} of {s.totals.affected} affected slice{s.totals.affected === 1 ? '' : 's'} move, for {tenants} tenant{tenants === 1 ? '' : 's'}
+        {plural(s.totals.affected, 'touched slice', 'touched slices')} of {plural(tenants, 'tenant', 'tenants')}: {s.totals.moving} move
         {s.totals.stays ? ` · ${s.totals.stays} stay put` : ''}
         {s.totals.knockOn ? ` · ${plural(s.totals.knockOn, 'more slice', 'more slices')} moved to make room` : ''}
       </Text>
+      {s.touch ? <TouchCountsView counts={s.touch} /> : null}
       {s.tenants.map((t) => (
         <View key={t.id} style={styles.line} testID={`signoff-tenant-${t.id}`}>
           <Text style={styles.body}>{t.name}</Text>
@@ -71,18 +80,33 @@ export function UnresolvedFacts({ summary: s }: { summary: SignoffSummary }) {
 }
 
 export function RiskFacts({ summary: s }: { summary: SignoffSummary }) {
+  const [all, setAll] = useState(false);
+  const total = s.highestRisks.length;
+  const shown = all ? s.highestRisks : s.highestRisks.slice(0, RISKS_SHOWN_FIRST);
   return (
     <Section title="Risk" aside={<RiskPill risk={s.riskClass} testID="signoff-risk" />} testID="signoff-risk-section">
       <Text style={styles.body} testID="signoff-quorum">{quorumSentence(s.approvals, s.quorum)} ({s.riskClass === 'high' ? 'critical service, high risk or unresolved slices' : 'no critical service or high risk'})</Text>
-      {s.highestRisks.map((r) => (
+      <SeverityScale testID="signoff-risk-scale" />
+      {total > 0 ? (
+        <Text style={styles.muted} testID="signoff-risk-shown">
+          {shown.length === total ? `All ${plural(total, 'slice', 'slices')} shown, worst first` : `${shown.length} of ${total} slices shown, worst first`}
+        </Text>
+      ) : null}
+      {shown.map((r) => (
         <View key={r.slice} style={styles.line}>
           <Text style={styles.body}>{r.name}{r.unprotected ? ' (no backup path)' : ''}</Text>
           <View style={styles.figures}>
             <SeverityPill severity={r.severity} />
-            <Text style={styles.figure}>{formatRiskPercent(r.failureProbability)}</Text>
+            <Text style={styles.figure}>{formatRiskPercent(r.failureProbability)} risk of failure</Text>
           </View>
         </View>
       ))}
+      {total > RISKS_SHOWN_FIRST ? (
+        <Button
+          label={all ? `Show the worst ${RISKS_SHOWN_FIRST} only` : `Show all ${total}`} variant="quiet"
+          onPress={() => setAll((a) => !a)} testID="signoff-risk-show-all"
+        />
+      ) : null}
     </Section>
   );
 }

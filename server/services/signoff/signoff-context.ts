@@ -10,7 +10,7 @@ import { selectSignoffWindow, type SignoffWindow } from '../../queries/signoff/s
 import { WindowNotFoundError } from '../windows/errors';
 
 export type AcceptedPlan = {
-  id: string; createdBy: string | null; acceptedBy: string | null; acceptedAt: Date | null;
+  id: string; windowVersion: number; createdBy: string | null; acceptedBy: string | null; acceptedAt: Date | null;
   outageAccepted: string[]; review: PlanReview;
 };
 export type SignoffContext = { window: SignoffWindow; plan: AcceptedPlan | null };
@@ -29,7 +29,7 @@ async function loadPlan(db: Queryable, windowId: string, planId: string): Promis
   const review = planReviewSchema.safeParse(row?.result);
   if (!row || row.windowId !== windowId || row.status !== 'done' || !review.success) return null;
   return {
-    id: row.id, createdBy: row.createdBy, acceptedBy: row.acceptedBy, acceptedAt: row.acceptedAt,
+    id: row.id, windowVersion: row.windowVersion, createdBy: row.createdBy, acceptedBy: row.acceptedBy, acceptedAt: row.acceptedAt,
     outageAccepted: row.outageAccepted ?? [], review: review.data,
   };
 }

@@ -1,42 +1,42 @@
 // Pieces of the one-screen summary worked out from the accepted plan's review: tenants, unresolved slices, risks.
 import type { PlanReview } from '../../../shared/plans';
 import type { SignoffSummary } from '../../../shared/signoff';
+import { tenantTouches, touchCounts, touchedFromImpact, type TouchedSlice } from '../../../shared/touch-counts';
+import type { WindowImpact } from '../../../shared/window-impact';
 import { selectSiteNames, selectSpanEnds } from '../../queries/signoff/element-names';
 import type { ElementRow } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
 
 const SEVERITY_RANK = { low: 0, medium: 1, high: 2, critical: 3 } as const;
-/** A phone screen shows a handful; the full plan (one tap away) lists every slice's risk. */
-const HIGHEST_RISKS_SHOWN = 5;
 
 type Slice = PlanReview['slices'][number];
 const moving = (s: Slice) => s.outcome === 'move' || s.outcome === 'reroute';
 /** A slice the window does not touch, moved to make room for affected ones. */
 const isKnockOn = (s: Slice) => s.madeRoomFor.length > 0;
 
-/** Tenants with moving slices first; knock-on moves count apart from the affected slices. */
-export function tenantCounts(review: PlanReview, names: Map<string, string>): SignoffSummary['tenants'] {
-  const byTenant = new Map<string, { affected: number; moving: number; knockOn: number }>();
-  for (const s of review.slices) {
-    const entry = byTenant.get(s.tenantId) ?? { affected: 0, moving: 0, knockOn: 0 };
-    if (isKnockOn(s)) entry.knockOn += 1;
-    else {
-      entry.affected += 1;
-      if (moving(s)) entry.moving += 1;
-    }
-    byTenant.set(s.tenantId, entry);
-  }
-  return [...byTenant].map(([id, c]) => ({ id, name: names.get(id) ?? id, ...c }))
-    .sort((a, b) => b.moving + b.knockOn - (a.moving + a.knockOn) || a.name.localeCompare(b.name));
+/** The window's touched slices from its stored impact, when it is for the version the plan was computed for. */
+export function impactTouches(impact: WindowImpact | null, windowVersion: number | null): TouchedSlice[] | null {
+  return impact && impact.windowVersion === windowVersion ? touchedFromImpact(impact.affected) : null;
 }
 
-export function planTotals(review: PlanReview): SignoffSummary['totals'] {
-  const touched = review.slices.filter((s) => !isKnockOn(s));
-  const count = (f: (s: Slice) => boolean) => touched.filter(f).length;
+/**
+ * Every tenant with a touched slice (including ones that only lose protection, which a plan never lists) or a
+ * knock-on move; tenants with moving slices first. Names from the impact, then the tenant table.
+ */
+export function tenantCounts(review: PlanReview, touched: TouchedSlice[] | null, names: Map<string, string>): SignoffSummary['tenants'] {
+  return tenantTouches(touched, review.slices).map((t) => ({
+    id: t.tenantId, name: names.get(t.tenantId) ?? t.tenantId, affected: t.touched, moving: t.moving,
+    knockOn: t.knockOn, protectionLost: t.protectionLost,
+  }));
+}
+
+export function planTotals(review: PlanReview, touched: TouchedSlice[] | null): SignoffSummary['totals'] {
+  const counts = touchCounts(touched, review.slices);
+  const own = review.slices.filter((s) => !isKnockOn(s));
   return {
-    affected: touched.length, moving: count(moving),
-    stays: count((s) => s.outcome === 'stays'), unresolved: count((s) => s.outcome === 'unresolved'),
-    knockOn: review.slices.length - touched.length,
+    affected: counts.touched, moving: own.filter(moving).length,
+    stays: counts.touched - own.filter(moving).length - (counts.unresolved ?? 0), unresolved: counts.unresolved ?? 0,
+    knockOn: counts.knockOn ?? 0,
   };
 }
 
@@ -55,11 +55,11 @@ export function unresolvedSlices(review: PlanReview, names: Map<string, string>,
   }));
 }
 
+/** Every slice risk of the plan, worst first; the screen shows the first few and says how many there are. */
 export function highestRisks(review: PlanReview): SignoffSummary['highestRisks'] {
   const sliceName = new Map(review.slices.map((s) => [s.slice, s.name]));
   return [...review.risk]
     .sort((a, b) => SEVERITY_RANK[b.severity] - SEVERITY_RANK[a.severity] || b.failureProbability - a.failureProbability)
-    .slice(0, HIGHEST_RISKS_SHOWN)
     .map((r) => ({ ...r, name: sliceName.get(r.slice) ?? r.slice }));
 }
 

@@ -10,10 +10,12 @@ import { getUsersByIds } from '../../queries/auth/users';
 import { getPolicies } from '../../queries/windows/policies';
 import { getWindowDocument } from '../../queries/windows/documents';
 import { selectElementsByWindow } from '../../queries/windows/window-rows';
+import { getWindowImpact } from '../../queries/windows/impacts';
+import { touchCounts } from '../../../shared/touch-counts';
 import type { Queryable } from '../../../db/client';
 import { SignoffNotFoundError } from './errors';
 import { isOwnWork, listDecisions, loadSignoffContext, quorumFor, riskOfContext, type SignoffContext } from './signoff-context';
-import { highestRisks, knockOnMoves, namedElements, planTotals, tenantCounts, unresolvedSlices } from './summary-parts';
+import { highestRisks, impactTouches, knockOnMoves, namedElements, planTotals, tenantCounts, unresolvedSlices } from './summary-parts';
 
 type My = SignoffSummary['me'];
 
@@ -35,12 +37,14 @@ export async function signoffSummary(db: Db, windowId: string, user: Me): Promis
   const plan = ctx.plan;
   if (!plan) throw new SignoffNotFoundError(windowId);
   const w = ctx.window;
-  const [policies, elements, doc, people, decisions, approvals, me] = await Promise.all([
+  const [policies, elements, doc, people, decisions, approvals, me, impact] = await Promise.all([
     getPolicies(db), selectElementsByWindow(db, [w.id]), getWindowDocument(db, w.id),
     getUsersByIds(db, [w.ownerId, plan.acceptedBy]), listDecisions(db, w.id), countApprovals(db, w.id, w.reviewRound),
-    myState(db, ctx, user),
+    myState(db, ctx, user), getWindowImpact(db, w.id),
   ]);
-  const names = await selectTenantNames(db, [...new Set(plan.review.slices.map((s) => s.tenantId))]);
+  const touched = impactTouches(impact, plan.windowVersion);
+  const tenantIds = [...plan.review.slices.map((s) => s.tenantId), ...(touched ?? []).map((s) => s.tenantId)];
+  const names = await selectTenantNames(db, [...new Set(tenantIds)]);
   const riskClass = riskOfContext(ctx);
   return {
     window: {
@@ -52,8 +56,9 @@ export async function signoffSummary(db: Db, windowId: string, user: Me): Promis
       id: plan.id, href: `/windows/${encodeURIComponent(w.id)}/plans/${encodeURIComponent(plan.id)}`,
       acceptedAt: plan.acceptedAt?.toISOString() ?? null, acceptedBy: person(people.get(plan.acceptedBy ?? '')),
     },
-    tenants: tenantCounts(plan.review, names),
-    totals: planTotals(plan.review),
+    tenants: tenantCounts(plan.review, touched, names),
+    totals: planTotals(plan.review, touched),
+    touch: touchCounts(touched, plan.review.slices),
     knockOn: knockOnMoves(plan.review, names),
     unresolved: unresolvedSlices(plan.review, names, plan.outageAccepted),
     riskClass, highestRisks: highestRisks(plan.review),

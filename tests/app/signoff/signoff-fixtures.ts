@@ -10,8 +10,12 @@ export function summaryFixture(extra: Partial<SignoffSummary> = {}): SignoffSumm
       elements: [{ kind: 'span', id: 'sp-1', name: 'Gullhaven – Tarnby', effect: 'down', fraction: null }],
     },
     plan: { id: 'pl-1', href: '/windows/w-1/plans/pl-1', acceptedAt: '2029-12-20T10:00:00.000Z', acceptedBy: { id: 'u-pl', name: 'Priya Lund' } },
-    tenants: [{ id: 't-1', name: 'Harbour Health', affected: 2, moving: 2, knockOn: 0 }, { id: 't-2', name: 'Marsh Water', affected: 2, moving: 1, knockOn: 0 }],
+    tenants: [
+      { id: 't-1', name: 'Harbour Health', affected: 2, moving: 2, knockOn: 0, protectionLost: 0 },
+      { id: 't-2', name: 'Marsh Water', affected: 2, moving: 1, knockOn: 0, protectionLost: 0 },
+    ],
     totals: { affected: 4, moving: 3, stays: 0, unresolved: 1, knockOn: 0 },
+    touch: { touched: 4, mustMove: 4, protectionLost: 0, unresolved: 1, knockOn: 0 },
     knockOn: [],
     unresolved: [{ slice: 's-4', name: 'Pump telemetry', tenantName: 'Marsh Water', reason: 'no path within 10 ms', outageAccepted: true }],
     riskClass: 'high',

@@ -29,8 +29,10 @@ test('shows what, when (viewer zone), who moves, unresolved slices, risk with th
   expect(screen.getByTestId('signoff-title')).toHaveTextContent('Fibre splice, Gullhaven ring');
   // 21:00 UTC is 22:00 in Oslo in January (CET).
   expect(screen.getByTestId('signoff-when')).toHaveTextContent(/22:00/);
-  expect(screen.getByTestId('signoff-moves-lead')).toHaveTextContent('3 of 4 affected slices move, for 2 tenants');
-  expect(screen.getByTestId('signoff-tenant-t-2')).toHaveTextContent('Marsh Water1 of 2 move');
+  expect(screen.getByTestId('signoff-moves-lead')).toHaveTextContent('4 touched slices of 2 tenants: 3 move');
+  expect(screen.getByTestId('signoff-tenant-t-2')).toHaveTextContent('Marsh Water2 touched slices: 1 move');
+  expect(screen.getByTestId('touch-count-touched')).toHaveTextContent('4');
+  expect(screen.getByTestId('touch-count-unresolved')).toHaveTextContent('1');
   expect(screen.getByTestId('signoff-unresolved')).toHaveTextContent(/Pump telemetry · Marsh Water/);
   expect(screen.getByTestId('signoff-risk')).toHaveTextContent('High risk');
   expect(screen.getByTestId('signoff-quorum')).toHaveTextContent(/^1 of 2 approvals/);
@@ -83,13 +85,13 @@ test('an approver whose own work it is sees why, and no decision form', () => {
 test('knock-on moves: counted apart from the affected slices and listed with whom they make room for, by name', () => {
   render(summaryFixture({
     tenants: [
-      { id: 't-1', name: 'Harbour Health', affected: 2, moving: 2, knockOn: 0 },
-      { id: 't-3', name: 'Quay Logistics', affected: 0, moving: 0, knockOn: 1 },
+      { id: 't-1', name: 'Harbour Health', affected: 2, moving: 2, knockOn: 0, protectionLost: 0 },
+      { id: 't-3', name: 'Quay Logistics', affected: 0, moving: 0, knockOn: 1, protectionLost: 0 },
     ],
     totals: { affected: 2, moving: 2, stays: 0, unresolved: 0, knockOn: 1 },
     knockOn: [{ slice: 's-9', name: 'Forklift tracking', tenantName: 'Quay Logistics', outcome: 'reroute', madeRoomFor: ['Ambulance dispatch', 'Ward monitors'] }],
   }));
-  expect(screen.getByTestId('signoff-moves-lead')).toHaveTextContent('2 of 2 affected slices move, for 2 tenants · 1 more slice moved to make room');
+  expect(screen.getByTestId('signoff-moves-lead')).toHaveTextContent('2 touched slices of 2 tenants: 2 move · 1 more slice moved to make room');
   expect(screen.getByTestId('signoff-tenant-t-3')).toHaveTextContent('Quay Logistics1 moved to make room');
   expect(screen.getByTestId('signoff-knock-on-s-9')).toHaveTextContent(
     'Forklift tracking · Quay LogisticsRerouted to make room for Ambulance dispatch and Ward monitors.');
@@ -98,4 +100,33 @@ test('knock-on moves: counted apart from the affected slices and listed with who
 test('no knock-on section when the plan moves only affected slices', () => {
   render();
   expect(screen.queryByTestId('signoff-knock-on')).toBeNull();
+});
+
+test('a tenant whose slices only lose protection is listed with them, and the touch counts say so', () => {
+  render(summaryFixture({
+    tenants: [
+      { id: 't-1', name: 'Harbour Health', affected: 9, moving: 9, knockOn: 0, protectionLost: 0 },
+      { id: 't-2', name: 'Marsh Water', affected: 3, moving: 0, knockOn: 0, protectionLost: 3 },
+    ],
+    totals: { affected: 12, moving: 9, stays: 3, unresolved: 0, knockOn: 0 },
+    touch: { touched: 12, mustMove: 9, protectionLost: 3, unresolved: 0, knockOn: 0 },
+    unresolved: [],
+  }));
+  expect(screen.getByTestId('signoff-moves-lead')).toHaveTextContent('12 touched slices of 2 tenants: 9 move · 3 stay put');
+  expect(screen.getByTestId('signoff-tenant-t-2')).toHaveTextContent('Marsh Water3 touched slices: 0 move · 3 lose protection but stay up');
+  expect(screen.getByTestId('touch-count-protectionLost')).toHaveTextContent('3');
+  expect(screen.getByTestId('touch-count-mustMove')).toHaveTextContent('9');
+});
+
+test('a long risk list says how many of how many it shows, and shows all on request', () => {
+  const risks = Array.from({ length: 9 }, (_, i) => ({
+    slice: `s-${i}`, name: `Slice ${i}`, severity: 'medium' as const, failureProbability: 0.0004, unprotected: false,
+  }));
+  render(summaryFixture({ highestRisks: risks }));
+  expect(screen.getByTestId('signoff-risk-shown')).toHaveTextContent('5 of 9 slices shown, worst first');
+  expect(screen.queryByText('Slice 6')).toBeNull();
+  expect(screen.getByTestId('signoff-risk-scale')).toHaveTextContent(/Medium = priority 2–3/);
+  fireEvent.press(screen.getByTestId('signoff-risk-show-all'));
+  expect(screen.getByTestId('signoff-risk-shown')).toHaveTextContent('All 9 slices shown, worst first');
+  expect(screen.getByText('Slice 6')).toBeTruthy();
 });
