@@ -41,13 +41,23 @@ async function readJson(response: Response): Promise<unknown> {
 // Optional beside the contract's { code, message }: forms place these next to their fields.
 const errorDetailsSchema = z.object({ error: z.object({ details: z.array(z.object({ path: z.string(), message: z.string() })) }) });
 
+/**
+ * Server messages written for API clients, not for people: the app says these in its own words. An unknown route
+ * is also what a tenant user gets for staff-only data (the server does not confirm that it exists).
+ */
+const PERSON_WORDING: Readonly<Record<string, string>> = {
+  ROUTE_NOT_FOUND: 'This is not available to you. Use the areas in the menu to find what you are looking for.',
+};
+const UNREADABLE_REPLY = 'Slackwater answered in a way this screen cannot read. Try again; if it keeps happening, tell your administrator.';
+
 function errorFromReply(status: number, body: unknown): ApiError {
   const parsed = apiErrorSchema.safeParse(body);
   const details = errorDetailsSchema.safeParse(body);
   if (parsed.success) {
-    return new ApiError(status, parsed.data.error.code, parsed.data.error.message, details.success ? details.data.error.details : []);
+    const { code, message } = parsed.data.error;
+    return new ApiError(status, code, PERSON_WORDING[code] ?? message, details.success ? details.data.error.details : []);
   }
-  return new ApiError(status, CLIENT_ERROR_CODES.badResponse, `The server answered ${status} without an error body.`);
+  return new ApiError(status, CLIENT_ERROR_CODES.badResponse, UNREADABLE_REPLY);
 }
 
 /**
@@ -70,7 +80,7 @@ export async function apiFetch<S extends z.ZodType>(path: string, schema: S, ini
   if (!response.ok) throw errorFromReply(response.status, body);
   const parsed = schema.safeParse(body);
   if (!parsed.success) {
-    throw new ApiError(response.status, CLIENT_ERROR_CODES.badResponse, `Unexpected reply from ${path}.`);
+    throw new ApiError(response.status, CLIENT_ERROR_CODES.badResponse, UNREADABLE_REPLY);
   }
   return parsed.data;
 }
