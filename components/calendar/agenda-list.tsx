@@ -28,7 +28,6 @@ export function AgendaList({ day, timeZone, windows, freezes, onOpenWindow, empt
         <Text style={styles.heading} role="heading" testID="calendar-agenda-day">
           {dayHeading(day, timeZone)}
         </Text>
-        <Text style={styles.zone}>Times in {timeZone}</Text>
       </View>
       {freezes.map((freeze) => (
         <View key={freeze.id} style={styles.freeze} testID={`agenda-freeze-${freeze.id}`}>
@@ -57,7 +56,6 @@ const styles = StyleSheet.create({
   panel: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, padding: space.lg, gap: space.xs },
   header: { gap: space.xxs, marginBottom: space.sm },
   heading: { ...type.heading, color: colors.ink },
-  zone: { ...type.caption, color: colors.inkMuted },
   freeze: {
     backgroundColor: calendarColors.freezeWash,
     borderLeftWidth: 4,

@@ -3,6 +3,7 @@
 import { useMemo, useRef } from 'react';
 import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { Button } from '@/components/button';
+import { timesInLabel } from '@/components/time';
 import { colors, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
 import { AgendaList } from './agenda-list';
 import { buildMarkedDays, freezesOnDay, windowsOnDay } from './calendar-marks';
@@ -89,7 +90,7 @@ export function CalendarView(props: CalendarViewProps) {
           <Text style={styles.title} role="heading">
             {wide ? 'Maintenance calendar' : 'Calendar'}
           </Text>
-          <Text style={styles.subtitle}>Times in {timeZone}</Text>
+          <Text style={styles.subtitle} testID="calendar-zone">{timesInLabel(timeZone)}</Text>
         </View>
         {canBook ? <Button label="Book a window" onPress={onBook} testID="calendar-book" /> : null}
       </View>

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { Button } from '@/components/button';
 import { TextField } from '@/components/text-field';
+import { timesInLabel } from '@/components/time';
 import { colors, radii, space, type } from '@/constants/theme';
 import { validateFreezeDraft, type FreezeDraft, type FreezeDraftErrors } from './freeze-form-state';
 import type { FreezeCreate } from '@/shared/freezes';
@@ -32,7 +33,7 @@ export function FreezeForm({ initial, heading, timeZone, busy, serverError, onSu
       <Text style={styles.heading} role="heading">
         {heading}
       </Text>
-      <Text style={styles.zone}>Dates and times in {timeZone}</Text>
+      <Text style={styles.zone}>{timesInLabel(timeZone)}</Text>
       <TextField label="Title" value={draft.title} onChangeText={set('title')} error={errors.title} testID="freeze-title" />
       <View style={styles.pair}>
         <View style={styles.date}>

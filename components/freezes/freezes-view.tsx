@@ -3,6 +3,7 @@
 import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import type { Freeze } from '@/shared/freezes';
 import { Button } from '@/components/button';
+import { timesInLabel } from '@/components/time';
 import { colors, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
 import { FreezeForm } from './freeze-form';
 import { draftFromFreeze, EMPTY_FREEZE_DRAFT } from './freeze-form-state';
@@ -47,7 +48,7 @@ export function FreezesView({ freezes, timeZone, canEdit, editor, nowMs = Date.n
             Freezes
           </Text>
           <Text style={styles.subtitle}>
-            Periods in which no window may be booked{canEdit ? '' : ' (set by admins)'}. Times in {timeZone}.
+            Periods in which no window may be booked{canEdit ? '' : ' (set by admins)'}. {timesInLabel(timeZone)}.
           </Text>
         </View>
         {canEdit && !editing ? <Button label="New freeze" onPress={editor.startNew} testID="freeze-new" /> : null}

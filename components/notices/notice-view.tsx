@@ -1,4 +1,4 @@
-// A notice as its tenant reads it: what, when (tenant's zone and UTC), effect, each slice's moves, contact,
+// A notice as its tenant reads it: what, when (the reader's own zone and UTC), effect, each slice's moves, contact,
 // the acknowledgement, and the invitation to add to a calendar again.
 import { Linking, StyleSheet, Text, View } from 'react-native';
 import type { Notice } from '@/shared/notices';
@@ -6,7 +6,8 @@ import { Button } from '@/components/button';
 import { CriticalCaution } from '@/components/critical-caution';
 import { Badge } from '@/components/inventory/badges';
 import { DetailFrame, Note, Section } from '@/components/inventory/detail-frame';
-import { formatInstant } from '@/components/time';
+import { describeZone, formatInstant, formatUtcRange, formatWindowRange } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { colors, radii, space, type } from '@/constants/theme';
 import { canAcknowledge, EFFECT_LABEL } from './notice-format';
 import { NoticeSliceCard } from './notice-slice-card';
@@ -19,11 +20,11 @@ type Props = {
   error: string | null;
 };
 
-function Acknowledgement({ notice, onAcknowledge, acknowledging, error }: Omit<Props, 'icsHref'>) {
+function Acknowledgement({ notice, onAcknowledge, acknowledging, error, timeZone }: Omit<Props, 'icsHref'> & { timeZone: string }) {
   if (notice.content.cancelled) return <Note>This work was withdrawn; there is nothing to acknowledge.</Note>;
   if (notice.acknowledgedAt) {
     const who = notice.acknowledgedByName ? ` by ${notice.acknowledgedByName}` : '';
-    return <Text style={styles.acked} testID="notice-acknowledged">{`Acknowledged${who} on ${formatInstant(notice.acknowledgedAt, notice.content.timeZone)}`}</Text>;
+    return <Text style={styles.acked} testID="notice-acknowledged">{`Acknowledged${who} on ${formatInstant(notice.acknowledgedAt, timeZone)}`}</Text>;
   }
   return (
     <View style={styles.ackBox}>
@@ -36,6 +37,8 @@ function Acknowledgement({ notice, onAcknowledge, acknowledging, error }: Omit<P
 export function NoticeView(props: Props) {
   const { notice, icsHref } = props;
   const c = notice.content;
+  // The reader's own zone, so the notice reads the same as the overview and calendar beside it.
+  const timeZone = useViewerTimeZone();
   const critical = c.slices.some((s) => s.critical);
   return (
     <DetailFrame
@@ -47,10 +50,10 @@ export function NoticeView(props: Props) {
       badges={<Badge label={c.cancelled ? 'Cancelled' : EFFECT_LABEL[c.effect]} tone={c.effect === 'interruption' && !c.cancelled ? 'danger' : 'primary'} />}
     >
       <View style={styles.when} testID="notice-when">
-        <Text style={styles.whenLabel}>When (your zone)</Text>
-        <Text style={styles.whenValue}>{c.whenLocal}</Text>
+        <Text style={styles.whenLabel}>{`When (your zone: ${describeZone(timeZone)})`}</Text>
+        <Text style={styles.whenValue} testID="notice-when-local">{formatWindowRange(c.startsAt, c.endsAt, timeZone)}</Text>
         <Text style={styles.whenLabel}>When (UTC)</Text>
-        <Text style={styles.whenValue}>{c.whenUtc}</Text>
+        <Text style={styles.whenValue} testID="notice-when-utc">{formatUtcRange(c.startsAt, c.endsAt)}</Text>
       </View>
       {c.cancelled ? null : (
         <>
@@ -71,7 +74,7 @@ export function NoticeView(props: Props) {
         </View>
       ) : null}
       <Section title="Acknowledgement">
-        <Acknowledgement {...props} />
+        <Acknowledgement {...props} timeZone={timeZone} />
       </Section>
       <Section title="Calendar">
         <Button label={c.cancelled ? 'Download the cancellation (.ics)' : 'Add to calendar (.ics)'} variant="quiet"

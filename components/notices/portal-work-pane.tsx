@@ -3,7 +3,8 @@ import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, Text } from 'react-native';
 import type { PortalWork } from '@/shared/notices';
 import { ListPane } from '@/components/inventory/list-pane';
-import { zoneName } from '@/components/time';
+import { timesInLabel } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { colors, space, type } from '@/constants/theme';
 import { PortalWorkRow } from './portal-work-row';
 
@@ -18,11 +19,12 @@ export function PortalWorkPane({ children }: { children: ReactNode }) {
 type ListProps = { work: PortalWork; selectedId: string | null; onOpen: (noticeId: string) => void };
 
 export function PortalWorkList({ work, selectedId, onOpen }: ListProps) {
+  const timeZone = useViewerTimeZone();
   return (
     <ScrollView contentContainerStyle={styles.list} testID="notices-list">
-      <Text style={styles.zone}>{`Times in ${zoneName(new Date(), work.timeZone)}, the network's zone`}</Text>
+      <Text style={styles.zone} testID="notices-zone">{timesInLabel(timeZone)}</Text>
       {work.items.map((item) => (
-        <PortalWorkRow key={item.windowId} item={item} timeZone={work.timeZone} selected={item.notice?.id === selectedId} onOpen={onOpen} />
+        <PortalWorkRow key={item.windowId} item={item} timeZone={timeZone} selected={item.notice?.id === selectedId} onOpen={onOpen} />
       ))}
     </ScrollView>
   );

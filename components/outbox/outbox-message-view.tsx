@@ -3,14 +3,15 @@ import { Linking, Pressable, StyleSheet, Text, View } from 'react-native';
 import type { OutboxMessage } from '@/shared/outbox';
 import { outboxRawPath } from '@/hooks/queries/outbox';
 import { DetailFrame, Note, Section } from '@/components/inventory/detail-frame';
-import { formatInstant, viewerTimeZone } from '@/components/time';
+import { formatInstant } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { colors, radii, space, type } from '@/constants/theme';
 import { formatSizeBytes } from './outbox-format';
 import { OutboxHeaders } from './outbox-headers';
 import { OutboxInvitation } from './outbox-invitation';
 
 export function OutboxMessageView({ message }: { message: OutboxMessage }) {
-  const zone = viewerTimeZone();
+  const zone = useViewerTimeZone();
   return (
     <DetailFrame
       kicker={`Message ${message.id} · ${formatSizeBytes(message.sizeBytes)}`}

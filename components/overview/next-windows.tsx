@@ -1,7 +1,7 @@
 // The next maintenance windows, times shown in the viewer's zone with the zone named in the heading.
 import { Text, View } from 'react-native';
 import type { Overview } from '@/shared/api';
-import { formatWindowRange } from '@/components/overview/time-format';
+import { formatWindowRange } from '@/components/time';
 import { UpcomingPanel, upcomingStyles as styles } from '@/components/overview/upcoming-panel';
 
 export function NextWindows({ windows }: { windows: Overview['nextWindows'] }) {

@@ -1,7 +1,7 @@
 // A tenant user's coming work on its slices, in its notices' words; each row opens the notice.
 import { Pressable, Text, View } from 'react-native';
 import type { TenantWindowView } from '@/shared/tenant-windows';
-import { formatWindowRange } from '@/components/overview/time-format';
+import { formatWindowRange } from '@/components/time';
 import { UpcomingPanel, upcomingStyles as styles } from '@/components/overview/upcoming-panel';
 
 export function NextWork({ work, onOpenNotice }: { work: readonly TenantWindowView[]; onOpenNotice: (noticeId: string) => void }) {

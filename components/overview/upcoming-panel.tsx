@@ -2,18 +2,19 @@
 // with a main column and a stage badge.
 import type { ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
-import { viewerTimeZone } from '@/components/overview/time-format';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
+import { ZoneNote } from '@/components/time/zoned-when';
 import { colors, radii, space, type } from '@/constants/theme';
 
 export function UpcomingPanel({ title, emptyText, count, testID, children }: {
   title: string; emptyText: string; count: number; testID: string; children: (timeZone: string) => ReactNode;
 }) {
-  const timeZone = viewerTimeZone();
+  const timeZone = useViewerTimeZone();
   return (
     <View style={upcomingStyles.panel} testID={testID}>
       <View style={upcomingStyles.header}>
         <Text style={upcomingStyles.title} role="heading">{title}</Text>
-        <Text style={upcomingStyles.zone}>Times in {timeZone}</Text>
+        <ZoneNote timeZone={timeZone} testID={`${testID}-zone`} />
       </View>
       {count === 0 ? <Text style={upcomingStyles.empty}>{emptyText}</Text> : children(timeZone)}
     </View>
@@ -24,7 +25,6 @@ export const upcomingStyles = StyleSheet.create({
   panel: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, padding: space.lg },
   header: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', justifyContent: 'space-between', gap: space.sm, marginBottom: space.sm },
   title: { ...type.heading, color: colors.ink },
-  zone: { ...type.caption, color: colors.inkMuted },
   empty: { ...type.body, color: colors.inkMuted, paddingVertical: space.md },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingVertical: space.md },
   rowDivider: { borderTopWidth: 1, borderTopColor: colors.surfaceSunken },

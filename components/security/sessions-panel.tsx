@@ -1,9 +1,8 @@
 // The session list wired to the API: the signed-in user's sessions, ending one, and signing out everywhere.
 import { useEndSessionMutation, useMySessionsQuery, useSignOutEverywhereMutation } from '@/hooks/queries/sessions';
-import { viewerTimeZone } from '@/components/time';
 import { SessionsSection } from './sessions-section';
 
-export function SessionsPanel({ onSignedOutEverywhere, timeZone = viewerTimeZone() }: { onSignedOutEverywhere: () => void; timeZone?: string }) {
+export function SessionsPanel({ onSignedOutEverywhere, timeZone }: { onSignedOutEverywhere: () => void; timeZone: string }) {
   const list = useMySessionsQuery();
   const end = useEndSessionMutation();
   const everywhere = useSignOutEverywhereMutation();

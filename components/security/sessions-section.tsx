@@ -4,7 +4,7 @@ import { useState } from 'react';
 import { ActivityIndicator, StyleSheet, Text, View } from 'react-native';
 import type { SessionInfo } from '@/shared/sessions';
 import { Button } from '@/components/button';
-import { zoneName } from '@/components/time';
+import { timesInLabel } from '@/components/time';
 import { colors, space, type } from '@/constants/theme';
 import { SessionRow } from './session-row';
 
@@ -55,7 +55,7 @@ function Body(props: SessionsSectionProps) {
   if (sessions.length === 0) return <Text style={styles.muted} testID="sessions-empty">No open sessions.</Text>;
   return (
     <View testID="sessions-list">
-      <Text style={styles.muted}>Times in {timeZone} ({zoneName(new Date(), timeZone)}).</Text>
+      <Text style={styles.muted}>{timesInLabel(timeZone)}.</Text>
       {sessions.map((session) => (
         <SessionRow key={session.id} session={session} timeZone={timeZone} ending={props.endingId === session.id} onEnd={props.onEnd} />
       ))}

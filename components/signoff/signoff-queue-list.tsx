@@ -3,7 +3,7 @@ import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { SignoffQueueItem } from '@/shared/signoff';
 import { PageColumn } from '@/components/page-column';
-import { formatWindowRange } from '@/components/time';
+import { describeZone, formatWindowRange } from '@/components/time';
 import { RiskPill } from '@/components/signoff/risk-pill';
 import { quorumSentence } from '@/components/signoff/signoff-words';
 import { colors, radii, space, type } from '@/constants/theme';
@@ -41,7 +41,7 @@ export function SignoffQueueList({ items, timeZone, onOpen, footer }: Props) {
   return (
     <PageColumn narrow>
       <Text style={styles.heading} role="heading" aria-level={1}>Sign-off</Text>
-      <Text style={styles.meta}>{items.length} window{items.length === 1 ? '' : 's'} in review · times in {timeZone}</Text>
+      <Text style={styles.meta}>{items.length} window{items.length === 1 ? '' : 's'} in review · times in {describeZone(timeZone)}</Text>
       {items.map((item) => <QueueRow key={item.windowId} item={item} timeZone={timeZone} onOpen={onOpen} />)}
       {footer}
     </PageColumn>

@@ -1,8 +1,11 @@
 // Instants shown in the viewer's time zone with the zone named, so nobody has to guess (windows are stored in UTC).
 import { dayKeyAt } from './zone-clock';
 
-/** The viewer's IANA zone, e.g. "Europe/Oslo"; UTC where the runtime does not know it. */
-export function viewerTimeZone(): string {
+/**
+ * This device's IANA zone, e.g. "Europe/Oslo"; UTC where the runtime does not know it. Only offered as a choice
+ * when a person picks their zone: screens show times in useViewerTimeZone(), the zone the person chose.
+ */
+export function deviceTimeZone(): string {
   return Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
 }
 

@@ -5,7 +5,8 @@ import type { Me } from '@/shared/api';
 import type { Window } from '@/shared/windows';
 import { useWindowAssessMutation, useWindowConflictsQuery, useWindowTransitionMutation, windowMopUrl } from '@/hooks/queries/windows';
 import { Button } from '@/components/button';
-import { formatDuration, formatWindowRange } from '@/components/time';
+import { describeZone, formatDuration } from '@/components/time';
+import { ZonedWhen } from '@/components/time/zoned-when';
 import { ConflictsList } from '@/components/windows/conflicts-list';
 import { windowActions } from '@/components/windows/lifecycle';
 import { LifecycleLine } from '@/components/windows/lifecycle-line';
@@ -49,8 +50,8 @@ export function WindowDetail({ window: w, me, timeZone, flash, onEdit, onOpenImp
       <View style={styles.column}>
         <Text style={styles.title} role="heading" aria-level={1} testID="window-title-heading">{w.title}</Text>
         <StatusBadge status={w.status} testID="window-status" />
-        <Text style={styles.when} testID="window-when">{formatWindowRange(w.startsAt, w.endsAt, timeZone)}</Text>
-        <Text style={styles.muted}>Lasts {formatDuration(durationMs)} · times in {timeZone}{w.workType ? ` · ${w.workType}` : ''}</Text>
+        <ZonedWhen startsAt={w.startsAt} endsAt={w.endsAt} timeZone={timeZone} style={styles.when} testID="window-when" />
+        <Text style={styles.muted}>Lasts {formatDuration(durationMs)} · times in {describeZone(timeZone)}{w.workType ? ` · ${w.workType}` : ''}</Text>
         <WindowNotices flash={flash} window={w} />
         <LifecycleLine status={w.status} />
         {actionError ? (

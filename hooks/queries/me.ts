@@ -1,7 +1,8 @@
-// The signed-in user: who am I, sign in, sign out.
+// The signed-in user: who am I, sign in, sign out, and the time zone they read times in.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { z } from 'zod';
 import { meSchema, signInResponseSchema, type Me, type SignInRequest } from '@/shared/api';
+import type { TimeZoneUpdate } from '@/shared/time-zone';
 import { apiFetch, jsonBody } from '@/hooks/api-fetch';
 
 const ME_ROOT = ['me'] as const;
@@ -37,5 +38,14 @@ export function useSignOutMutation() {
     // Drop every cached answer: the next user of this browser must not see this one's data.
     // removeQueries, not clear(): the mutation itself must survive to run its callers' onSuccess.
     onSuccess: () => queryClient.removeQueries(),
+  });
+}
+
+/** Sets the signed-in user's zone (null = the network's zone); every screen re-reads it from the user record. */
+export function useTimeZoneMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: TimeZoneUpdate) => apiFetch('/api/me/time-zone', meSchema, jsonBody('PATCH', input)),
+    onSuccess: (user) => queryClient.setQueryData<Me>(meKey(), user),
   });
 }

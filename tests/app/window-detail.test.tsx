@@ -35,7 +35,8 @@ test('shows the times in the viewer zone, the lifecycle sentence, and conflicts 
   routedFetch([{ method: 'GET', path: /^\/api\/windows\/w-1\/conflicts$/, reply: () => ({ status: 200, body: conflicts }) }]);
   const { onOpenWindow } = renderDetail();
   // 21:00–01:00 UTC is 22:00–02:00 in Berlin in January (CET, UTC+1).
-  expect(screen.getByTestId('window-when')).toHaveTextContent('Thu 10 Jan, 22:00 – Fri 11 Jan, 02:00 CET');
+  expect(screen.getByTestId('window-when-local')).toHaveTextContent('Thu 10 Jan, 22:00 – Fri 11 Jan, 02:00 CET');
+  expect(screen.getByTestId('window-when-utc')).toHaveTextContent('Thu 10 Jan, 21:00 – Fri 11 Jan, 01:00 UTC');
   expect(screen.getByTestId('window-lifecycle-sentence')).toHaveTextContent(STATUS_SENTENCES.draft);
   expect(screen.getByTestId('window-conflict-note')).toHaveTextContent(/Collides with 1 other window/);
 

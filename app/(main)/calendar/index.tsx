@@ -11,11 +11,12 @@ import { noticeIdOf, tenantCalendarWindows } from '@/components/calendar/tenant-
 import { useCalendarState } from '@/components/calendar/use-calendar-state';
 import { listParams } from '@/components/calendar/window-filters';
 import { canBookWindows, isOperator, tenantScopeOf } from '@/shared/permissions';
-import { viewerTimeZone, visibleRange } from '@/components/time';
+import { visibleRange } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 
 export default function CalendarScreen() {
   const router = useRouter();
-  const timeZone = viewerTimeZone();
+  const timeZone = useViewerTimeZone();
   const state = useCalendarState(timeZone);
   const me = useMeQuery().data;
   const roles = me?.roles ?? [];

@@ -5,14 +5,14 @@ import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states
 import { FreezesView } from '@/components/freezes/freezes-view';
 import { useFreezeEditor } from '@/components/freezes/use-freeze-editor';
 import { canAdminister, isOperator } from '@/shared/permissions';
-import { viewerTimeZone } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 
 export default function FreezesScreen() {
   const roles = useMeQuery().data?.roles ?? [];
   const freezes = useFreezesQuery(isOperator(roles));
   const editor = useFreezeEditor();
   const canEdit = canAdminister(roles);
-  const timeZone = viewerTimeZone();
+  const timeZone = useViewerTimeZone();
 
   if (!isOperator(roles)) return <EmptyState title="Freezes are for operator staff" hint="Your planned-work notices list what affects you." />;
 

@@ -5,9 +5,10 @@ import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states
 import { SplitView } from '@/components/inventory/split-view';
 import { OutboxList } from '@/components/outbox/outbox-list';
 import { OutboxPane, outboxIdFromPath } from '@/components/outbox/outbox-pane';
-import { viewerTimeZone } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 
 export default function OutboxLayout() {
+  const timeZone = useViewerTimeZone();
   const pathname = usePathname();
   const router = useRouter();
   const outbox = useOutboxListQuery();
@@ -31,7 +32,7 @@ export default function OutboxLayout() {
         messages={messages}
         total={total}
         selectedId={selectedId}
-        viewerZone={viewerTimeZone()}
+        viewerZone={timeZone}
         onOpen={(id) => router.push({ pathname: '/outbox/[id]', params: { id: String(id) } })}
         hasMore={outbox.hasNextPage}
         loadingMore={outbox.isFetchingNextPage}

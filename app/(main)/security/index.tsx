@@ -1,18 +1,23 @@
-// Security: one-time codes for sign-off decisions (operators), and your open sessions, with sign out everywhere.
+// Security: your time zone, one-time codes for sign-off decisions (operators), and your open sessions, with sign
+// out everywhere.
 import { useRouter } from 'expo-router';
 import { useMeQuery } from '@/hooks/queries/me';
 import { PageColumn } from '@/components/page-column';
 import { OtpSection } from '@/components/security/otp-section';
 import { SessionsPanel } from '@/components/security/sessions-panel';
+import { TimeZoneSection } from '@/components/security/time-zone-section';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { isOperator } from '@/shared/permissions';
 
 export default function SecurityScreen() {
   const router = useRouter();
   const me = useMeQuery();
+  const timeZone = useViewerTimeZone();
   return (
     <PageColumn narrow>
+      <TimeZoneSection />
       {me.data && isOperator(me.data.roles) ? <OtpSection /> : null}
-      <SessionsPanel onSignedOutEverywhere={() => router.replace('/sign-in')} />
+      <SessionsPanel timeZone={timeZone} onSignedOutEverywhere={() => router.replace('/sign-in')} />
     </PageColumn>
   );
 }

@@ -3,9 +3,10 @@ import { useLocalSearchParams, useRouter, type Href } from 'expo-router';
 import { useOtpStatusQuery, useSignoffDecisionMutation, useSignoffSummaryQuery } from '@/hooks/queries/signoff';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { SignoffSummaryView } from '@/components/signoff/signoff-summary-view';
-import { viewerTimeZone } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 
 export default function SignoffWindowScreen() {
+  const timeZone = useViewerTimeZone();
   const { windowId } = useLocalSearchParams<{ windowId: string }>();
   const router = useRouter();
   const summary = useSignoffSummaryQuery(windowId);
@@ -16,7 +17,7 @@ export default function SignoffWindowScreen() {
   return (
     <SignoffSummaryView
       summary={summary.data}
-      timeZone={viewerTimeZone()}
+      timeZone={timeZone}
       codeEnrolled={otp.data?.enrolled ?? false}
       deciding={decision.isPending}
       decisionError={decision.error}

@@ -6,9 +6,10 @@ import { useSignoffQueueQuery } from '@/hooks/queries/signoff';
 import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states';
 import { QueueFooter } from '@/components/signoff/queue-footer';
 import { SignoffQueueList } from '@/components/signoff/signoff-queue-list';
-import { viewerTimeZone } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 
 export default function SignoffQueueScreen() {
+  const timeZone = useViewerTimeZone();
   const router = useRouter();
   const roles = useMeQuery().data?.roles ?? [];
   const allowed = canOpenSignoffQueue(roles);
@@ -25,5 +26,5 @@ export default function SignoffQueueScreen() {
       </>
     );
   }
-  return <SignoffQueueList items={queue.data.windows} timeZone={viewerTimeZone()} onOpen={(id) => router.push(`/sign-off/${encodeURIComponent(id)}`)} footer={footer} />;
+  return <SignoffQueueList items={queue.data.windows} timeZone={timeZone} onOpen={(id) => router.push(`/sign-off/${encodeURIComponent(id)}`)} footer={footer} />;
 }

@@ -3,11 +3,12 @@ import { useRouter } from 'expo-router';
 import { canBookWindows } from '@/shared/permissions';
 import { useMeQuery } from '@/hooks/queries/me';
 import { ErrorState, LoadingState } from '@/components/screen-states';
-import { viewerTimeZone } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { BookWindow } from '@/components/windows/book-window';
 import { detailHref, FormPage } from '@/components/windows/form-page';
 
 export default function NewWindowScreen() {
+  const timeZone = useViewerTimeZone();
   const router = useRouter();
   const me = useMeQuery();
   if (me.isError) return <ErrorState message={me.error.message} onRetry={() => void me.refetch()} />;
@@ -17,7 +18,7 @@ export default function NewWindowScreen() {
     <FormPage title="Book a window">
       <BookWindow
         me={me.data}
-        timeZone={viewerTimeZone()}
+        timeZone={timeZone}
         onSaved={(outcome) => router.replace(detailHref({ ...outcome, saved: 'booked' }))}
         onCancel={() => (router.canGoBack() ? router.back() : router.replace('/calendar'))}
       />

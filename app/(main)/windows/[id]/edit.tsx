@@ -3,11 +3,12 @@ import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useMeQuery } from '@/hooks/queries/me';
 import { useWindowQuery } from '@/hooks/queries/windows';
 import { ErrorState, LoadingState } from '@/components/screen-states';
-import { viewerTimeZone } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { EditWindow } from '@/components/windows/edit-window';
 import { detailHref, FormPage } from '@/components/windows/form-page';
 
 export default function EditWindowScreen() {
+  const timeZone = useViewerTimeZone();
   const { id } = useLocalSearchParams<{ id: string }>();
   const router = useRouter();
   const me = useMeQuery();
@@ -19,7 +20,7 @@ export default function EditWindowScreen() {
       <EditWindow
         window={window.data}
         me={me.data}
-        timeZone={viewerTimeZone()}
+        timeZone={timeZone}
         onReload={() => window.refetch()}
         reloading={window.isFetching}
         onSaved={(outcome) => router.replace(detailHref({ ...outcome, saved: 'edited' }))}

@@ -3,16 +3,17 @@ import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useMeQuery } from '@/hooks/queries/me';
 import { useWindowQuery } from '@/hooks/queries/windows';
 import { ErrorState, LoadingState } from '@/components/screen-states';
-import { viewerTimeZone } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { ImpactReview } from '@/components/impact/impact-review';
 import { detailHref } from '@/components/windows/form-page';
 
 export default function WindowImpactScreen() {
+  const timeZone = useViewerTimeZone();
   const { id } = useLocalSearchParams<{ id: string }>();
   const router = useRouter();
   const me = useMeQuery();
   const window = useWindowQuery(id);
   if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => void window.refetch()} />;
   if (!window.data || !me.data) return <LoadingState label="Loading the window…" />;
-  return <ImpactReview window={window.data} me={me.data} timeZone={viewerTimeZone()} onOpenWindow={() => router.push(detailHref({ id }))} />;
+  return <ImpactReview window={window.data} me={me.data} timeZone={timeZone} onOpenWindow={() => router.push(detailHref({ id }))} />;
 }

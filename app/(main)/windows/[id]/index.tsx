@@ -3,7 +3,7 @@ import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useMeQuery } from '@/hooks/queries/me';
 import { useWindowQuery } from '@/hooks/queries/windows';
 import { ErrorState, LoadingState } from '@/components/screen-states';
-import { viewerTimeZone } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { detailHref, flashFromParams } from '@/components/windows/form-page';
 import { WindowDetail } from '@/components/windows/window-detail';
 import { WindowPlansEntry } from '@/components/plans/window-plans-entry';
@@ -11,6 +11,7 @@ import { SubmitForSignoff } from '@/components/signoff/submit-for-signoff';
 import { WindowTenantNotices } from '@/components/notices/window-tenant-notices';
 
 export default function WindowScreen() {
+  const timeZone = useViewerTimeZone();
   const params = useLocalSearchParams<{ id: string; saved?: string; reverted?: string; mop?: string }>();
   const router = useRouter();
   const me = useMeQuery();
@@ -21,7 +22,7 @@ export default function WindowScreen() {
     <WindowDetail
       window={window.data}
       me={me.data}
-      timeZone={viewerTimeZone()}
+      timeZone={timeZone}
       flash={flashFromParams(params)}
       onEdit={() => router.push(`/windows/${encodeURIComponent(params.id)}/edit`)}
       onOpenImpact={() => router.push(`/windows/${encodeURIComponent(params.id)}/impact`)}
@@ -35,7 +36,7 @@ export default function WindowScreen() {
         onOpenPlan={(planId) => router.push(`/windows/${encodeURIComponent(params.id)}/plans/${encodeURIComponent(planId)}`)}
       />
       <SubmitForSignoff window={window.data} me={me.data} onOpenSignoff={() => router.push(`/sign-off/${encodeURIComponent(params.id)}`)} />
-      <WindowTenantNotices windowId={params.id} me={me.data} timeZone={viewerTimeZone()} />
+      <WindowTenantNotices windowId={params.id} me={me.data} timeZone={timeZone} />
     </WindowDetail>
   );
 }

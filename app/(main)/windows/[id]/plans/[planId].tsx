@@ -4,10 +4,11 @@ import { useMeQuery } from '@/hooks/queries/me';
 import { usePlanQuery } from '@/hooks/queries/plans';
 import { useWindowQuery } from '@/hooks/queries/windows';
 import { ErrorState, LoadingState } from '@/components/screen-states';
-import { viewerTimeZone } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { PlanDetailView } from '@/components/plans/plan-detail-view';
 
 export default function PlanScreen() {
+  const timeZone = useViewerTimeZone();
   const { id, planId } = useLocalSearchParams<{ id: string; planId: string }>();
   const router = useRouter();
   const me = useMeQuery();
@@ -21,7 +22,7 @@ export default function PlanScreen() {
       plan={plan.data.plan}
       windowTitle={window.data?.title ?? id}
       me={me.data}
-      timeZone={viewerTimeZone()}
+      timeZone={timeZone}
       onOpenRuns={() => router.push(runs)}
       onAdjust={() => router.push(`${runs}?from=${encodeURIComponent(planId)}`)}
       onReschedule={() => router.push(`/windows/${encodeURIComponent(id)}/edit`)}

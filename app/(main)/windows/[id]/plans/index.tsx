@@ -4,11 +4,12 @@ import { useMeQuery } from '@/hooks/queries/me';
 import { useWindowPlansQuery } from '@/hooks/queries/plans';
 import { useWindowQuery } from '@/hooks/queries/windows';
 import { ErrorState, LoadingState } from '@/components/screen-states';
-import { viewerTimeZone } from '@/components/time';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { PlansView } from '@/components/plans/plans-view';
 import { detailHref } from '@/components/windows/form-page';
 
 export default function WindowPlansScreen() {
+  const timeZone = useViewerTimeZone();
   const { id, from } = useLocalSearchParams<{ id: string; from?: string }>();
   const router = useRouter();
   const me = useMeQuery();
@@ -23,7 +24,7 @@ export default function WindowPlansScreen() {
       window={window.data}
       me={me.data}
       plans={plans.data.plans}
-      timeZone={viewerTimeZone()}
+      timeZone={timeZone}
       adjustFrom={plans.data.plans.find((p) => p.id === from)?.settings}
       onOpenPlan={(planId) => router.push(`/windows/${encodeURIComponent(id)}/plans/${encodeURIComponent(planId)}`)}
       onOpenWindow={() => router.push(detailHref({ id }))}
