@@ -16,15 +16,18 @@ type Props = {
   children?: React.ReactNode;
 };
 
-/** Shorter cells on phones so the agenda starts within the first screen. */
-export const DAY_CELL_HEIGHT_PX = { phone: 52, wide: 72 } as const;
+/** Room for the date and three lanes of titled bars; phones get slimmer bars so the agenda stays near the first screen. */
+export const DAY_CELL_HEIGHT_PX = { phone: 76, wide: 92 } as const;
+const BAR_HEIGHT_PX = { phone: 12, wide: 15 } as const;
+const BAR_FONT_PX = { phone: 9, wide: 11 } as const;
 
 export function CalendarDay({ date, state, marking, onPress, testID, accessibilityLabel, children }: Props) {
   const outside = state === 'disabled';
   const selected = marking?.selected === true;
   const today = marking?.today === true;
   const frozen = (marking?.freezeTitles.length ?? 0) > 0;
-  const height = useWindowDimensions().width >= WIDE_LAYOUT_MIN_WIDTH_PX ? DAY_CELL_HEIGHT_PX.wide : DAY_CELL_HEIGHT_PX.phone;
+  const size = useWindowDimensions().width >= WIDE_LAYOUT_MIN_WIDTH_PX ? 'wide' : 'phone';
+  const height = DAY_CELL_HEIGHT_PX[size];
   return (
     <Pressable
       testID={testID}
@@ -46,21 +49,28 @@ export function CalendarDay({ date, state, marking, onPress, testID, accessibili
         {(marking?.periods ?? []).map((period, lane) => (
           <View
             key={lane}
+            testID={period.windowId ? `${testID}-bar-${period.windowId}` : undefined}
+            accessibilityLabel={period.label}
+            aria-label={period.label}
             style={[
               styles.bar,
-              { backgroundColor: period.color },
+              { backgroundColor: period.color, height: BAR_HEIGHT_PX[size] },
               period.startingDay && styles.barStart,
               period.endingDay && styles.barEnd,
             ]}
-          />
+          >
+            {period.showTitle && period.title ? (
+              <Text style={[styles.barTitle, { fontSize: BAR_FONT_PX[size], lineHeight: BAR_HEIGHT_PX[size] }]} numberOfLines={1}>
+                {period.title}
+              </Text>
+            ) : null}
+          </View>
         ))}
       </View>
       {marking && marking.overflowCount > 0 ? <Text style={styles.more}>+{marking.overflowCount}</Text> : null}
     </Pressable>
   );
 }
-
-const BAR_HEIGHT_PX = 6;
 
 const styles = StyleSheet.create({
   cell: {
@@ -91,7 +101,12 @@ const styles = StyleSheet.create({
   },
   lanes: { marginTop: 3, gap: 2 },
   faded: { opacity: 0.45 },
-  bar: { height: BAR_HEIGHT_PX },
+  bar: { overflow: 'hidden', justifyContent: 'center' },
+  // White on the status tones; a dark halo keeps it legible on the paler ones (draft, withdrawn).
+  barTitle: {
+    fontFamily: fonts.semibold, color: calendarColors.onSelected, paddingHorizontal: 3,
+    textShadowColor: 'rgba(0, 0, 0, 0.45)', textShadowRadius: 2, textShadowOffset: { width: 0, height: 0 },
+  },
   barStart: { marginLeft: 3, borderTopLeftRadius: 3, borderBottomLeftRadius: 3 },
   barEnd: { marginRight: 3, borderTopRightRadius: 3, borderBottomRightRadius: 3 },
   more: { fontFamily: fonts.medium, fontSize: 10, lineHeight: 12, color: colors.inkMuted, textAlign: 'center' },

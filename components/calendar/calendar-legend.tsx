@@ -1,11 +1,22 @@
-// What the marks mean beyond status colours: today's ring, the conflict dot and freeze hatching.
+// What the marks mean: a window bar's colour per status (the statuses on screen), today's ring, the conflict dot
+// and freeze hatching. Bar colours come from the same statusColor as the bars themselves.
 import { StyleSheet, Text, View } from 'react-native';
+import type { WindowStatus } from '@/shared/windows';
+import { STATUS_LABELS } from '@/components/windows/lifecycle';
 import { calendarColors, colors, radii, space, type } from '@/constants/theme';
+import { statusColor } from './calendar-marks';
 import { FreezeHatch } from './freeze-hatch';
 
-export function CalendarLegend() {
+/** `statuses`: those of the windows drawn this month; with none, a neutral key says that bars are windows. */
+export function CalendarLegend({ statuses = [] }: { statuses?: readonly WindowStatus[] }) {
   return (
     <View style={styles.row} testID="calendar-legend">
+      {statuses.map((status) => (
+        <View key={status} style={styles.item} testID={`calendar-legend-${status}`}>
+          <View style={[styles.bar, { backgroundColor: statusColor(status) }]} testID={`calendar-legend-swatch-${status}`} />
+          <Text style={styles.text}>{STATUS_LABELS[status]}</Text>
+        </View>
+      ))}
       <View style={styles.item}>
         <View style={styles.today} />
         <Text style={styles.text}>Today</Text>
@@ -20,20 +31,23 @@ export function CalendarLegend() {
         </View>
         <Text style={styles.text}>Freeze</Text>
       </View>
-      <View style={styles.item}>
-        <View style={styles.bar} />
-        <Text style={styles.text}>Window (colour = status)</Text>
-      </View>
+      {statuses.length === 0 ? (
+        <View style={styles.item}>
+          <View style={[styles.bar, styles.neutralBar]} />
+          <Text style={styles.text}>Window (colour = status)</Text>
+        </View>
+      ) : null}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg, paddingHorizontal: space.lg, paddingVertical: space.md, borderTopWidth: 1, borderTopColor: colors.surfaceSunken },
+  row: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.xs, paddingHorizontal: space.lg, paddingVertical: space.md, borderTopWidth: 1, borderTopColor: colors.surfaceSunken },
   item: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
   text: { ...type.caption, color: colors.inkMuted },
   today: { width: 14, height: 14, borderRadius: radii.pill, borderWidth: 2, borderColor: calendarColors.todayRing },
   conflict: { width: 8, height: 8, borderRadius: radii.pill, backgroundColor: calendarColors.conflict },
   freeze: { width: 18, height: 14, borderRadius: radii.sm, overflow: 'hidden' },
-  bar: { width: 22, height: 6, borderRadius: 3, backgroundColor: calendarColors.status.assessed },
+  bar: { width: 22, height: 10, borderRadius: 3 },
+  neutralBar: { backgroundColor: colors.border },
 });

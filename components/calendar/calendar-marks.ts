@@ -1,11 +1,20 @@
 // Turns windows and freezes into per-day marks for the month view: one lane per window, kept on the same
 // line across the days it spans (in the viewer's zone), freezes as a shaded day, today and the selection.
 import { calendarColors, CALENDAR_MAX_LANES } from '@/constants/theme';
-import { dayKeyAt, splitIntoDaySegments, type DaySegment } from '@/components/time';
+import { dayKeyAt, FIRST_WEEKDAY, splitIntoDaySegments, weekdayOf, type DaySegment } from '@/components/time';
+import { STATUS_LABELS } from '@/components/windows/lifecycle';
 import type { CalendarDayMark, CalendarFreeze, CalendarPeriod, CalendarWindow, MarkedDays } from './calendar-types';
 
+/** The one status → colour map of the calendar: bars, the legend and the status filter chips all read it. */
 export function statusColor(status: CalendarWindow['status']): string {
   return calendarColors.status[status] ?? calendarColors.status.draft;
+}
+
+/** The statuses of the windows drawn, in lifecycle order of first appearance, for the legend. */
+export function statusesShown(marks: MarkedDays): CalendarWindow['status'][] {
+  const seen = new Set<CalendarWindow['status']>();
+  for (const mark of Object.values(marks)) for (const p of mark.periods) if (p.status) seen.add(p.status);
+  return [...seen];
 }
 
 type Placed = { window: CalendarWindow; lane: number; segments: DaySegment[] };
@@ -46,11 +55,17 @@ function placeWindow(marks: MarkedDays, { window, lane, segments }: Placed) {
       continue;
     }
     while (mark.periods.length < lane) mark.periods.push({ color: 'transparent' });
+    const status = window.statusLabel ?? STATUS_LABELS[window.status] ?? window.status;
     const period: CalendarPeriod = {
       color: statusColor(window.status),
       startingDay: segment.isFirst,
       endingDay: segment.isLast,
       windowId: window.id,
+      status: window.status,
+      title: window.title,
+      // The title again where a long window wraps onto a new week row, so every row of bars says whose it is.
+      showTitle: segment.isFirst || weekdayOf(segment.day) === FIRST_WEEKDAY,
+      label: `${window.title}, ${status}`,
     };
     mark.periods[lane] = period;
   }
@@ -66,7 +81,10 @@ function shadeFreeze(marks: MarkedDays, freeze: CalendarFreeze, timeZone: string
 function describeDay(day: string, mark: CalendarDayMark): string {
   const parts = [day];
   if (mark.today) parts.push('today');
-  if (mark.windowCount > 0) parts.push(`${mark.windowCount} window${mark.windowCount === 1 ? '' : 's'}`);
+  if (mark.windowCount > 0) {
+    const titles = mark.periods.map((p) => p.label).filter((l): l is string => !!l);
+    parts.push(`${mark.windowCount} window${mark.windowCount === 1 ? '' : 's'}${titles.length > 0 ? `: ${titles.join('; ')}` : ''}`);
+  }
   if (mark.hasConflict) parts.push('with a conflict');
   if (mark.freezeTitles.length > 0) parts.push(`freeze: ${mark.freezeTitles.join(', ')}`);
   return parts.join(', ');

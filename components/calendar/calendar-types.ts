@@ -15,8 +15,21 @@ export type CalendarWindow = Pick<
 
 export type CalendarFreeze = Pick<Freeze, 'id' | 'title' | 'startsAt' | 'endsAt'>;
 
-/** One bar in a day cell; `color: 'transparent'` keeps a lane free so a window's bar lines up across days. */
-export type CalendarPeriod = { color: string; startingDay?: boolean; endingDay?: boolean; windowId?: string };
+/**
+ * One bar in a day cell; `color: 'transparent'` keeps a lane free so a window's bar lines up across days.
+ * `title` is printed on the bar where the window starts and at the start of each week row it runs into.
+ */
+export type CalendarPeriod = {
+  color: string;
+  startingDay?: boolean;
+  endingDay?: boolean;
+  windowId?: string;
+  status?: CalendarWindow['status'];
+  title?: string;
+  showTitle?: boolean;
+  /** what a screen reader says for the bar: title and status */
+  label?: string;
+};
 
 /** react-native-calendars' multi-period marking, plus what our day cell draws beside the bars. */
 export type CalendarDayMark = MarkingProps & {

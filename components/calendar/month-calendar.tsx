@@ -8,6 +8,7 @@ import { CalendarDay } from './calendar-day';
 import type { MarkedDays } from './calendar-types';
 import { MonthHeader } from './month-header';
 import { CalendarLegend } from './calendar-legend';
+import { statusesShown } from './calendar-marks';
 
 type Props = {
   /** 'YYYY-MM' */
@@ -64,7 +65,7 @@ export function MonthCalendar({ month, today, marks, onDayPress, onMonthChange, 
         }}
         theme={theme as never}
       />
-      <CalendarLegend />
+      <CalendarLegend statuses={statusesShown(marks)} />
     </View>
   );
 }

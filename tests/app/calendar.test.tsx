@@ -41,8 +41,10 @@ describe('marks', () => {
   test('a window crossing midnight is one bar over two days: starts on the 3rd, ends on the 4th, same lane', () => {
     const thu = marks['2026-12-03'].periods;
     const fri = marks['2026-12-04'].periods;
-    expect(thu).toEqual([{ color: calendarColors.status.assessed, startingDay: true, endingDay: false, windowId: 'w-night' }]);
-    expect(fri[0]).toEqual({ color: calendarColors.status.assessed, startingDay: false, endingDay: true, windowId: 'w-night' });
+    expect(thu).toHaveLength(1);
+    expect(thu[0]).toMatchObject({ color: calendarColors.status.assessed, startingDay: true, endingDay: false, windowId: 'w-night', showTitle: true });
+    // Friday is no week start: the bar continues without repeating its title.
+    expect(fri[0]).toMatchObject({ color: calendarColors.status.assessed, startingDay: false, endingDay: true, windowId: 'w-night', showTitle: false });
     // The daytime window starts later and takes the next lane on the 4th.
     expect(fri[1]).toMatchObject({ color: calendarColors.status.draft, startingDay: true, endingDay: true, windowId: 'w-day' });
     expect(marks['2026-12-05']).toBeUndefined();
