@@ -1,14 +1,11 @@
 // The calendar part of a message, readable: what it asks (method), the event's summary, times, sequence and
-// status, then the .ics text exactly as sent.
-import { Platform, ScrollView, StyleSheet, Text, View } from 'react-native';
+// status. The .ics text itself is in the folded raw message (outbox-raw.tsx).
+import { StyleSheet, Text, View } from 'react-native';
 import type { OutboxCalendar } from '@/shared/outbox';
 import { Badge } from '@/components/inventory/badges';
 import { Facts, Note } from '@/components/inventory/detail-frame';
-import { colors, radii, space, type } from '@/constants/theme';
+import { colors, space, type } from '@/constants/theme';
 import { eventTimeWords, methodWords } from './outbox-format';
-
-// The theme has no code face; the platform's own monospace keeps columns of the .ics aligned.
-const MONOSPACE = Platform.select({ ios: 'Menlo', default: 'monospace' });
 
 export function OutboxInvitation({ calendar, viewerZone }: { calendar: OutboxCalendar; viewerZone: string }) {
   const event = calendar.event;
@@ -37,12 +34,6 @@ export function OutboxInvitation({ calendar, viewerZone }: { calendar: OutboxCal
       ) : (
         <Note>The calendar holds no event.</Note>
       )}
-      <Text style={styles.label}>The .ics as sent</Text>
-      <ScrollView horizontal style={styles.codeBox} contentContainerStyle={styles.codeContent}>
-        <Text style={styles.code} selectable testID="outbox-ics">
-          {calendar.text.replace(/\r\n/g, '\n').trimEnd()}
-        </Text>
-      </ScrollView>
     </View>
   );
 }
@@ -53,8 +44,4 @@ const styles = StyleSheet.create({
   method: { ...type.bodyStrong, color: colors.primary },
   summary: { ...type.heading, color: colors.ink },
   uid: { ...type.caption, color: colors.inkMuted },
-  label: { ...type.label, color: colors.inkMuted, marginTop: space.xs },
-  codeBox: { backgroundColor: colors.surfaceSunken, borderRadius: radii.md },
-  codeContent: { padding: space.md },
-  code: { fontFamily: MONOSPACE, fontSize: 12, lineHeight: 18, color: colors.ink },
 });

@@ -1,7 +1,7 @@
-// One received message: headers, the invitation (when there is one), the text body, attachments, raw download.
-import { Linking, Pressable, StyleSheet, Text, View } from 'react-native';
+// One received message, readable first: headers, the text body, the invitation's event (when there is one),
+// attachments; the raw source (iCalendar text, .eml download) folded away at the end.
+import { StyleSheet, Text, View } from 'react-native';
 import type { OutboxMessage } from '@/shared/outbox';
-import { outboxRawPath } from '@/hooks/queries/outbox';
 import { DetailFrame, Note, Section } from '@/components/inventory/detail-frame';
 import { formatInstant } from '@/components/time';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
@@ -9,6 +9,7 @@ import { colors, radii, space, type } from '@/constants/theme';
 import { formatSizeBytes } from './outbox-format';
 import { OutboxHeaders } from './outbox-headers';
 import { OutboxInvitation } from './outbox-invitation';
+import { OutboxRaw } from './outbox-raw';
 
 export function OutboxMessageView({ message }: { message: OutboxMessage }) {
   const zone = useViewerTimeZone();
@@ -29,11 +30,6 @@ export function OutboxMessageView({ message }: { message: OutboxMessage }) {
           { label: 'Received', value: formatInstant(message.receivedAt, zone) },
         ]}
       />
-      {message.calendar ? (
-        <Section title="Calendar invitation" testID="outbox-calendar">
-          <OutboxInvitation calendar={message.calendar} viewerZone={zone} />
-        </Section>
-      ) : null}
       <Section title="Text">
         <View style={styles.body}>
           <Text style={styles.bodyText} selectable testID="outbox-text">
@@ -42,6 +38,11 @@ export function OutboxMessageView({ message }: { message: OutboxMessage }) {
         </View>
         {message.hasHtml ? <Note>The message also has an HTML version, not shown here.</Note> : null}
       </Section>
+      {message.calendar ? (
+        <Section title="Calendar invitation" testID="outbox-calendar">
+          <OutboxInvitation calendar={message.calendar} viewerZone={zone} />
+        </Section>
+      ) : null}
       <Section title="Attachments">
         {message.attachments.length === 0 ? <Note>None.</Note> : null}
         {message.attachments.map((a, i) => (
@@ -50,10 +51,7 @@ export function OutboxMessageView({ message }: { message: OutboxMessage }) {
           </Text>
         ))}
       </Section>
-      {/* Opening a link is fire-and-forget: it only rejects when no app can open an http URL, and a browser always can. */}
-      <Pressable role="link" testID="outbox-raw" onPress={() => void Linking.openURL(outboxRawPath(message.id))} style={styles.raw}>
-        <Text style={styles.rawText}>Download the raw message (.eml)</Text>
-      </Pressable>
+      <OutboxRaw message={message} />
     </DetailFrame>
   );
 }
@@ -62,6 +60,4 @@ const styles = StyleSheet.create({
   body: { backgroundColor: colors.surface, borderColor: colors.border, borderWidth: 1, borderRadius: radii.md, padding: space.md },
   bodyText: { ...type.body, color: colors.ink },
   attachment: { ...type.body, color: colors.ink },
-  raw: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
-  rawText: { ...type.bodyStrong, color: colors.primary },
 });

@@ -1,11 +1,21 @@
 // Outbox message and list row: headers, text, attachments, the invitation read out (zone, sequence, status,
 // cancellation) with its .ics, and the raw download; the row flags invitations and opens the message.
-import { fireEvent, render, screen } from '@testing-library/react-native';
+import type { ReactElement } from 'react';
+import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { fireEvent, render as renderBare, screen } from '@testing-library/react-native';
 import { Linking } from 'react-native';
 import type { OutboxMessage, OutboxSummary } from '@/shared/outbox';
 import { OutboxMessageView } from '@/components/outbox/outbox-message-view';
 import { OutboxRow } from '@/components/outbox/outbox-row';
 import { eventTimeWords } from '@/components/outbox/outbox-format';
+
+// The view reads the viewer's zone from the signed-in user; with no user loaded it falls back to the network's zone.
+jest.mock('@/hooks/queries/me', () => ({ useMeQuery: () => ({ data: { timeZone: 'UTC' } }) }));
+
+function render(ui: ReactElement) {
+  const client = new QueryClient({ defaultOptions: { queries: { retry: false } } });
+  return renderBare(<QueryClientProvider client={client}>{ui}</QueryClientProvider>);
+}
 
 jest.mock('expo-router', () => ({ Link: ({ children }: { children: unknown }) => children }));
 
@@ -40,16 +50,35 @@ test('a cancellation: method in words, summary, a zoned end as written, sequence
   expect(screen.getByText('Cancelled')).toBeTruthy();
   expect(screen.getByText('Planned work on ring East')).toBeTruthy();
   expect(screen.getByText('2030-01-11 01:00 (Europe/Berlin)')).toBeTruthy();
-  expect(screen.getByTestId('outbox-ics')).toHaveTextContent(/SEQUENCE:2\s+STATUS:CANCELLED/);
   expect(screen.getByTestId('outbox-text')).toHaveTextContent('The work is withdrawn.');
+  fireEvent.press(screen.getByTestId('outbox-raw-toggle'));
+  expect(screen.getByTestId('outbox-ics')).toHaveTextContent(/SEQUENCE:2\s+STATUS:CANCELLED/);
   expect(screen.getByText('notice-w-1.ics · application/ics · 300 B')).toBeTruthy();
 });
 
 test('the raw download opens the message/rfc822 address', () => {
   const open = jest.spyOn(Linking, 'openURL').mockResolvedValue(true);
   render(<OutboxMessageView message={message()} />);
+  fireEvent.press(screen.getByTestId('outbox-raw-toggle'));
   fireEvent.press(screen.getByTestId('outbox-raw'));
   expect(open).toHaveBeenCalledWith('/api/outbox/7/raw');
+});
+
+test('the readable message comes first and the raw source is folded until asked for', () => {
+  render(<OutboxMessageView message={message()} />);
+  expect(screen.queryByTestId('outbox-ics')).toBeNull();
+  expect(screen.queryByTestId('outbox-raw')).toBeNull();
+  const toggle = screen.getByTestId('outbox-raw-toggle');
+  expect(toggle).toHaveTextContent(/Show the raw message/);
+  // In reading order the text and the event summary come before the fold.
+  const json = JSON.stringify(screen.toJSON());
+  expect(json.indexOf('The work is withdrawn.')).toBeLessThan(json.indexOf('Show the raw message'));
+  expect(json.indexOf('Planned work on ring East')).toBeLessThan(json.indexOf('Show the raw message'));
+  fireEvent.press(toggle);
+  expect(screen.getByTestId('outbox-ics')).toBeTruthy();
+  expect(screen.getByTestId('outbox-raw-toggle')).toHaveTextContent(/Hide the raw message/);
+  fireEvent.press(screen.getByTestId('outbox-raw-toggle'));
+  expect(screen.queryByTestId('outbox-ics')).toBeNull();
 });
 
 test('a plain message: no invitation section, and "None." under attachments', () => {
