@@ -15,7 +15,9 @@ import { Section } from '@/components/windows/section';
 import { StatusBadge } from '@/components/windows/status-badge';
 import { WindowActionsBar } from '@/components/windows/window-actions-bar';
 import { WindowElementsList } from '@/components/windows/window-elements-list';
+import { WindowNextStep } from '@/components/windows/window-next-step';
 import { WindowNotices, type WindowFlash } from '@/components/windows/window-notices';
+import { WindowTimeline } from '@/components/windows/window-timeline';
 import { saveErrorView } from '@/components/windows/window-save-errors';
 import { colors, CONTENT_MAX_WIDTH_PX, space, type } from '@/constants/theme';
 
@@ -60,6 +62,7 @@ export function WindowDetail({ window: w, me, timeZone, flash, onEdit, onOpenImp
             {stale ? <Button label="Reload" variant="quiet" onPress={() => { assess.reset(); transition.reset(); onReload(); }} /> : null}
           </View>
         ) : null}
+        <WindowNextStep window={w} me={me} here={{ screen: 'window' }} />
         <WindowActionsBar
           actions={windowActions(me.roles, w.status)}
           impactStored={w.impactStored}
@@ -92,6 +95,7 @@ export function WindowDetail({ window: w, me, timeZone, flash, onEdit, onOpenImp
           {w.notes ? <Text style={styles.body}>{w.notes}</Text> : <Text style={styles.muted}>No notes.</Text>}
           {w.freezeOverrideReason ? <Text style={styles.body}>Booked inside a freeze. Reason given: {w.freezeOverrideReason}</Text> : null}
         </Section>
+        <WindowTimeline windowId={w.id} me={me} timeZone={timeZone} />
       </View>
     </ScrollView>
   );

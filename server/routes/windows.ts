@@ -1,5 +1,5 @@
 // /api/windows: list, book, read, edit (optimistic locking), assess, lifecycle, impact, conflicts; the sub-resources
-// (MOP, sign-off submission, plans, notices) live in routes/windows/ and are mounted here. A tenant user reads only
+// (MOP, history, sign-off submission, plans, notices) live in routes/windows/ and are mounted here. A tenant user reads only
 // tenant views (list and one window, from its notices); everything else about a window is not found for it.
 import express, { type Request, type Router } from 'express';
 import { windowCreateSchema, windowListQuerySchema, windowListSchema, windowMutationSchema,
@@ -20,6 +20,7 @@ import { ImpactNotFoundError, WindowNotFoundError } from '../services/windows/er
 import { transitionWindow } from '../services/windows/transition-window';
 import { loadWindow, windowView, windowViews } from '../services/windows/window-view';
 import type { RouteDeps } from './deps';
+import { windowHistoryRouter } from './windows/history';
 import { windowMopRouter } from './windows/mop';
 import { windowNoticesRouter } from './windows/notices';
 import { windowPlansRouter } from './windows/plans';
@@ -103,6 +104,7 @@ export function windowsRouter(deps: RouteDeps): Router {
   });
   // Each sub-resource router holds full '/:id/...' paths, so none shadows another or the routes above.
   router.use(windowMopRouter(deps));
+  router.use(windowHistoryRouter(deps));
   router.use(windowSubmitRouter(deps));
   router.use(windowPlansRouter(deps));
   router.use(windowNoticesRouter(deps));

@@ -1,9 +1,12 @@
 // Window page: times in the viewer's zone with the zone named, the lifecycle in words, conflicts with reasons
-// that open the other window, and withdrawing with the loaded version.
+// that open the other window, withdrawing with the loaded version, and one filled button: the next step.
 import { act, fireEvent, screen, waitFor, within } from '@testing-library/react-native';
 import { WindowDetail } from '@/components/windows/window-detail';
 import { STATUS_SENTENCES } from '@/components/windows/lifecycle';
 import { clearQueries, engineer, renderWithQueries, routedFetch, windowFixture } from './window-test-kit';
+
+const mockPush = jest.fn();
+jest.mock('expo-router', () => ({ useRouter: () => ({ push: mockPush }) }));
 
 afterEach(clearQueries);
 
@@ -57,7 +60,9 @@ test('withdrawing asks once more, then sends the transition with the loaded vers
   ]);
   renderDetail();
   await screen.findByTestId('window-conflict-w-other');
-  expect(screen.getByTestId('window-assess')).toBeTruthy();
+  // A draft's one filled button is the next step; assessing again is not offered before a first assessment.
+  expect(screen.getByTestId('next-step-action')).toHaveTextContent('Assess impact');
+  expect(screen.queryByTestId('window-assess')).toBeNull();
   fireEvent.press(screen.getByTestId('window-withdraw'));
   expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
   await act(async () => fireEvent.press(screen.getByTestId('window-withdraw-yes')));

@@ -6,6 +6,7 @@ import { useWindowQuery } from '@/hooks/queries/windows';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { PlanDetailView } from '@/components/plans/plan-detail-view';
+import { WindowNextStep } from '@/components/windows/window-next-step';
 
 export default function PlanScreen() {
   const timeZone = useViewerTimeZone();
@@ -27,6 +28,7 @@ export default function PlanScreen() {
       onAdjust={() => router.push(`${runs}?from=${encodeURIComponent(planId)}`)}
       onReschedule={() => router.push(`/windows/${encodeURIComponent(id)}/edit`)}
       onAddCapacity={(where) => router.push(where === 'imports' ? '/imports' : '/network')}
+      next={window.data ? <WindowNextStep window={window.data} me={me.data} here={{ screen: 'plan', planId }} /> : null}
     />
   );
 }

@@ -7,6 +7,7 @@ import { ErrorState, LoadingState } from '@/components/screen-states';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { PlansView } from '@/components/plans/plans-view';
 import { detailHref } from '@/components/windows/form-page';
+import { WindowNextStep } from '@/components/windows/window-next-step';
 
 export default function WindowPlansScreen() {
   const timeZone = useViewerTimeZone();
@@ -28,6 +29,7 @@ export default function WindowPlansScreen() {
       adjustFrom={plans.data.plans.find((p) => p.id === from)?.settings}
       onOpenPlan={(planId) => router.push(`/windows/${encodeURIComponent(id)}/plans/${encodeURIComponent(planId)}`)}
       onOpenWindow={() => router.push(detailHref({ id }))}
+      next={<WindowNextStep window={window.data} me={me.data} here={{ screen: 'plans' }} />}
     />
   );
 }
