@@ -18,6 +18,8 @@ import { PlanTotals } from '@/components/plans/plan-totals';
 import { PlanUnresolved } from '@/components/plans/plan-unresolved';
 import { useElementNames } from '@/components/plans/use-element-names';
 import { Section } from '@/components/windows/section';
+import { useWindowImpactQuery } from '@/hooks/queries/windows';
+import { touchCounts, touchedFromImpact } from '@/shared/touch-counts';
 import { space } from '@/constants/theme';
 
 export type PlanLinks = { onAdjust: () => void; onReschedule: () => void; onAddCapacity: (where: 'imports' | 'network') => void };
@@ -25,7 +27,12 @@ export type PlanLinks = { onAdjust: () => void; onReschedule: () => void; onAddC
 type Props = PlanLinks & { plan: Plan; review: PlanReview; canAct: boolean; wide: boolean };
 
 export function PlanReviewView({ plan, review, canAct, wide, onAdjust, onReschedule, onAddCapacity }: Props) {
-  const names = useElementNames();
+  const names = useElementNames(review.slices.map((s) => s.slice));
+  const impact = useWindowImpactQuery(plan.windowId);
+  // The impact counts slices that only lose protection, which a plan never lists; it only applies to the window
+  // version the plan was computed for.
+  const impactSlices = impact.data && impact.data.windowVersion === plan.windowVersion ? touchedFromImpact(impact.data.affected) : null;
+  const counts = touchCounts(impactSlices, review.slices);
   const [selected, setSelected] = useState<string | null>(null);
   const [ticked, setTicked] = useState<string[]>(plan.outageAccepted);
   const sliceName = useMemo(() => {
@@ -38,7 +45,7 @@ export function PlanReviewView({ plan, review, canAct, wide, onAdjust, onResched
 
   const decision = (
     <>
-      <PlanTotals review={review} />
+      <PlanTotals review={review} counts={counts} wholeRunMs={plan.status === 'done' ? plan.progress?.elapsedMs ?? null : null} />
       <PlanSearchNote search={review.search} />
       {unresolved.length > 0 ? (
         <PlanUnresolved

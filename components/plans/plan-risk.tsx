@@ -3,6 +3,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { PlanReview } from '@/shared/plans';
 import { formatRiskPercent, SEVERITY_RANK } from '@/components/impact/impact-format';
 import { SeverityPill } from '@/components/impact/severity-pill';
+import { SeverityScale } from '@/components/impact/severity-scale';
 import { colors, space, type } from '@/constants/theme';
 
 export function PlanRisk({ risk, sliceName }: { risk: PlanReview['risk']; sliceName: (id: string) => string }) {
@@ -10,12 +11,12 @@ export function PlanRisk({ risk, sliceName }: { risk: PlanReview['risk']; sliceN
   const sorted = [...risk].sort((a, b) => SEVERITY_RANK[a.severity] - SEVERITY_RANK[b.severity] || b.failureProbability - a.failureProbability);
   return (
     <View style={styles.list} testID="plan-risk">
-      <Text style={styles.muted}>Chance that equipment a slice still uses fails unplanned during the window.</Text>
+      <SeverityScale testID="plan-risk-scale" />
       {sorted.map((r) => (
         <View key={r.slice} style={styles.row} testID={`plan-risk-${r.slice}`}>
           <Text style={styles.name}>{sliceName(r.slice)}</Text>
           <SeverityPill severity={r.severity} />
-          <Text style={styles.body}>{formatRiskPercent(r.failureProbability)}</Text>
+          <Text style={styles.body}>{formatRiskPercent(r.failureProbability)} risk of failure</Text>
           {r.unprotected ? <Text style={styles.flag} testID={`plan-risk-unprotected-${r.slice}`}>No backup path</Text> : null}
         </View>
       ))}

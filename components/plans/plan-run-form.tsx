@@ -5,10 +5,10 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { PlanSettings } from '@/shared/plans';
 import { usePlanRunMutation } from '@/hooks/queries/plans';
 import { Button } from '@/components/button';
-import { TextField } from '@/components/text-field';
 import { ChoiceChips } from '@/components/windows/choice-chips';
 import { KnockOnFields } from '@/components/plans/knock-on-fields';
 import { PickChips, type PickOption } from '@/components/plans/pick-chips';
+import { SearchFields } from '@/components/plans/search-fields';
 import type { RunOptions } from '@/components/plans/use-run-options';
 import {
   errorsFromApi, formFromSettings, settingsFromForm, type PlanFormErrors, type PlanFormState,
@@ -26,18 +26,9 @@ type Props = {
   onClose?: () => void;
 };
 
-const MODES = [
-  { value: 'serial', label: 'One thread' },
-  { value: 'islands', label: 'Islands (parallel)' },
-] as const;
 const AFTER = [
   { value: 'return', label: 'Move back afterwards' },
   { value: 'keep', label: 'Keep the new places' },
-] as const;
-const NUMBERS = [
-  { key: 'timeLimitSeconds', label: 'Time limit (s)', testID: 'plan-form-time-limit' },
-  { key: 'population', label: 'Candidates', testID: 'plan-form-population' },
-  { key: 'seed', label: 'Seed', testID: 'plan-form-seed' },
 ] as const;
 const PICKS = [
   {
@@ -67,17 +58,7 @@ export function PlanRunForm({ windowId, initial, functionOptions, siteOptions, l
   };
   return (
     <View style={styles.form} testID="plan-form">
-      <Text style={styles.label}>Search</Text>
-      <ChoiceChips label="Search" choices={MODES} value={form.mode} onChange={(v) => v && set('mode', v as PlanFormState['mode'])} testID="plan-form-mode" />
-      {errors.mode ? <Text style={styles.error}>{errors.mode}</Text> : null}
-      <View style={styles.numbers}>
-        {NUMBERS.map((n) => (
-          <View style={styles.number} key={n.key}>
-            <TextField label={n.label} value={form[n.key]} onChangeText={(v) => set(n.key, v)} keyboardType="numeric" error={errors[n.key]} testID={n.testID} />
-          </View>
-        ))}
-      </View>
-      <Text style={styles.hint}>The same seed and settings give the same plan. More candidates search wider but take longer per round.</Text>
+      <SearchFields form={form} errors={errors} set={set} />
       <Text style={styles.label}>After the window</Text>
       <ChoiceChips label="After the window" choices={AFTER} value={form.afterWindow} onChange={(v) => v && set('afterWindow', v as PlanFormState['afterWindow'])} testID="plan-form-after" />
       <KnockOnFields
@@ -109,9 +90,6 @@ export function PlanRunForm({ windowId, initial, functionOptions, siteOptions, l
 const styles = StyleSheet.create({
   form: { gap: space.md },
   label: { ...type.label, color: colors.ink },
-  hint: { ...type.caption, color: colors.inkMuted },
-  numbers: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
-  number: { flexGrow: 1, flexBasis: 100 },
   error: { ...type.caption, color: colors.danger },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

@@ -2,7 +2,7 @@
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { PlanListItem } from '@/shared/plans';
 import { formatInstant } from '@/components/time';
-import { formatCost, settingsSummary } from '@/components/plans/plan-format';
+import { formatMovePoints, settingsSummary } from '@/components/plans/plan-format';
 import { PlanMarks, PlanStatusPill } from '@/components/plans/plan-status-pill';
 import { colors, radii, space, type } from '@/constants/theme';
 
@@ -12,7 +12,7 @@ function totalsLine(plan: PlanListItem): string {
   if (plan.totals) {
     const t = plan.totals;
     const room = t.knockOn > 0 ? ` · ${t.knockOn} untouched ${t.knockOn === 1 ? 'slice' : 'slices'} moved to make room` : '';
-    return `${t.moved} moved · ${t.rerouted} rerouted · ${t.unresolved} unresolved · move cost ${formatCost(t.moveCost)}${room}`;
+    return `${t.moved} moved · ${t.rerouted} rerouted · ${t.unresolved} cannot be kept · move cost ${formatMovePoints(t.moveCost)}${room}`;
   }
   if (plan.status === 'failed') return plan.error ?? 'The run failed.';
   if (plan.status === 'cancelled') return plan.error ?? 'Cancelled before it finished.';

@@ -2,6 +2,7 @@
 // Knock-on moves (slices the work does not touch, moved to make room) form their own group, each saying for whom.
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { PlanSlice, SliceOutcome } from '@/shared/plans';
+import { REASON_LABELS } from '@/components/impact/impact-format';
 import { madeRoomSentence, OUTCOME_LABELS } from '@/components/plans/plan-format';
 import type { ElementNames } from '@/components/plans/use-element-names';
 import { calendarColors, colors, radii, space, type } from '@/constants/theme';
@@ -19,6 +20,13 @@ const ORDER: Record<SliceOutcome, number> = { unresolved: 0, move: 1, reroute: 2
 
 export function OutcomePill({ outcome, testID }: { outcome: SliceOutcome; testID?: string }) {
   return <Text style={[styles.pill, OUTCOME_TONES[outcome]]} testID={testID}>{OUTCOME_LABELS[outcome]}</Text>;
+}
+
+const capitalise = (text: string) => text.charAt(0).toUpperCase() + text.slice(1);
+
+/** "hosted, transit" in the impact screen's words. */
+function reasonWords(reasons: readonly string[]): string {
+  return reasons.map((r) => REASON_LABELS[r as keyof typeof REASON_LABELS]?.toLowerCase() ?? r).join(', ');
 }
 
 export const isKnockOn = (slice: Pick<PlanSlice, 'madeRoomFor'>) => slice.madeRoomFor.length > 0;
@@ -46,17 +54,16 @@ function SliceCard({ slice, names, selected, onSelect }: { slice: PlanSlice; nam
         {slice.critical ? <Text style={styles.critical}>Critical</Text> : null}
       </View>
       {reason ? <Text style={styles.reason} testID={`plan-slice-knock-on-${slice.slice}`}>{reason}</Text> : null}
-      <Text style={styles.muted}>{slice.slice} · priority {slice.priority}{slice.reasons.length ? ` · ${slice.reasons.join(', ')}` : ''}</Text>
+      <Text style={styles.muted}>Priority {slice.priority}{slice.reasons.length ? ` · ${reasonWords(slice.reasons)}` : ''}</Text>
       {slice.moves.map((m) => (
         <Text key={m.function} style={styles.body} testID={`plan-move-${m.function}`}>
-          {m.function}: {names.site(m.from)} ({m.from}) → {names.site(m.to)} ({m.to})
+          {names.fn(m.function)}: from {names.site(m.from)} to {names.site(m.to)}
         </Text>
       ))}
       {slice.reroutes.map((r) => (
         <View key={r.tie} testID={`plan-reroute-${r.tie}`}>
-          <Text style={styles.body}>{r.tie}: {names.path(r.from)}</Text>
-          <Text style={styles.body}>  → {names.path(r.to)}</Text>
-          <Text style={styles.muted}>spans {r.from.join(', ') || 'none'} → {r.to.join(', ') || 'none'}</Text>
+          <Text style={styles.body}>{capitalise(names.tie(r.tie))}: from {names.path(r.from)}</Text>
+          <Text style={styles.body}>  to {names.path(r.to)}</Text>
         </View>
       ))}
       {slice.outcome === 'stays' ? <Text style={styles.muted}>Keeps its current placement.</Text> : null}

@@ -12,9 +12,13 @@ function where(value: PlanStep['from'], names: ElementNames): string {
   return Array.isArray(value) ? names.path(value) : names.site(value);
 }
 
-export function stepText(step: PlanStep, names: ElementNames): string {
-  const verb = step.kind === 'move-function' ? 'Move function' : 'Reroute link';
-  return `${verb} ${step.element}: ${where(step.from, names)} → ${where(step.to, names)}`;
+/**
+ * "Move User plane of Tide gauges from Aldmouth to Brackwell"; "Reroute the link IoT gateway – User plane of Tide
+ * gauges from Aldmouth → Corran to Aldmouth → Brackwell → Corran" — by names, never ids.
+ */
+export function stepText(step: PlanStep, names: ElementNames, sliceName: string): string {
+  const what = step.kind === 'move-function' ? `Move ${names.fn(step.element)}` : `Reroute ${names.tie(step.element)}`;
+  return `${what} of ${sliceName} from ${where(step.from, names)} to ${where(step.to, names)}`;
 }
 
 /** Step's slice id → why it moves, for knock-on steps: "Moved to make room for Harbour cranes". */
@@ -46,8 +50,7 @@ export function PlanSteps({ review, names, sliceName }: Props) {
         <View key={`${step.slice}-${step.element}-${i}`} style={[styles.step, step.needsSpare && styles.spare]} testID={`plan-step-${i}`}>
           <Text style={styles.number}>{i + 1}</Text>
           <View style={styles.text}>
-            <Text style={styles.body}>{stepText(step, names)}</Text>
-            <Text style={styles.muted}>{sliceName(step.slice)}</Text>
+            <Text style={styles.body}>{stepText(step, names, sliceName(step.slice))}</Text>
             {step.knockOn ? (
               <Text style={styles.knockOn} testID={`plan-step-knock-on-${i}`}>
                 Knock-on move · {reasons.get(step.slice) ?? 'Moved to make room for affected slices'}

@@ -2,20 +2,32 @@
 // how many of the moves are knock-on moves of untouched slices.
 import { StyleSheet, Text, View } from 'react-native';
 import type { PlanReview } from '@/shared/plans';
-import { formatCost, formatDurationMs } from '@/components/plans/plan-format';
+import type { TouchCounts } from '@/shared/touch-counts';
+import { TouchCountsView } from '@/components/impact/touch-counts';
+import { formatCost, MOVE_COST_DEFINITION, runTimeWords } from '@/components/plans/plan-format';
 import { colors, radii, space, type } from '@/constants/theme';
 
-export function PlanTotals({ review }: { review: PlanReview }) {
+type Props = {
+  review: PlanReview;
+  /** the window's slices in the shared vocabulary (impact + this plan) */
+  counts: TouchCounts;
+  /** the whole run's wall time as the progress showed it; null when not recorded */
+  wholeRunMs: number | null;
+};
+
+export function PlanTotals({ review, counts, wholeRunMs }: Props) {
   const t = review.totals;
   const tiles = [
     { key: 'moved', label: 'Moved', value: String(t.moved) },
     { key: 'rerouted', label: 'Rerouted', value: String(t.rerouted) },
     { key: 'stays', label: 'Stay', value: String(t.stays) },
     { key: 'unresolved', label: 'Unresolved', value: String(t.unresolved), alarm: t.unresolved > 0 },
-    { key: 'move-cost', label: 'Move cost', value: formatCost(t.moveCost) },
+    { key: 'move-cost', label: 'Move cost (points)', value: formatCost(t.moveCost) },
   ];
   return (
     <View style={styles.box} testID="plan-totals">
+      <TouchCountsView counts={counts} />
+      <Text style={styles.label}>What the plan does with them</Text>
       <View style={styles.tiles}>
         {tiles.map((tile) => (
           <View key={tile.key} style={styles.tile}>
@@ -31,8 +43,9 @@ export function PlanTotals({ review }: { review: PlanReview }) {
             : `Includes ${t.knockOn} knock-on moves: slices the work does not touch, moved to make room (counted under Moved or Rerouted).`}
         </Text>
       ) : null}
-      <Text style={styles.muted}>
-        {review.affected.length} affected {review.affected.length === 1 ? 'slice' : 'slices'} · search took {formatDurationMs(review.computeMs)}
+      <Text style={styles.muted} testID="plan-total-move-cost-definition">{MOVE_COST_DEFINITION}</Text>
+      <Text style={styles.muted} testID="plan-run-time">
+        {runTimeWords(review.computeMs, wholeRunMs)}
         {review.reservedFor.length > 0 ? ` · capacity held for ${review.reservedFor.length} overlapping ${review.reservedFor.length === 1 ? 'window' : 'windows'}` : ''}
       </Text>
     </View>

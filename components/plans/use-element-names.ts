@@ -1,13 +1,32 @@
-// Readable names for sites and spans in a plan, from the network map most screens have already fetched.
+// Readable names for what a plan moves: sites and spans from the network map most screens have already fetched,
+// functions and links from the plan's slices (people read names, never internal ids).
 import { useMemo } from 'react';
+import { useQueries } from '@tanstack/react-query';
+import { sliceDetailSchema } from '@/shared/inventory';
+import { apiFetch } from '@/hooks/api-fetch';
 import { useNetworkMapQuery } from '@/hooks/queries/network-map';
+import { sliceKey } from '@/hooks/queries/slices';
 
 export type ElementNames = {
   site: (id: string) => string;
   span: (id: string) => string;
-  /** "Ambrymarsh – Orrindale – Castrenholm" along a path's spans; "(no spans)" for a tie inside one site */
+  /** "Ambrymarsh → Orrindale → Castrenholm" along a path's spans; "no spans (both ends on one site)" for none */
   path: (spanIds: readonly string[]) => string;
+  /** a function's own name ("User plane"); "a function" while its slice is not known */
+  fn: (id: string) => string;
+  /** a link by the functions at its ends: "the link IoT gateway – User plane" */
+  tie: (id: string) => string;
 };
+
+/** Function names and link ends of the plan's slices, as the slice details give them. */
+export type SliceParts = {
+  functions: ReadonlyMap<string, string>;
+  ties: ReadonlyMap<string, { from: string; to: string }>;
+};
+
+const NO_PARTS: SliceParts = { functions: new Map(), ties: new Map() };
+
+export const SAME_SITE_PATH = 'no spans (both ends on one site)';
 
 type MapLike = { sites: readonly { id: string; name: string }[]; spans: readonly { id: string; a: string; b: string }[] };
 
@@ -31,7 +50,7 @@ export function siteChain(spans: readonly SpanEnds[]): string[] | null {
 }
 
 /** Pure so tests can check it; unknown ids read as themselves. */
-export function elementNames(map: MapLike | undefined): ElementNames {
+export function elementNames(map: MapLike | undefined, parts: SliceParts = NO_PARTS): ElementNames {
   const sites = new Map((map?.sites ?? []).map((s) => [s.id, s.name]));
   const spans = new Map((map?.spans ?? []).map((s) => [s.id, s]));
   const site = (id: string) => sites.get(id) ?? id;
@@ -40,14 +59,40 @@ export function elementNames(map: MapLike | undefined): ElementNames {
     return s ? `${site(s.a)} – ${site(s.b)}` : id;
   };
   const path = (ids: readonly string[]) => {
-    if (ids.length === 0) return '(inside one site)';
+    if (ids.length === 0) return SAME_SITE_PATH;
     const chain = siteChain(ids.map((id) => spans.get(id)));
     return chain ? chain.map(site).join(' → ') : ids.map(span).join(', ');
   };
-  return { site, span, path };
+  const fn = (id: string) => parts.functions.get(id) ?? 'a function';
+  const tie = (id: string) => {
+    const ends = parts.ties.get(id);
+    return ends ? `the link ${fn(ends.from)} – ${fn(ends.to)}` : 'a link';
+  };
+  return { site, span, path, fn, tie };
 }
 
-export function useElementNames(): ElementNames {
+/** Function names ("User plane") and link ends of the given slices, from their details. */
+export function slicePartsFrom(details: readonly ({ functions: { id: string; name: string | null }[]; ties: { id: string; from: string; to: string }[] } | undefined)[]): SliceParts {
+  const functions = new Map<string, string>();
+  const ties = new Map<string, { from: string; to: string }>();
+  for (const d of details) {
+    d?.functions.forEach((f) => functions.set(f.id, f.name ?? 'unnamed function'));
+    d?.ties.forEach((t) => ties.set(t.id, { from: t.from, to: t.to }));
+  }
+  return { functions, ties };
+}
+
+export function useElementNames(sliceIds: readonly string[] = []): ElementNames {
   const map = useNetworkMapQuery();
-  return useMemo(() => elementNames(map.data), [map.data]);
+  const details = useQueries({
+    queries: sliceIds.map((id) => ({
+      queryKey: sliceKey(id),
+      queryFn: () => apiFetch(`/api/slices/${encodeURIComponent(id)}`, sliceDetailSchema),
+    })),
+  });
+  const data = details.map((d) => d.data);
+  const dataKey = data.map((d) => (d ? d.slice.id : '')).join('|');
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- `data` is a new array each render; its loaded ids say when it changed
+  const parts = useMemo(() => slicePartsFrom(data), [dataKey]);
+  return useMemo(() => elementNames(map.data, parts), [map.data, parts]);
 }

@@ -48,7 +48,7 @@ test('a critical slice in the impact brings up the caution with all three points
   const row = screen.getByTestId('impact-slice-sl-dispatch');
   expect(within(row).getByText('Hosted')).toBeTruthy();
   expect(within(row).getByText('Transit')).toBeTruthy();
-  expect(row).toHaveTextContent(/URLLC · priority 1 · risk 0\.42 %/);
+  expect(row).toHaveTextContent(/URLLC · priority 1 · 0\.42 % risk of failure/);
   expect(within(row).getByTestId('impact-critical-sl-dispatch')).toBeTruthy();
 });
 
@@ -81,4 +81,15 @@ test('critical slices are listed first, then by severity and risk; risk reads as
   // 3GPP TS 23.501 Table 5.15.2.2-1 (secondary): SST 1 eMBB, 2 URLLC, 3 MIoT, 4 V2X.
   expect([1, 2, 3, 4, 200].map(sstName)).toEqual(['eMBB', 'URLLC', 'MIoT', 'V2X', 'SST 200']);
   expect(affectedPathElements(impact([]))).toEqual({ sites: ['cell-pellow-sands', 'edge-b'], spans: ['sp-1', 'sp-2'] });
+});
+
+test('the shared counts: slices that only lose protection are touched but need not move; plan figures wait for a plan', () => {
+  const slices = [slice('sl-a'), slice('sl-b', { reasons: ['hosted', 'unprotected'] }), slice('sl-c', { reasons: ['unprotected'], unprotected: true })];
+  renderWithQueries(<ImpactBody impact={impact(slices)} wide={false} />);
+  expect(screen.getByTestId('touch-count-touched')).toHaveTextContent('3');
+  expect(screen.getByTestId('touch-count-mustMove')).toHaveTextContent('2');
+  expect(screen.getByTestId('touch-count-protectionLost')).toHaveTextContent('1');
+  expect(screen.getByTestId('touch-count-unresolved')).toHaveTextContent('–');
+  expect(screen.getByTestId('touch-count-definitions')).toHaveTextContent(/Lose protection, stay up: .*backup path/);
+  expect(screen.getByTestId('impact-severity-scale')).toHaveTextContent(/Low = priority 4–5/);
 });

@@ -1,9 +1,14 @@
 // Pure helpers of the plan screens: paths read as the sites they pass, what the map draws, the chart's thinning,
 // the form's options, and when a plan may be accepted.
-import { elementNames, siteChain } from '@/components/plans/use-element-names';
+import { elementNames, siteChain, slicePartsFrom } from '@/components/plans/use-element-names';
+import { stepText } from '@/components/plans/plan-steps';
+import { REROUTE_COST, sliceWeight } from '@/planner/plan/evaluate-plan';
+import { planSettingsSchema } from '@/shared/plans';
 import { convergenceSeries, formatGap, outagesAllTicked, planMapElements } from '@/components/plans/plan-review-data';
 import { functionOptionsFrom } from '@/components/plans/use-run-options';
-import { settingsSummary } from '@/components/plans/plan-format';
+import {
+  EFFORT, effortOf, MOVE_COST_DEFINITION, runTimeWords, settingsSummary, UNPLACED_PRIORITY_DEFINITION,
+} from '@/components/plans/plan-format';
 import { knockOnSlice, networkMap, objective, plan, review, slices } from './plan-fixtures';
 
 test('a path reads as the sites it passes in order, whichever way its spans are stored', () => {
@@ -11,7 +16,7 @@ test('a path reads as the sites it passes in order, whichever way its spans are 
   expect(names.path(['sp-2', 'sp-3'])).toBe('Aldmouth → Brackwell → Corran');
   expect(names.path(['sp-3', 'sp-2'])).toBe('Corran → Brackwell → Aldmouth');
   expect(names.path(['sp-1', 'sp-4'])).toBe('Aldmouth → Corran → Dunsey');
-  expect(names.path([])).toBe('(inside one site)');
+  expect(names.path([])).toBe('no spans (both ends on one site)');
   // Unknown spans fall back to their ids rather than inventing a route.
   expect(names.path(['sp-1', 'sp-99'])).toBe('Aldmouth – Corran, sp-99');
   expect(siteChain([{ a: 'x', b: 'y' }, { a: 'p', b: 'q' }])).toBeNull();
@@ -58,9 +63,33 @@ test('accepting needs every unresolved slice ticked; gaps read as percentages', 
 test('function options name the site each function sits on; the settings summary is one line', () => {
   const options = functionOptionsFrom([{ slice: 's', sites: { 'f-2': 'agg-b', 'f-1': 'edge-a' } }], (id) => id.toUpperCase());
   expect(options).toEqual([{ id: 'f-1', label: 'f-1 · EDGE-A' }, { id: 'f-2', label: 'f-2 · AGG-B' }]);
-  expect(settingsSummary(plan().settings)).toBe('One thread · seed 7 · 40 candidates · 20 s limit · moves back after the window · up to 5 moves of untouched slices · 1 site left out');
+  expect(settingsSummary(plan().settings)).toBe('Standard search on one processor core · 20 s limit · moves back after the window · up to 5 moves of untouched slices · 1 site left out · run number 7');
   const kept = { ...plan().settings, mode: 'islands' as const, afterWindow: 'keep' as const, pinned: ['f-1', 'f-2'], excludedSites: [], knockOn: false };
-  expect(settingsSummary(kept)).toBe('Islands (parallel) · seed 7 · 40 candidates · 20 s limit · keeps the new placement after the window · no moves of untouched slices · 2 functions kept in place');
+  expect(settingsSummary(kept)).toBe('Standard search on both processor cores · 20 s limit · keeps the new placement after the window · no moves of untouched slices · 2 functions kept in place · run number 7');
   expect(settingsSummary({ ...plan().settings, maxKnockOnMoves: 1 })).toMatch(/ · up to 1 move of untouched slices · /);
   expect(settingsSummary({ ...plan().settings, maxKnockOnMoves: 0 })).toMatch(/ · no moves of untouched slices · /);
+});
+
+test('steps name the function, the link by its ends, the slice and the sites, never ids', () => {
+  const parts = slicePartsFrom([{
+    functions: [{ id: 'sl-port-gw', name: 'IoT gateway' }, { id: 'sl-port-upf', name: 'User plane' }],
+    ties: [{ id: 'sl-port-t1', from: 'sl-port-gw', to: 'sl-port-upf' }],
+  }]);
+  const names = elementNames(networkMap as Parameters<typeof elementNames>[0], parts);
+  const move = { slice: 'sl-port', kind: 'move-function' as const, element: 'sl-port-gw', from: 'edge-a', to: 'agg-b', needsSpare: false, knockOn: false };
+  expect(stepText(move, names, 'Harbour cranes')).toBe('Move IoT gateway of Harbour cranes from Aldmouth to Brackwell');
+  const reroute = { ...move, kind: 'reroute-tie' as const, element: 'sl-port-t1', from: ['sp-1'], to: [] };
+  expect(stepText(reroute, names, 'Harbour cranes'))
+    .toBe('Reroute the link IoT gateway – User plane of Harbour cranes from Aldmouth → Corran to no spans (both ends on one site)');
+  expect(stepText(reroute, elementNames(undefined), 'Harbour cranes')).not.toMatch(/sl-port/);
+});
+
+test('the move-cost and priority-point words match the planner’s own weights', () => {
+  expect(MOVE_COST_DEFINITION).toContain(`each link rerouted adds ${REROUTE_COST}`);
+  expect(UNPLACED_PRIORITY_DEFINITION).toContain(`counts ${sliceWeight(1)} at priority 1, down to ${sliceWeight(5)} at priority 5`);
+  expect(EFFORT.standard.population).toBe(planSettingsSchema.parse({}).population);
+  expect(effortOf(EFFORT.thorough.population)).toBe('thorough');
+  expect(effortOf(41)).toBeNull();
+  expect(runTimeWords(380, 3500)).toBe('search 380 ms of 3.5 s wall time in all (the rest: preparing the network and the reference solvers)');
+  expect(runTimeWords(380, null)).toBe('search 380 ms wall time');
 });

@@ -71,7 +71,7 @@ describe('review', () => {
     // Only the knock-on card sits in the group; the affected slices stay above it.
     expect(group.queryByTestId('plan-slice-sl-port')).toBeNull();
     expect(screen.queryByTestId('plan-slice-knock-on-sl-port')).toBeNull();
-    await waitFor(() => expect(group.getByTestId('plan-reroute-sl-tele-t1')).toHaveTextContent(/Dunsey → Corran.*→ Aldmouth → Corran/s));
+    await waitFor(() => expect(group.getByTestId('plan-reroute-sl-tele-t1')).toHaveTextContent(/from Dunsey → Corran.*to Aldmouth → Corran/s));
     expect(screen.getByTestId('plan-slice-sl-tele').props.accessibilityLabel).toMatch(/Crane telemetry: Rerouted to make room for Harbour cranes/);
   });
 
@@ -95,9 +95,9 @@ describe('review', () => {
     const own = objective({ unresolved: 2, unresolvedWeight: 7, moveCost: 9.5 });
     show(knockOnReview({ search: { objective: own, feasible: true, usedFallback: 'greedy' } }));
     expect(screen.getByTestId('plan-search-fallback')).toHaveTextContent(
-      /Showing the greedy plan.*The search's own plan was worse \(2 unresolved \(weight 7\) · move cost 9\.5\), so the greedy plan is shown instead\./s);
-    expect(screen.getByTestId('plan-ref-run')).toHaveTextContent(/greedy plan kept; the search alone: 2 unresolved \(weight 7\) · move cost 9\.5/);
-    expect(searchFallbackText({ objective: own, feasible: false, usedFallback: 'greedy' })).toMatch(/^The search found no plan within every capacity and latency limit \(its best: 2 unresolved/);
+      /Showing the greedy plan.*The search's own plan was worse \(2 slices cannot be kept \(7 priority points\) · move cost 9\.5 points\), so the greedy plan is shown instead\./s);
+    expect(screen.getByTestId('plan-ref-run')).toHaveTextContent(/greedy plan kept; the search alone: 2 slices cannot be kept \(7 priority points\) · move cost 9\.5 points/);
+    expect(searchFallbackText({ objective: own, feasible: false, usedFallback: 'greedy' })).toMatch(/^The search found no plan within every capacity and latency limit \(its best: 2 slices cannot be kept/);
   });
 
   test('no note when the search’s own plan was kept', () => {
@@ -110,6 +110,6 @@ test('the runs list counts knock-on moves in plain words', () => {
   const { review: _review, ...base } = plan();
   const item: PlanListItem = { ...base, id: 'p-k', totals: { stays: 1, moved: 1, rerouted: 2, unresolved: 0, moveCost: 4, knockOn: 1 } };
   renderWithQueries(<PlanRunList plans={[item]} timeZone="UTC" onOpen={() => {}} />);
-  expect(screen.getByTestId('plan-row-p-k')).toHaveTextContent(/1 moved · 2 rerouted · 0 unresolved · move cost 4 · 1 untouched slice moved to make room/);
+  expect(screen.getByTestId('plan-row-p-k')).toHaveTextContent(/1 moved · 2 rerouted · 0 cannot be kept · move cost 4 points · 1 untouched slice moved to make room/);
   expect(screen.getByTestId('plan-row-p-k')).toHaveTextContent(/up to 5 moves of untouched slices/);
 });

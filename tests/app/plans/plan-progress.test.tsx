@@ -21,7 +21,7 @@ test('a running plan shows its round, best objective so far and elapsed time, an
   expect(screen.getByTestId('plan-progress-generation')).toHaveTextContent('17');
   expect(screen.getByTestId('plan-progress-elapsed')).toHaveTextContent('5.0 s of 20.0 s');
   expect(screen.getByTestId('plan-progress-evaluations')).toHaveTextContent('720');
-  expect(screen.getByTestId('plan-progress-best')).toHaveTextContent(/2 unresolved \(weight 6\) · move cost 12\.5/);
+  expect(screen.getByTestId('plan-progress-best')).toHaveTextContent(/2 slices cannot be kept \(6 priority points\) · move cost 12\.5 points/);
   expect(screen.getByTestId('plan-progress-bar').props['aria-valuenow']).toBe(25);
   expect(screen.getByTestId('plan-progress-fill')).toHaveStyle({ width: '25%' });
   fireEvent.press(screen.getByTestId('plan-cancel'));

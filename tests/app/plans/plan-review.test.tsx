@@ -36,8 +36,12 @@ test('totals, outcomes with before → after by name, the flagged step, referenc
   expect(screen.getByTestId('plan-slice-outcome-sl-quiet')).toHaveTextContent('Stays');
   expect(screen.getByTestId('plan-slice-outcome-sl-plc')).toHaveTextContent('Unresolved');
   // Names arrive with the network map.
-  await waitFor(() => expect(screen.getByTestId('plan-move-sl-port-gw')).toHaveTextContent('sl-port-gw: Aldmouth (edge-a) → Brackwell (agg-b)'));
-  expect(screen.getByTestId('plan-reroute-sl-port-t1')).toHaveTextContent(/Aldmouth → Corran.*→ Aldmouth → Brackwell → Corran/s);
+  // Site names arrive with the network map; no internal id reaches the reader.
+  await waitFor(() => expect(screen.getByTestId('plan-move-sl-port-gw')).toHaveTextContent('a function: from Aldmouth to Brackwell'));
+  expect(screen.getByTestId('plan-move-sl-port-gw')).not.toHaveTextContent(/sl-port|edge-a|agg-b/);
+  expect(screen.getByTestId('plan-reroute-sl-port-t1')).toHaveTextContent(/A link: from Aldmouth → Corran.*to Aldmouth → Brackwell → Corran/s);
+  expect(screen.getByTestId('plan-total-move-cost-definition')).toHaveTextContent(/each link rerouted adds 0\.25/);
+  expect(screen.getByTestId('plan-risk-scale')).toHaveTextContent(/Medium = priority 2–3/);
   expect(screen.getByTestId('plan-slice-sl-plc')).toHaveTextContent(/cannot stay: site "edge-a" is down/);
 
   expect(screen.getByTestId('plan-steps-spare-count')).toHaveTextContent(/1 step needs temporary spare capacity/);
@@ -45,7 +49,11 @@ test('totals, outcomes with before → after by name, the flagged step, referenc
   expect(screen.queryByTestId('plan-step-spare-0')).toBeNull();
   expect(screen.queryByTestId('plan-step-spare-2')).toBeNull();
 
-  expect(screen.getByTestId('plan-ref-greedy')).toHaveTextContent(/2 unresolved \(weight 8\) · move cost 6\.5/);
+  expect(screen.getByTestId('plan-ref-greedy')).toHaveTextContent(/2 slices cannot be kept \(8 priority points\) · move cost 6\.5 points/);
+  // Without the window's impact the plan's own slices give the shared counts; the run time says it is wall time.
+  expect(screen.getByTestId('touch-count-touched')).toHaveTextContent(String(plan().review!.slices.filter((x) => x.madeRoomFor.length === 0).length));
+  expect(screen.getByTestId('touch-count-unresolved')).toHaveTextContent('1');
+  expect(screen.getByTestId('plan-run-time')).toHaveTextContent(/^search .* wall time/);
   expect(screen.getByTestId('plan-ref-exact')).toHaveTextContent(/gap to the bound 4\.2 %/);
   expect(screen.getByTestId('plan-risk-sl-quiet')).toHaveTextContent(/12\.0 %|12 %/);
   expect(screen.getByTestId('plan-risk-unprotected-sl-quiet')).toBeTruthy();

@@ -50,13 +50,16 @@ test('the form sends the settings typed and places the server’s complaints nex
     <PlanRunForm windowId="w-1" functionOptions={[{ id: 'f-9', label: 'f-9 · Aldmouth' }]} siteOptions={[{ id: 'core-x', label: 'Corran' }]} onQueued={onQueued} />,
   );
   fireEvent.changeText(screen.getByTestId('plan-form-time-limit'), '3');
-  fireEvent.press(screen.getByTestId('plan-form-mode-islands'));
+  fireEvent.press(screen.getByTestId('plan-form-effort-thorough'));
+  fireEvent(screen.getByTestId('plan-form-both-cores'), 'valueChange', true);
+  // The exact figures sit folded under "Repeatable run" while the effort names them.
+  expect(screen.queryByTestId('plan-form-seed')).toBeNull();
   fireEvent.press(screen.getByTestId('plan-form-pinned-f-9'));
   fireEvent.press(screen.getByTestId('plan-form-excluded-core-x'));
   await act(async () => fireEvent.press(screen.getByTestId('plan-form-submit')));
   await waitFor(() => expect(screen.getByTestId('plan-form-pinned-error')).toHaveTextContent(/not in this window/));
   expect(calls[0].body).toEqual({
-    mode: 'islands', seed: 1, population: 40, timeLimitSeconds: 3, pinned: ['f-9'], excludedSites: ['core-x'], afterWindow: 'return',
+    mode: 'islands', seed: 1, population: 100, timeLimitSeconds: 3, pinned: ['f-9'], excludedSites: ['core-x'], afterWindow: 'return',
     knockOn: true, maxKnockOnMoves: 5,
   });
   expect(onQueued).not.toHaveBeenCalled();
@@ -66,6 +69,7 @@ test('bad numbers are caught before sending; a re-run starts from the earlier ru
   const { calls } = routedFetch([]);
   const earlier = plan().settings;
   renderWithQueries(<PlanRunForm windowId="w-1" initial={earlier} functionOptions={[]} siteOptions={[]} onQueued={() => {}} />);
+  fireEvent.press(screen.getByTestId('plan-form-repeatable-toggle'));
   expect(screen.getByTestId('plan-form-seed').props.value).toBe('7');
   expect(screen.getByTestId('plan-form-excluded')).toHaveTextContent(/Sites to leave out \(1\)/);
   fireEvent.changeText(screen.getByTestId('plan-form-population'), '3');
@@ -88,7 +92,7 @@ test('runs are listed newest first with their totals or their failure', () => {
   const rows = screen.getAllByTestId(/^plan-row-p-/);
   expect(rows.map((r) => r.props.testID)).toEqual(['plan-row-p-new', 'plan-row-p-old']);
   expect(rows[0]).toHaveTextContent(/No worker answered\./);
-  expect(rows[1]).toHaveTextContent(/2 moved · 3 rerouted · 0 unresolved · move cost 4\.5/);
+  expect(rows[1]).toHaveTextContent(/2 moved · 3 rerouted · 0 cannot be kept · move cost 4\.5 points/);
   expect(rows[1]).toHaveTextContent(/Accepted/);
   fireEvent.press(rows[1]);
   expect(onOpen).toHaveBeenCalledWith('p-old');
