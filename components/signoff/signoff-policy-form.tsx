@@ -15,22 +15,29 @@ const quorumOf = (text: string) => {
   return Number.isInteger(n) && n >= QUORUM_RANGE.min && n <= QUORUM_RANGE.max ? n : null;
 };
 
+/** The server refuses the same (PATCH /api/policies, QUORUM_ORDER); said here before the round trip. */
+export function quorumOrderProblem(low: number | null, high: number | null): string | undefined {
+  if (low === null || high === null || high >= low) return undefined;
+  return `High risk needs at least as many approvals as low risk: ${high} (high risk) is fewer than ${low} (low risk).`;
+}
+
 export function SignoffPolicyForm({ policies, saving, error, saved, onSave }: Props) {
   const [low, setLow] = useState(String(policies.signoffQuorumLow));
   const [high, setHigh] = useState(String(policies.signoffQuorumHigh));
   const [requireCode, setRequireCode] = useState(policies.signoffRequireCode);
   const bad = 'A whole number from 1 to 9.';
-  const valid = quorumOf(low) !== null && quorumOf(high) !== null;
+  const order = quorumOrderProblem(quorumOf(low), quorumOf(high));
+  const valid = quorumOf(low) !== null && quorumOf(high) !== null && !order;
   return (
     <Section title="Sign-off policy" testID="signoff-policy">
       <Text style={styles.muted}>High risk: the plan moves a critical slice, rates a slice's risk high or critical, or leaves a slice unresolved. Everything else is low risk.</Text>
       <TextField label="Approvals needed, low risk" value={low} onChangeText={setLow} keyboardType="number-pad" testID="policy-quorum-low" error={quorumOf(low) === null ? bad : undefined} />
-      <TextField label="Approvals needed, high risk" value={high} onChangeText={setHigh} keyboardType="number-pad" testID="policy-quorum-high" error={quorumOf(high) === null ? bad : undefined} />
+      <TextField label="Approvals needed, high risk" value={high} onChangeText={setHigh} keyboardType="number-pad" testID="policy-quorum-high" error={quorumOf(high) === null ? bad : order} />
       <View style={styles.row}>
         <Switch value={requireCode} onValueChange={setRequireCode} testID="policy-require-code" accessibilityLabel="Decisions need a one-time code" />
         <Text style={styles.body}>Decisions need a one-time code</Text>
       </View>
-      {error ? <Text style={styles.error} role="alert">{error}</Text> : null}
+      {error ? <Text style={styles.error} role="alert" testID="policy-error">{error}</Text> : null}
       {saved && !error ? <Text style={styles.muted} testID="policy-saved">Saved.</Text> : null}
       <Button
         label="Save policy" busy={saving} disabled={!valid} testID="policy-save"

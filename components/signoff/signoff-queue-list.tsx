@@ -1,4 +1,5 @@
-// The approver's queue: windows in review, soonest first, each with its risk, approvals so far and my state.
+// The approver's queue: windows in review, soonest first, each with its risk, approvals so far and my state; below
+// it the footer (what I decided already, the way to codes and policy), which stays in reach when the queue is empty.
 import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { SignoffQueueItem } from '@/shared/signoff';
@@ -42,7 +43,12 @@ export function SignoffQueueList({ items, timeZone, onOpen, footer }: Props) {
     <PageColumn narrow>
       <Text style={styles.heading} role="heading" aria-level={1}>Sign-off</Text>
       <Text style={styles.meta}>{items.length} window{items.length === 1 ? '' : 's'} in review · times in {describeZone(timeZone)}</Text>
-      {items.map((item) => <QueueRow key={item.windowId} item={item} timeZone={timeZone} onOpen={onOpen} />)}
+      {items.length === 0 ? (
+        <View style={styles.empty} testID="signoff-queue-empty">
+          <Text style={styles.emptyTitle}>Nothing to sign off</Text>
+          <Text style={styles.body}>Windows appear here when a planner submits an accepted plan.</Text>
+        </View>
+      ) : items.map((item) => <QueueRow key={item.windowId} item={item} timeZone={timeZone} onOpen={onOpen} />)}
       {footer}
     </PageColumn>
   );
@@ -57,4 +63,6 @@ const styles = StyleSheet.create({
   body: { ...type.body, color: colors.ink },
   meta: { ...type.caption, color: colors.inkMuted },
   waiting: { ...type.label, color: colors.primary },
+  empty: { alignItems: 'center', gap: space.xs, paddingVertical: space.xl },
+  emptyTitle: { ...type.heading, color: colors.ink },
 });
