@@ -11,7 +11,7 @@ const FIGURES: readonly { key: FigureKey; label: string; hint: string }[] = [
   { key: 'tenants', label: 'Tenants', hint: 'slice owners' },
   { key: 'slices', label: 'Slices', hint: 'in service' },
   { key: 'criticalSlices', label: 'Critical slices', hint: 'public safety, health, utilities' },
-  { key: 'windowsNext30Days', label: 'Windows', hint: 'in the next 30 days' },
+  { key: 'windowsNext30Days', label: 'Windows', hint: 'starting in the next 30 days' },
 ];
 
 export function FigureTiles({ overview, columns }: { overview: Pick<Overview, FigureKey>; columns: number }) {

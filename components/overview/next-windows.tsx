@@ -1,14 +1,22 @@
 // The next maintenance windows, times shown in the viewer's zone with the zone named in the heading.
 import { Text, View } from 'react-native';
+import { nextWindowsCaption } from '@/components/overview/next-windows-caption';
 import type { Overview } from '@/shared/api';
 import { formatWindowRange } from '@/components/time';
 import { UpcomingPanel, upcomingStyles as styles } from '@/components/overview/upcoming-panel';
 
-export function NextWindows({ windows }: { windows: Overview['nextWindows'] }) {
+type Props = { windows: Overview['nextWindows']; inHorizon: number; now?: Date };
+
+/** The rows say which of them fall in the figure tiles' 30 days, so the count beside them matches what is listed. */
+export function NextWindows({ windows, inHorizon, now = new Date() }: Props) {
   return (
     <UpcomingPanel title="Next windows" emptyText="No maintenance windows booked yet." count={windows.length}
       testID="overview-next-windows">
-      {(timeZone) => windows.map((window, index) => (
+      {(timeZone) => [
+        <Text key="caption" style={styles.when} testID="overview-next-windows-caption">
+          {nextWindowsCaption(windows, inHorizon, now)}
+        </Text>,
+        ...windows.map((window, index) => (
         <View key={window.id} style={[styles.row, index > 0 && styles.rowDivider]} testID={`next-window-${window.id}`}>
           <View style={styles.rowMain}>
             <Text style={styles.lead}>{window.title}</Text>
@@ -16,7 +24,7 @@ export function NextWindows({ windows }: { windows: Overview['nextWindows'] }) {
           </View>
           <Text style={styles.stage}>{window.status}</Text>
         </View>
-      ))}
+      ))]}
     </UpcomingPanel>
   );
 }

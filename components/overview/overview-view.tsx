@@ -27,7 +27,7 @@ export function OverviewView({ overview, onOpenNotice }: { overview: AnyOverview
         <FigureTiles overview={overview} columns={columns} />
         {isTenantOverview(overview)
           ? <NextWork work={overview.nextWork} onOpenNotice={onOpenNotice} />
-          : <NextWindows windows={overview.nextWindows} />}
+          : <NextWindows windows={overview.nextWindows} inHorizon={overview.windowsNext30Days} />}
       </View>
     </ScrollView>
   );
