@@ -27,7 +27,7 @@ export function draftFromFreeze(freeze: Freeze, timeZone: string): FreezeDraft {
 function instantError(reason: 'format' | 'skipped'): string {
   return reason === 'skipped'
     ? 'That time does not exist here (clocks jump forward then). Pick another.'
-    : 'Enter a date as YYYY-MM-DD and a time as HH:MM.';
+    : 'Enter a date such as 2027-01-08 or 8 Jan 2027, and a time such as 01:00.';
 }
 
 /** Checks the draft and builds the request; messages say what to fix. */

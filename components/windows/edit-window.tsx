@@ -10,6 +10,7 @@ import type { SavedOutcome } from '@/components/windows/book-window';
 import { windowPatchFor } from '@/components/windows/window-changes';
 import { WindowForm, type WindowSubmission } from '@/components/windows/window-form';
 import { formValuesFromWindow } from '@/components/windows/window-form-state';
+import { tenantsWereTold } from '@/components/windows/window-time-change';
 import { SAVE_MESSAGES, saveErrorView } from '@/components/windows/window-save-errors';
 import { colors, radii, space, type } from '@/constants/theme';
 
@@ -78,6 +79,7 @@ export function EditWindow({ window, me, timeZone, onReload, reloading, onSaved,
       onSubmit={(submission) => void save(submission)}
       onCancel={onCancel}
       notice={notice}
+      notifiedTimes={tenantsWereTold(window.status) ? initialValues : undefined}
     />
   );
 }

@@ -62,7 +62,7 @@ function readTime(date: string, time: string, timeZone: string, label: string): 
   const parsed = zonedWallToInstant(date, time, timeZone);
   if (parsed.ok) return { ms: parsed.instantMs };
   if (parsed.reason === 'skipped') return { error: `Clocks skip that time in ${timeZone} (daylight saving). Pick another.` };
-  return { error: 'Use the form YYYY-MM-DD and HH:MM (24-hour clock).' };
+  return { error: 'Enter a date such as 2027-01-08 or 8 Jan 2027, and a 24-hour time such as 01:00.' };
 }
 
 /** Field a booking rule's issue belongs to, from its JSON path ("$.endsAt" → end). */

@@ -81,7 +81,7 @@ test('an admin gets field errors for a bad freeze without any request, then crea
   fireEvent.changeText(screen.getByTestId('freeze-end-date'), '2027-01-09');
   fireEvent.press(screen.getByTestId('freeze-save'));
   expect(screen.getByTestId('freeze-title-error')).toHaveTextContent('Give the freeze a title.');
-  expect(screen.getByTestId('freeze-end-date-error')).toHaveTextContent('The freeze must end after it starts.');
+  expect(screen.getByTestId('freeze-end-error')).toHaveTextContent('The freeze must end after it starts.');
   expect(fetchMock).not.toHaveBeenCalled();
 
   fetchMock.mockResolvedValue(jsonResponse(201, { ...yearEnd, id: 'f-2', title: 'Regatta' }));

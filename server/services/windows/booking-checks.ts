@@ -1,6 +1,7 @@
 // Booking rules that need the database: the shared checks, element ids that exist, and freezes.
 import type { Me } from '../../../shared/api';
 import { canBookInsideFreeze } from '../../../shared/permissions';
+import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 import { elementIssues, timeIssues } from '../../../shared/window-checks';
 import type { WindowElementInput } from '../../../shared/windows';
 import { findUnknownElements } from '../../queries/windows/elements';
@@ -40,7 +41,8 @@ export async function checkBooking(db: Queryable, check: BookingCheck, user: Me,
   const [freeze] = await overlappingFreezes(db, new Date(check.times.startsAt), new Date(check.times.endsAt));
   if (!freeze) return null;
   const reason = check.freezeOverrideReason?.trim();
-  if (!canBookInsideFreeze(user.roles)) throw new FreezeConflictError(freeze, 'Only an admin can book inside a freeze.');
-  if (!reason) throw new FreezeConflictError(freeze, 'An admin may override it by giving a written reason.');
+  const timeZone = user.timeZone ?? NETWORK_TIME_ZONE;
+  if (!canBookInsideFreeze(user.roles)) throw new FreezeConflictError(freeze, 'Only an admin can book inside a freeze.', timeZone);
+  if (!reason) throw new FreezeConflictError(freeze, 'An admin may override it by giving a written reason.', timeZone);
   return reason;
 }

@@ -1,5 +1,6 @@
 // Domain errors of windows, freezes, MOP documents and policies; each with a fixed code and HTTP status.
 import { AppError, domainError } from '../../errors';
+import { formatRangeIn, formatRangeUtc } from '../notices/notice-times';
 
 export class WindowNotFoundError extends domainError('WINDOW_NOT_FOUND', 404, (id: string) => `No window ${id}.`) {}
 
@@ -23,8 +24,13 @@ export class UnknownElementsError extends AppError {
 
 type Freeze = { title: string; startsAt: Date; endsAt: Date };
 
-export class FreezeConflictError extends domainError('FREEZE_CONFLICT', 409, (freeze: Freeze, hint: string) =>
-  `The window falls inside the freeze "${freeze.title}" (${freeze.startsAt.toISOString()} – ${freeze.endsAt.toISOString()}). ${hint}`) {}
+/** Names the freeze and its times in words, in the booker's zone with UTC beside them (never raw ISO). */
+export class FreezeConflictError extends domainError('FREEZE_CONFLICT', 409, (freeze: Freeze, hint: string, timeZone: string) => {
+  const local = formatRangeIn(freeze.startsAt, freeze.endsAt, timeZone);
+  const utc = formatRangeUtc(freeze.startsAt, freeze.endsAt);
+  const when = local === utc ? local : `${local}; ${utc}`;
+  return `The window falls inside the freeze "${freeze.title}" (${when}). ${hint}`;
+}) {}
 
 export class StaleVersionError extends domainError('STALE_VERSION', 409,
   () => 'This window was changed by someone else; reload and try again.') {}

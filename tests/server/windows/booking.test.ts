@@ -137,6 +137,11 @@ describe('freezes', () => {
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe('FREEZE_CONFLICT');
     expect(res.body.error.message).toContain('Harbour festival');
+    // Times in words, in the booker's zone (the network's UTC−1 until they choose one) and in UTC; never raw ISO.
+    expect(res.body.error.message).toContain('31 May 2027, 23:00');
+    expect(res.body.error.message).toContain('1 Jun 2027, 00:00');
+    expect(res.body.error.message).toMatch(/GMT-1.*UTC/);
+    expect(res.body.error.message).not.toMatch(/\d{4}-\d{2}-\d{2}T/);
     expect(await countTitled('in-freeze')).toBe(0);
   });
 
