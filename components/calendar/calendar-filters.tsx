@@ -2,6 +2,8 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { WINDOW_STATUSES } from '@/shared/windows';
+import { ChipRow } from '@/components/chip-row';
+import { STATUS_LABELS } from '@/components/windows/lifecycle';
 import { SearchField } from '@/components/table/search-field';
 import { colors, radii, space, type } from '@/constants/theme';
 import { statusColor } from './calendar-marks';
@@ -43,23 +45,23 @@ export function CalendarFilters({ filters, onChange, tenants, initiallyOpen }: P
             label="Site, span or title"
             testID="filter-element"
           />
-          <Text style={styles.label}>Status</Text>
-          <View style={styles.chips}>
+          <Text style={styles.label}>Status (chip colours are the bar colours)</Text>
+          <ChipRow testID="filter-status-strip" role="group" label="Status">
             {WINDOW_STATUSES.map((status) => (
               <FilterChip
                 key={status}
-                label={status}
+                label={STATUS_LABELS[status]}
                 tone={statusColor(status)}
                 selected={filters.statuses.includes(status)}
                 onPress={() => onChange(toggleStatus(filters, status))}
                 testID={`filter-status-${status}`}
               />
             ))}
-          </View>
+          </ChipRow>
           {tenants.length > 0 ? (
             <>
               <Text style={styles.label}>Tenant affected</Text>
-              <View style={styles.chips}>
+              <ChipRow testID="filter-tenant-strip" role="group" label="Tenant affected">
                 {tenants.map((tenant) => (
                   <FilterChip
                     key={tenant.id}
@@ -69,7 +71,7 @@ export function CalendarFilters({ filters, onChange, tenants, initiallyOpen }: P
                     testID={`filter-tenant-${tenant.id}`}
                   />
                 ))}
-              </View>
+              </ChipRow>
             </>
           ) : null}
         </View>

@@ -32,7 +32,7 @@ export type CalendarPeriod = {
 };
 
 /** react-native-calendars' multi-period marking, plus what our day cell draws beside the bars. */
-export type CalendarDayMark = MarkingProps & {
+export type CalendarDayMark = Omit<MarkingProps, 'periods'> & {
   periods: CalendarPeriod[];
   /** windows on this day beyond the lanes drawn */
   overflowCount: number;

@@ -1,5 +1,6 @@
 // A row of mutually exclusive choices (list tabs, filters); the chosen one is filled.
-import { Pressable, ScrollView, StyleSheet, Text } from 'react-native';
+import { Pressable, StyleSheet, Text } from 'react-native';
+import { ChipRow } from '@/components/chip-row';
 import { colors, radii, space, type } from '@/constants/theme';
 
 export type Choice<V extends string> = { value: V; label: string };
@@ -8,7 +9,7 @@ type Props<V extends string> = { choices: readonly Choice<V>[]; value: V; onChan
 
 export function Segmented<V extends string>({ choices, value, onChange, testID, label }: Props<V>) {
   return (
-    <ScrollView horizontal showsHorizontalScrollIndicator={false} style={styles.strip} contentContainerStyle={styles.row} role="tablist" aria-label={label}>
+    <ChipRow testID={`${testID}-strip`} backgroundColor={colors.tide} role="tablist" label={label}>
       {choices.map((choice) => {
         const active = choice.value === value;
         return (
@@ -24,14 +25,11 @@ export function Segmented<V extends string>({ choices, value, onChange, testID, 
           </Pressable>
         );
       })}
-    </ScrollView>
+    </ChipRow>
   );
 }
 
 const styles = StyleSheet.create({
-  // A horizontal ScrollView grows to fill a column by default; the strip keeps its own height.
-  strip: { flexGrow: 0, flexShrink: 0 },
-  row: { gap: space.xs, paddingVertical: space.xxs },
   choice: {
     paddingHorizontal: space.md,
     paddingVertical: space.xs + 2,

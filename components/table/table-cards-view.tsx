@@ -1,5 +1,6 @@
 // Phone layout: sort chips above one card per item, the primary column as its title and the rest as labelled pairs.
 import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+import { ChipRow } from '@/components/chip-row';
 import { Cell } from './cell';
 import { sortMark, type RowsViewProps } from './table-columns-view';
 import { isSortable } from './types';
@@ -13,7 +14,7 @@ export function TableCardsView<T>(props: RowsViewProps<T>) {
   return (
     <View style={styles.frame}>
       {sortable.length > 0 ? (
-        <ScrollView horizontal showsHorizontalScrollIndicator={false} style={styles.strip} contentContainerStyle={styles.chips}>
+        <ChipRow testID={`${testID}-sort-strip`} backgroundColor={colors.tide} contentContainerStyle={styles.chips}>
           <Text style={styles.chipsLabel}>Sort</Text>
           {sortable.map((column) => {
             const active = sort?.key === column.key;
@@ -31,7 +32,7 @@ export function TableCardsView<T>(props: RowsViewProps<T>) {
               </Pressable>
             );
           })}
-        </ScrollView>
+        </ChipRow>
       ) : null}
       <ScrollView style={styles.body} contentContainerStyle={styles.list}>
         {body ??
@@ -65,9 +66,7 @@ export function TableCardsView<T>(props: RowsViewProps<T>) {
 
 const styles = StyleSheet.create({
   frame: { flex: 1 },
-  // A horizontal ScrollView grows to fill a column by default; the chips keep their own height.
-  strip: { flexGrow: 0, flexShrink: 0 },
-  chips: { gap: space.sm, alignItems: 'center', paddingVertical: space.sm },
+  chips: { gap: space.sm, paddingVertical: space.sm },
   chipsLabel: { ...type.label, color: colors.inkMuted },
   chip: { paddingHorizontal: space.md, paddingVertical: space.xs + 2, borderRadius: radii.pill, borderWidth: 1, borderColor: colors.border, backgroundColor: colors.surface },
   chipActive: { borderColor: colors.primary, backgroundColor: colors.primarySoft },
