@@ -75,5 +75,5 @@ const styles = StyleSheet.create({
   markActive: { backgroundColor: colors.buoy },
   label: { ...type.caption },
   // Over the icon's top-right corner, as phones show unread counts.
-  badge: { position: 'absolute', top: -space.sm, left: space.md },
+  badge: { position: 'absolute', top: -space.xs, left: space.md },
 });

@@ -11,7 +11,7 @@ import { colors, radii, space, type } from '@/constants/theme';
 type Props = { items: DecidedByMeItem[]; timeZone: string; onOpen: (windowId: string) => void };
 
 function roundNote(item: DecidedByMeItem): string {
-  return item.round === item.currentRound ? `review round ${item.round}` : `earlier review round ${item.round} (now round ${item.currentRound})`;
+  return item.round === item.currentRound ? `Review round ${item.round}` : `Earlier review round ${item.round} (now round ${item.currentRound})`;
 }
 
 function DecidedRow({ item, timeZone, onOpen }: { item: DecidedByMeItem; timeZone: string; onOpen: (id: string) => void }) {

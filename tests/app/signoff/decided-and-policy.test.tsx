@@ -27,8 +27,8 @@ test('decided by me: each decision with when (viewer zone), the window as it is 
   );
   expect(screen.getByTestId('signoff-decided-by-me')).toHaveTextContent(/^Decided by me/);
   // 08:30 UTC is 09:30 in Oslo in January (CET).
-  expect(screen.getByTestId('signoff-decided-w-1-1')).toHaveTextContent(/Fibre splice, Gullhaven ring.*Notified.*Approved .*09:30.*review round 1 · confirmed with a code.*Checked the ring capacity/);
-  expect(screen.getByTestId('signoff-decided-w-2-1')).toHaveTextContent(/Sent back .*earlier review round 1 \(now round 2\)/);
+  expect(screen.getByTestId('signoff-decided-w-1-1')).toHaveTextContent(/Fibre splice, Gullhaven ring.*Notified.*Approved .*09:30.*Review round 1 · confirmed with a code.*Checked the ring capacity/);
+  expect(screen.getByTestId('signoff-decided-w-2-1')).toHaveTextContent(/Sent back .*Earlier review round 1 \(now round 2\)/);
   fireEvent.press(screen.getByTestId('signoff-decided-w-2-1'));
   expect(onOpen).toHaveBeenCalledWith('w-2');
 });
