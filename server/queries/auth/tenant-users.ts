@@ -3,9 +3,11 @@ import { inArray } from 'drizzle-orm';
 import type { Queryable } from '../../../db/client';
 import { users } from '../../../db/schema';
 
-export type TenantUser = { id: string; tenantId: string | null; email: string };
+/** `timeZone` is the zone the user chose, null when they read times in the network's zone. */
+export type TenantUser = { id: string; tenantId: string | null; email: string; timeZone: string | null };
 
 /** Every account of the given tenants. */
 export async function selectUsersOfTenants(db: Queryable, tenantIds: string[]): Promise<TenantUser[]> {
-  return db.select({ id: users.id, tenantId: users.tenantId, email: users.email }).from(users).where(inArray(users.tenantId, tenantIds));
+  return db.select({ id: users.id, tenantId: users.tenantId, email: users.email, timeZone: users.timeZone }).from(users)
+    .where(inArray(users.tenantId, tenantIds)).orderBy(users.id);
 }

@@ -1,7 +1,6 @@
 // Issues tenant notices for a window that has just been cleared: one per affected tenant, queued for sending
 // when within the tenant's lead time, else left `blocked` for an admin to override. With none blocked, the
 // window moves on to `notified`. Runs inside the caller's transaction (the one that reached the quorum).
-import { DEFAULT_TENANT_TIME_ZONE } from '../../../shared/notices';
 import type { Queryable } from '../../../db/client';
 import { lockWindowNotices, type NoticeRow } from '../../queries/notices/notice-rows';
 import { setWindowStatus } from '../windows/set-window-status';
@@ -28,7 +27,7 @@ async function issueOne(tx: Queryable, deps: NoticeDeps, inputs: WindowNoticeInp
   const w = inputs.window;
   const content = composeNotice({
     window: w, tenant, slices: inputs.slicesByTenant.get(tenant.id) ?? [], lookups: inputs.lookups,
-    outageAccepted: inputs.outageAccepted, afterWindow: inputs.afterWindow, timeZone: DEFAULT_TENANT_TIME_ZONE,
+    outageAccepted: inputs.outageAccepted, afterWindow: inputs.afterWindow, timeZone: tenant.timeZone,
     leadDays: tenant.leadDays, contact: { ...parseMailbox(deps.config.mailFrom), name: 'Network operations centre' },
   });
   const version = {

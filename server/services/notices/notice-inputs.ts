@@ -4,13 +4,15 @@ import { planReviewSchema, planSettingsSchema, type PlanSlice } from '../../../s
 import { spanLatencyMs } from '../../../shared/scenario';
 import type { Queryable } from '../../../db/client';
 import { selectUsersOfTenants } from '../../queries/auth/tenant-users';
+import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 import { selectNoticeWindow, selectSlicesByIds, selectTenantsByIds, selectWordingRows } from '../../queries/notices/notice-inputs';
 import { selectPlanRow } from '../../queries/plans/plan-rows';
 import { getPolicies } from '../../queries/windows/policies';
 import { NoticeStateError } from './errors';
 import type { NoticeLookups } from './slice-wording';
 
-export type NoticeTenant = { id: string; name: string; leadDays: number; recipients: string[] };
+/** `timeZone`: the zone the tenant's people chose (the first account with a choice), else the network's zone. */
+export type NoticeTenant = { id: string; name: string; leadDays: number; recipients: string[]; timeZone: string };
 
 export type WindowNoticeInputs = {
   window: { id: string; startsAt: Date; endsAt: Date; workType: string | null; status: string };
@@ -60,9 +62,11 @@ export async function loadTenants(db: Queryable, ids: string[]): Promise<Map<str
   const policy = await getPolicies(db);
   const out = new Map<string, NoticeTenant>();
   for (const t of rows) {
-    const emails = [...t.contacts.map((c) => c.email), ...tenantUsers.filter((u) => u.tenantId === t.id).map((u) => u.email)];
+    const accounts = tenantUsers.filter((u) => u.tenantId === t.id);
+    const emails = [...t.contacts.map((c) => c.email), ...accounts.map((u) => u.email)];
     const recipients = [...new Set(emails.map((e) => e.trim().toLowerCase()).filter(Boolean))];
-    out.set(t.id, { id: t.id, name: t.name, leadDays: Math.max(t.noticeDays, policy.noticeLeadDays), recipients });
+    const timeZone = accounts.find((u) => u.timeZone !== null)?.timeZone ?? NETWORK_TIME_ZONE;
+    out.set(t.id, { id: t.id, name: t.name, leadDays: Math.max(t.noticeDays, policy.noticeLeadDays), recipients, timeZone });
   }
   return out;
 }

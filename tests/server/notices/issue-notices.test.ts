@@ -1,10 +1,11 @@
 // issueNotices / withdrawNotices: one tenant-facing notice per affected tenant, invitations that satisfy
 // RFC 5545/5546 when parsed back with ical.js, SEQUENCE on re-issue, CANCEL on withdrawal.
 import { eq } from 'drizzle-orm';
-import { notices, windows } from '../../../db/schema';
+import { notices, users, windows } from '../../../db/schema';
 import { issueNotices } from '../../../server/services/notices/issue-notices';
 import { withdrawNotices } from '../../../server/services/notices/withdraw-notices';
 import { noticeContentSchema } from '../../../shared/notices';
+import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 import { insertClearedWindow, internalNames, NOW, setupNoticesApp, type NoticesContext } from './fixture';
 import { expectRfc5545Event, parseInvitation } from './ics-check';
 
@@ -118,5 +119,24 @@ describe('issueNotices', () => {
 
   it('refuses a window that is not cleared', async () => {
     await expect(issue(windowId)).rejects.toThrow(/cleared/);
+  });
+});
+
+describe('the zone a notice is written in', () => {
+  it('is the zone the tenant’s people chose; a tenant whose people chose none reads the network zone', async () => {
+    await ctx.db.update(users).set({ timeZone: 'Asia/Kolkata' }).where(eq(users.id, ctx.users.tenant.id));
+    try {
+      const windowId = await insertClearedWindow(ctx, 'zone-choice', 20);
+      await issue(windowId);
+      const contentOf = async (tenantId: string) => noticeContentSchema.parse((await rowsOf(windowId)).find((r) => r.tenantId === tenantId)!.content);
+      const own = await contentOf(ctx.tenantId);
+      expect(own.timeZone).toBe('Asia/Kolkata');
+      expect(own.whenLocal).toMatch(/GMT\+5:30$/);
+      const other = await contentOf(ctx.otherTenantId);
+      expect(other.timeZone).toBe(NETWORK_TIME_ZONE);
+      expect(other.whenLocal).toMatch(/GMT-1$/);
+    } finally {
+      await ctx.db.update(users).set({ timeZone: null }).where(eq(users.id, ctx.users.tenant.id));
+    }
   });
 });
