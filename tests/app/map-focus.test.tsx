@@ -2,6 +2,7 @@
 import fc from 'fast-check';
 import { render, screen } from '@testing-library/react-native';
 import { focusSiteIds, viewForArea } from '@/components/map/map-focus';
+import { PAGE_MAP_HEIGHT_PX, pageMapHeightPx } from '@/components/map/map-height';
 import { applyView, MAX_ZOOM } from '@/components/map/map-view';
 import { NetworkMap } from '@/components/map/network-map';
 import { demoMapData } from './map-demo-data';
@@ -92,5 +93,14 @@ describe('tap targets', () => {
       const radii = group.findAll((n) => n.props.r !== undefined && n.props.fill === 'transparent').map((n) => Number(n.props.r));
       expect(Math.max(0, ...radii) * 2).toBeGreaterThanOrEqual(44);
     }
+  });
+});
+
+describe('pageMapHeightPx', () => {
+  test('a phone gets half its height or more, a wide screen stays within the cap, a tiny window the minimum', () => {
+    expect(pageMapHeightPx(358, 844)).toBeGreaterThanOrEqual(422);
+    expect(pageMapHeightPx(358, 844)).toBeLessThanOrEqual(844 * 0.6);
+    expect(pageMapHeightPx(1000, 1200)).toBe(PAGE_MAP_HEIGHT_PX.max);
+    expect(pageMapHeightPx(200, 300)).toBe(PAGE_MAP_HEIGHT_PX.min);
   });
 });
