@@ -22,6 +22,9 @@ export const RISKS_SHOWN_FIRST = 5;
 function tenantLine(t: SignoffSummary['tenants'][number]): string {
   const parts = t.affected > 0 ? [`${plural(t.affected, 'touched slice', 'touched slices')}: ${t.moving} move`] : [];
   if (t.protectionLost > 0) parts.push(`${t.protectionLost} lose protection but stay up`);
+  // The rest of the tenant's touched slices are the ones the plan cannot keep, so the parts always add up.
+  const notKept = t.affected - t.moving - t.protectionLost;
+  if (notKept > 0) parts.push(`${notKept} cannot be kept`);
   if (t.knockOn > 0) parts.push(`${t.knockOn} moved to make room`);
   return parts.join(' · ');
 }
@@ -33,6 +36,7 @@ export function MovesFacts({ summary: s }: { summary: SignoffSummary }) {
       <Text style={styles.lead} testID="signoff-moves-lead">
         {plural(s.totals.affected, 'touched slice', 'touched slices')} of {plural(tenants, 'tenant', 'tenants')}: {s.totals.moving} move
         {s.totals.stays ? ` · ${s.totals.stays} stay put` : ''}
+        {s.totals.unresolved ? ` · ${s.totals.unresolved} cannot be kept` : ''}
         {s.totals.knockOn ? ` · ${plural(s.totals.knockOn, 'more slice', 'more slices')} moved to make room` : ''}
       </Text>
       {s.touch ? <TouchCountsView counts={s.touch} /> : null}

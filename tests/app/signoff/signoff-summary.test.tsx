@@ -29,8 +29,10 @@ test('shows what, when (viewer zone), who moves, unresolved slices, risk with th
   expect(screen.getByTestId('signoff-title')).toHaveTextContent('Fibre splice, Gullhaven ring');
   // 21:00 UTC is 22:00 in Oslo in January (CET).
   expect(screen.getByTestId('signoff-when')).toHaveTextContent(/22:00/);
-  expect(screen.getByTestId('signoff-moves-lead')).toHaveTextContent('4 touched slices of 2 tenants: 3 move');
-  expect(screen.getByTestId('signoff-tenant-t-2')).toHaveTextContent('Marsh Water2 touched slices: 1 move');
+  // The parts add up: 3 move and 1 cannot be kept, in all and for the tenant whose slice stays down.
+  expect(screen.getByTestId('signoff-moves-lead')).toHaveTextContent('4 touched slices of 2 tenants: 3 move · 1 cannot be kept');
+  expect(screen.getByTestId('signoff-tenant-t-2')).toHaveTextContent('Marsh Water2 touched slices: 1 move · 1 cannot be kept');
+  expect(screen.getByTestId('signoff-tenant-t-1')).toHaveTextContent('Harbour Health2 touched slices: 2 move');
   expect(screen.getByTestId('touch-count-touched')).toHaveTextContent('4');
   expect(screen.getByTestId('touch-count-unresolved')).toHaveTextContent('1');
   expect(screen.getByTestId('signoff-unresolved')).toHaveTextContent(/Pump telemetry · Marsh Water/);
