@@ -23,7 +23,10 @@ function toSliceInfo(s: ScenarioSlice, index: number, net: NetworkModel, tenants
     if (fnIndex.has(f.id)) throw new InvalidScenarioError(`slice "${s.id}" has duplicate function id "${f.id}"`);
     fnIndex.set(f.id, i);
     const anchor = toAnchor(f.anchor, net, `function "${f.id}" of slice "${s.id}"`);
-    return { id: f.id, cpu: f.cpu, moveCost: f.moveCost ?? 1, fixed: f.fixed ?? false, ...(anchor ? { anchor } : {}) };
+    return {
+      id: f.id, cpu: f.cpu, moveCost: f.moveCost ?? 1, fixed: f.fixed ?? false,
+      ...(f.name ? { name: f.name } : {}), ...(anchor ? { anchor } : {}),
+    };
   });
   const ties = s.ties.map((t) => {
     const from = fnIndex.get(t.from);

@@ -48,6 +48,8 @@ export type AnchorInfo = { site: number } | { lat: number; lon: number; radiusKm
 
 export interface FunctionInfo {
   id: string;
+  /** what people call it ("IoT gateway"); reasons fall back to the id when a scenario has no name */
+  name?: string;
   cpu: number;
   anchor?: AnchorInfo;
   moveCost: number;

@@ -3,6 +3,7 @@ import { greatCircleKm } from '../geo/great-circle';
 import { satisfiesAnchor } from '../model/anchor';
 import { fits } from '../model/tolerance';
 import type { Inventory } from '../model/types';
+import { functionWords, siteWords } from './reason-words';
 
 export interface CandidateContext {
   inv: Inventory;
@@ -44,12 +45,12 @@ function usable(ctx: CandidateContext, slice: number, fn: number, site: number):
 export function candidateSites(ctx: CandidateContext, slice: number, fn: number): CandidateList {
   const f = ctx.inv.slices[slice].functions[fn];
   const current = ctx.inv.placements[slice].sites[fn];
-  const siteId = ctx.inv.network.sites[current].id;
   const pinned = ctx.pinned.has(f.id) || ctx.pinned.has(`${ctx.inv.slices[slice].id}/${f.id}`);
   if (f.fixed || pinned) {
     if (usable(ctx, slice, fn, current)) return { candidates: Int32Array.of(current) };
     const why = ctx.siteDown[current] ? 'is down' : ctx.excluded[current] ? 'is excluded' : 'lacks the CPU';
-    return { candidates: new Int32Array(0), reason: `${f.fixed ? 'fixed' : 'pinned'} function "${f.id}" cannot stay: site "${siteId}" ${why}` };
+    const where = siteWords(ctx.inv.network.sites[current]);
+    return { candidates: new Int32Array(0), reason: `${functionWords(f)} is ${f.fixed ? 'fixed' : 'pinned'} to ${where}, which ${why}` };
   }
   const out: number[] = usable(ctx, slice, fn, current) ? [current] : [];
   for (const site of sitesByDistance(ctx, current)) {
@@ -57,7 +58,7 @@ export function candidateSites(ctx: CandidateContext, slice: number, fn: number)
     if (site !== current && usable(ctx, slice, fn, site)) out.push(site);
   }
   if (out.length === 0) {
-    return { candidates: new Int32Array(0), reason: `no usable site has ${f.cpu} vCPU free for function "${f.id}" (anchor, capacity or outage)` };
+    return { candidates: new Int32Array(0), reason: `no usable site has ${f.cpu} vCPU free for ${functionWords(f)} (anchor, capacity or outage)` };
   }
   return { candidates: Int32Array.from(out) };
 }

@@ -4,6 +4,7 @@ import type { SlicePlacement } from '../model/types';
 import { shortestLatencyPath } from '../paths/shortest-path';
 import { createClaimState, type ClaimState } from './claims';
 import { claimPlacement } from './place-slice';
+import { functionWords, tieWords } from './reason-words';
 import type { RemapProblem, RemapSlice } from './remap-types';
 
 /** Nearest candidate per function with enough CPU left after the plan, or the reason there is none. */
@@ -14,8 +15,8 @@ function nearestSites(problem: RemapProblem, state: ClaimState, block: RemapSlic
     const cpu = problem.inv.slices[f.slice].functions[f.fn].cpu;
     const site = f.candidates.find((c) => fits(cpu, state.cpu[c]));
     if (site === undefined) {
-      const id = problem.inv.slices[f.slice].functions[f.fn].id;
-      return `no candidate site has ${cpu} vCPU left for function "${id}" once the other slices are placed`;
+      const what = functionWords(problem.inv.slices[f.slice].functions[f.fn]);
+      return `no candidate site has ${cpu} vCPU left for ${what} once the other slices are placed`;
     }
     sites[fn] = site;
   }
@@ -28,13 +29,14 @@ function tieReason(problem: RemapProblem, state: ClaimState, block: RemapSlice, 
     const opts = { spanDown: problem.spanDown, siteDown: problem.siteDown };
     const from = sites[t.from];
     const to = sites[t.to];
-    if (!shortestLatencyPath(problem.inv.network, from, to, opts)) return `tie "${t.id}" has no surviving path`;
+    const link = tieWords(t, slice.functions);
+    if (!shortestLatencyPath(problem.inv.network, from, to, opts)) return `no path survives the work for ${link}`;
     if (!shortestLatencyPath(problem.inv.network, from, to, { ...opts, maxLatencyMs: t.maxLatencyMs })) {
-      return `no surviving path for tie "${t.id}" within its ${t.maxLatencyMs} ms latency budget`;
+      return `no path that survives the work keeps ${link} within its ${t.maxLatencyMs} ms latency budget`;
     }
     const withBandwidth = { ...opts, maxLatencyMs: t.maxLatencyMs, residualGbps: state.gbps, minGbps: t.bandwidthGbps };
     if (!shortestLatencyPath(problem.inv.network, from, to, withBandwidth)) {
-      return `not enough free bandwidth (${t.bandwidthGbps} Gbit/s) for tie "${t.id}" within ${t.maxLatencyMs} ms`;
+      return `not enough free bandwidth (${t.bandwidthGbps} Gbit/s) for ${link} within ${t.maxLatencyMs} ms`;
     }
   }
   return 'no placement meets every constraint together (availability, capacity or latency) alongside higher-priority slices';

@@ -32,7 +32,7 @@ export const slices: PlanSlice[] = [
   slice('sl-quiet', { name: 'Meter readings', outcome: 'stays', reasons: ['unprotected'] }),
   slice('sl-plc', {
     name: 'Press line control', outcome: 'unresolved', after: null, priority: 1,
-    unresolvedReason: 'fixed function "sl-plc-plc" cannot stay: site "edge-a" is down',
+    unresolvedReason: 'the PLC is fixed to site Edge A, which is down',
   }),
 ];
 

@@ -42,7 +42,7 @@ test('totals, outcomes with before → after by name, the flagged step, referenc
   expect(screen.getByTestId('plan-reroute-sl-port-t1')).toHaveTextContent(/A link: from Aldmouth → Corran.*to Aldmouth → Brackwell → Corran/s);
   expect(screen.getByTestId('plan-total-move-cost-definition')).toHaveTextContent(/each link rerouted adds 0\.25/);
   expect(screen.getByTestId('plan-risk-scale')).toHaveTextContent(/Medium = priority 2–3/);
-  expect(screen.getByTestId('plan-slice-sl-plc')).toHaveTextContent(/cannot stay: site "edge-a" is down/);
+  expect(screen.getByTestId('plan-slice-sl-plc')).toHaveTextContent(/the PLC is fixed to site Edge A, which is down/);
 
   expect(screen.getByTestId('plan-steps-spare-count')).toHaveTextContent(/1 step needs temporary spare capacity/);
   expect(screen.getByTestId('plan-step-spare-1')).toHaveTextContent('Needs spare capacity');

@@ -41,7 +41,7 @@ describe('planWindow on the tiny square network', () => {
     const { r } = await plan(sc, 'w-site-e');
     const transit = entry(r, 's-transit');
     expect(transit.outcome).toBe('unresolved');
-    expect(transit.reason).toMatch(/fixed function "ran"/);
+    expect(transit.reason).toMatch(/function "ran" is fixed to site Site E, which is down/);
     expect(r.objective.unresolvedWeight).toBe(5);
   });
 
