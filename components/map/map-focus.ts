@@ -55,3 +55,25 @@ export function viewForArea(
   const target = { x: size.widthPx / 2, y: topInsetPx + (size.heightPx - topInsetPx) / 2 };
   return { zoom, panX: target.x - centre.x * zoom, panY: target.y - centre.y * zoom };
 }
+
+/** Most a portrait start view enlarges the whole network beyond fitting its width: the rest is one pan away. */
+export const PORTRAIT_FILL_MAX_ZOOM = 1.7;
+
+/**
+ * A phone held upright fits a wide network by its width and leaves most of the height empty. This start view
+ * enlarges the network towards the viewport's height (at most PORTRAIT_FILL_MAX_ZOOM, so only the far east and
+ * west edges start off screen), centred on the network; null when the viewport is not taller than the network.
+ */
+export function portraitFillView(points: readonly Point[], size: { widthPx: number; heightPx: number }, marginPx: number, topInsetPx = 0): MapView | null {
+  const finite = points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y));
+  if (finite.length < 2 || size.heightPx <= size.widthPx) return null;
+  const ys = finite.map((p) => p.y);
+  const xs = finite.map((p) => p.x);
+  const height = Math.max(...ys) - Math.min(...ys);
+  const innerH = size.heightPx - topInsetPx - 2 * marginPx;
+  if (height <= 0 || innerH <= height) return null;
+  const zoom = Math.min(PORTRAIT_FILL_MAX_ZOOM, innerH / height);
+  const centre = { x: (Math.min(...xs) + Math.max(...xs)) / 2, y: (Math.min(...ys) + Math.max(...ys)) / 2 };
+  const target = { x: size.widthPx / 2, y: topInsetPx + (size.heightPx - topInsetPx) / 2 };
+  return { zoom, panX: target.x - centre.x * zoom, panY: target.y - centre.y * zoom };
+}

@@ -33,7 +33,7 @@ export function MapScreenView({ data, onOpenSlice, onOpenElement }: Props) {
   const panel = selection ? (
     <MapSelectionPanel selection={selection} onClose={() => setSelection(null)} onOpenSlice={onOpenSlice} onOpenElement={onOpenElement} />
   ) : null;
-  const map = <NetworkMap data={data} selected={selection} onSelect={setSelection} />;
+  const map = <NetworkMap data={data} selected={selection} onSelect={setSelection} fillPortrait={!wide} />;
 
   if (wide) {
     return (

@@ -35,6 +35,8 @@ export type NetworkMapProps = {
   focus?: MapFocus;
   /** A fixed height for the drawing (the legend goes under it), for maps inside a scrolling page. */
   heightPx?: number;
+  /** The map screen on a phone held upright: start enlarged towards the full height (see portraitFillView). */
+  fillPortrait?: boolean;
 };
 
 // Until the first layout arrives (and in tests, where none does) the map draws at a phone-like size.
@@ -53,13 +55,13 @@ function usedTones(...highlights: (MapHighlight | undefined)[]): HighlightTone[]
 }
 
 export function NetworkMap(props: NetworkMapProps) {
-  const { data, highlight, secondaryHighlight, selected = null, onSelect, compact = false, toneLabels, focus, heightPx } = props;
+  const { data, highlight, secondaryHighlight, selected = null, onSelect, compact = false, toneLabels, focus, heightPx, fillPortrait } = props;
   const [size, setSize] = useState(heightPx ? { ...FALLBACK_SIZE, heightPx } : FALLBACK_SIZE);
   const surface = useRef<View>(null);
   const narrow = size.widthPx < NARROW_MAP_MAX_WIDTH_PX;
   const topInsetPx = narrow ? CONTROLS_ROW_HEIGHT_PX - FIT_PADDING_PX / 2 : 0;
   const projection = useMemo(() => fitNetwork(data, size, FIT_PADDING_PX, topInsetPx), [data, size, topInsetPx]);
-  const { view, setView, focusIds } = useMapView({ data, projection, size, focus, topInsetPx });
+  const { view, setView, focusIds } = useMapView({ data, projection, size, focus, topInsetPx, fillPortrait });
   const gestures = useMapGestures({ view, size, setView });
   useWheelZoom(surface, useCallback((factor: number, at: Point) => setView((v) => zoomAround(v, factor, at)), [setView]));
 

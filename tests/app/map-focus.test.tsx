@@ -1,7 +1,7 @@
 // Fit to the affected area: which sites make the area, and the zoom and pan that show it with a margin.
 import fc from 'fast-check';
 import { render, screen } from '@testing-library/react-native';
-import { focusSiteIds, viewForArea } from '@/components/map/map-focus';
+import { focusSiteIds, PORTRAIT_FILL_MAX_ZOOM, portraitFillView, viewForArea } from '@/components/map/map-focus';
 import { PAGE_MAP_HEIGHT_PX, pageMapHeightPx } from '@/components/map/map-height';
 import { applyView, MAX_ZOOM } from '@/components/map/map-view';
 import { NetworkMap } from '@/components/map/network-map';
@@ -102,5 +102,31 @@ describe('pageMapHeightPx', () => {
     expect(pageMapHeightPx(358, 844)).toBeLessThanOrEqual(844 * 0.6);
     expect(pageMapHeightPx(1000, 1200)).toBe(PAGE_MAP_HEIGHT_PX.max);
     expect(pageMapHeightPx(200, 300)).toBe(PAGE_MAP_HEIGHT_PX.min);
+  });
+});
+
+describe('portraitFillView (the phone map screen held upright)', () => {
+  // A network twice as wide as it is tall, fitted to the width of a 370 × 600 px map (zoom 1 is the whole network).
+  const wideNetwork = [{ x: 10, y: 220 }, { x: 360, y: 220 }, { x: 185, y: 395 }, { x: 10, y: 395 }];
+  const phone = { widthPx: 370, heightPx: 600 };
+
+  test('enlarges the network towards the height, at most PORTRAIT_FILL_MAX_ZOOM, centred on it', () => {
+    const view = portraitFillView(wideNetwork, phone, 16)!;
+    expect(view.zoom).toBe(PORTRAIT_FILL_MAX_ZOOM);
+    const top = applyView(view, { x: 185, y: 220 });
+    const bottom = applyView(view, { x: 185, y: 395 });
+    // The network's height grows from 175 px to 1.7 × 175 ≈ 298 px, centred in the 600 px height.
+    expect(bottom.y - top.y).toBeCloseTo(175 * PORTRAIT_FILL_MAX_ZOOM, 6);
+    expect((top.y + bottom.y) / 2).toBeCloseTo(300, 6);
+    expect(applyView(view, { x: 185, y: 300 }).x).toBeCloseTo(185, 6);
+  });
+
+  test('a taller network just fills the height; one that already does, a landscape screen or one site change nothing', () => {
+    const taller = [{ x: 0, y: 100 }, { x: 370, y: 450 }];
+    expect(portraitFillView(taller, phone, 16)!.zoom).toBeCloseTo((600 - 32) / 350, 6);
+    const fullHeight = [{ x: 100, y: 10 }, { x: 200, y: 590 }];
+    expect(portraitFillView(fullHeight, phone, 16)).toBeNull();
+    expect(portraitFillView(wideNetwork, { widthPx: 800, heightPx: 600 }, 16)).toBeNull();
+    expect(portraitFillView([{ x: 5, y: 5 }], phone, 16)).toBeNull();
   });
 });
