@@ -7,24 +7,33 @@ export const colors = {
   abyss: '#0C2630',
   ink: '#16323C',
   inkMuted: '#4C6873',
-  inkFaint: '#7F97A0',
+  /** Captions and placeholders: the lightest text that still reads at 4.5:1 on surface and tide. */
+  inkFaint: '#5B717A',
   /** Still water at the turn of the tide: the page background. */
   tide: '#EEF4F3',
   surface: '#FFFFFF',
   surfaceSunken: '#E2ECEA',
+  /** Card and divider lines: decoration only, so no contrast minimum. */
   border: '#C9D9D7',
+  /** Edges that identify a control (text inputs): 3:1 on surface and tide. */
+  borderControl: '#758E91',
   primary: '#0D5C6B',
   primaryPressed: '#08434F',
   primarySoft: '#D3E8E7',
   onPrimary: '#FFFFFF',
   /** Buoy yellow-orange: selection marks and highlights. */
   buoy: '#D99A3D',
+  /** Buoy deepened for selection marks on light surfaces (3:1 on surface, tide and primarySoft); buoy stays for the rail. */
+  buoyDeep: '#AC7422',
   danger: '#A63A2B',
   dangerSoft: '#F6E0DC',
   warning: '#8A5A00',
   /** Text and icons on the dark rail. */
   onAbyss: '#DCEBEA',
   onAbyssMuted: '#8FB0B4',
+  /** Keyboard focus: a dark ring outside a light halo, so one of the two shows on every surface. */
+  focusRing: '#0C2630',
+  focusHalo: '#FFFFFF',
 } as const;
 
 /** 4-point spacing scale; index names read as multiples of 4 px. */
@@ -88,31 +97,32 @@ export const MAP_DIMMED_OPACITY = 0.22;
 
 // ── Calendar tokens (components/calendar, components/freezes) ─────────────────
 // One tone per window status, in lifecycle order: cool while being worked out, green once cleared,
-// violet while work is underway, muted once over; red-brown for a return or roll-back.
+// violet while work is underway, muted once over; red-brown for a return or roll-back. Each carries white bar titles
+// at 4.5:1, so the pale ends of the lifecycle are greys rather than washes.
 export const calendarColors = {
   status: {
-    draft: '#8DA4AC',
-    assessed: '#4A86B5',
+    draft: '#5F7982',
+    assessed: '#437AA4',
     planned: '#3F5FAE',
-    'in-review': '#B8892B',
-    cleared: '#2E8A66',
-    returned: '#C0643B',
+    'in-review': '#946F23',
+    cleared: '#2C8361',
+    returned: '#B45D37',
     notified: '#1D7F8E',
     underway: '#7E45A6',
-    done: '#7F948F',
+    done: '#667975',
     'rolled-back': '#9E2F3A',
-    withdrawn: '#C2CDCF',
+    withdrawn: '#717678',
   },
   /** Freeze shading: a cool lavender wash with darker diagonal hatching, unlike any status tone. */
   freezeWash: '#ECE6F5',
   freezeHatch: '#B7A6D3',
   freezeInk: '#4F3F78',
-  /** Today: a ring in buoy yellow, kept apart from the selection fill. */
-  todayRing: '#D99A3D',
+  /** Today: a ring in deepened buoy (3:1 on the white cell), kept apart from the selection fill. */
+  todayRing: '#AC7422',
   selectedFill: '#0D5C6B',
   onSelected: '#FFFFFF',
   /** Days outside the shown month. */
-  outsideMonth: '#A9BABF',
+  outsideMonth: '#607981',
   /** Badges on windows: conflicts (danger) and a critical slice touched (caution). */
   conflict: '#A63A2B',
   conflictSoft: '#F6E0DC',
