@@ -47,7 +47,7 @@ const probes: Probe[] = [
     .map((p) => ({ route: `GET ${p}`, path: () => p, foreign: false })),
   { route: 'GET /api/windows', path: (who) => `/api/windows?${RANGE}&tenant=${otherTenant(who)}`, foreign: true },
   { route: 'GET /api/windows/:id', path: () => `/api/windows/${w()}`, foreign: true },
-  ...['impact', 'conflicts', 'mop', 'notices', 'plans'].map((sub) => ({
+  ...['impact', 'conflicts', 'mop', 'notices', 'plans', 'history'].map((sub) => ({
     route: `GET /api/windows/:id/${sub}`, path: () => `/api/windows/${ctx.notified}/${sub}`, foreign: true })),
   ...['POST /api/windows', 'PATCH /api/windows/:id', 'POST /api/windows/:id/transition', 'POST /api/windows/:id/assess',
     'PUT /api/windows/:id/mop', 'POST /api/windows/:id/submit', 'POST /api/windows/:id/plans']
@@ -63,7 +63,8 @@ const probes: Probe[] = [
     .map((route) => ({ route, path: () => route.split(' ')[1].replace(':planId', ctx.id('plan-notified')), foreign: true })),
   ...['GET /api/signoff/:windowId', 'POST /api/signoff/:windowId/decision']
     .map((route) => ({ route, path: () => route.split(' ')[1].replace(':windowId', ctx.notified), foreign: true })),
-  { route: 'GET /api/signoff/queue', path: () => '/api/signoff/queue', foreign: true },
+  ...['queue', 'waiting-count', 'decided-by-me']
+    .map((sub) => ({ route: `GET /api/signoff/${sub}`, path: () => `/api/signoff/${sub}`, foreign: true })),
   { route: 'DELETE /api/signoff/otp-keys/:userId', path: () => `/api/signoff/otp-keys/${ctx.users.engineer.id}`, foreign: true },
   // A made-up session id is malformed, so 400 is a refusal here too.
   { route: 'DELETE /api/me/sessions/:id', path: () => '/api/me/sessions/someone-elses-session', foreign: true, refusals: [400, 403, 404] },
@@ -73,7 +74,7 @@ const probes: Probe[] = [
     'GET /api/export/graphml', 'GET /api/outbox', 'GET /api/outbox/:id', 'GET /api/outbox/:id/raw']
     .map((route) => ({ route, path: () => route.split(' ')[1].replace(/:\w+/, 'sites'), foreign: true })),
   // Own-user routes naming no one else: answered for the caller, checked for leaks only.
-  ...['POST /api/auth/sign-in', 'POST /api/me/otp/enrol', 'POST /api/me/otp/confirm', 'DELETE /api/me/otp']
+  ...['POST /api/auth/sign-in', 'POST /api/me/otp/enrol', 'POST /api/me/otp/confirm', 'DELETE /api/me/otp', 'PATCH /api/me/time-zone']
     .map((route) => ({ route, path: () => route.split(' ')[1], foreign: false })),
 ];
 /** They end the caller's own sessions and name no one else; calling them would sign the sweep out. */
