@@ -11,7 +11,7 @@ type Props = Omit<TextInputProps, 'style' | 'accessibilityLabel'> & {
 
 export function TextField({ label, error, testID, onFocus, onBlur, ...inputProps }: Props) {
   const [focused, setFocused] = useState(false);
-  const borderColor = error ? colors.danger : focused ? colors.primary : colors.border;
+  const borderColor = error ? colors.danger : focused ? colors.primary : colors.borderControl;
   return (
     <View style={styles.field}>
       <Text style={styles.label} nativeID={`${testID}-label`}>

@@ -40,7 +40,7 @@ export function ImportHistory({ imports, selectedId, onOpen }: Props) {
 const styles = StyleSheet.create({
   list: { borderWidth: 1, borderColor: colors.border, borderRadius: radii.lg, overflow: 'hidden', backgroundColor: colors.surface },
   row: { padding: space.md, gap: space.xxs, borderBottomWidth: 1, borderBottomColor: colors.surfaceSunken, borderLeftWidth: 3, borderLeftColor: 'transparent' },
-  selected: { backgroundColor: colors.primarySoft, borderLeftColor: colors.buoy },
+  selected: { backgroundColor: colors.primarySoft, borderLeftColor: colors.buoyDeep },
   line: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   name: { ...type.bodyStrong, color: colors.ink, flex: 1 },
   status: { ...type.label, color: colors.inkMuted },

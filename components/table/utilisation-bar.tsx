@@ -37,5 +37,6 @@ const styles = StyleSheet.create({
   track: { flex: 1, height: 6, borderRadius: radii.pill, backgroundColor: colors.surfaceSunken, overflow: 'hidden', minWidth: 40 },
   fill: { height: 6, borderRadius: radii.pill },
   percent: { ...type.label, color: colors.ink, minWidth: 44, textAlign: 'right' },
-  none: { ...type.body, color: colors.inkFaint },
+  // inkMuted, not inkFaint: the dash also sits on selected (primarySoft) rows.
+  none: { ...type.body, color: colors.inkMuted },
 });

@@ -81,7 +81,7 @@ const styles = StyleSheet.create({
   fraction: { gap: space.xs },
   label: { ...type.label, color: colors.ink },
   input: {
-    ...type.body, color: colors.ink, borderWidth: 1.5, borderColor: colors.border, borderRadius: radii.md,
+    ...type.body, color: colors.ink, borderWidth: 1.5, borderColor: colors.borderControl, borderRadius: radii.md,
     paddingHorizontal: space.md, paddingVertical: space.sm, maxWidth: 140,
   },
   inputError: { borderColor: colors.danger },

@@ -32,7 +32,7 @@ export function tidyDateTime(date: string, time: string): { date: string; time: 
 
 export function TimeFields({ label, date, time, onChange, error, testID, pickerName, timeZone, disabled = false }: Props) {
   const [open, setOpen] = useState<'date' | 'time' | null>(null);
-  const border = { borderColor: error ? colors.danger : colors.border };
+  const border = { borderColor: error ? colors.danger : colors.borderControl };
   const tidy = () => {
     const next = tidyDateTime(date, time);
     if (next.date !== date || next.time !== time) onChange(next);
