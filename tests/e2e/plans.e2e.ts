@@ -36,7 +36,7 @@ async function openAssessedWindow(page: Page): Promise<void> {
   await page.goto(`${BASE_URL}/windows/${WINDOW_ID}`);
   await page.getByTestId('window-status').waitFor({ timeout: 30_000 });
   if ((await page.getByTestId('window-status').innerText()).includes('Draft')) {
-    await page.getByTestId('window-assess').click();
+    await page.getByTestId('next-step-action').click();
     await page.getByTestId('impact-computed').waitFor({ timeout: 60_000 });
     await page.getByTestId('impact-back').click();
   }
@@ -97,6 +97,7 @@ test('a planner runs a plan for a demo window, watches it progress, reviews it a
   // Any slice left unresolved needs its outage ticked before the plan can be accepted.
   for (const tick of await page.locator('[data-testid^="plan-outage-"]').all()) await tick.click();
   await page.getByTestId('plan-accept').click();
+  await page.getByTestId('plan-accept-yes').click();
   await page.getByTestId('plan-accepted').waitFor({ timeout: 30_000 });
   await eventually(async () => expect(await page.getByTestId('plan-status').innerText()).toContain('Finished'));
 

@@ -1,12 +1,14 @@
-// On a phone-sized Chromium: an engineer books a window on a demo site that hosts a critical slice's function,
-// then a planner opens it, runs Assess, and sees the affected slices with the caution for the critical one.
-import type { Browser, Page } from 'playwright-core';
+// On a phone-sized Chromium: an engineer who works in Oslo time books a window on a demo site that hosts a critical
+// slice's function, then a planner opens it, takes the next step (Assess impact), and sees the affected slices with
+// the caution for the critical one. The engineer's zone is chosen for the test and put back afterwards.
+import type { APIRequestContext, Browser, BrowserContext, Page } from 'playwright-core';
+import { apiAs, ok } from './helpers/api';
 import fs from 'node:fs';
 import path from 'node:path';
 import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
 import { eventually } from './helpers/eventually';
 const PHONE = { width: 390, height: 844 };
-/** A zone away from UTC, so the form's local-time conversion is exercised for real. */
+/** A zone away from UTC and from the network's, so the form's local-time conversion is exercised for real. */
 const TIME_ZONE = 'Europe/Oslo';
 const DAYS_AHEAD = 4;
 
@@ -41,8 +43,14 @@ beforeAll(async () => {
   browser = await launchBrowser();
 });
 afterAll(async () => {
+  // Back to the network's zone for the suites that read the engineer's times.
+  if (engineerRequest) await engineerRequest.patch(`${BASE_URL}/api/me/time-zone`, { data: { timeZone: null } }).catch(() => undefined);
+  for (const context of apiContexts) await context.close().catch(() => undefined);
   await browser?.close();
 });
+
+let engineerRequest: APIRequestContext | null = null;
+const apiContexts: BrowserContext[] = [];
 
 async function signedInPage(email: string): Promise<Page> {
   const context = await browser.newContext({ viewport: PHONE, timezoneId: TIME_ZONE });
@@ -77,18 +85,21 @@ test('an engineer books a window on a critical site; a planner assesses it and s
   const { sliceId, site } = criticalTarget();
   const title = `E2E rectifier swap ${Date.now().toString(36)}`;
 
+  engineerRequest = await apiAs(browser, 'engineer@demo.test', apiContexts);
+  await ok(engineerRequest.patch(`${BASE_URL}/api/me/time-zone`, { data: { timeZone: TIME_ZONE } }), 'engineer time zone');
   const engineer = await signedInPage('engineer@demo.test');
   const windowId = await bookWindow(engineer, title, site);
   await eventually(async () => expect(await engineer.getByTestId('window-title-heading').innerText()).toBe(title));
   await eventually(async () => expect(await engineer.getByTestId('window-when').innerText()).toMatch(/01:00 – 04:30 CES?T/));
-  await eventually(async () => expect(await engineer.getByTestId('window-elements').innerText()).toContain(site.id));
+  await eventually(async () => expect(await engineer.getByTestId('window-elements').innerText()).toContain(site.name));
   await engineer.screenshot({ path: path.join(SHOTS, 'window-detail-engineer-phone.png'), fullPage: true });
   await engineer.context().close();
 
   const planner = await signedInPage('planner@demo.test');
   await planner.goto(`${BASE_URL}/windows/${encodeURIComponent(windowId)}`);
   await eventually(async () => expect(await planner.getByTestId('window-status').innerText()).toContain('Draft'));
-  await planner.getByTestId('window-assess').click();
+  await eventually(async () => expect(await planner.getByTestId('next-step-action').innerText()).toBe('Assess impact'));
+  await planner.getByTestId('next-step-action').click();
   await planner.getByTestId('impact-affected').waitFor({ timeout: 60000 });
   await planner.getByTestId(`impact-slice-${sliceId}`).waitFor();
   const caution = planner.getByTestId('impact-critical-caution');
