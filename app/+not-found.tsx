@@ -3,8 +3,10 @@ import { Link } from 'expo-router';
 import { StyleSheet, Text } from 'react-native';
 import { AuthFrame } from '@/components/auth-frame';
 import { colors, type } from '@/constants/theme';
+import { usePageTitle } from '@/components/page-title';
 
 export default function NotFoundScreen() {
+  usePageTitle('Page not found');
   return (
     <AuthFrame title="This page does not exist">
       <Text style={styles.body}>The address may be mistyped, or the page has moved.</Text>

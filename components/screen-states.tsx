@@ -24,10 +24,11 @@ export function ErrorState({ message, onRetry }: { message: string; onRetry?: ()
   );
 }
 
-export function EmptyState({ title, hint }: { title: string; hint?: string }) {
+/** `page` when the state is all the screen shows: its title is then the page's one h1. */
+export function EmptyState({ title, hint, page = false }: { title: string; hint?: string; page?: boolean }) {
   return (
     <View style={styles.centre} testID="state-empty">
-      <Text style={styles.title}>{title}</Text>
+      <Text style={styles.title} role={page ? 'heading' : undefined} aria-level={page ? 1 : undefined}>{title}</Text>
       {hint ? <Text style={styles.muted}>{hint}</Text> : null}
     </View>
   );

@@ -40,7 +40,7 @@ export function FreezeForm({ initial, heading, timeZone, busy, serverError, onSu
     .map((key) => ({ key, label: LABELS[key], message: errors[key] as string }));
   return (
     <View style={styles.panel} testID="freeze-form">
-      <Text style={styles.heading} role="heading">
+      <Text style={styles.heading} role="heading" aria-level={2}>
         {heading}
       </Text>
       <Text style={styles.zone}>{timesInLabel(timeZone)}</Text>

@@ -44,7 +44,7 @@ export function FreezesView({ freezes, timeZone, canEdit, editor, nowMs = Date.n
     <ScrollView contentContainerStyle={[styles.content, wide && styles.contentWide]}>
       <View style={styles.toolbar}>
         <View style={styles.titleBox}>
-          <Text style={styles.title} role="heading">
+          <Text style={styles.title} role="heading" aria-level={1}>
             Freezes
           </Text>
           <Text style={styles.subtitle}>

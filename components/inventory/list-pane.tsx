@@ -2,14 +2,16 @@
 // then the list or its loading, error or empty state filling the rest.
 import type { ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
+import { useListHeadingLevel } from '@/components/inventory/split-view';
 import { colors, space, type } from '@/constants/theme';
 
 type Props = { title: string; hint?: string; testID: string; children: ReactNode };
 
 export function ListPane({ title, hint, testID, children }: Props) {
+  const headingLevel = useListHeadingLevel();
   return (
     <View style={styles.pane} testID={testID}>
-      <Text style={styles.title} role="heading" aria-level={1}>{title}</Text>
+      <Text style={styles.title} role="heading" aria-level={headingLevel}>{title}</Text>
       {hint ? <Text style={styles.hint}>{hint}</Text> : null}
       <View style={styles.body}>{children}</View>
     </View>

@@ -7,11 +7,13 @@ import { Segmented, type Choice } from '@/components/inventory/segmented';
 import { selectionFromPath } from '@/components/inventory/selection';
 import { SitesTable } from '@/components/inventory/sites-table';
 import { SpansTable } from '@/components/inventory/spans-table';
+import { useListHeadingLevel } from '@/components/inventory/split-view';
 import { colors, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
 
 type Tab = 'sites' | 'spans' | 'map';
 
 export function NetworkLists() {
+  const headingLevel = useListHeadingLevel();
   const router = useRouter();
   const selection = selectionFromPath(usePathname());
   // Opened straight on a span's page, the list starts on spans so the selected row is in view.
@@ -26,7 +28,7 @@ export function NetworkLists() {
   const shown = wide && tab === 'map' ? 'sites' : tab;
   return (
     <View style={styles.pane} testID="network-lists">
-      <Text style={styles.title} role="heading" aria-level={1}>
+      <Text style={styles.title} role="heading" aria-level={headingLevel}>
         Network
       </Text>
       <Segmented choices={choices} value={shown} onChange={setTab} testID="network-tab" label="Network lists" />

@@ -3,14 +3,16 @@ import { usePathname, useRouter } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { selectionFromPath } from '@/components/inventory/selection';
 import { SlicesTable } from '@/components/inventory/slices-table';
+import { useListHeadingLevel } from '@/components/inventory/split-view';
 import { colors, space, type } from '@/constants/theme';
 
 export function SliceLists() {
+  const headingLevel = useListHeadingLevel();
   const router = useRouter();
   const selection = selectionFromPath(usePathname());
   return (
     <View style={styles.pane} testID="slice-lists">
-      <Text style={styles.title} role="heading" aria-level={1}>
+      <Text style={styles.title} role="heading" aria-level={headingLevel}>
         Slices
       </Text>
       <View style={styles.body}>

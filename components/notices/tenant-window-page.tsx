@@ -4,6 +4,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import { useTenantWindowQuery } from '@/hooks/queries/tenant-windows';
 import { Button } from '@/components/button';
+import { titleWithName, usePageTitle } from '@/components/page-title';
 import { EmptyState, LoadingState } from '@/components/screen-states';
 import { timesInLabel } from '@/components/time';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
@@ -24,14 +25,20 @@ const NOT_AVAILABLE = {
 
 export function TenantWindowPage({ pathname, onOpenNotice }: { pathname: string; onOpenNotice: (noticeId: string) => void }) {
   const id = windowIdFromPath(pathname);
-  if (id === null) return <EmptyState {...NOT_AVAILABLE} />;
+  if (id === null) return <NotAvailable />;
   return <TenantWindowSummary id={id} onOpenNotice={onOpenNotice} />;
+}
+
+function NotAvailable() {
+  usePageTitle('Planned work');
+  return <EmptyState page {...NOT_AVAILABLE} />;
 }
 
 function TenantWindowSummary({ id, onOpenNotice }: { id: string; onOpenNotice: (noticeId: string) => void }) {
   const view = useTenantWindowQuery(id);
+  usePageTitle(titleWithName('Planned work', view.data?.summary));
   const timeZone = useViewerTimeZone();
-  if (view.isError) return <EmptyState {...NOT_AVAILABLE} />;
+  if (view.isError) return <NotAvailable />;
   if (!view.data) return <LoadingState label="Loading the planned work…" />;
   const work = view.data;
   return (

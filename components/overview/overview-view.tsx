@@ -18,7 +18,9 @@ export function OverviewView({ overview, onOpenNotice }: { overview: AnyOverview
   const { width } = useWindowDimensions();
   const columns = width >= 1100 ? 3 : 2;
   return (
-    <ScrollView contentContainerStyle={styles.page}>
+    // The page scrolls inside the shell, and its rows are not all Tab stops: a focusable, named region lets a
+    // keyboard reach the scroll area and scroll it with the arrow keys.
+    <ScrollView contentContainerStyle={styles.page} tabIndex={0} role="region" aria-label="Overview" testID="overview-scroll">
       <View style={styles.column}>
         <Text style={styles.title} role="heading" aria-level={1}>
           Overview

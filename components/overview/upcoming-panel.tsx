@@ -13,7 +13,7 @@ export function UpcomingPanel({ title, emptyText, count, testID, children }: {
   return (
     <View style={upcomingStyles.panel} testID={testID}>
       <View style={upcomingStyles.header}>
-        <Text style={upcomingStyles.title} role="heading">{title}</Text>
+        <Text style={upcomingStyles.title} role="heading" aria-level={2}>{title}</Text>
         <ZoneNote timeZone={timeZone} testID={`${testID}-zone`} />
       </View>
       {count === 0 ? <Text style={upcomingStyles.empty}>{emptyText}</Text> : children(timeZone)}

@@ -16,7 +16,7 @@ export function WaitingDecisions() {
   return (
     <View style={styles.panel} testID="overview-waiting-decisions">
       <View style={styles.text}>
-        <Text style={styles.lead} role="heading">{waitingSentence(waiting)}</Text>
+        <Text style={styles.lead} role="heading" aria-level={2}>{waitingSentence(waiting)}</Text>
         <Text style={styles.body}>Windows in review that need your approval or send-back before tenants can be told.</Text>
       </View>
       <Link href="/sign-off" asChild>

@@ -1,5 +1,6 @@
-// Phones: the areas as a tab bar along the bottom edge, clear of the home indicator. When there are
-// more areas than fit (see phone-areas.ts), the last place is a More tab opening a sheet with the rest.
+// Phones: the areas as a bar of links along the bottom edge, clear of the home indicator; to assistive technology
+// the navigation landmark "Main", the current area marked aria-current="page". When there are more areas than fit
+// (see phone-areas.ts), the last place is a More button opening a dialog with the rest.
 import { useState } from 'react';
 import type { ComponentType } from 'react';
 import { Link } from 'expo-router';
@@ -21,11 +22,11 @@ export function BottomTabs({ pathname, roles }: { pathname: string; roles: reado
   // More reads as active while the user is inside one of the areas it holds.
   const moreActive = more.some((area) => area.matches(pathname));
   return (
-    <View style={[styles.bar, { paddingBottom: insets.bottom + space.xs }]} role="tablist" testID="bottom-tabs">
+    <View style={[styles.bar, { paddingBottom: insets.bottom + space.xs }]} role="navigation" aria-label="Main" testID="bottom-tabs">
       {tabs.map(({ key, label, href, matches, Icon }) => (
         <Link key={key} href={href} asChild>
           <Pressable
-            testID={`nav-${key}`} role="tab" aria-selected={matches(pathname)} style={styles.pressable}
+            testID={`nav-${key}`} role="link" aria-current={matches(pathname) ? 'page' : undefined} style={styles.pressable}
             accessibilityLabel={labelWithBadge(label, badges[key])}
           >
             <TabFace label={label} Icon={Icon} active={matches(pathname)} areaKey={key} badge={badges[key]} />
@@ -34,7 +35,7 @@ export function BottomTabs({ pathname, roles }: { pathname: string; roles: reado
       ))}
       {more.length > 0 && (
         <Pressable
-          testID="nav-more" role="tab" aria-selected={moreActive} aria-expanded={moreOpen}
+          testID="nav-more" role="button" aria-haspopup="dialog" aria-expanded={moreOpen}
           onPress={() => setMoreOpen(true)} style={styles.pressable}
         >
           <TabFace label="More" Icon={MoreIcon} active={moreActive} />

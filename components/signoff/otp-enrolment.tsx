@@ -22,7 +22,7 @@ export function OtpEnrolmentView(props: Props) {
   const { status, enrolment } = props;
   return (
     <View style={styles.block}>
-      <Text style={styles.title} role="heading" aria-level={1}>One-time codes</Text>
+      <Text style={styles.title} role="heading" aria-level={2}>One-time codes</Text>
       <Text style={styles.body}>When the change board asks for it, each sign-off decision is confirmed with a code from an authenticator app on your phone.</Text>
       {props.error ? <Text style={styles.error} role="alert" testID="otp-error">{props.error}</Text> : null}
       {status.enrolled ? (

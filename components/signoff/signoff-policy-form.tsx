@@ -29,7 +29,7 @@ export function SignoffPolicyForm({ policies, saving, error, saved, onSave }: Pr
   const order = quorumOrderProblem(quorumOf(low), quorumOf(high));
   const valid = quorumOf(low) !== null && quorumOf(high) !== null && !order;
   return (
-    <Section title="Sign-off policy" testID="signoff-policy">
+    <Section title="Approvals and codes" testID="signoff-policy">
       <Text style={styles.muted}>High risk: the plan moves a critical slice, rates a slice's risk high or critical, or leaves a slice unresolved. Everything else is low risk.</Text>
       <TextField label="Approvals needed, low risk" value={low} onChangeText={setLow} keyboardType="number-pad" testID="policy-quorum-low" error={quorumOf(low) === null ? bad : undefined} />
       <TextField label="Approvals needed, high risk" value={high} onChangeText={setHigh} keyboardType="number-pad" testID="policy-quorum-high" error={quorumOf(high) === null ? bad : order} />

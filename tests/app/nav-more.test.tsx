@@ -1,4 +1,4 @@
-// The phone tab bar: at most five tabs, a More tab listing the remaining areas, and those areas still navigate.
+// The phone bottom bar: at most five places, a More button listing the remaining areas, and those areas still navigate.
 import type { ReactElement } from 'react';
 import { fireEvent, screen, within } from '@testing-library/react-native';
 import { Text } from 'react-native';
@@ -34,7 +34,8 @@ function renderShell(user: Me, pathname = '/') {
 }
 
 function tabKeys(): string[] {
-  return within(screen.getByTestId('bottom-tabs')).queryAllByRole('tab').map((tab) => String(tab.props.testID));
+  const bar = within(screen.getByTestId('bottom-tabs'));
+  return [...bar.queryAllByRole('link'), ...bar.queryAllByRole('button')].map((place) => String(place.props.testID));
 }
 
 afterEach(clearQueries);
@@ -63,13 +64,20 @@ test('a planner on a phone gets four areas plus More; More lists the rest, and o
   expect(screen.queryByTestId('nav-more-sheet')).toBeNull();
 });
 
-test('More reads as selected while inside an area it holds, and the backdrop closes the sheet', () => {
+test('inside an area More holds, that area is the current page in the sheet; the backdrop and Close close it', () => {
   renderShell(planner, '/freezes');
-  expect(screen.getByTestId('nav-more')).toBeSelected();
-  expect(screen.getByTestId('nav-overview')).not.toBeSelected();
+  expect(screen.getByTestId('nav-more')).toBeCollapsed();
+  expect(screen.getByTestId('nav-overview').props['aria-current']).toBeUndefined();
   fireEvent.press(screen.getByTestId('nav-more'));
-  expect(screen.getByTestId('nav-more-sheet')).toBeTruthy();
-  fireEvent.press(screen.getByTestId('nav-more-backdrop'));
+  expect(screen.getByTestId('nav-more')).toBeExpanded();
+  const sheet = screen.getByTestId('nav-more-sheet');
+  expect(within(sheet).getByTestId('nav-freezes')).toHaveProp('aria-current', 'page');
+  expect(within(sheet).getByTestId('nav-imports').props['aria-current']).toBeUndefined();
+  // The backdrop is hidden from assistive technology (Close and Escape serve them), so the query looks past that.
+  fireEvent.press(screen.getByTestId('nav-more-backdrop', { includeHiddenElements: true }));
+  expect(screen.queryByTestId('nav-more-sheet')).toBeNull();
+  fireEvent.press(screen.getByTestId('nav-more'));
+  fireEvent.press(screen.getByTestId('nav-more-close'));
   expect(screen.queryByTestId('nav-more-sheet')).toBeNull();
   expect(mockPush).not.toHaveBeenCalled();
 });

@@ -13,6 +13,7 @@ import { listParams } from '@/components/calendar/window-filters';
 import { canBookWindows, isOperator, tenantScopeOf } from '@/shared/permissions';
 import { visibleRange } from '@/components/time';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
+import { usePageTitle } from '@/components/page-title';
 
 export default function CalendarScreen() {
   const router = useRouter();
@@ -27,6 +28,7 @@ export default function CalendarScreen() {
   const freezes = useFreezesQuery(isOperator(roles));
   const tenants = useTenantChoicesQuery(isOperator(roles));
   const windows = tenant ? tenantWindows : staffWindows;
+  usePageTitle('Calendar');
 
   if (windows.isError && !windows.data) return <ErrorState message={windows.error.message} onRetry={() => void windows.refetch()} />;
   if (!windows.data) return <LoadingState label="Loading the calendar…" />;

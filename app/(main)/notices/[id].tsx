@@ -3,11 +3,13 @@ import { useLocalSearchParams } from 'expo-router';
 import { noticeIcsPath, useAcknowledgeNoticeMutation, useNoticeQuery } from '@/hooks/queries/notices';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { NoticeView } from '@/components/notices/notice-view';
+import { titleWithName, usePageTitle } from '@/components/page-title';
 
 export default function NoticeScreen() {
   const { id = '' } = useLocalSearchParams<{ id: string }>();
   const notice = useNoticeQuery(id);
   const acknowledge = useAcknowledgeNoticeMutation(id);
+  usePageTitle(titleWithName('Notice', notice.data?.notice.content.summary));
   if (notice.isError) return <ErrorState message={notice.error.message} onRetry={() => void notice.refetch()} />;
   if (!notice.data) return <LoadingState label="Loading the notice…" />;
   return (

@@ -8,13 +8,16 @@ import { SessionsPanel } from '@/components/security/sessions-panel';
 import { TimeZoneSection } from '@/components/security/time-zone-section';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { isOperator } from '@/shared/permissions';
+import { PageHeading, usePageTitle } from '@/components/page-title';
 
 export default function SecurityScreen() {
   const router = useRouter();
   const me = useMeQuery();
   const timeZone = useViewerTimeZone();
+  usePageTitle('Security');
   return (
     <PageColumn narrow>
+      <PageHeading>Security</PageHeading>
       <TimeZoneSection />
       {me.data && isOperator(me.data.roles) ? <OtpSection /> : null}
       <SessionsPanel timeZone={timeZone} onSignedOutEverywhere={() => router.replace('/sign-in')} />

@@ -7,6 +7,7 @@ import { ErrorState, LoadingState } from '@/components/screen-states';
 import { decisionDraftKey, DecisionDraftScope, forgetDecisionDraft } from '@/components/signoff/decision-draft';
 import { SignoffSummaryView } from '@/components/signoff/signoff-summary-view';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
+import { titleWithName, usePageTitle } from '@/components/page-title';
 
 export default function SignoffWindowScreen() {
   const { windowId } = useLocalSearchParams<{ windowId: string }>();
@@ -16,6 +17,7 @@ export default function SignoffWindowScreen() {
   const summary = useSignoffSummaryQuery(windowId);
   const decision = useSignoffDecisionMutation(windowId);
   const otp = useOtpStatusQuery();
+  usePageTitle(titleWithName('Sign-off', summary.data?.window.title));
   if (summary.isError && !summary.data) return <ErrorState message={summary.error.message} onRetry={() => void summary.refetch()} />;
   if (!summary.data) return <LoadingState label="Loading the plan summary…" />;
   return (

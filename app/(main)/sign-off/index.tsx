@@ -8,6 +8,7 @@ import { DecidedByMe } from '@/components/signoff/decided-by-me';
 import { QueueFooter } from '@/components/signoff/queue-footer';
 import { SignoffQueueList } from '@/components/signoff/signoff-queue-list';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
+import { usePageTitle } from '@/components/page-title';
 
 export default function SignoffQueueScreen() {
   const router = useRouter();
@@ -16,7 +17,8 @@ export default function SignoffQueueScreen() {
   const allowed = canOpenSignoffQueue(roles);
   const queue = useSignoffQueueQuery(allowed);
   const decided = useDecidedByMeQuery(canSignOff(roles));
-  if (!allowed) return <EmptyState title="Sign-off is for the change board" hint="Approvers decide on move plans here." />;
+  usePageTitle('Sign-off');
+  if (!allowed) return <EmptyState page title="Sign-off is for the change board" hint="Approvers decide on move plans here." />;
   if (queue.isError) return <ErrorState message={queue.error.message} onRetry={() => void queue.refetch()} />;
   if (!queue.data) return <LoadingState label="Loading the sign-off queue…" />;
   const open = (id: string) => router.push(`/sign-off/${encodeURIComponent(id)}`);

@@ -5,16 +5,19 @@ import { useSignoffPoliciesMutation, useSignoffPoliciesQuery } from '@/hooks/que
 import { PageColumn } from '@/components/page-column';
 import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states';
 import { SignoffPolicyForm } from '@/components/signoff/signoff-policy-form';
+import { PageHeading, usePageTitle } from '@/components/page-title';
 
 export default function SignoffPolicyScreen() {
   const isAdmin = canAdminister(useMeQuery().data?.roles ?? []);
   const policies = useSignoffPoliciesQuery(isAdmin);
   const save = useSignoffPoliciesMutation();
-  if (!isAdmin) return <EmptyState title="Only admins set the sign-off policy" />;
+  usePageTitle('Sign-off policy');
+  if (!isAdmin) return <EmptyState page title="Only admins set the sign-off policy" />;
   if (policies.isError) return <ErrorState message={policies.error.message} onRetry={() => void policies.refetch()} />;
   if (!policies.data) return <LoadingState label="Loading the policy…" />;
   return (
     <PageColumn narrow>
+      <PageHeading>Sign-off policy</PageHeading>
       <SignoffPolicyForm
         policies={policies.data.policies} saving={save.isPending} saved={save.isSuccess}
         error={save.error?.message ?? null} onSave={(patch) => save.mutate(patch)}

@@ -6,11 +6,13 @@ import { ErrorState, LoadingState } from '@/components/screen-states';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { BookWindow } from '@/components/windows/book-window';
 import { detailHref, FormPage } from '@/components/windows/form-page';
+import { usePageTitle } from '@/components/page-title';
 
 export default function NewWindowScreen() {
   const timeZone = useViewerTimeZone();
   const router = useRouter();
   const me = useMeQuery();
+  usePageTitle('Book a window');
   if (me.isError) return <ErrorState message={me.error.message} onRetry={() => void me.refetch()} />;
   if (!me.data) return <LoadingState />;
   if (!canBookWindows(me.data.roles)) return <ErrorState message="Your roles do not include booking windows." />;

@@ -6,6 +6,7 @@ import { ErrorState, LoadingState } from '@/components/screen-states';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { EditWindow } from '@/components/windows/edit-window';
 import { detailHref, FormPage } from '@/components/windows/form-page';
+import { titleWithName, usePageTitle } from '@/components/page-title';
 
 export default function EditWindowScreen() {
   const timeZone = useViewerTimeZone();
@@ -13,6 +14,7 @@ export default function EditWindowScreen() {
   const router = useRouter();
   const me = useMeQuery();
   const window = useWindowQuery(id);
+  usePageTitle(titleWithName('Edit', window.data?.title));
   if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => void window.refetch()} />;
   if (!window.data || !me.data) return <LoadingState label="Loading the window…" />;
   return (

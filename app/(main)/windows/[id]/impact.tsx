@@ -6,6 +6,7 @@ import { ErrorState, LoadingState } from '@/components/screen-states';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { ImpactReview } from '@/components/impact/impact-review';
 import { detailHref } from '@/components/windows/form-page';
+import { titleWithName, usePageTitle } from '@/components/page-title';
 
 export default function WindowImpactScreen() {
   const timeZone = useViewerTimeZone();
@@ -13,6 +14,7 @@ export default function WindowImpactScreen() {
   const router = useRouter();
   const me = useMeQuery();
   const window = useWindowQuery(id);
+  usePageTitle(titleWithName('Impact', window.data?.title));
   if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => void window.refetch()} />;
   if (!window.data || !me.data) return <LoadingState label="Loading the window…" />;
   return <ImpactReview window={window.data} me={me.data} timeZone={timeZone} onOpenWindow={() => router.push(detailHref({ id }))} />;

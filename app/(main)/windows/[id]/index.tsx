@@ -9,6 +9,7 @@ import { WindowDetail } from '@/components/windows/window-detail';
 import { WindowPlansEntry } from '@/components/plans/window-plans-entry';
 import { SubmitForSignoff } from '@/components/signoff/submit-for-signoff';
 import { WindowTenantNotices } from '@/components/notices/window-tenant-notices';
+import { titleWithName, usePageTitle } from '@/components/page-title';
 
 export default function WindowScreen() {
   const timeZone = useViewerTimeZone();
@@ -16,6 +17,7 @@ export default function WindowScreen() {
   const router = useRouter();
   const me = useMeQuery();
   const window = useWindowQuery(params.id);
+  usePageTitle(titleWithName('Window', window.data?.title));
   if (window.isError && !window.data) return <ErrorState message={window.error.message} onRetry={() => void window.refetch()} />;
   if (!window.data || !me.data) return <LoadingState label="Loading the window…" />;
   return (

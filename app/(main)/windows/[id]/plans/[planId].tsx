@@ -7,6 +7,7 @@ import { ErrorState, LoadingState } from '@/components/screen-states';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { PlanDetailView } from '@/components/plans/plan-detail-view';
 import { WindowNextStep } from '@/components/windows/window-next-step';
+import { titleWithName, usePageTitle } from '@/components/page-title';
 
 export default function PlanScreen() {
   const timeZone = useViewerTimeZone();
@@ -15,6 +16,7 @@ export default function PlanScreen() {
   const me = useMeQuery();
   const window = useWindowQuery(id);
   const plan = usePlanQuery(planId);
+  usePageTitle(titleWithName('Move plan', window.data?.title));
   if (plan.isError && !plan.data) return <ErrorState message={plan.error.message} onRetry={() => void plan.refetch()} />;
   if (!plan.data || !me.data) return <LoadingState label="Loading the run…" />;
   const runs = `/windows/${encodeURIComponent(id)}/plans`;

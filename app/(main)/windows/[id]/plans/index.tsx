@@ -8,6 +8,7 @@ import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { PlansView } from '@/components/plans/plans-view';
 import { detailHref } from '@/components/windows/form-page';
 import { WindowNextStep } from '@/components/windows/window-next-step';
+import { titleWithName, usePageTitle } from '@/components/page-title';
 
 export default function WindowPlansScreen() {
   const timeZone = useViewerTimeZone();
@@ -16,6 +17,7 @@ export default function WindowPlansScreen() {
   const me = useMeQuery();
   const window = useWindowQuery(id);
   const plans = useWindowPlansQuery(id);
+  usePageTitle(titleWithName('Move plans', window.data?.title));
   const failed = (window.isError && !window.data) ? window : (plans.isError && !plans.data) ? plans : null;
   if (failed?.error) return <ErrorState message={failed.error.message} onRetry={() => void failed.refetch()} />;
   if (!window.data || !me.data || !plans.data) return <LoadingState label="Loading the move plans…" />;
