@@ -39,6 +39,7 @@ export function SitesTable({ selectedId, onOpen }: { selectedId: string | null; 
   return (
     <DataTable
       testID="sites-table"
+      label="Sites"
       {...serverTableProps(table, sites)}
       columns={COLUMNS}
       rowKey={(s) => s.id}

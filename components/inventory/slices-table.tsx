@@ -49,6 +49,7 @@ export function SlicesTable({ selectedId, onOpen }: { selectedId: string | null;
   return (
     <DataTable
       testID="slices-table"
+      label="Slices"
       {...serverTableProps(table, slices)}
       columns={COLUMNS}
       rowKey={(s) => s.id}

@@ -45,6 +45,7 @@ export function SpansTable({ selectedId, onOpen }: { selectedId: string | null; 
   return (
     <DataTable
       testID="spans-table"
+      label="Spans"
       {...serverTableProps(table, spans)}
       columns={COLUMNS}
       rowKey={(s) => s.id}

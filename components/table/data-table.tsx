@@ -15,6 +15,8 @@ export const TABLE_COLUMNS_MIN_WIDTH_PX = 520;
 
 export type DataTableProps<T> = {
   testID: string;
+  /** What the table is called, read out when a screen reader enters it ("Slices"). */
+  label?: string;
   rows: readonly T[];
   columns: readonly Column<T>[];
   rowKey: (row: T) => string;

@@ -1,64 +1,101 @@
-// Phone layout: sort chips above one card per item, the primary column as its title and the rest as labelled pairs.
+// Phone layout: a "Sort by" choice above a list of cards, the title column as each card's title (and the control
+// that opens it) and the rest as labelled pairs.
 import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { ChipRow } from '@/components/chip-row';
+import { useRovingChoice } from '@/components/roving-focus';
 import { Cell } from './cell';
-import { sortMark, type RowsViewProps } from './table-columns-view';
-import { isSortable } from './types';
+import { OpenMark, RowOpenButton, SortTitle } from './row-parts';
+import { titleColumn, type RowsViewProps } from './table-columns-view';
+import { isSortable, type Column, type SortState } from './types';
 import { colors, radii, space, type } from '@/constants/theme';
 
-export function TableCardsView<T>(props: RowsViewProps<T>) {
-  const { testID, rows, columns, rowKey, sort, onSortPress, onRowPress, selectedKey, body } = props;
-  const title = columns.find((c) => c.primary) ?? columns[0];
-  const fields = columns.filter((c) => c !== title && !c.hideInCards);
-  const sortable = columns.filter(isSortable);
+/** A sort choice's name: its visible title, then the order when it is the chosen one. */
+export function sortChoiceName(label: string, sort: SortState | null, key: string): string {
+  if (sort?.key !== key) return label;
+  return `${label}, ${sort.order === 'asc' ? 'ascending' : 'descending'}`;
+}
+
+/** One radio per sortable column; choosing the chosen one again reverses the order. */
+function SortChoices<T>({ sortable, sort, onSortPress, testID }: { sortable: Column<T>[]; sort: SortState | null; onSortPress: (key: string) => void; testID: string }) {
+  const itemProps = useRovingChoice(sortable.length, sortable.findIndex((c) => c.key === sort?.key), (index) => {
+    const column = sortable[index];
+    if (column) onSortPress(column.key);
+  });
   return (
-    <View style={styles.frame}>
-      {sortable.length > 0 ? (
-        <ChipRow testID={`${testID}-sort-strip`} backgroundColor={colors.tide} contentContainerStyle={styles.chips}>
-          <Text style={styles.chipsLabel}>Sort</Text>
-          {sortable.map((column) => {
+    <View style={styles.sortRow}>
+      <Text style={styles.chipsLabel} aria-hidden>Sort by</Text>
+      <View style={styles.sortStrip}>
+        <ChipRow testID={`${testID}-sort-strip`} backgroundColor={colors.tide} contentContainerStyle={styles.chips} role="radiogroup" label="Sort by">
+          {sortable.map((column, index) => {
             const active = sort?.key === column.key;
             return (
               <Pressable
                 key={column.key}
                 testID={`${testID}-sort-${column.key}`}
-                role="button"
-                accessibilityLabel={`Sort by ${column.label}`}
-                aria-selected={active}
+                role="radio"
+                aria-checked={active}
+                accessibilityLabel={sortChoiceName(column.label, sort, column.key)}
                 onPress={() => onSortPress(column.key)}
                 style={[styles.chip, active && styles.chipActive]}
+                {...itemProps(index)}
               >
-                <Text style={[styles.chipText, active && styles.chipTextActive]}>{`${column.label}${sortMark(sort, column.key)}`}</Text>
+                <SortTitle label={column.label} sort={sort} columnKey={column.key} style={[styles.chipText, active && styles.chipTextActive]} />
               </Pressable>
             );
           })}
         </ChipRow>
-      ) : null}
-      <ScrollView style={styles.body} contentContainerStyle={styles.list}>
-        {body ??
-          rows.map((row) => {
-            const key = rowKey(row);
-            return (
-              <Pressable
-                key={key}
-                testID={`${testID}-row-${key}`}
-                role={onRowPress ? 'button' : undefined}
-                disabled={!onRowPress}
-                onPress={onRowPress ? () => onRowPress(row) : undefined}
-                style={({ pressed }) => [styles.card, key === selectedKey && styles.selected, pressed && styles.pressed]}
-              >
-                <Cell value={title.render(row)} strong />
-                <View style={styles.fields}>
-                  {fields.map((column) => (
-                    <View key={column.key} style={styles.field}>
-                      <Text style={styles.fieldLabel}>{column.label}</Text>
-                      <Cell value={column.render(row)} />
+      </View>
+    </View>
+  );
+}
+
+export function TableCardsView<T>(props: RowsViewProps<T>) {
+  const { testID, label, rows, columns, rowKey, sort, onSortPress, onRowPress, selectedKey, body } = props;
+  const title = titleColumn(columns);
+  const fields = columns.filter((c) => c !== title && !c.hideInCards);
+  const sortable = columns.filter(isSortable);
+  return (
+    <View style={styles.frame}>
+      {sortable.length > 0 ? <SortChoices sortable={sortable} sort={sort} onSortPress={onSortPress} testID={testID} /> : null}
+      <ScrollView style={styles.body} contentContainerStyle={styles.scroll}>
+        {body ?? (
+          <View role="list" aria-label={label} style={styles.list} testID={`${testID}-list`}>
+            {rows.map((row) => {
+              const key = rowKey(row);
+              const open = key === selectedKey;
+              return (
+                <Pressable
+                  key={key}
+                  testID={`${testID}-row-${key}`}
+                  role="listitem"
+                  aria-current={open ? 'true' : undefined}
+                  // The title's button is the keyboard's way in; the whole card still takes a tap.
+                  tabIndex={-1}
+                  disabled={!onRowPress}
+                  onPress={onRowPress ? () => onRowPress(row) : undefined}
+                  style={({ pressed }) => [styles.card, open && styles.selected, pressed && styles.pressed]}
+                >
+                  {title ? (
+                    <View style={styles.titleLine}>
+                      <RowOpenButton testID={`${testID}-open-${key}`} open={open} onPress={onRowPress ? () => onRowPress(row) : undefined}>
+                        <Cell value={title.render(row)} strong />
+                      </RowOpenButton>
+                      {open ? <OpenMark testID={`${testID}-current-${key}`} /> : null}
                     </View>
-                  ))}
-                </View>
-              </Pressable>
-            );
-          })}
+                  ) : null}
+                  <View style={styles.fields}>
+                    {fields.map((column) => (
+                      <View key={column.key} style={styles.field}>
+                        <Text style={styles.fieldLabel}>{column.label}</Text>
+                        <Cell value={column.render(row)} />
+                      </View>
+                    ))}
+                  </View>
+                </Pressable>
+              );
+            })}
+          </View>
+        )}
       </ScrollView>
     </View>
   );
@@ -66,6 +103,8 @@ export function TableCardsView<T>(props: RowsViewProps<T>) {
 
 const styles = StyleSheet.create({
   frame: { flex: 1 },
+  sortRow: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+  sortStrip: { flex: 1 },
   chips: { gap: space.sm, paddingVertical: space.sm },
   chipsLabel: { ...type.label, color: colors.inkMuted },
   chip: { paddingHorizontal: space.md, paddingVertical: space.xs + 2, borderRadius: radii.pill, borderWidth: 1, borderColor: colors.border, backgroundColor: colors.surface },
@@ -73,7 +112,8 @@ const styles = StyleSheet.create({
   chipText: { ...type.label, color: colors.inkMuted },
   chipTextActive: { color: colors.primary },
   body: { flex: 1 },
-  list: { gap: space.sm, paddingBottom: space.lg },
+  scroll: { paddingBottom: space.lg },
+  list: { gap: space.sm },
   card: {
     backgroundColor: colors.surface,
     borderRadius: radii.lg,
@@ -83,8 +123,10 @@ const styles = StyleSheet.create({
     paddingVertical: space.sm,
     gap: space.xs,
   },
-  selected: { borderColor: colors.buoy, borderWidth: 2 },
+  // Wider border and a bar on the leading edge: the open card differs by shape too, not by colour alone.
+  selected: { borderColor: colors.buoy, borderWidth: 2, borderLeftWidth: 6 },
   pressed: { backgroundColor: colors.tide },
+  titleLine: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
   fields: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.xs },
   field: { minWidth: 90, flexGrow: 1, flexBasis: '28%', gap: 1 },
   fieldLabel: { ...type.caption, color: colors.inkMuted },

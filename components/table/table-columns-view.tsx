@@ -1,11 +1,15 @@
-// Wide layout: a header row of sortable column titles above one row per item.
-import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
+// Wide layout: a real table (header row of column titles, one row per item). Sortable titles are buttons inside
+// their column headers, which carry aria-sort; each row opens through its title cell.
+import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
 import { Cell } from './cell';
+import { ariaSort, OpenMark, RowOpenButton, SortTitle } from './row-parts';
 import { isSortable, type Column, type SortState } from './types';
 import { colors, space, type } from '@/constants/theme';
 
 export type RowsViewProps<T> = {
   testID: string;
+  /** What the table is called (read out when entering it). */
+  label?: string;
   rows: readonly T[];
   columns: readonly Column<T>[];
   rowKey: (row: T) => string;
@@ -16,68 +20,90 @@ export type RowsViewProps<T> = {
   body: React.ReactNode | null;
 };
 
-export function sortMark(sort: SortState | null, key: string): string {
-  if (sort?.key !== key) return '';
-  return sort.order === 'asc' ? ' ▲' : ' ▼';
+/** The column whose cell names a row: the one marked primary, else the first. */
+export function titleColumn<T>(columns: readonly Column<T>[]): Column<T> | undefined {
+  return columns.find((c) => c.primary) ?? columns[0];
+}
+
+function HeaderCell<T>({ column, sort, onSortPress, testID }: { column: Column<T>; sort: SortState | null; onSortPress: (key: string) => void; testID: string }) {
+  const active = sort?.key === column.key;
+  const textStyle = [styles.headText, active && styles.headActive, column.align === 'end' && styles.end];
+  return (
+    <View role="columnheader" aria-sort={ariaSort(sort, column.key)} style={[styles.headCell, { flex: column.flex ?? 1 }]}>
+      {isSortable(column) ? (
+        <Pressable testID={`${testID}-sort-${column.key}`} role="button" onPress={() => onSortPress(column.key)} style={styles.sortButton}>
+          <SortTitle label={column.label} sort={sort} columnKey={column.key} style={textStyle} />
+        </Pressable>
+      ) : (
+        <SortTitle label={column.label} sort={null} columnKey={column.key} style={textStyle} />
+      )}
+    </View>
+  );
 }
 
 export function TableColumnsView<T>(props: RowsViewProps<T>) {
-  const { testID, rows, columns, rowKey, sort, onSortPress, onRowPress, selectedKey, body } = props;
+  const { testID, label, rows, columns, rowKey, sort, onSortPress, onRowPress, selectedKey, body } = props;
+  const title = titleColumn(columns);
   return (
     <View style={styles.frame}>
-      <View style={styles.header} role="row">
-        {columns.map((column) => {
-          const active = sort?.key === column.key;
-          const label = `${column.label}${sortMark(sort, column.key)}`;
-          const style = [styles.headCell, { flex: column.flex ?? 1 }];
-          if (!isSortable(column)) {
-            return <Text key={column.key} style={[style, styles.headText, column.align === 'end' && styles.end]}>{column.label}</Text>;
-          }
-          return (
-            <Pressable
-              key={column.key}
-              testID={`${testID}-sort-${column.key}`}
-              role="button"
-              accessibilityLabel={`Sort by ${column.label}`}
-              aria-sort={active ? (sort?.order === 'asc' ? 'ascending' : 'descending') : undefined}
-              onPress={() => onSortPress(column.key)}
-              style={style}
-            >
-              <Text style={[styles.headText, active && styles.headActive, column.align === 'end' && styles.end]}>{label}</Text>
-            </Pressable>
-          );
-        })}
+      <View role="table" aria-label={label} style={body ? undefined : styles.table} testID={`${testID}-grid`}>
+        <View role="rowgroup">
+          <View style={styles.header} role="row">
+            {columns.map((column) => (
+              <HeaderCell key={column.key} column={column} sort={sort} onSortPress={onSortPress} testID={testID} />
+            ))}
+          </View>
+        </View>
+        {body ? null : (
+          <ScrollView style={styles.body}>
+            <View role="rowgroup">
+              {rows.map((row) => {
+                const key = rowKey(row);
+                const open = key === selectedKey;
+                return (
+                  <Pressable
+                    key={key}
+                    testID={`${testID}-row-${key}`}
+                    role="row"
+                    aria-current={open ? 'true' : undefined}
+                    // The title cell's button is the keyboard's way in; the whole row still takes a click.
+                    tabIndex={-1}
+                    disabled={!onRowPress}
+                    onPress={onRowPress ? () => onRowPress(row) : undefined}
+                    style={({ pressed }) => [styles.row, open && styles.selected, pressed && styles.pressed]}
+                  >
+                    {columns.map((column) => (
+                      <View key={column.key} role="cell" style={[styles.cell, { flex: column.flex ?? 1 }, column.align === 'end' && styles.cellEnd]}>
+                        {column === title ? (
+                          <View style={styles.titleCell}>
+                            <RowOpenButton testID={`${testID}-open-${key}`} open={open} onPress={onRowPress ? () => onRowPress(row) : undefined}>
+                              <Cell value={column.render(row)} strong={column.primary} align={column.align} />
+                            </RowOpenButton>
+                            {open ? <OpenMark testID={`${testID}-current-${key}`} /> : null}
+                          </View>
+                        ) : (
+                          <Cell value={column.render(row)} strong={column.primary} align={column.align} />
+                        )}
+                      </View>
+                    ))}
+                  </Pressable>
+                );
+              })}
+            </View>
+          </ScrollView>
+        )}
       </View>
-      <ScrollView style={styles.body}>
-        {body ??
-          rows.map((row) => {
-            const key = rowKey(row);
-            return (
-              <Pressable
-                key={key}
-                testID={`${testID}-row-${key}`}
-                role={onRowPress ? 'button' : undefined}
-                disabled={!onRowPress}
-                onPress={onRowPress ? () => onRowPress(row) : undefined}
-                style={({ pressed }) => [styles.row, key === selectedKey && styles.selected, pressed && styles.pressed]}
-              >
-                {columns.map((column) => (
-                  <View key={column.key} style={[styles.cell, { flex: column.flex ?? 1 }, column.align === 'end' && styles.cellEnd]}>
-                    <Cell value={column.render(row)} strong={column.primary} align={column.align} />
-                  </View>
-                ))}
-              </Pressable>
-            );
-          })}
-      </ScrollView>
+      {body ? <ScrollView style={styles.body}>{body}</ScrollView> : null}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   frame: { flex: 1, backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.border, borderRadius: 14, overflow: 'hidden' },
+  table: { flex: 1 },
   header: { flexDirection: 'row', gap: space.md, paddingHorizontal: space.lg, paddingVertical: space.sm, backgroundColor: colors.surfaceSunken },
   headCell: { justifyContent: 'center' },
+  sortButton: { alignSelf: 'stretch' },
   headText: { ...type.label, color: colors.inkMuted },
   headActive: { color: colors.primary },
   end: { textAlign: 'right' },
@@ -97,4 +123,5 @@ const styles = StyleSheet.create({
   pressed: { backgroundColor: colors.tide },
   cell: { justifyContent: 'center' },
   cellEnd: { alignItems: 'flex-end' },
+  titleCell: { gap: space.xxs, alignItems: 'flex-start' },
 });

@@ -23,7 +23,8 @@ export function UtilisationBar({ share, testID }: Props) {
   }
   const widthPercent = Math.max(0, Math.min(1, share)) * 100;
   return (
-    <View style={styles.row} testID={testID} accessibilityLabel={`Utilisation ${formatPercent(share)}`}>
+    // The percentage is the text a screen reader reads; the bar beside it only draws it.
+    <View style={styles.row} testID={testID}>
       <View style={styles.track}>
         <View style={[styles.fill, { width: `${widthPercent}%`, backgroundColor: utilisationTone(share) }]} />
       </View>
