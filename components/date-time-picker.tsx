@@ -62,7 +62,7 @@ export function TimePicker({ value, onPick, testID }: TimeProps) {
         {QUARTER_HOURS.map((time) => {
           const selected = time === value;
           return (
-            <Pressable key={time} role="button" aria-selected={selected} accessibilityLabel={time}
+            <Pressable key={time} role="button" aria-pressed={selected}
               onPress={() => onPick(time)} testID={`${testID}-${time.replace(':', '')}`}
               style={[styles.time, selected && styles.timeSelected]}>
               <Text style={[styles.timeText, selected && styles.timeTextSelected]}>{time}</Text>

@@ -1,4 +1,5 @@
-// A toggle chip for the calendar's filters, with an optional tone dot (statuses double as the colour legend).
+// A toggle chip for the calendar's filters (a toggle button, so Space and Enter both work), with an optional tone dot
+// (statuses double as the colour legend); a chosen chip shows a tick besides its colour.
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { colors, radii, space, type } from '@/constants/theme';
 
@@ -7,16 +8,17 @@ type Props = { label: string; selected: boolean; onPress: () => void; testID: st
 export function FilterChip({ label, selected, onPress, testID, tone }: Props) {
   return (
     <Pressable
-      role="checkbox"
-      aria-checked={selected}
-      accessibilityState={{ checked: selected }}
-      accessibilityLabel={label}
+      role="button"
+      aria-pressed={selected}
       testID={testID}
       onPress={onPress}
       style={({ pressed }) => [styles.chip, selected && styles.selected, pressed && styles.pressed]}
     >
       {tone ? <View style={[styles.dot, { backgroundColor: tone }]} /> : null}
-      <Text style={[styles.text, selected && styles.selectedText]}>{label}</Text>
+      <Text style={[styles.text, selected && styles.selectedText]}>
+        {selected ? <Text aria-hidden>{'✓ '}</Text> : null}
+        {label}
+      </Text>
     </Pressable>
   );
 }

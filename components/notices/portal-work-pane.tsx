@@ -1,6 +1,6 @@
 // The tenant portal's list side: a title, the zone times are shown in, then the list or its state.
 import type { ReactNode } from 'react';
-import { ScrollView, StyleSheet, Text } from 'react-native';
+import { ScrollView, StyleSheet, Text, View } from 'react-native';
 import type { PortalWork } from '@/shared/notices';
 import { ListPane } from '@/components/inventory/list-pane';
 import { timesInLabel } from '@/components/time';
@@ -23,9 +23,13 @@ export function PortalWorkList({ work, selectedId, onOpen }: ListProps) {
   return (
     <ScrollView contentContainerStyle={styles.list} testID="notices-list">
       <Text style={styles.zone} testID="notices-zone">{timesInLabel(timeZone)}</Text>
-      {work.items.map((item) => (
-        <PortalWorkRow key={item.windowId} item={item} timeZone={timeZone} selected={item.notice?.id === selectedId} onOpen={onOpen} />
-      ))}
+      <View role="list" aria-label="Planned work" style={styles.items}>
+        {work.items.map((item) => (
+          <View role="listitem" key={item.windowId}>
+            <PortalWorkRow item={item} timeZone={timeZone} selected={item.notice?.id === selectedId} onOpen={onOpen} />
+          </View>
+        ))}
+      </View>
     </ScrollView>
   );
 }
@@ -38,5 +42,6 @@ export function noticeIdFromPath(pathname: string): string | null {
 
 const styles = StyleSheet.create({
   list: { gap: space.sm, paddingBottom: space.xl },
+  items: { gap: space.sm },
   zone: { ...type.caption, color: colors.inkMuted },
 });

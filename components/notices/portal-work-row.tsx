@@ -32,7 +32,7 @@ export function PortalWorkRow({ item, timeZone, selected, onOpen }: Props) {
     <Pressable
       role="link"
       testID={`notice-row-${notice.id}`}
-      accessibilityState={{ selected }}
+      aria-current={selected ? 'true' : undefined}
       onPress={() => onOpen(notice.id)}
       style={({ pressed }) => [styles.row, selected && styles.selected, pressed && styles.pressed]}
     >
@@ -46,7 +46,8 @@ const styles = StyleSheet.create({
     gap: space.xs, padding: space.md, borderRadius: radii.md, borderWidth: 1,
     borderColor: colors.border, backgroundColor: colors.surface, minHeight: 44,
   },
-  selected: { borderColor: colors.primary, backgroundColor: colors.primarySoft },
+  // A bar on the leading edge as well as the tint: the open notice differs by shape too, not by colour alone.
+  selected: { borderColor: colors.primary, backgroundColor: colors.primarySoft, borderLeftWidth: 6 },
   pressed: { backgroundColor: colors.surfaceSunken },
   top: { flexDirection: 'row', alignItems: 'flex-start', justifyContent: 'space-between', gap: space.sm },
   summary: { ...type.bodyStrong, color: colors.ink, flexShrink: 1 },

@@ -13,7 +13,7 @@ export function OutboxRow({ message, selected, viewerZone, onOpen }: Props) {
     <Pressable
       role="link"
       testID={`outbox-row-${message.id}`}
-      accessibilityState={{ selected }}
+      aria-current={selected ? 'true' : undefined}
       onPress={() => onOpen(message.id)}
       style={({ pressed }) => [styles.row, selected && styles.selected, pressed && styles.pressed]}
     >
@@ -44,7 +44,8 @@ const styles = StyleSheet.create({
     backgroundColor: colors.surface,
     minHeight: 44,
   },
-  selected: { borderColor: colors.primary, backgroundColor: colors.primarySoft },
+  // A bar on the leading edge as well as the tint: the open message differs by shape too, not by colour alone.
+  selected: { borderColor: colors.primary, backgroundColor: colors.primarySoft, borderLeftWidth: 6 },
   pressed: { backgroundColor: colors.surfaceSunken },
   top: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   subject: { ...type.bodyStrong, color: colors.ink, flexShrink: 1 },

@@ -8,18 +8,24 @@ export function NextWork({ work, onOpenNotice }: { work: readonly TenantWindowVi
   return (
     <UpcomingPanel title="Planned work on your slices" emptyText="No planned work on your slices has been announced."
       count={work.length} testID="overview-next-work">
-      {(timeZone) => work.map((item, index) => (
-        <Pressable key={item.windowId} role="link" testID={`next-work-${item.windowId}`}
-          accessibilityLabel={`${item.summary}, open the notice`}
-          onPress={() => onOpenNotice(item.noticeId)} style={[styles.row, index > 0 && styles.rowDivider]}>
-          <View style={styles.rowMain}>
-            <Text style={styles.lead}>{item.summary}</Text>
-            <Text style={styles.when}>{formatWindowRange(item.startsAt, item.endsAt, timeZone)}</Text>
-            <Text style={styles.when}>{item.effectText}</Text>
-          </View>
-          <Text style={styles.stage}>{item.stage}</Text>
-        </Pressable>
-      ))}
+      {(timeZone) => (
+        <View role="list" aria-label="Planned work on your slices">
+          {work.map((item, index) => (
+            // Each link is named by what it shows: the work, its times, its effect and stage.
+            <View role="listitem" key={item.windowId}>
+              <Pressable role="link" testID={`next-work-${item.windowId}`}
+                onPress={() => onOpenNotice(item.noticeId)} style={[styles.row, index > 0 && styles.rowDivider]}>
+                <View style={styles.rowMain}>
+                  <Text style={styles.lead}>{item.summary}</Text>
+                  <Text style={styles.when}>{formatWindowRange(item.startsAt, item.endsAt, timeZone)}</Text>
+                  <Text style={styles.when}>{item.effectText}</Text>
+                </View>
+                <Text style={styles.stage}>{item.stage}</Text>
+              </Pressable>
+            </View>
+          ))}
+        </View>
+      )}
     </UpcomingPanel>
   );
 }

@@ -1,4 +1,4 @@
-// A multi-choice chip list (pinned functions, sites left out), with a filter once the list is long.
+// A multi-choice chip list (pinned functions, sites left out) of toggle buttons, with a filter once the list is long.
 import { useMemo, useState } from 'react';
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { colors, radii, space, type } from '@/constants/theme';
@@ -56,15 +56,16 @@ export function PickChips({ label, hint, options, picked, onChange, testID, erro
           return (
             <Pressable
               key={option.id}
-              role="checkbox"
-              aria-checked={on}
-              accessibilityState={{ checked: on }}
-              accessibilityLabel={option.label}
+              role="button"
+              aria-pressed={on}
               testID={`${testID}-${option.id}`}
               onPress={() => toggle(option.id)}
               style={[styles.chip, on && styles.on]}
             >
-              <Text style={[styles.text, on && styles.onText]}>{on ? '✓ ' : ''}{option.label}</Text>
+              <Text style={[styles.text, on && styles.onText]}>
+                {on ? <Text aria-hidden>{'✓ '}</Text> : null}
+                {option.label}
+              </Text>
             </Pressable>
           );
         })}

@@ -27,24 +27,24 @@ export function sortRuns(plans: readonly PlanListItem[]): PlanListItem[] {
 
 export function PlanRunList({ plans, timeZone, onOpen }: Props) {
   return (
-    <View style={styles.list} testID="plan-runs">
+    <View style={styles.list} testID="plan-runs" role="list" aria-label="Runs of this window">
       {sortRuns(plans).map((plan) => (
-        <Pressable
-          key={plan.id}
-          role="link"
-          accessibilityLabel={`Run of ${formatInstant(plan.createdAt, timeZone)}`}
-          onPress={() => onOpen(plan.id)}
-          style={({ pressed }) => [styles.row, pressed && styles.pressed]}
-          testID={`plan-row-${plan.id}`}
-        >
-          <View style={styles.head}>
-            <PlanStatusPill status={plan.status} testID={`plan-row-status-${plan.id}`} />
-            <PlanMarks accepted={plan.accepted} stale={plan.stale} />
-          </View>
-          <Text style={styles.when}>{formatInstant(plan.createdAt, timeZone)}</Text>
-          <Text style={plan.status === 'failed' ? styles.error : styles.body}>{totalsLine(plan)}</Text>
-          <Text style={styles.muted}>{settingsSummary(plan.settings)}</Text>
-        </Pressable>
+        <View role="listitem" key={plan.id}>
+          <Pressable
+            role="link"
+            onPress={() => onOpen(plan.id)}
+            style={({ pressed }) => [styles.row, pressed && styles.pressed]}
+            testID={`plan-row-${plan.id}`}
+          >
+            <View style={styles.head}>
+              <PlanStatusPill status={plan.status} testID={`plan-row-status-${plan.id}`} />
+              <PlanMarks accepted={plan.accepted} stale={plan.stale} />
+            </View>
+            <Text style={styles.when}>{formatInstant(plan.createdAt, timeZone)}</Text>
+            <Text style={plan.status === 'failed' ? styles.error : styles.body}>{totalsLine(plan)}</Text>
+            <Text style={styles.muted}>{settingsSummary(plan.settings)}</Text>
+          </Pressable>
+        </View>
       ))}
     </View>
   );

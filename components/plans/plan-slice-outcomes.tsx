@@ -43,7 +43,6 @@ function SliceCard({ slice, names, selected, onSelect }: { slice: PlanSlice; nam
       onPress={onSelect}
       role="button"
       aria-pressed={selected}
-      accessibilityLabel={`${slice.name}: ${reason ?? OUTCOME_LABELS[slice.outcome]}${selected ? ' (shown on the map)' : ''}`}
       style={[styles.card, selected && styles.selected]}
       testID={`plan-slice-${slice.slice}`}
     >

@@ -2,6 +2,7 @@
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { PlanSlice } from '@/shared/plans';
 import { Button } from '@/components/button';
+import { spaceActivates } from '@/components/roving-focus';
 import { calendarColors, colors, radii, space, type } from '@/constants/theme';
 
 type Props = {
@@ -19,9 +20,8 @@ function Tick({ slice, on, onToggle }: { slice: PlanSlice; on: boolean; onToggle
     <Pressable
       role="checkbox"
       aria-checked={on}
-      accessibilityState={{ checked: on }}
-      accessibilityLabel={`Accept the outage of ${slice.name}`}
       onPress={onToggle}
+      {...spaceActivates(onToggle)}
       style={styles.tick}
       testID={`plan-outage-${slice.slice}`}
     >

@@ -40,7 +40,7 @@ export function TimeZoneSection() {
       <View style={styles.chips}>
         {zoneSuggestions(typed ?? '').map((zone) => (
           <Pressable key={zone} role="button" onPress={() => { setTyped(zone); setError(null); }} style={styles.chip}
-            accessibilityLabel={`Use ${describeZone(zone)}`} testID={`time-zone-suggestion-${zone}`}>
+            testID={`time-zone-suggestion-${zone}`}>
             <Text style={styles.chipText}>{describeZone(zone)}</Text>
           </Pressable>
         ))}

@@ -18,7 +18,7 @@ function DecidedRow({ item, timeZone, onOpen }: { item: DecidedByMeItem; timeZon
   const decided = `${DECISION_WORDS[item.decision]} ${formatInstant(item.decidedAt, timeZone)}`;
   return (
     <Pressable
-      role="link" accessibilityLabel={`${item.title}, ${decided}`} onPress={() => onOpen(item.windowId)}
+      role="link" onPress={() => onOpen(item.windowId)}
       testID={`signoff-decided-${item.windowId}-${item.round}`} style={({ pressed }) => [styles.row, pressed && styles.pressed]}
     >
       <View style={styles.top}>
@@ -38,7 +38,15 @@ export function DecidedByMe({ items, timeZone, onOpen }: Props) {
       <Text style={styles.heading} role="heading" aria-level={2}>Decided by me</Text>
       {items.length === 0
         ? <Text style={styles.meta}>You have not decided on any window yet.</Text>
-        : items.map((item) => <DecidedRow key={`${item.windowId}-${item.round}`} item={item} timeZone={timeZone} onOpen={onOpen} />)}
+        : (
+          <View role="list" aria-label="Windows I decided on" style={styles.list}>
+            {items.map((item) => (
+              <View role="listitem" key={`${item.windowId}-${item.round}`}>
+                <DecidedRow item={item} timeZone={timeZone} onOpen={onOpen} />
+              </View>
+            ))}
+          </View>
+        )}
     </View>
   );
 }
@@ -46,6 +54,7 @@ export function DecidedByMe({ items, timeZone, onOpen }: Props) {
 const styles = StyleSheet.create({
   section: { gap: space.sm, marginTop: space.lg },
   heading: { ...type.heading, color: colors.abyss },
+  list: { gap: space.sm },
   row: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, padding: space.md, gap: space.xxs },
   pressed: { backgroundColor: colors.primarySoft },
   top: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-start', gap: space.sm },

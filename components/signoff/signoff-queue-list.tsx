@@ -21,7 +21,7 @@ function QueueRow({ item, timeZone, onOpen }: { item: SignoffQueueItem; timeZone
   const waiting = !item.me.decided && item.me.blocked === null;
   return (
     <Pressable
-      role="link" accessibilityLabel={`${item.title}, ${myLine(item)}`}
+      role="link"
       testID={`signoff-queue-item-${item.windowId}`} onPress={() => onOpen(item.windowId)}
       style={({ pressed }) => [styles.row, pressed && styles.pressed]}
     >
@@ -48,7 +48,16 @@ export function SignoffQueueList({ items, timeZone, onOpen, footer }: Props) {
           <Text style={styles.emptyTitle}>Nothing to sign off</Text>
           <Text style={styles.body}>Windows appear here when a planner submits an accepted plan.</Text>
         </View>
-      ) : items.map((item) => <QueueRow key={item.windowId} item={item} timeZone={timeZone} onOpen={onOpen} />)}
+      ) : (
+        // A list of links, each named by what it shows (title, times, approvals, my part), in that order.
+        <View role="list" aria-label="Windows in review" style={styles.list} testID="signoff-queue-list">
+          {items.map((item) => (
+            <View role="listitem" key={item.windowId}>
+              <QueueRow item={item} timeZone={timeZone} onOpen={onOpen} />
+            </View>
+          ))}
+        </View>
+      )}
       {footer}
     </PageColumn>
   );
@@ -56,6 +65,7 @@ export function SignoffQueueList({ items, timeZone, onOpen, footer }: Props) {
 
 const styles = StyleSheet.create({
   heading: { ...type.title, color: colors.abyss },
+  list: { gap: space.md },
   row: { backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border, padding: space.lg, gap: space.xs },
   pressed: { backgroundColor: colors.primarySoft },
   top: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'flex-start', gap: space.sm },

@@ -20,7 +20,6 @@ export function ConflictsList({ conflicts, timeZone, onOpenWindow }: Props) {
         <Pressable
           key={c.window.id}
           role="link"
-          accessibilityLabel={`Open conflicting window ${c.window.title}`}
           onPress={() => onOpenWindow(c.window.id)}
           style={({ pressed }) => [styles.item, pressed && styles.pressed]}
           testID={`window-conflict-${c.window.id}`}

@@ -44,7 +44,6 @@ function Results({ q, pickedKeys, onPick, disabled, options, loading, error }: R
       <Pressable
         key={option.id}
         role="button"
-        accessibilityLabel={`${picked ? 'Already added' : 'Add'} ${option.label}`}
         testID={`window-element-option-${option.id}`}
         disabled={disabled || picked}
         onPress={() => onPick(option)}

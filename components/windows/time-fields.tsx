@@ -22,6 +22,11 @@ type Props = {
   disabled?: boolean;
 };
 
+/** A picker button's name: its visible word first (speech users say what they see), then which field it fills. */
+export function pickerButtonName(word: 'Date' | 'Time', fieldLabel: string): string {
+  return `${word} (${fieldLabel}): pick from a ${word === 'Date' ? 'calendar' : 'list'}`;
+}
+
 /** The pair as typed, tidied where it reads as a date and time; left alone where it does not (the check says why). */
 export function tidyDateTime(date: string, time: string): { date: string; time: string } {
   const both = splitLooseDateTime(date);
@@ -58,7 +63,7 @@ export function TimeFields({ label, date, time, onChange, error, testID, pickerN
           editable={!disabled}
           style={[styles.input, styles.date, border]}
         />
-        <Pressable role="button" accessibilityLabel={`Pick the ${label.toLowerCase()} date`} disabled={disabled}
+        <Pressable role="button" accessibilityLabel={pickerButtonName('Date', label)} aria-expanded={open === 'date'} disabled={disabled}
           onPress={() => toggle('date')} style={[styles.pick, open === 'date' && styles.pickOpen]} testID={`${testID}-date-pick`}>
           <Text style={styles.pickText}>Date</Text>
         </Pressable>
@@ -78,7 +83,7 @@ export function TimeFields({ label, date, time, onChange, error, testID, pickerN
           editable={!disabled}
           style={[styles.input, styles.time, border]}
         />
-        <Pressable role="button" accessibilityLabel={`Pick the ${label.toLowerCase()} time`} disabled={disabled}
+        <Pressable role="button" accessibilityLabel={pickerButtonName('Time', label)} aria-expanded={open === 'time'} disabled={disabled}
           onPress={() => toggle('time')} style={[styles.pick, open === 'time' && styles.pickOpen]} testID={`${testID}-time-pick`}>
           <Text style={styles.pickText}>Time</Text>
         </Pressable>
