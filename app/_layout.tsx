@@ -6,6 +6,10 @@ import { SafeAreaProvider } from 'react-native-safe-area-context';
 import { useAppFonts } from '@/hooks/use-app-fonts';
 import { createQueryClient } from '@/hooks/query-client';
 import { LoadingState } from '@/components/screen-states';
+import { installFocusRing } from '@/components/focus-ring';
+
+// Once, before the first screen: keyboard focus must show from the first Tab.
+installFocusRing();
 
 export { ErrorBoundary } from 'expo-router';
 
