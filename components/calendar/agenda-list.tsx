@@ -1,4 +1,5 @@
 // The selected day's agenda: its freezes, then every window touching the day, times in the viewer's zone.
+import type { Href } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { calendarColors, colors, radii, space, type } from '@/constants/theme';
 import { formatWindowRange, startOfDayMs } from '@/components/time';
@@ -11,6 +12,8 @@ type Props = {
   windows: readonly CalendarWindow[];
   freezes: readonly CalendarFreeze[];
   onOpenWindow: (id: string) => void;
+  /** where a window's row leads (its page, or a tenant's notice), making the row a real link */
+  windowHref?: (id: string) => Href | null;
   /** what to say when the day has no windows (filters may be hiding some) */
   emptyHint?: string;
 };
@@ -21,7 +24,7 @@ function dayHeading(day: string, timeZone: string): string {
   ).replace(',', '');
 }
 
-export function AgendaList({ day, timeZone, windows, freezes, onOpenWindow, emptyHint }: Props) {
+export function AgendaList({ day, timeZone, windows, freezes, onOpenWindow, windowHref, emptyHint }: Props) {
   return (
     <View style={styles.panel} testID="calendar-agenda">
       <View style={styles.header}>
@@ -44,7 +47,7 @@ export function AgendaList({ day, timeZone, windows, freezes, onOpenWindow, empt
       ) : (
         windows.map((window, index) => (
           <View key={window.id} style={index > 0 && styles.divider}>
-            <AgendaRow window={window} timeZone={timeZone} onOpen={onOpenWindow} />
+            <AgendaRow window={window} timeZone={timeZone} onOpen={onOpenWindow} href={windowHref?.(window.id)} />
           </View>
         ))
       )}

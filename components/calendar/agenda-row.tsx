@@ -1,12 +1,20 @@
-// One window in the day's agenda: status tone, title, its time in the viewer's zone, elements and badges.
+// One window in the day's agenda: status (in words and tone), title, its time in the viewer's zone, elements and
+// badges. A link to the window (or, for a tenant, its notice): Tab reaches it, Enter and Space open it.
+import { Link, useRouter, type Href } from 'expo-router';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { colors, radii, space, type } from '@/constants/theme';
 import { formatDuration, formatWindowRange } from '@/components/time';
+import { STATUS_LABELS } from '@/components/windows/lifecycle';
 import type { CalendarWindow } from './calendar-types';
 import { statusColor } from './calendar-marks';
+import { keyDownProps, type KeyPress } from './key-props';
 import { WindowBadges } from './window-badges';
 
-type Props = { window: CalendarWindow; timeZone: string; onOpen: (id: string) => void };
+/**
+ * `href`, when the screen gives one, makes the row a real link (open in a new tab works too); otherwise the row
+ * is a link-role element that `onOpen`s on a press, Enter or Space.
+ */
+type Props = { window: CalendarWindow; timeZone: string; onOpen: (id: string) => void; href?: Href | null };
 
 const MAX_ELEMENTS_SHOWN = 3;
 
@@ -17,24 +25,18 @@ function elementSummary(window: CalendarWindow): string {
   return ids.length > MAX_ELEMENTS_SHOWN ? `${shown} +${ids.length - MAX_ELEMENTS_SHOWN}` : shown;
 }
 
-export function AgendaRow({ window, timeZone, onOpen }: Props) {
+function RowContent({ window, timeZone }: { window: CalendarWindow; timeZone: string }) {
   const tone = statusColor(window.status);
   const durationMs = Date.parse(window.endsAt) - Date.parse(window.startsAt);
   return (
-    <Pressable
-      role="link"
-      testID={`agenda-window-${window.id}`}
-      accessibilityLabel={`${window.title}, ${window.statusLabel ?? window.status}`}
-      onPress={() => onOpen(window.id)}
-      style={({ pressed }) => [styles.row, pressed && styles.pressed]}
-    >
+    <View style={styles.row}>
       <View style={[styles.stripe, { backgroundColor: tone }]} />
       <View style={styles.main}>
         <View style={styles.titleLine}>
           <Text style={styles.title} numberOfLines={2}>
             {window.title}
           </Text>
-          <Text style={[styles.status, { borderColor: tone, color: colors.ink }]}>{window.statusLabel ?? window.status}</Text>
+          <Text style={[styles.status, { borderColor: tone }]}>{window.statusLabel ?? STATUS_LABELS[window.status]}</Text>
         </View>
         <Text style={styles.when} testID={`agenda-window-${window.id}-when`}>
           {formatWindowRange(window.startsAt, window.endsAt, timeZone)} · {formatDuration(durationMs)}
@@ -44,12 +46,54 @@ export function AgendaRow({ window, timeZone, onOpen }: Props) {
         </Text>
         <WindowBadges window={window} />
       </View>
-      <Text style={styles.chevron}>›</Text>
+      <Text style={styles.chevron} aria-hidden>›</Text>
+    </View>
+  );
+}
+
+const isSpace = (key: string) => key === ' ' || key === 'Spacebar';
+
+export function AgendaRow({ window, timeZone, onOpen, href }: Props) {
+  const router = useRouter();
+  const content = <RowContent window={window} timeZone={timeZone} />;
+  if (href) {
+    // Enter follows the link natively; Space, which a link ignores, opens it too, as people press either on a row.
+    const openOnSpace = (event: KeyPress) => {
+      if (!isSpace(event.key)) return;
+      event.preventDefault?.();
+      router.push(href);
+    };
+    return (
+      <Link href={href} asChild>
+        <Pressable role="link" testID={`agenda-window-${window.id}`} {...keyDownProps(openOnSpace)} style={styles.link}>
+          {content}
+        </Pressable>
+      </Link>
+    );
+  }
+  // Without an href, react-native-web leaves Enter on a link-role element to the browser, which does nothing:
+  // both keys are handled here.
+  const openOnKey = (event: KeyPress) => {
+    if (event.key !== 'Enter' && !isSpace(event.key)) return;
+    event.preventDefault?.();
+    onOpen(window.id);
+  };
+  return (
+    <Pressable
+      role="link"
+      testID={`agenda-window-${window.id}`}
+      onPress={() => onOpen(window.id)}
+      {...keyDownProps(openOnKey)}
+      style={({ pressed }) => [styles.link, pressed && styles.pressed]}
+    >
+      {content}
     </Pressable>
   );
 }
 
 const styles = StyleSheet.create({
+  link: { borderRadius: radii.md },
+  pressed: { backgroundColor: colors.primarySoft },
   row: {
     flexDirection: 'row',
     alignItems: 'center',
@@ -58,13 +102,13 @@ const styles = StyleSheet.create({
     paddingRight: space.md,
     borderRadius: radii.md,
   },
-  pressed: { backgroundColor: colors.primarySoft },
   stripe: { width: 5, alignSelf: 'stretch', borderRadius: radii.sm },
   main: { flex: 1, gap: space.xs },
   titleLine: { flexDirection: 'row', alignItems: 'flex-start', gap: space.sm },
   title: { ...type.bodyStrong, color: colors.ink, flex: 1 },
   status: {
     ...type.caption,
+    color: colors.ink,
     borderWidth: 1.5,
     borderRadius: radii.pill,
     paddingHorizontal: space.sm,

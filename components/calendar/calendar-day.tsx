@@ -1,19 +1,30 @@
-// One day cell of the month view: the date (today ringed, the selection filled), a conflict dot,
-// the windows' bars on their lanes, "+n" for more, and freeze hatching behind.
-import { Pressable, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
-import type { DateData } from 'react-native-calendars';
+// One day cell of the month grid: the date (today ringed, the selection filled), a conflict dot, the windows' bars
+// on their lanes with a status cue in text, "+n" for more, and freeze hatching behind. A grid cell with one
+// accessible name (see day-label.ts); the month grid moves focus between cells with the arrow keys.
+import type { Ref } from 'react';
+import { Pressable, StyleSheet, Text, useWindowDimensions, View, type Role, type View as ViewType } from 'react-native';
 import { calendarColors, colors, fonts, radii, space, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
+import { STATUS_MARKS } from './calendar-marks';
 import type { CalendarDayMark } from './calendar-types';
+import { dayLabel } from './day-label';
+import { keyDownProps, type KeyPress } from './key-props';
 import { FreezeHatch } from './freeze-hatch';
 
+/** react-native's Role type has no 'gridcell'; react-native-web passes the role to the DOM as given. */
+const GRIDCELL_ROLE = 'gridcell' as string as Role;
+
 type Props = {
-  date?: DateData;
-  state?: string;
-  marking?: CalendarDayMark;
-  onPress?: (date?: DateData) => void;
-  testID?: string;
-  accessibilityLabel?: string;
-  children?: React.ReactNode;
+  /** 'YYYY-MM-DD' */
+  day: string;
+  /** a day of the neighbouring months that fills the first or last week row */
+  outside: boolean;
+  mark?: CalendarDayMark;
+  /** the grid's one Tab stop; every other day is reached with the arrow keys */
+  tabStop: boolean;
+  onPress: (day: string) => void;
+  onKeyDown: (day: string, event: KeyPress) => void;
+  cellRef?: Ref<ViewType>;
+  testID: string;
 };
 
 /** Room for the date and three lanes of titled bars; phones get slimmer bars so the agenda stays near the first screen. */
@@ -21,37 +32,36 @@ export const DAY_CELL_HEIGHT_PX = { phone: 76, wide: 92 } as const;
 const BAR_HEIGHT_PX = { phone: 12, wide: 15 } as const;
 const BAR_FONT_PX = { phone: 9, wide: 11 } as const;
 
-export function CalendarDay({ date, state, marking, onPress, testID, accessibilityLabel, children }: Props) {
-  const outside = state === 'disabled';
-  const selected = marking?.selected === true;
-  const today = marking?.today === true;
-  const frozen = (marking?.freezeTitles.length ?? 0) > 0;
+export function CalendarDay({ day, outside, mark, tabStop, onPress, onKeyDown, cellRef, testID }: Props) {
+  const selected = mark?.selected === true;
+  const today = mark?.today === true;
+  const frozen = (mark?.freezeTitles.length ?? 0) > 0;
   const size = useWindowDimensions().width >= WIDE_LAYOUT_MIN_WIDTH_PX ? 'wide' : 'phone';
-  const height = DAY_CELL_HEIGHT_PX[size];
   return (
     <Pressable
+      ref={cellRef}
       testID={testID}
-      role="button"
-      accessibilityLabel={marking?.accessibilityLabel ?? accessibilityLabel}
-      accessibilityState={{ selected }}
+      role={GRIDCELL_ROLE}
+      aria-label={dayLabel(day, mark)}
       aria-selected={selected}
-      onPress={() => onPress?.(date)}
-      style={({ pressed }) => [styles.cell, { height }, pressed && styles.pressed]}
+      aria-current={today ? 'date' : undefined}
+      tabIndex={tabStop ? 0 : -1}
+      onPress={() => onPress(day)}
+      {...keyDownProps((event) => onKeyDown(day, event))}
+      style={({ pressed }) => [styles.cell, { height: DAY_CELL_HEIGHT_PX[size] }, pressed && styles.pressed]}
     >
       {frozen ? <FreezeHatch /> : null}
       <View style={styles.numberRow}>
         <View style={[styles.number, today && styles.today, selected && styles.selected]}>
-          <Text style={[styles.numberText, outside && styles.outside, selected && styles.selectedText]}>{children}</Text>
+          <Text style={[styles.numberText, outside && styles.outside, selected && styles.selectedText]}>{Number(day.slice(8))}</Text>
         </View>
-        {marking?.hasConflict ? <View style={styles.conflictDot} testID={`${testID}-conflict`} /> : null}
+        {mark?.hasConflict ? <View style={styles.conflictDot} testID={`${testID}-conflict`} /> : null}
       </View>
       <View style={[styles.lanes, outside && styles.faded]}>
-        {(marking?.periods ?? []).map((period, lane) => (
+        {(mark?.periods ?? []).map((period, lane) => (
           <View
             key={lane}
             testID={period.windowId ? `${testID}-bar-${period.windowId}` : undefined}
-            accessibilityLabel={period.label}
-            aria-label={period.label}
             style={[
               styles.bar,
               { backgroundColor: period.color, height: BAR_HEIGHT_PX[size] },
@@ -59,15 +69,18 @@ export function CalendarDay({ date, state, marking, onPress, testID, accessibili
               period.endingDay && styles.barEnd,
             ]}
           >
-            {period.showTitle && period.title ? (
+            {period.status ? (
               <Text style={[styles.barTitle, { fontSize: BAR_FONT_PX[size], lineHeight: BAR_HEIGHT_PX[size] }]} numberOfLines={1}>
-                {period.title}
+                <Text style={styles.barMark} testID={period.windowId ? `${testID}-bar-${period.windowId}-mark` : undefined}>
+                  {STATUS_MARKS[period.status]}
+                </Text>
+                {period.showTitle && period.title ? ` ${period.title}` : ''}
               </Text>
             ) : null}
           </View>
         ))}
       </View>
-      {marking && marking.overflowCount > 0 ? <Text style={styles.more}>+{marking.overflowCount}</Text> : null}
+      {mark && mark.overflowCount > 0 ? <Text style={styles.more}>+{mark.overflowCount}</Text> : null}
     </Pressable>
   );
 }
@@ -107,6 +120,7 @@ const styles = StyleSheet.create({
     fontFamily: fonts.semibold, color: calendarColors.onSelected, paddingHorizontal: 3,
     textShadowColor: 'rgba(0, 0, 0, 0.45)', textShadowRadius: 2, textShadowOffset: { width: 0, height: 0 },
   },
+  barMark: { fontFamily: fonts.bold },
   barStart: { marginLeft: 3, borderTopLeftRadius: 3, borderBottomLeftRadius: 3 },
   barEnd: { marginRight: 3, borderTopRightRadius: 3, borderBottomRightRadius: 3 },
   more: { fontFamily: fonts.medium, fontSize: 10, lineHeight: 12, color: colors.inkMuted, textAlign: 'center' },

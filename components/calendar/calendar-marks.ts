@@ -10,6 +10,24 @@ export function statusColor(status: CalendarWindow['status']): string {
   return calendarColors.status[status] ?? calendarColors.status.draft;
 }
 
+/**
+ * A one-character status cue printed on each bar and in the legend, so a status never rests on colour alone.
+ * Letters where the status's initial is free; symbols for the ends of the lifecycle.
+ */
+export const STATUS_MARKS: Record<CalendarWindow['status'], string> = {
+  draft: 'D',
+  assessed: 'A',
+  planned: 'P',
+  'in-review': 'R',
+  cleared: 'C',
+  returned: '↩',
+  notified: 'N',
+  underway: 'U',
+  done: '✓',
+  'rolled-back': '↺',
+  withdrawn: '✕',
+};
+
 /** The statuses of the windows drawn, in lifecycle order of first appearance, for the legend. */
 export function statusesShown(marks: MarkedDays): CalendarWindow['status'][] {
   const seen = new Set<CalendarWindow['status']>();
@@ -36,7 +54,7 @@ export function assignLanes(windows: readonly CalendarWindow[], timeZone: string
 }
 
 function emptyMark(): CalendarDayMark {
-  return { periods: [], overflowCount: 0, windowCount: 0, hasConflict: false, freezeTitles: [] };
+  return { periods: [], windowLabels: [], overflowCount: 0, windowCount: 0, hasConflict: false, freezeTitles: [] };
 }
 
 function markFor(marks: MarkedDays, day: string): CalendarDayMark {
@@ -45,17 +63,18 @@ function markFor(marks: MarkedDays, day: string): CalendarDayMark {
 }
 
 function placeWindow(marks: MarkedDays, { window, lane, segments }: Placed) {
+  const status = window.statusLabel ?? STATUS_LABELS[window.status] ?? window.status;
+  const label = `${window.title} (${status})`;
   for (const segment of segments) {
     const mark = markFor(marks, segment.day);
     mark.windowCount += 1;
-    mark.marked = true;
+    mark.windowLabels.push(label);
     if (window.conflictCount > 0) mark.hasConflict = true;
     if (lane >= CALENDAR_MAX_LANES) {
       mark.overflowCount += 1;
       continue;
     }
     while (mark.periods.length < lane) mark.periods.push({ color: 'transparent' });
-    const status = window.statusLabel ?? STATUS_LABELS[window.status] ?? window.status;
     const period: CalendarPeriod = {
       color: statusColor(window.status),
       startingDay: segment.isFirst,
@@ -65,7 +84,7 @@ function placeWindow(marks: MarkedDays, { window, lane, segments }: Placed) {
       title: window.title,
       // The title again where a long window wraps onto a new week row, so every row of bars says whose it is.
       showTitle: segment.isFirst || weekdayOf(segment.day) === FIRST_WEEKDAY,
-      label: `${window.title}, ${status}`,
+      label,
     };
     mark.periods[lane] = period;
   }
@@ -78,18 +97,6 @@ function shadeFreeze(marks: MarkedDays, freeze: CalendarFreeze, timeZone: string
   }
 }
 
-function describeDay(day: string, mark: CalendarDayMark): string {
-  const parts = [day];
-  if (mark.today) parts.push('today');
-  if (mark.windowCount > 0) {
-    const titles = mark.periods.map((p) => p.label).filter((l): l is string => !!l);
-    parts.push(`${mark.windowCount} window${mark.windowCount === 1 ? '' : 's'}${titles.length > 0 ? `: ${titles.join('; ')}` : ''}`);
-  }
-  if (mark.hasConflict) parts.push('with a conflict');
-  if (mark.freezeTitles.length > 0) parts.push(`freeze: ${mark.freezeTitles.join(', ')}`);
-  return parts.join(', ');
-}
-
 export type MarkInput = {
   windows: readonly CalendarWindow[];
   freezes: readonly CalendarFreeze[];
@@ -99,14 +106,13 @@ export type MarkInput = {
   today: string;
 };
 
-/** The `markedDates` for react-native-calendars (markingType 'multi-period'), with our extra fields. */
+/** Each day's mark for the month grid, keyed by day; days with nothing on them have none. */
 export function buildMarkedDays({ windows, freezes, timeZone, selectedDay, today }: MarkInput): MarkedDays {
   const marks: MarkedDays = {};
   for (const placed of assignLanes(windows, timeZone)) placeWindow(marks, placed);
   for (const freeze of freezes) shadeFreeze(marks, freeze, timeZone);
   markFor(marks, today).today = true;
   if (selectedDay) markFor(marks, selectedDay).selected = true;
-  for (const [day, mark] of Object.entries(marks)) mark.accessibilityLabel = describeDay(day, mark);
   return marks;
 }
 

@@ -1,5 +1,4 @@
 // The slices of the API's window and freeze records the calendar needs, and the marking a day cell receives.
-import type { MarkingProps } from 'react-native-calendars/src/calendar/day/marking';
 import type { Freeze } from '@/shared/freezes';
 import type { Window } from '@/shared/windows';
 
@@ -27,13 +26,17 @@ export type CalendarPeriod = {
   status?: CalendarWindow['status'];
   title?: string;
   showTitle?: boolean;
-  /** what a screen reader says for the bar: title and status */
+  /** the window in the day's accessible name: "Rectifier swap (Planned)" */
   label?: string;
 };
 
-/** react-native-calendars' multi-period marking, plus what our day cell draws beside the bars. */
-export type CalendarDayMark = Omit<MarkingProps, 'periods'> & {
+/** What a day cell draws and says: its bars (one per lane), today, the selection and what sits beside the bars. */
+export type CalendarDayMark = {
   periods: CalendarPeriod[];
+  /** every window on the day, lanes drawn or not, as "title (status)", earliest first */
+  windowLabels: string[];
+  today?: boolean;
+  selected?: boolean;
   /** windows on this day beyond the lanes drawn */
   overflowCount: number;
   windowCount: number;

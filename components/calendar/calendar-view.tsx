@@ -1,5 +1,6 @@
 // The calendar screen's body: month view and the selected day's agenda, stacked on phones and side by side
 // from WIDE_LAYOUT_MIN_WIDTH_PX; filters and the "Book a window" action above the agenda.
+import type { Href } from 'expo-router';
 import { useMemo, useRef } from 'react';
 import { ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import { Button } from '@/components/button';
@@ -28,6 +29,8 @@ export type CalendarViewProps = {
   showFilters?: boolean;
   onBook: () => void;
   onOpenWindow: (id: string) => void;
+  /** where a window's agenda row leads, making it a real link (else the row calls onOpenWindow) */
+  windowHref?: (id: string) => Href | null;
 };
 
 function emptyHint(filtered: boolean, windowCount: number): string {
@@ -36,7 +39,7 @@ function emptyHint(filtered: boolean, windowCount: number): string {
 }
 
 export function CalendarView(props: CalendarViewProps) {
-  const { state, timeZone, freezes, refreshing, refreshError, canBook, onBook, onOpenWindow } = props;
+  const { state, timeZone, freezes, refreshing, refreshError, canBook, onBook, onOpenWindow, windowHref } = props;
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_LAYOUT_MIN_WIDTH_PX;
   const windows = useMemo(
@@ -59,7 +62,15 @@ export function CalendarView(props: CalendarViewProps) {
   };
 
   const calendar = (
-    <MonthCalendar month={state.month} today={state.today} marks={marks} onDayPress={selectDay} onMonthChange={state.setMonth} loading={refreshing} />
+    <MonthCalendar
+      month={state.month}
+      today={state.today}
+      selectedDay={state.selectedDay}
+      marks={marks}
+      onDayPress={selectDay}
+      onMonthChange={state.setMonth}
+      loading={refreshing}
+    />
   );
   const side = (
     <>
@@ -78,6 +89,7 @@ export function CalendarView(props: CalendarViewProps) {
           windows={windowsOnDay(windows, state.selectedDay, timeZone)}
           freezes={freezesOnDay(freezes, state.selectedDay, timeZone)}
           onOpenWindow={onOpenWindow}
+          windowHref={windowHref}
           emptyHint={emptyHint(filtered, windows.length)}
         />
       </View>

@@ -1,12 +1,11 @@
-// The month view: react-native-calendars with multi-period marks drawn by our own day cell, Monday first.
-import { useMemo } from 'react';
+// The month view: our header (title, previous / next, "Today"), the month grid with multi-day bars, the legend.
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { Calendar, type DateData } from 'react-native-calendars';
-import { colors, fonts, radii } from '@/constants/theme';
-import { addDays, FIRST_WEEKDAY } from '@/components/time';
-import { CalendarDay } from './calendar-day';
+import { colors, radii } from '@/constants/theme';
+import { addDays } from '@/components/time';
 import type { MarkedDays } from './calendar-types';
-import { MonthHeader } from './month-header';
+import { MonthGrid } from './month-grid';
+import { MonthHeader, monthTitle } from './month-header';
 import { CalendarLegend } from './calendar-legend';
 import { statusesShown } from './calendar-marks';
 
@@ -14,6 +13,7 @@ type Props = {
   /** 'YYYY-MM' */
   month: string;
   today: string;
+  selectedDay?: string;
   marks: MarkedDays;
   onDayPress: (day: string) => void;
   onMonthChange: (month: string) => void;
@@ -24,46 +24,34 @@ function shiftMonth(month: string, by: number): string {
   return addDays(`${month}-15`, by * 30).slice(0, 7);
 }
 
-export function MonthCalendar({ month, today, marks, onDayPress, onMonthChange, loading }: Props) {
-  const theme = useMemo(
-    () => ({
-      calendarBackground: colors.surface,
-      textSectionTitleColor: colors.inkMuted,
-      textDayHeaderFontFamily: fonts.medium,
-      textDayHeaderFontSize: 12,
-      weekVerticalMargin: 0,
-      'stylesheet.calendar.main': { container: { paddingLeft: 0, paddingRight: 0 } },
-      'stylesheet.calendar.header': { header: { height: 0 }, week: { flexDirection: 'row', justifyContent: 'space-around', paddingBottom: 6 } },
-    }),
-    [],
-  );
+export function MonthCalendar({ month, today, selectedDay, marks, onDayPress, onMonthChange, loading }: Props) {
+  // Each use of the header starts the grid afresh, so its Tab stop follows the selection again.
+  const [headerUses, setHeaderUses] = useState(0);
+  const fromHeader = (action: () => void) => () => {
+    setHeaderUses((n) => n + 1);
+    action();
+  };
   return (
     <View style={styles.panel} testID="calendar-month">
       <MonthHeader
         month={month}
         loading={loading}
-        onPrevious={() => onMonthChange(shiftMonth(month, -1))}
-        onNext={() => onMonthChange(shiftMonth(month, 1))}
-        onToday={() => {
+        onPrevious={fromHeader(() => onMonthChange(shiftMonth(month, -1)))}
+        onNext={fromHeader(() => onMonthChange(shiftMonth(month, 1)))}
+        onToday={fromHeader(() => {
           onMonthChange(today.slice(0, 7));
           onDayPress(today);
-        }}
+        })}
       />
-      <Calendar
-        testID="calendar"
-        initialDate={`${month}-01`}
-        firstDay={FIRST_WEEKDAY}
-        markingType="multi-period"
-        markedDates={marks}
-        dayComponent={CalendarDay as never}
-        hideArrows
-        renderHeader={() => null}
-        onDayPress={(date: DateData) => onDayPress(date.dateString)}
-        onMonthChange={(date: DateData) => {
-          const next = date.dateString.slice(0, 7);
-          if (next !== month) onMonthChange(next);
-        }}
-        theme={theme as never}
+      <MonthGrid
+        key={headerUses}
+        month={month}
+        label={monthTitle(month)}
+        today={today}
+        selectedDay={selectedDay}
+        marks={marks}
+        onDayPress={onDayPress}
+        onMonthChange={onMonthChange}
       />
       <CalendarLegend statuses={statusesShown(marks)} />
     </View>

@@ -1,7 +1,8 @@
-// Calendar bars carry the window's title and a label, and their colour per status is the one the legend shows.
+// Calendar bars carry the window's title and a status letter, and their colour and letter per status are the ones
+// the legend shows.
 import { render, screen } from '@testing-library/react-native';
 import { StyleSheet } from 'react-native';
-import { buildMarkedDays, statusColor, statusesShown } from '@/components/calendar/calendar-marks';
+import { buildMarkedDays, STATUS_MARKS, statusColor, statusesShown } from '@/components/calendar/calendar-marks';
 import { CalendarLegend } from '@/components/calendar/calendar-legend';
 import { MonthCalendar } from '@/components/calendar/month-calendar';
 import type { CalendarWindow } from '@/components/calendar/calendar-types';
@@ -44,14 +45,27 @@ test('in the month view, each bar is drawn in its legend swatch colour and the l
   expect(screen.queryByTestId('calendar-legend-planned')).toBeNull();
 });
 
-test('a bar shows the title where the window starts and again on a new week row, with a label of title and status', () => {
+test('a bar shows its status letter on every day, and the title where the window starts and again on a new week row', () => {
   render(<MonthCalendar month="2026-12" today="2026-12-01" marks={marks} onDayPress={() => {}} onMonthChange={() => {}} />);
   const first = screen.getByTestId('calendar.day_2026-12-04-bar-long', { includeHiddenElements: true });
-  expect(first).toHaveTextContent('Fibre splice long');
-  expect(first.props.accessibilityLabel).toBe('Fibre splice long, Underway');
+  expect(first).toHaveTextContent(`${STATUS_MARKS.underway} Fibre splice long`);
+  // The bar is drawing inside a named day cell: no label of its own for a screen reader to trip over.
+  expect(first.props['aria-label']).toBeUndefined();
+  expect(first.props.accessibilityLabel).toBeUndefined();
   // Saturday continues the bar without repeating the title; Monday starts a new row and names it again.
-  expect(screen.getByTestId('calendar.day_2026-12-05-bar-long', { includeHiddenElements: true })).not.toHaveTextContent('Fibre splice long');
-  expect(screen.getByTestId('calendar.day_2026-12-07-bar-long', { includeHiddenElements: true })).toHaveTextContent('Fibre splice long');
-  // The day's own label names its windows too.
-  expect(marks['2026-12-02'].accessibilityLabel).toMatch(/2 windows: Fibre splice a, Draft; Fibre splice b, Cleared/);
+  const saturday = screen.getByTestId('calendar.day_2026-12-05-bar-long', { includeHiddenElements: true });
+  expect(saturday).not.toHaveTextContent('Fibre splice long');
+  expect(saturday).toHaveTextContent(STATUS_MARKS.underway);
+  expect(screen.getByTestId('calendar.day_2026-12-07-bar-long', { includeHiddenElements: true }))
+    .toHaveTextContent(`${STATUS_MARKS.underway} Fibre splice long`);
+  // The day's own name lists its windows with their statuses in words.
+  expect(screen.getByTestId('calendar.day_2026-12-02', { includeHiddenElements: true }))
+    .toHaveAccessibleName('Wed 2 December 2026, 2 windows: Fibre splice a (Draft), Fibre splice b (Cleared)');
+});
+
+test('every status has its own letter, and the legend prints it on the swatch the bars share', () => {
+  expect(new Set(WINDOW_STATUSES.map((s) => STATUS_MARKS[s])).size).toBe(WINDOW_STATUSES.length);
+  render(<CalendarLegend statuses={['draft', 'done']} />);
+  expect(screen.getByTestId('calendar-legend-swatch-draft', { includeHiddenElements: true })).toHaveTextContent(STATUS_MARKS.draft);
+  expect(screen.getByTestId('calendar-legend-done')).toHaveTextContent(/Done/);
 });

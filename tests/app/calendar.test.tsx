@@ -1,5 +1,6 @@
 // Calendar: marks for windows across midnight and freezes, conflict/critical badges, the selected day's agenda,
 // and the list request for the visible month.
+import type { ReactElement } from 'react';
 import { fireEvent, render, screen, within } from '@testing-library/react-native';
 import { buildMarkedDays, windowsOnDay } from '@/components/calendar/calendar-marks';
 import { CalendarView } from '@/components/calendar/calendar-view';
@@ -9,6 +10,15 @@ import { listParams, NO_FILTERS } from '@/components/calendar/window-filters';
 import { windowListPath } from '@/hooks/queries/windows-list';
 import { calendarColors } from '@/constants/theme';
 import { visibleRange } from '@/components/time';
+
+// A real link's own navigation is the browser's; here Link stands in as "a press goes to href".
+const mockPush = jest.fn();
+jest.mock('expo-router', () => ({
+  useRouter: () => ({ push: mockPush }),
+  Link: ({ href, children }: { href: unknown; children: ReactElement<{ onPress?: () => void }> }) =>
+    require('react').cloneElement(children, { href, onPress: () => mockPush(href) }),
+}));
+beforeEach(() => mockPush.mockReset());
 
 const BERLIN = 'Europe/Berlin';
 
@@ -89,7 +99,9 @@ describe('the list request', () => {
   });
 });
 
-function Harness({ onOpenWindow = jest.fn(), canBook = true }: { onOpenWindow?: (id: string) => void; canBook?: boolean }) {
+type HarnessProps = { onOpenWindow?: (id: string) => void; canBook?: boolean; windowHref?: (id: string) => string | null };
+
+function Harness({ onOpenWindow = jest.fn(), canBook = true, windowHref }: HarnessProps) {
   const state = useCalendarState(BERLIN, '2026-12-03');
   return (
     <CalendarView
@@ -102,6 +114,7 @@ function Harness({ onOpenWindow = jest.fn(), canBook = true }: { onOpenWindow?: 
       canBook={canBook}
       onBook={jest.fn()}
       onOpenWindow={onOpenWindow}
+      windowHref={windowHref}
     />
   );
 }
@@ -146,6 +159,34 @@ describe('calendar view', () => {
     fireEvent.press(screen.getByTestId('calendar-next-month'));
     expect(screen.getByTestId('calendar-month-title')).toHaveTextContent('January 2027');
     expect(screen.getByTestId('calendar-agenda-day')).toHaveTextContent('Friday 1 January 2027');
+  });
+
+  test('an agenda row is a link that opens its window on Enter and on Space, and lets other keys pass', () => {
+    const onOpenWindow = jest.fn();
+    render(<Harness onOpenWindow={onOpenWindow} />);
+    const row = screen.getByTestId('agenda-window-w-night');
+    expect(row.props.role).toBe('link');
+    // Its name is its text: title, status in words, time.
+    expect(row).toHaveTextContent(/Window w-night\s*Assessed\s*Thu 3 Dec, 23:00/);
+    const preventDefault = jest.fn();
+    fireEvent(row, 'keyDown', { key: 'Enter', preventDefault });
+    expect(onOpenWindow).toHaveBeenCalledWith('w-night');
+    expect(preventDefault).toHaveBeenCalled();
+    fireEvent(row, 'keyDown', { key: ' ', preventDefault });
+    expect(onOpenWindow).toHaveBeenCalledTimes(2);
+    fireEvent(row, 'keyDown', { key: 'ArrowDown', preventDefault: jest.fn() });
+    expect(onOpenWindow).toHaveBeenCalledTimes(2);
+  });
+
+  test('given an href, the row is a real link to it: a press follows it, and Space opens it too', () => {
+    render(<Harness windowHref={(id) => `/windows/${id}`} />);
+    const row = screen.getByTestId('agenda-window-w-night');
+    expect(row.props.href).toBe('/windows/w-night');
+    fireEvent.press(row);
+    expect(mockPush).toHaveBeenLastCalledWith('/windows/w-night');
+    mockPush.mockReset();
+    fireEvent(row, 'keyDown', { key: ' ', preventDefault: jest.fn() });
+    expect(mockPush).toHaveBeenCalledWith('/windows/w-night');
   });
 
   test('the text filter narrows the windows; "Book a window" only for those who may book', () => {
