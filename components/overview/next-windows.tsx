@@ -1,5 +1,8 @@
-// The next maintenance windows, times shown in the viewer's zone with the zone named in the heading.
-import { Text, View } from 'react-native';
+// The next maintenance windows, times shown in the viewer's zone with the zone named in the heading; each row is
+// a link to the window.
+import { Link } from 'expo-router';
+import { Pressable, Text, View } from 'react-native';
+import { STATUS_LABELS } from '@/components/windows/lifecycle';
 import { nextWindowsCaption } from '@/components/overview/next-windows-caption';
 import type { Overview } from '@/shared/api';
 import { formatWindowRange } from '@/components/time';
@@ -17,13 +20,15 @@ export function NextWindows({ windows, inHorizon, now = new Date() }: Props) {
           {nextWindowsCaption(windows, inHorizon, now)}
         </Text>,
         ...windows.map((window, index) => (
-        <View key={window.id} style={[styles.row, index > 0 && styles.rowDivider]} testID={`next-window-${window.id}`}>
-          <View style={styles.rowMain}>
-            <Text style={styles.lead}>{window.title}</Text>
-            <Text style={styles.when}>{formatWindowRange(window.startsAt, window.endsAt, timeZone)}</Text>
-          </View>
-          <Text style={styles.stage}>{window.status}</Text>
-        </View>
+        <Link key={window.id} href={{ pathname: '/windows/[id]', params: { id: window.id } }} asChild>
+          <Pressable role="link" style={[styles.row, index > 0 && styles.rowDivider]} testID={`next-window-${window.id}`}>
+            <View style={styles.rowMain}>
+              <Text style={styles.lead}>{window.title}</Text>
+              <Text style={styles.when}>{formatWindowRange(window.startsAt, window.endsAt, timeZone)}</Text>
+            </View>
+            <Text style={styles.stage}>{STATUS_LABELS[window.status as keyof typeof STATUS_LABELS] ?? window.status}</Text>
+          </Pressable>
+        </Link>
       ))]}
     </UpcomingPanel>
   );

@@ -1,10 +1,17 @@
 // The overview's list of next windows says how many rows it shows and which of them the 30-day tile counts.
-import { screen } from '@testing-library/react-native';
+import type { ReactElement } from 'react';
+import { fireEvent, screen } from '@testing-library/react-native';
 import { NextWindows } from '@/components/overview/next-windows';
 import { nextWindowsCaption } from '@/components/overview/next-windows-caption';
 import { clearQueries, renderWithQueries, routedFetch } from './window-test-kit';
 
-beforeEach(() => { routedFetch([]); });
+const mockPush = jest.fn();
+jest.mock('expo-router', () => ({
+  Link: ({ href, children }: { href: unknown; children: ReactElement<{ onPress?: () => void }> }) =>
+    require('react').cloneElement(children, { href, onPress: () => mockPush(href) }),
+}));
+
+beforeEach(() => { routedFetch([]); mockPush.mockReset(); });
 afterEach(clearQueries);
 
 const NOW = new Date('2030-03-01T12:00:00Z');
@@ -23,4 +30,14 @@ test('five rows above a tile of 3: the caption accounts for every row', () => {
 test('when more start within 30 days than the list holds, it says how many in all', () => {
   expect(nextWindowsCaption(rows.slice(1, 4), 7, NOW))
     .toBe('3 windows shown, soonest first: 3 starting in the next 30 days (7 start in the next 30 days in all; the calendar shows every one)');
+});
+
+test('each row is a link that opens its window, its stage in words', () => {
+  renderWithQueries(<NextWindows windows={[{ ...rows[1], status: 'in-review' }]} inHorizon={1} now={NOW} />);
+  const row = screen.getByTestId('next-window-b');
+  expect(row.props.role).toBe('link');
+  expect(row.props.href).toEqual({ pathname: '/windows/[id]', params: { id: 'b' } });
+  expect(row).toHaveTextContent(/Window b.*In review/);
+  fireEvent.press(row);
+  expect(mockPush).toHaveBeenCalledWith({ pathname: '/windows/[id]', params: { id: 'b' } });
 });
