@@ -105,7 +105,7 @@ test('an approver enrols for one-time codes, opens the queue on a phone and appr
   await page.getByTestId(`signoff-queue-item-${windowId}`).click();
   await page.getByTestId('signoff-title').waitFor({ timeout: 30_000 });
   await eventually(async () => expect(await page.getByTestId('signoff-critical-caution').isVisible()).toBe(true));
-  await eventually(async () => expect(await page.getByTestId('signoff-moves-lead').innerText()).toMatch(/affected slices? move/));
+  await eventually(async () => expect(await page.getByTestId('signoff-moves-lead').innerText()).toMatch(/\d+ touched slices? of \d+ tenants?: \d+ move/));
   await page.screenshot({ path: path.join(SHOTS, 'signoff-summary-phone.png'), fullPage: true });
 
   await page.getByTestId('signoff-comment').fill('Checked the moves and the MOP; agreed with the service operations team.');
