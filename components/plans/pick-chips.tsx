@@ -80,7 +80,7 @@ const styles = StyleSheet.create({
   label: { ...type.label, color: colors.ink },
   hint: { ...type.caption, color: colors.inkMuted },
   filter: {
-    ...type.body, color: colors.ink, borderWidth: 1, borderColor: colors.border, borderRadius: radii.md,
+    ...type.body, color: colors.ink, borderWidth: 1, borderColor: colors.borderControl, borderRadius: radii.md,
     paddingHorizontal: space.md, paddingVertical: space.sm, backgroundColor: colors.surface,
   },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },

@@ -73,7 +73,7 @@ const styles = StyleSheet.create({
   pressable: { flex: 1 },
   tab: { alignItems: 'center', gap: space.xxs, paddingVertical: space.xs, minHeight: 48 },
   mark: { width: 24, height: 3, borderRadius: 2, backgroundColor: 'transparent', marginBottom: space.xxs },
-  markActive: { backgroundColor: colors.buoy },
+  markActive: { backgroundColor: colors.buoyDeep },
   label: { ...type.caption },
   // Over the icon's top-right corner, as phones show unread counts.
   badge: { position: 'absolute', top: -space.xs, left: space.md },

@@ -61,7 +61,7 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: 48, paddingHorizontal: space.sm, borderRadius: radii.md },
   rowActive: { backgroundColor: colors.primarySoft },
   mark: { width: 3, height: 20, borderRadius: 2, backgroundColor: 'transparent' },
-  markActive: { backgroundColor: colors.buoy },
+  markActive: { backgroundColor: colors.buoyDeep },
   label: { ...type.bodyStrong, color: colors.ink },
   labelActive: { color: colors.primary },
   close: { alignItems: 'center', justifyContent: 'center', minHeight: 48, marginTop: space.xs, borderRadius: radii.md },

@@ -124,7 +124,7 @@ const styles = StyleSheet.create({
     gap: space.xs,
   },
   // Wider border and a bar on the leading edge: the open card differs by shape too, not by colour alone.
-  selected: { borderColor: colors.buoy, borderWidth: 2, borderLeftWidth: 6 },
+  selected: { borderColor: colors.buoyDeep, borderWidth: 2, borderLeftWidth: 6 },
   pressed: { backgroundColor: colors.tide },
   titleLine: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
   fields: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.xs },

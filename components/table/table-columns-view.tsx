@@ -119,7 +119,7 @@ const styles = StyleSheet.create({
     borderLeftWidth: 3,
     borderLeftColor: 'transparent',
   },
-  selected: { backgroundColor: colors.primarySoft, borderLeftColor: colors.buoy },
+  selected: { backgroundColor: colors.primarySoft, borderLeftColor: colors.buoyDeep },
   pressed: { backgroundColor: colors.tide },
   cell: { justifyContent: 'center' },
   cellEnd: { alignItems: 'flex-end' },
