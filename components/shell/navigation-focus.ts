@@ -30,16 +30,38 @@ const activeElement = (): unknown => (typeof document === 'undefined' ? null : d
 const bodyElement = (): unknown => (typeof document === 'undefined' ? null : document.body);
 
 /**
- * On every pathname change after the first, focus the new page's h1 under `getRoot()`. A page still loading has
+ * Whether the person has pressed a key or pointed since the shell mounted. On a fresh load the router may settle
+ * its address after the first render; such a change is not a move the person made and keeps focus where it is.
+ * Without a DOM (native, tests) every change counts.
+ */
+function useHasInteracted() {
+  const interacted = useRef(typeof document === 'undefined');
+  useEffect(() => {
+    if (typeof document === 'undefined') return undefined;
+    const mark = () => { interacted.current = true; };
+    document.addEventListener('keydown', mark, true);
+    document.addEventListener('pointerdown', mark, true);
+    return () => {
+      document.removeEventListener('keydown', mark, true);
+      document.removeEventListener('pointerdown', mark, true);
+    };
+  }, []);
+  return interacted;
+}
+
+/**
+ * On every pathname change the person caused, focus the new page's h1 under `getRoot()`. A page still loading has
  * none yet: then watch the content and focus the h1 when it appears, unless the user has moved focus meanwhile.
  * Returns whether a move has happened since mount (the shell announces page titles only after one).
  */
 export function useFocusHeadingOnNavigation(pathname: string, getRoot: () => unknown): boolean {
   const shownPath = useRef(pathname);
+  const interacted = useHasInteracted();
   const [navigated, setNavigated] = useState(false);
   useEffect(() => {
     if (shownPath.current === pathname) return undefined;
     shownPath.current = pathname;
+    if (!interacted.current) return undefined;
     setNavigated(true);
     const root = getRoot();
     if (!isHeadingRoot(root)) return undefined;
@@ -59,6 +81,6 @@ export function useFocusHeadingOnNavigation(pathname: string, getRoot: () => unk
     });
     observer.observe(root as unknown as Node, { childList: true, subtree: true });
     return () => observer.disconnect();
-  }, [pathname, getRoot]);
+  }, [pathname, getRoot, interacted]);
   return navigated;
 }

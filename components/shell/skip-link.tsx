@@ -4,11 +4,17 @@ import { useState } from 'react';
 import { Pressable, StyleSheet, Text } from 'react-native';
 import { colors, radii, space, type } from '@/constants/theme';
 
+// react-native-web renders a Pressable with an href as an <a>, which the browser activates with Enter (a div with
+// role="link" would not be); href is not in React Native's types, hence the cast.
+const anchorProps = { href: '#main-content' } as object;
+
 export function SkipLink({ onSkip }: { onSkip: () => void }) {
   const [focused, setFocused] = useState(false);
   return (
     <Pressable
-      testID="skip-link" role="link" onPress={onSkip}
+      testID="skip-link" role="link" {...anchorProps}
+      // The shell moves focus itself; following the #fragment would also change the address.
+      onPress={(event) => { event.preventDefault?.(); onSkip(); }}
       onFocus={() => setFocused(true)} onBlur={() => setFocused(false)}
       style={[styles.link, focused ? styles.shown : styles.hidden]}
     >

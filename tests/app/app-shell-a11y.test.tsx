@@ -70,8 +70,12 @@ test('the skip link moves focus to the main content', () => {
   while (node && typeof (node.instance as { focus?: unknown } | null)?.focus !== 'function') node = node.parent;
   const focus = (node?.instance as { focus: jest.Mock }).focus;
   focus.mockClear();
-  fireEvent.press(screen.getByTestId('skip-link'));
+  // On the web it is an <a href="#main-content"> (Enter activates it); the fragment is not followed.
+  expect(screen.getByTestId('skip-link')).toHaveProp('href', '#main-content');
+  const preventDefault = jest.fn();
+  fireEvent.press(screen.getByTestId('skip-link'), { preventDefault });
   expect(focus).toHaveBeenCalledTimes(1);
+  expect(preventDefault).toHaveBeenCalledTimes(1);
 });
 
 test('the live region stays quiet on the first page and says the title of each page moved to', () => {
