@@ -1,5 +1,7 @@
 // Who is signed in (name and roles) and the sign-out action, in a light (top bar) or dark (rail) tone.
+// The name leads to the user's own settings (time zone, one-time codes, open sessions), for every role.
 // `compact` (phones) shows the sign-out action as an icon; its accessible name stays "Sign out".
+import { Link } from 'expo-router';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { Me } from '@/shared/api';
 import { PersonIcon, SignOutIcon } from '@/components/icons';
@@ -14,14 +16,22 @@ export function UserSummary({ user, onSignOut, signingOut, tone, compact = false
   return (
     <View style={styles.row} testID="user-summary">
       {compact ? null : <PersonIcon color={muted} />}
-      <View style={[styles.text, compact && styles.textCompact]}>
-        <Text style={[styles.name, { color: ink }]} numberOfLines={1} testID="user-name">
-          {user.name}
-        </Text>
-        <Text style={[styles.roles, { color: muted }]} numberOfLines={1} testID="user-roles">
-          {user.roles.join(' · ')}
-        </Text>
-      </View>
+      <Link href="/security" asChild>
+        <Pressable
+          role="link"
+          testID="user-account"
+          // Starts with the visible words, so speech users can say what they see.
+          accessibilityLabel={`${user.name}, ${user.roles.join(', ')}: your time zone, codes and sessions`}
+          style={[styles.text, compact && styles.textCompact]}
+        >
+          <Text style={[styles.name, { color: ink }]} numberOfLines={1} testID="user-name">
+            {user.name}
+          </Text>
+          <Text style={[styles.roles, { color: muted }]} numberOfLines={1} testID="user-roles">
+            {user.roles.join(' · ')}
+          </Text>
+        </Pressable>
+      </Link>
       <Pressable
         testID="sign-out"
         role="button"
