@@ -35,7 +35,8 @@ function transparentOf(hex: string): string {
 function Fade({ side, backgroundColor, testID }: { side: 'start' | 'end'; backgroundColor: string; testID: string }) {
   const clear = transparentOf(backgroundColor);
   return (
-    <View pointerEvents="none" style={[styles.fade, side === 'start' ? styles.fadeStart : styles.fadeEnd]} testID={testID}>
+    // Only a visual hint that chips lie past the edge: a screen reader reads every chip anyway.
+    <View pointerEvents="none" aria-hidden style={[styles.fade, side === 'start' ? styles.fadeStart : styles.fadeEnd]} testID={testID}>
       <LinearGradient
         colors={side === 'start' ? [backgroundColor, clear] : [clear, backgroundColor]}
         start={{ x: 0, y: 0.5 }}
