@@ -34,7 +34,7 @@ function Frame({ title, subtitle, onClose, onOpen, children }: FrameProps) {
       <View style={styles.head}>
         <View style={styles.headText}>
           <Text style={styles.subtitle}>{subtitle}</Text>
-          <Text style={styles.title} numberOfLines={2}>{title}</Text>
+          <Text style={styles.title} numberOfLines={2} role="heading" aria-level={2} testID="map-selection-title">{title}</Text>
           {onOpen ? (
             <Pressable onPress={onOpen} role="link" testID="map-selection-open" style={styles.open}>
               <Text style={styles.openText}>Open full details →</Text>
@@ -65,7 +65,7 @@ function SiteSelection({ id, onClose, onOpenSlice, onOpen }: Part) {
   const query = useSiteQuery(id);
   const d = query.data;
   return (
-    <Frame title={d?.site.name ?? id} subtitle={d ? `${KIND_LABELS[d.site.kind]} site · ${id}` : 'Site'} onClose={onClose} onOpen={onOpen}>
+    <Frame title={d?.site.name ?? 'Site'} subtitle={d ? `${KIND_LABELS[d.site.kind]}${d.site.kind === 'cell-site' ? '' : ' site'}` : 'Loading…'} onClose={onClose} onOpen={onOpen}>
       {!d ? <Waiting error={query.error} onRetry={() => void query.refetch()} /> : (
         <>
           <View style={styles.facts}>
@@ -84,7 +84,7 @@ function SpanSelection({ id, onClose, onOpenSlice, onOpen }: Part) {
   const query = useSpanQuery(id);
   const d = query.data;
   return (
-    <Frame title={d ? `${d.span.aName} — ${d.span.bName}` : id} subtitle={`Span · ${id}`} onClose={onClose} onOpen={onOpen}>
+    <Frame title={d ? `${d.span.aName} — ${d.span.bName}` : 'Span'} subtitle={d ? 'Span' : 'Loading…'} onClose={onClose} onOpen={onOpen}>
       {!d ? <Waiting error={query.error} onRetry={() => void query.refetch()} /> : (
         <>
           <View style={styles.facts}>

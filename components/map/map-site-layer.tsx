@@ -1,11 +1,13 @@
 // Site glyphs by kind (filled by compute load), tone halos, name labels for the bigger sites, and 44 px tap circles.
+// Pointer only and hidden from assistive technology with the rest of the drawing: the list beside the map
+// (map-element-list.tsx) names each site with its load.
 import { Circle, G, Path, Text as SvgText } from 'react-native-svg';
-import { formatUtilisation, utilisationColour } from '@/components/map/colour-scale';
+import { utilisationColour } from '@/components/map/colour-scale';
 import type { PlacedSite } from '@/components/map/map-geometry';
 import type { EmphasisLookup } from '@/components/map/map-highlight';
 import type { MapSiteKind } from '@/components/map/map-types';
 import { labelAnchor, type LabelSide } from '@/components/map/map-labels';
-import { GLYPH_RADIUS_PX, glyphPath, KIND_LABELS, KIND_ORDER } from '@/components/map/site-glyphs';
+import { GLYPH_RADIUS_PX, glyphPath, KIND_ORDER } from '@/components/map/site-glyphs';
 import { TONE_COLOURS } from '@/components/map/map-tones';
 import { fonts, MAP_DIMMED_OPACITY, mapColors } from '@/constants/theme';
 
@@ -43,7 +45,6 @@ export function MapSiteLayer({ sites, emphasis, selectedId, compact, labelled, o
             testID={`map-site-${site.id}`}
             opacity={dimmed ? MAP_DIMMED_OPACITY : 1}
             onPress={() => onPress(site.id)}
-            accessibilityLabel={`${KIND_LABELS[site.kind]} site ${site.name}, compute ${formatUtilisation(site.cpuUtilisation)} used`}
           >
             {selected ? <Circle cx={site.x} cy={site.y} r={r + 6} fill={mapColors.selection} /> : null}
             {tone ? <Circle cx={site.x} cy={site.y} r={r + 5} fill={TONE_COLOURS[tone]} fillOpacity={0.4} /> : null}

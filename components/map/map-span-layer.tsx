@@ -1,6 +1,7 @@
 // Spans as lines coloured by utilisation, with a tone halo when highlighted and a wide invisible band to tap.
+// Pointer only, like the site layer; the list beside the map names each span with its load.
 import { G, Line } from 'react-native-svg';
-import { utilisationColour, formatUtilisation } from '@/components/map/colour-scale';
+import { utilisationColour } from '@/components/map/colour-scale';
 import type { PlacedSpan } from '@/components/map/map-geometry';
 import type { EmphasisLookup } from '@/components/map/map-highlight';
 import { TONE_COLOURS } from '@/components/map/map-tones';
@@ -36,7 +37,6 @@ export function MapSpanLayer({ spans, emphasis, selectedId, compact, onPress }: 
             testID={`map-span-${span.id}`}
             opacity={dimmed ? MAP_DIMMED_OPACITY : 1}
             onPress={() => onPress(span.id)}
-            accessibilityLabel={`Span ${span.id}, ${span.capacityGbps} Gbit/s, ${formatUtilisation(span.utilisation)} used`}
           >
             {selectedId === span.id ? <Line {...ends} stroke={mapColors.selection} strokeWidth={width + 8} strokeLinecap="round" /> : null}
             {tone ? <Line {...ends} stroke={TONE_COLOURS[tone]} strokeOpacity={0.4} strokeWidth={width + 7} strokeLinecap="round" /> : null}

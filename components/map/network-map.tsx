@@ -96,7 +96,8 @@ export function NetworkMap(props: NetworkMapProps) {
         onLayout={onLayout}
         {...gestures.panHandlers}
       >
-        <Svg width={size.widthPx} height={size.heightPx} accessibilityLabel={`Map of ${data.name ?? "the network"}`}>
+        {/* One image to assistive technology: its groups are drawing, not content (screens list the elements in text). */}
+        <Svg width={size.widthPx} height={size.heightPx} role="img" accessibilityLabel={`Map of ${data.name ?? 'the network'}`}>
           <Rect x={0} y={0} width={size.widthPx} height={size.heightPx} fill={mapColors.sea} />
           {geometry.outlinePath ? (
             <Path d={geometry.outlinePath} fill={mapColors.land} stroke={mapColors.coast} strokeWidth={1} fillRule="evenodd" testID="map-outline" />

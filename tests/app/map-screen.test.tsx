@@ -78,3 +78,22 @@ test('tapping a site opens the panel with the slices hosted there, each leading 
   fireEvent.press(screen.getByTestId('map-selection-close'));
   expect(screen.queryByTestId('map-selection')).toBeNull();
 });
+
+test('the page is headed "Network map"; a site picked from the list opens the panel with its load in words', async () => {
+  const site = data.sites[0];
+  fetchMock.mockImplementation(async (url) =>
+    String(url) === '/api/network/map' ? reply(200, data) : reply(200, siteDetail(site.id)));
+  renderScreen();
+  const heading = await screen.findByTestId('map-heading');
+  expect(heading).toHaveTextContent('Network map');
+  expect(heading.props['aria-level']).toBe(1);
+  // The drawing's groups are pointer targets only: their names live in the list, not on role-less groups.
+  expect(screen.getByTestId(`map-site-${site.id}`).props.accessibilityLabel).toBeUndefined();
+  expect(screen.getByTestId(`map-span-${data.spans[0].id}`).props.accessibilityLabel).toBeUndefined();
+  fireEvent.press(screen.getByTestId('map-list-toggle'));
+  fireEvent.press(screen.getByTestId(`map-list-site-${site.id}`));
+  expect(await screen.findByText('Harbour cameras')).toBeTruthy();
+  expect(screen.getByTestId('map-selection-title')).toHaveTextContent(site.name);
+  expect(screen.getByTestId('map-selection')).toHaveTextContent(/Compute used\s*25 % of 64 vCPU/);
+  expect(screen.getByTestId(`map-list-site-${site.id}`).props['aria-pressed']).toBe(true);
+});
