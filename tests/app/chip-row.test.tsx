@@ -21,16 +21,20 @@ function renderRow() {
   return screen.UNSAFE_getByType(ScrollView);
 }
 
+/** The edge hints are drawn for eyes only (aria-hidden), so queries must be told to look at hidden elements. */
+const HIDDEN = { includeHiddenElements: true };
+
 test('the row shows its hints from measured sizes and follows scrolling', () => {
   const scroller = renderRow();
-  expect(screen.queryByTestId('row-more-after')).toBeNull();
+  expect(screen.queryByTestId('row-more-after', HIDDEN)).toBeNull();
   fireEvent(scroller, 'layout', { nativeEvent: { layout: { width: 200, height: 40, x: 0, y: 0 } } });
   fireEvent(scroller, 'contentSizeChange', 180, 40);
-  expect(screen.queryByTestId('row-more-after')).toBeNull();
+  expect(screen.queryByTestId('row-more-after', HIDDEN)).toBeNull();
   fireEvent(scroller, 'contentSizeChange', 420, 40);
-  expect(screen.getByTestId('row-more-after')).toBeTruthy();
-  expect(screen.queryByTestId('row-more-before')).toBeNull();
-  fireEvent.scroll(scroller, { nativeEvent: { contentOffset: { x: 220, y: 0 } } });
-  expect(screen.getByTestId('row-more-before')).toBeTruthy();
+  expect(screen.getByTestId('row-more-after', HIDDEN)).toBeTruthy();
   expect(screen.queryByTestId('row-more-after')).toBeNull();
+  expect(screen.queryByTestId('row-more-before', HIDDEN)).toBeNull();
+  fireEvent.scroll(scroller, { nativeEvent: { contentOffset: { x: 220, y: 0 } } });
+  expect(screen.getByTestId('row-more-before', HIDDEN)).toBeTruthy();
+  expect(screen.queryByTestId('row-more-after', HIDDEN)).toBeNull();
 });
