@@ -110,7 +110,7 @@ test('after a move, focus goes to the shown h1 (made focusable by script only); 
   const shown = fakeHeading();
   const root = fakeRoot([hidden, shown]);
   const getRoot = () => root;
-  const { rerender, result } = renderHook(({ path }) => useFocusHeadingOnNavigation(path, getRoot), { initialProps: { path: '/' } });
+  const { rerender, result } = renderHook(({ path }: { path: string }) => useFocusHeadingOnNavigation(path, getRoot), { initialProps: { path: '/' } });
   expect(shown.focus).not.toHaveBeenCalled();
   expect(result.current).toBe(false);
   rerender({ path: '/slices/s-1' });
@@ -135,7 +135,7 @@ test('a page still loading gets focus on its h1 once the h1 appears', () => {
   try {
     const root = fakeRoot([]);
     const getRoot = () => root;
-    const { rerender } = renderHook(({ path }) => useFocusHeadingOnNavigation(path, getRoot), { initialProps: { path: '/' } });
+    const { rerender } = renderHook(({ path }: { path: string }) => useFocusHeadingOnNavigation(path, getRoot), { initialProps: { path: '/' } });
     rerender({ path: '/windows/w-1' });
     expect(observers).toHaveLength(1);
     const heading = fakeHeading();
