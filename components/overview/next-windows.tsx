@@ -19,17 +19,22 @@ export function NextWindows({ windows, inHorizon, now = new Date() }: Props) {
         <Text key="caption" style={styles.when} testID="overview-next-windows-caption">
           {nextWindowsCaption(windows, inHorizon, now)}
         </Text>,
-        ...windows.map((window, index) => (
-        <Link key={window.id} href={{ pathname: '/windows/[id]', params: { id: window.id } }} asChild>
-          <Pressable role="link" style={[styles.row, index > 0 && styles.rowDivider]} testID={`next-window-${window.id}`}>
-            <View style={styles.rowMain}>
-              <Text style={styles.lead}>{window.title}</Text>
-              <Text style={styles.when}>{formatWindowRange(window.startsAt, window.endsAt, timeZone)}</Text>
+        <View key="list" role="list" aria-label="Next windows" testID="overview-next-windows-list">
+          {windows.map((window, index) => (
+            <View key={window.id} role="listitem">
+              <Link href={{ pathname: '/windows/[id]', params: { id: window.id } }} asChild>
+                <Pressable role="link" style={[styles.row, index > 0 && styles.rowDivider]} testID={`next-window-${window.id}`}>
+                  <View style={styles.rowMain}>
+                    <Text style={styles.lead}>{window.title}</Text>
+                    <Text style={styles.when}>{formatWindowRange(window.startsAt, window.endsAt, timeZone)}</Text>
+                  </View>
+                  <Text style={styles.stage}>{STATUS_LABELS[window.status as keyof typeof STATUS_LABELS] ?? window.status}</Text>
+                </Pressable>
+              </Link>
             </View>
-            <Text style={styles.stage}>{STATUS_LABELS[window.status as keyof typeof STATUS_LABELS] ?? window.status}</Text>
-          </Pressable>
-        </Link>
-      ))]}
+          ))}
+        </View>,
+      ]}
     </UpcomingPanel>
   );
 }

@@ -41,3 +41,12 @@ test('each row is a link that opens its window, its stage in words', () => {
   fireEvent.press(row);
   expect(mockPush).toHaveBeenCalledWith({ pathname: '/windows/[id]', params: { id: 'b' } });
 });
+
+test('the rows form a list named like the panel, one list item per window', () => {
+  renderWithQueries(<NextWindows windows={rows} inHorizon={3} now={NOW} />);
+  const list = screen.getByTestId('overview-next-windows-list');
+  expect(list.props.role).toBe('list');
+  expect(list.props['aria-label']).toBe('Next windows');
+  const items = list.findAll((n) => typeof n.type === 'string' && n.props.role === 'listitem');
+  expect(items).toHaveLength(rows.length);
+});
