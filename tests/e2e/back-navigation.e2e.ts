@@ -4,9 +4,10 @@
 // app here with React error #185). The data the lists need is prepared through the API: a notified window (mail in
 // the Outbox, a notice for the demo tenant) and a window waiting for sign-off (the approver's queue). The sign-off
 // policy is set to one approval without a code for the test and put back afterwards; both windows are withdrawn.
-import type { APIRequestContext, Browser, BrowserContext, Page } from 'playwright-core';
-import { apiAs as apiAsUser, prepareNotifiedWindow, prepareSubmittedWindow, setSignoffPolicies, slotAhead, withdrawWindow } from './helpers/api';
-import { BASE_URL, launchBrowser, screenshotPath, submitSignIn } from './helpers/browser';
+import type { Page } from 'playwright-core';
+import { prepareNotifiedWindow, prepareSubmittedWindow, slotAhead } from './helpers/api';
+import { screenshotPath, submitSignIn } from './helpers/browser';
+import { suiteUnderPolicies } from './helpers/suite';
 import { eventually } from './helpers/eventually';
 
 const PHONE = { width: 390, height: 844 };
@@ -51,32 +52,16 @@ const ROLES: { email: string; areas: Area[] }[] = [
   { email: 'tenant@demo.test', areas: [SLICES, NETWORK, NOTICES] },
 ];
 
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-let admin: APIRequestContext;
-let savedPolicies: Record<string, unknown> | null = null;
-const windowIds: string[] = [];
-
-const apiAs = (email: string) => apiAsUser(browser, email, contexts);
+const suite = suiteUnderPolicies({ signoffQuorumLow: 1, signoffQuorumHigh: 1, signoffRequireCode: false });
 
 beforeAll(async () => {
-  browser = await launchBrowser();
-  admin = await apiAs('admin@demo.test');
-  savedPolicies = await setSignoffPolicies(admin, { signoffQuorumLow: 1, signoffQuorumHigh: 1, signoffRequireCode: false });
-  const planner = await apiAs('planner@demo.test');
+  const planner = await suite.apiAs('planner@demo.test');
   const booking = (days: number) => ({
     title: `E2E back ${days} ${Date.now().toString(36)}`, ...slotAhead(days, 2), workType: 'hardware replacement',
     elements: [{ kind: 'site' as const, id: SITE_ID, effect: 'down' as const }],
   });
-  windowIds.push(await prepareNotifiedWindow(planner, await apiAs('approver@demo.test'), booking(NOTIFIED_DAYS_AHEAD)));
-  windowIds.push(await prepareSubmittedWindow(planner, booking(IN_REVIEW_DAYS_AHEAD)));
-});
-
-afterAll(async () => {
-  if (savedPolicies) await admin.patch(`${BASE_URL}/api/policies`, { data: savedPolicies }).catch(() => undefined);
-  for (const id of windowIds) await withdrawWindow(admin, id);
-  for (const context of contexts) await context.close().catch(() => undefined);
-  await browser?.close();
+  suite.windowIds.push(await prepareNotifiedWindow(planner, await suite.apiAs('approver@demo.test'), booking(NOTIFIED_DAYS_AHEAD)));
+  suite.windowIds.push(await prepareSubmittedWindow(planner, booking(IN_REVIEW_DAYS_AHEAD)));
 });
 
 /** On the calendar: the month, then the day of the notified window, whose agenda then lists it. */
@@ -128,8 +113,8 @@ async function goBack(page: Page, area: Area, way: Way) {
 
 describe.each(ROLES)('back from a detail on a phone, as $email', ({ email, areas }) => {
   test(`list → detail → back by link, tab and browser in ${areas.map((a) => a.key).join(', ')}`, async () => {
-    const context = await browser.newContext({ viewport: PHONE });
-    contexts.push(context);
+    const context = await suite.browser.newContext({ viewport: PHONE });
+    suite.contexts.push(context);
     const page = await context.newPage();
     const pageErrors: string[] = [];
     page.on('pageerror', (error) => pageErrors.push(error.message));

@@ -5,9 +5,10 @@
 // tenant with a touched slice. The window is booked through the API (booking itself is windows.e2e.ts) on a site
 // whose slices belong to more than one tenant. Sign-off is set to two approvals without codes for the test (codes
 // are signoff.e2e.ts) and put back afterwards; the windows are withdrawn at the end.
-import type { APIRequestContext, Browser, BrowserContext, Page } from 'playwright-core';
-import { apiAs as apiAsUser, ok, setSignoffPolicies, slotAhead, withdrawWindow } from './helpers/api';
-import { BASE_URL, launchBrowser, screenshotPath, submitSignIn } from './helpers/browser';
+import type { Page } from 'playwright-core';
+import { ok, slotAhead } from './helpers/api';
+import { BASE_URL, screenshotPath, submitSignIn } from './helpers/browser';
+import { suiteUnderPolicies } from './helpers/suite';
 import { eventually } from './helpers/eventually';
 
 const PLAN_TIME_LIMIT_SECONDS = 3;
@@ -24,33 +25,14 @@ const SIZES: Size[] = [
   { name: 'wide', viewport: { width: 1280, height: 800 }, site: 'edge-lirrenford', daysAhead: 30 },
 ];
 
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-let admin: APIRequestContext;
-let savedPolicies: Record<string, unknown> | null = null;
-const windowIds: string[] = [];
-
-const apiAs = (email: string) => apiAsUser(browser, email, contexts);
-
-beforeAll(async () => {
-  browser = await launchBrowser();
-  admin = await apiAs('admin@demo.test');
-  savedPolicies = await setSignoffPolicies(admin, { signoffQuorumLow: 2, signoffQuorumHigh: 2, signoffRequireCode: false });
-});
-
-afterAll(async () => {
-  if (savedPolicies) await admin.patch(`${BASE_URL}/api/policies`, { data: savedPolicies }).catch(() => undefined);
-  for (const id of windowIds) await withdrawWindow(admin, id);
-  for (const context of contexts) await context.close().catch(() => undefined);
-  await browser?.close();
-});
+const suite = suiteUnderPolicies({ signoffQuorumLow: 2, signoffQuorumHigh: 2, signoffRequireCode: false });
 
 /** The page in use, for a screenshot of where a failing run stopped. */
 let current: Page | null = null;
 
 async function signedIn(email: string, size: Size): Promise<Page> {
-  const context = await browser.newContext({ viewport: size.viewport });
-  contexts.push(context);
+  const context = await suite.browser.newContext({ viewport: size.viewport });
+  suite.contexts.push(context);
   const page = await context.newPage();
   current = page;
   await submitSignIn(page, email);
@@ -109,7 +91,7 @@ describe.each(SIZES)('the whole job on the $name layout', (size) => {
 });
 
 async function wholeJob(size: Size) {
-    const planner = await apiAs('planner@demo.test');
+    const planner = await suite.apiAs('planner@demo.test');
     const booked = await ok(planner.post(`${BASE_URL}/api/windows`, {
       data: {
         title: `E2E whole job ${size.name} ${Date.now().toString(36)}`, ...slotAhead(size.daysAhead, 1), workType: 'software upgrade',
@@ -117,7 +99,7 @@ async function wholeJob(size: Size) {
       },
     }), 'book');
     const windowId = booked.window.id as string;
-    windowIds.push(windowId);
+    suite.windowIds.push(windowId);
 
     // Window: booked, so the next step is the assessment.
     const page = await signedIn('planner@demo.test', size);
