@@ -40,7 +40,7 @@ export function SiteDetailView({ detail }: { detail: SiteDetail }) {
   return (
     <DetailFrame
       testID="site-detail"
-      kicker={`${siteKindLabel(site.kind)} site · ${site.id}`}
+      kicker={`${siteKindLabel(site.kind)} site`}
       title={site.name}
       backHref="/network"
       backLabel="Network"

@@ -22,7 +22,7 @@ export function SliceDetailView({ detail }: { detail: SliceDetail }) {
   return (
     <DetailFrame
       testID="slice-detail"
-      kicker={`${slice.tenantName} · ${slice.id}`}
+      kicker={slice.tenantName}
       title={slice.name}
       backHref="/slices"
       backLabel="Slices"

@@ -26,7 +26,7 @@ export function SpanDetailView({ detail }: { detail: SpanDetail }) {
   return (
     <DetailFrame
       testID="span-detail"
-      kicker={`Span · ${span.id}`}
+      kicker={`Span · ${span.lengthKm} km`}
       title={`${span.aName} – ${span.bName}`}
       backHref="/network"
       backLabel="Network"

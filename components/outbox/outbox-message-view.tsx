@@ -15,7 +15,7 @@ export function OutboxMessageView({ message }: { message: OutboxMessage }) {
   const zone = useViewerTimeZone();
   return (
     <DetailFrame
-      kicker={`Message ${message.id} · ${formatSizeBytes(message.sizeBytes)}`}
+      kicker={`Message · ${formatSizeBytes(message.sizeBytes)}`}
       title={message.subject ?? '(no subject)'}
       backHref="/outbox"
       backLabel="Outbox"

@@ -2,8 +2,10 @@
 import { useOtpConfirmMutation, useOtpEnrolMutation, useOtpRemoveMutation, useOtpStatusQuery } from '@/hooks/queries/signoff';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { OtpEnrolmentView } from '@/components/signoff/otp-enrolment';
+import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 
 export function OtpSection() {
+  const timeZone = useViewerTimeZone();
   const status = useOtpStatusQuery();
   const enrol = useOtpEnrolMutation();
   const confirm = useOtpConfirmMutation();
@@ -14,6 +16,7 @@ export function OtpSection() {
   return (
     <OtpEnrolmentView
       status={status.data}
+      timeZone={timeZone}
       enrolment={status.data.enrolled ? null : enrol.data ?? null}
       starting={enrol.isPending} confirming={confirm.isPending} removing={remove.isPending}
       error={error?.message ?? null}

@@ -4,10 +4,13 @@ import { StyleSheet, Text, View } from 'react-native';
 import type { OtpEnrolment, OtpStatus } from '@/shared/signoff';
 import { Button } from '@/components/button';
 import { CodeEntry, OtpKeySteps } from '@/components/signoff/otp-key-steps';
+import { formatInstant } from '@/components/time';
 import { colors, space, type } from '@/constants/theme';
 
 type Props = {
   status: OtpStatus;
+  /** the reader's zone, for the day the codes were set up */
+  timeZone: string;
   enrolment: OtpEnrolment | null;
   starting: boolean;
   confirming: boolean;
@@ -27,7 +30,7 @@ export function OtpEnrolmentView(props: Props) {
       {props.error ? <Text style={styles.error} role="alert" testID="otp-error">{props.error}</Text> : null}
       {status.enrolled ? (
         <View style={styles.block} testID="otp-enrolled">
-          <Text style={styles.strong}>Codes are set up{status.confirmedAt ? ` since ${status.confirmedAt.slice(0, 10)}` : ''}.</Text>
+          <Text style={styles.strong}>Codes are set up{status.confirmedAt ? ` since ${formatInstant(status.confirmedAt, props.timeZone)}` : ''}.</Text>
           <Text style={styles.muted}>To remove them (for a new phone), confirm with a current code. Lost your phone? Ask an admin to reset them.</Text>
           <CodeEntry label="Current code" action="Remove codes" busy={props.removing} onSubmit={props.onRemove} testID="otp-remove" />
         </View>

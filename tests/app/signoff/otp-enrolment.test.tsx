@@ -12,7 +12,7 @@ const enrolment = {
   qrSvg: '<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 29 29"><path d="M0 0h29v29H0z" fill="#fff"/></svg>',
 };
 
-const base = { starting: false, confirming: false, removing: false, error: null, onStart: jest.fn(), onRemove: jest.fn() };
+const base = { timeZone: 'Etc/GMT+1', starting: false, confirming: false, removing: false, error: null, onStart: jest.fn(), onRemove: jest.fn() };
 
 test('before enrolling: one button that starts it', () => {
   const onStart = jest.fn();
@@ -37,7 +37,8 @@ test('while enrolling: the QR code, the key as text, and a confirm that takes si
 test('enrolled: says so, and removing asks for a current code', () => {
   const onRemove = jest.fn();
   renderWithQueries(<OtpEnrolmentView {...base} onRemove={onRemove} status={{ enrolled: true, confirmedAt: '2030-01-02T10:00:00.000Z' }} enrolment={null} onConfirm={jest.fn()} />);
-  expect(screen.getByTestId('otp-enrolled')).toHaveTextContent(/set up since 2030-01-02/);
+  // 10:00 UTC is 09:00 in the network's zone (UTC−1), said in words with the zone, never as an ISO string.
+  expect(screen.getByTestId('otp-enrolled')).toHaveTextContent(/set up since Wed 2 Jan, 09:00 GMT-1\./);
   fireEvent.changeText(screen.getByTestId('otp-remove-code'), '123456');
   fireEvent.press(screen.getByTestId('otp-remove-submit'));
   expect(onRemove).toHaveBeenCalledWith('123456');
