@@ -22,7 +22,8 @@ export function UserSummary({ user, onSignOut, signingOut, tone, compact = false
           testID="user-account"
           // Starts with the visible words, so speech users can say what they see.
           accessibilityLabel={`${user.name}, ${user.roles.join(', ')}: your time zone, codes and sessions`}
-          style={[styles.text, compact && styles.textCompact]}
+          // Flattened: Link's asChild merge spreads a style array into an object, which crashes on the web.
+          style={StyleSheet.flatten([styles.text, compact && styles.textCompact])}
         >
           <Text style={[styles.name, { color: ink }]} numberOfLines={1} testID="user-name">
             {user.name}
