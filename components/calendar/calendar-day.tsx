@@ -1,6 +1,7 @@
 // One day cell of the month grid: the date (today ringed, the selection filled), a conflict dot, the windows' bars
-// on their lanes with a status cue in text, "+n" for more, and freeze hatching behind. A grid cell with one
-// accessible name (see day-label.ts); the month grid moves focus between cells with the arrow keys.
+// on their lanes with a status cue in text, "+n" for more, and freeze hatching behind. A grid cell (selected or
+// not) holding the day's button with one accessible name (see day-label.ts); the month grid moves focus between
+// the buttons with the arrow keys.
 import type { Ref } from 'react';
 import { Pressable, StyleSheet, Text, useWindowDimensions, View, type Role, type View as ViewType } from 'react-native';
 import { calendarColors, colors, fonts, radii, space, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
@@ -31,6 +32,7 @@ type Props = {
 export const DAY_CELL_HEIGHT_PX = { phone: 76, wide: 92 } as const;
 const BAR_HEIGHT_PX = { phone: 12, wide: 15 } as const;
 const BAR_FONT_PX = { phone: 9, wide: 11 } as const;
+const NUMBER_ROW_HEIGHT_PX = 28;
 
 export function CalendarDay({ day, outside, mark, tabStop, onPress, onKeyDown, cellRef, testID }: Props) {
   const selected = mark?.selected === true;
@@ -38,26 +40,10 @@ export function CalendarDay({ day, outside, mark, tabStop, onPress, onKeyDown, c
   const frozen = (mark?.freezeTitles.length ?? 0) > 0;
   const size = useWindowDimensions().width >= WIDE_LAYOUT_MIN_WIDTH_PX ? 'wide' : 'phone';
   return (
-    <Pressable
-      ref={cellRef}
-      testID={testID}
-      role={GRIDCELL_ROLE}
-      aria-label={dayLabel(day, mark)}
-      aria-selected={selected}
-      aria-current={today ? 'date' : undefined}
-      tabIndex={tabStop ? 0 : -1}
-      onPress={() => onPress(day)}
-      {...keyDownProps((event) => onKeyDown(day, event))}
-      style={({ pressed }) => [styles.cell, { height: DAY_CELL_HEIGHT_PX[size] }, pressed && styles.pressed]}
-    >
+    <View role={GRIDCELL_ROLE} aria-selected={selected} testID={`${testID}-cell`} style={[styles.cell, { height: DAY_CELL_HEIGHT_PX[size] }]}>
       {frozen ? <FreezeHatch /> : null}
-      <View style={styles.numberRow}>
-        <View style={[styles.number, today && styles.today, selected && styles.selected]}>
-          <Text style={[styles.numberText, outside && styles.outside, selected && styles.selectedText]}>{Number(day.slice(8))}</Text>
-        </View>
-        {mark?.hasConflict ? <View style={styles.conflictDot} testID={`${testID}-conflict`} /> : null}
-      </View>
-      <View style={[styles.lanes, outside && styles.faded]}>
+      {/* The bars repeat what the day's name already says, so assistive technology skips them. */}
+      <View style={[styles.lanes, outside && styles.faded]} aria-hidden>
         {(mark?.periods ?? []).map((period, lane) => (
           <View
             key={lane}
@@ -80,21 +66,44 @@ export function CalendarDay({ day, outside, mark, tabStop, onPress, onKeyDown, c
           </View>
         ))}
       </View>
-      {mark && mark.overflowCount > 0 ? <Text style={styles.more}>+{mark.overflowCount}</Text> : null}
-    </Pressable>
+      {mark && mark.overflowCount > 0 ? <Text style={styles.more} aria-hidden>+{mark.overflowCount}</Text> : null}
+      {/* The day's button covers the whole cell for the pointer; its only text is the date, which its name starts
+          from, so the name holds what is visible (the bars' words sit outside it). */}
+      <Pressable
+        ref={cellRef}
+        testID={testID}
+        role="button"
+        aria-label={dayLabel(day, mark)}
+        aria-current={today ? 'date' : undefined}
+        tabIndex={tabStop ? 0 : -1}
+        onPress={() => onPress(day)}
+        {...keyDownProps((event) => onKeyDown(day, event))}
+        style={styles.button}
+      >
+        <View style={styles.numberRow}>
+          <View style={[styles.number, today && styles.today, selected && styles.selected]}>
+            <Text style={[styles.numberText, outside && styles.outside, selected && styles.selectedText]}>{Number(day.slice(8))}</Text>
+          </View>
+          {mark?.hasConflict ? <View style={styles.conflictDot} testID={`${testID}-conflict`} /> : null}
+        </View>
+      </Pressable>
+    </View>
   );
 }
 
 const styles = StyleSheet.create({
+  // Seven equal columns whatever the bars' titles say.
   cell: {
+    flex: 1,
+    minWidth: 0,
     alignSelf: 'stretch',
     paddingTop: space.xs,
     borderTopWidth: 1,
     borderTopColor: colors.surfaceSunken,
     overflow: 'hidden',
   },
-  pressed: { backgroundColor: colors.primarySoft },
-  numberRow: { flexDirection: 'row', justifyContent: 'center', alignItems: 'center', height: 28 },
+  button: { ...StyleSheet.absoluteFillObject, paddingTop: space.xs },
+  numberRow: { flexDirection: 'row', justifyContent: 'center', alignItems: 'center', height: NUMBER_ROW_HEIGHT_PX },
   number: { width: 28, height: 28, borderRadius: radii.pill, alignItems: 'center', justifyContent: 'center' },
   today: { borderWidth: 2, borderColor: calendarColors.todayRing },
   selected: { backgroundColor: calendarColors.selectedFill, borderColor: calendarColors.selectedFill },
@@ -112,7 +121,8 @@ const styles = StyleSheet.create({
     borderRadius: radii.pill,
     backgroundColor: calendarColors.conflict,
   },
-  lanes: { marginTop: 3, gap: 2 },
+  // Below the date, which the button draws on top.
+  lanes: { marginTop: NUMBER_ROW_HEIGHT_PX + 3, gap: 2 },
   faded: { opacity: 0.45 },
   bar: { overflow: 'hidden', justifyContent: 'center' },
   // White on the status tones; a dark halo keeps it legible on the paler ones (draft, withdrawn).

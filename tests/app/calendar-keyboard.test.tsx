@@ -109,16 +109,21 @@ describe('the month grid', () => {
     expect(headers[0]).toHaveTextContent('Mon');
     // 30 Nov (Monday) to 3 Jan: five weeks, each a row.
     expect(screen.getByTestId('calendar-week-2026-11-30', { includeHiddenElements: true }).props.role).toBe('row');
-    expect(cell('2026-12-03').props.role).toBe('gridcell');
+    // Each cell holds the day's button, named in full; the cell carries the selection.
+    expect(screen.getByTestId('calendar.day_2026-12-03-cell', { includeHiddenElements: true }).props.role).toBe('gridcell');
+    expect(cell('2026-12-03').props.role).toBe('button');
     expect(cell('2026-12-03')).toHaveAccessibleName('Thu 3 December 2026, no windows');
   });
 
-  test('marks the selected day with aria-selected and today with aria-current="date", no other day', () => {
+  test('marks the selected day\'s cell with aria-selected and today\'s button with aria-current="date", no other day', () => {
     render(<Harness />);
-    const all = screen.getAllByTestId(/^calendar\.day_\d{4}-\d{2}-\d{2}$/, { includeHiddenElements: true });
-    expect(all.filter((c) => c.props['aria-selected'] === true || c.props.accessibilityState?.selected === true).map((c) => c.props.testID))
-      .toEqual(['calendar.day_2026-12-03']);
-    expect(all.filter((c) => c.props['aria-current'] === 'date').map((c) => c.props.testID)).toEqual(['calendar.day_2026-12-01']);
+    const cells = screen.getAllByTestId(/^calendar\.day_\d{4}-\d{2}-\d{2}-cell$/, { includeHiddenElements: true });
+    expect(cells).toHaveLength(35);
+    expect(cells.filter((c) => c.props['aria-selected'] === true).map((c) => c.props.testID)).toEqual(['calendar.day_2026-12-03-cell']);
+    const buttons = screen.getAllByTestId(/^calendar\.day_\d{4}-\d{2}-\d{2}$/, { includeHiddenElements: true });
+    expect(buttons.filter((b) => b.props['aria-current'] === 'date').map((b) => b.props.testID)).toEqual(['calendar.day_2026-12-01']);
+    // aria-selected belongs to the grid cell, never to a button.
+    expect(buttons.filter((b) => b.props['aria-selected'] !== undefined)).toHaveLength(0);
   });
 
   test('one Tab stop, on the selected day; arrows move it without selecting; Space selects', () => {
