@@ -75,7 +75,7 @@ const styles = StyleSheet.create({
   rule: { height: 1, backgroundColor: colors.border },
   narrow: { flex: 1 },
   narrowHead: { flexDirection: 'row', alignItems: 'baseline', gap: space.sm, paddingHorizontal: space.md, paddingTop: space.sm },
-  narrowTitle: { ...type.heading, color: colors.ink },
+  narrowTitle: { ...type.heading, color: colors.ink, flexShrink: 0 },
   narrowName: { ...type.label, color: colors.inkMuted, flexShrink: 1 },
   mapNarrow: { flex: 1, padding: space.sm },
   // Under the map, at most a bit under half the screen, so the map stays in view while reading.

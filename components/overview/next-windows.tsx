@@ -23,12 +23,15 @@ export function NextWindows({ windows, inHorizon, now = new Date() }: Props) {
           {windows.map((window, index) => (
             <View key={window.id} role="listitem">
               <Link href={{ pathname: '/windows/[id]', params: { id: window.id } }} asChild>
-                <Pressable role="link" style={[styles.row, index > 0 && styles.rowDivider]} testID={`next-window-${window.id}`}>
-                  <View style={styles.rowMain}>
-                    <Text style={styles.lead}>{window.title}</Text>
-                    <Text style={styles.when}>{formatWindowRange(window.startsAt, window.endsAt, timeZone)}</Text>
+                <Pressable role="link" testID={`next-window-${window.id}`}>
+                  {/* Layout on an inner View: Link's asChild merge hands a style array to the DOM unflattened. */}
+                  <View style={[styles.row, index > 0 && styles.rowDivider]}>
+                    <View style={styles.rowMain}>
+                      <Text style={styles.lead}>{window.title}</Text>
+                      <Text style={styles.when}>{formatWindowRange(window.startsAt, window.endsAt, timeZone)}</Text>
+                    </View>
+                    <Text style={styles.stage}>{STATUS_LABELS[window.status as keyof typeof STATUS_LABELS] ?? window.status}</Text>
                   </View>
-                  <Text style={styles.stage}>{STATUS_LABELS[window.status as keyof typeof STATUS_LABELS] ?? window.status}</Text>
                 </Pressable>
               </Link>
             </View>
