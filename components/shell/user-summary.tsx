@@ -29,7 +29,9 @@ export function UserSummary({ user, onSignOut, signingOut, tone, compact = false
             {user.name}
           </Text>
           <Text style={[styles.roles, { color: muted }]} numberOfLines={1} testID="user-roles">
-            {user.roles.join(' · ')}
+            {/* The leading space (collapsed on screen) keeps name and roles apart in the link's text, which must read
+                as the start of its accessible name. */}
+            {` ${user.roles.join(' · ')}`}
           </Text>
         </Pressable>
       </Link>
