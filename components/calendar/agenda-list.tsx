@@ -11,7 +11,7 @@ type Props = {
   timeZone: string;
   windows: readonly CalendarWindow[];
   freezes: readonly CalendarFreeze[];
-  onOpenWindow: (id: string) => void;
+  onOpenWindow?: (id: string) => void;
   /** where a window's row leads (its page, or a tenant's notice), making the row a real link */
   windowHref?: (id: string) => Href | null;
   /** what to say when the day has no windows (filters may be hiding some) */

@@ -11,10 +11,10 @@ import { keyDownProps, type KeyPress } from './key-props';
 import { WindowBadges } from './window-badges';
 
 /**
- * `href`, when the screen gives one, makes the row a real link (open in a new tab works too); otherwise the row
- * is a link-role element that `onOpen`s on a press, Enter or Space.
+ * `href` makes the row a real link (open in a new tab works too); without one (undefined), `onOpen` makes it a
+ * link-role element opening on a press, Enter or Space; with neither (or a null href) it is plain text.
  */
-type Props = { window: CalendarWindow; timeZone: string; onOpen: (id: string) => void; href?: Href | null };
+type Props = { window: CalendarWindow; timeZone: string; onOpen?: (id: string) => void; href?: Href | null };
 
 const MAX_ELEMENTS_SHOWN = 3;
 
@@ -25,7 +25,7 @@ function elementSummary(window: CalendarWindow): string {
   return ids.length > MAX_ELEMENTS_SHOWN ? `${shown} +${ids.length - MAX_ELEMENTS_SHOWN}` : shown;
 }
 
-function RowContent({ window, timeZone }: { window: CalendarWindow; timeZone: string }) {
+function RowContent({ window, timeZone, linked }: { window: CalendarWindow; timeZone: string; linked: boolean }) {
   const tone = statusColor(window.status);
   const durationMs = Date.parse(window.endsAt) - Date.parse(window.startsAt);
   return (
@@ -46,7 +46,7 @@ function RowContent({ window, timeZone }: { window: CalendarWindow; timeZone: st
         </Text>
         <WindowBadges window={window} />
       </View>
-      <Text style={styles.chevron} aria-hidden>›</Text>
+      {linked ? <Text style={styles.chevron} aria-hidden>›</Text> : null}
     </View>
   );
 }
@@ -55,7 +55,8 @@ const isSpace = (key: string) => key === ' ' || key === 'Spacebar';
 
 export function AgendaRow({ window, timeZone, onOpen, href }: Props) {
   const router = useRouter();
-  const content = <RowContent window={window} timeZone={timeZone} />;
+  const linked = href ? true : href === undefined && onOpen !== undefined;
+  const content = <RowContent window={window} timeZone={timeZone} linked={linked} />;
   if (href) {
     // Enter follows the link natively; Space, which a link ignores, opens it too, as people press either on a row.
     const openOnSpace = (event: KeyPress) => {
@@ -69,6 +70,13 @@ export function AgendaRow({ window, timeZone, onOpen, href }: Props) {
           {content}
         </Pressable>
       </Link>
+    );
+  }
+  if (!linked || !onOpen) {
+    return (
+      <View testID={`agenda-window-${window.id}`}>
+        {content}
+      </View>
     );
   }
   // Without an href, react-native-web leaves Enter on a link-role element to the browser, which does nothing:

@@ -102,7 +102,7 @@ const styles = StyleSheet.create({
     borderTopColor: colors.surfaceSunken,
     overflow: 'hidden',
   },
-  button: { ...StyleSheet.absoluteFillObject, paddingTop: space.xs },
+  button: { position: 'absolute', top: 0, right: 0, bottom: 0, left: 0, paddingTop: space.xs },
   numberRow: { flexDirection: 'row', justifyContent: 'center', alignItems: 'center', height: NUMBER_ROW_HEIGHT_PX },
   number: { width: 28, height: 28, borderRadius: radii.pill, alignItems: 'center', justifyContent: 'center' },
   today: { borderWidth: 2, borderColor: calendarColors.todayRing },

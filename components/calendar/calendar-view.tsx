@@ -28,8 +28,9 @@ export type CalendarViewProps = {
   /** false for a tenant user: its list is its notified work, which the staff filters do not apply to */
   showFilters?: boolean;
   onBook: () => void;
-  onOpenWindow: (id: string) => void;
-  /** where a window's agenda row leads, making it a real link (else the row calls onOpenWindow) */
+  /** what a press on a window's agenda row does when there is no `windowHref` */
+  onOpenWindow?: (id: string) => void;
+  /** where a window's agenda row leads, making it a real link (null: nothing to open) */
   windowHref?: (id: string) => Href | null;
 };
 

@@ -189,6 +189,16 @@ describe('calendar view', () => {
     expect(mockPush).toHaveBeenCalledWith('/windows/w-night');
   });
 
+  test('a window with nothing to open (a null href) is plain text, not a link', () => {
+    const onOpenWindow = jest.fn();
+    render(<Harness onOpenWindow={onOpenWindow} windowHref={() => null} />);
+    const row = screen.getByTestId('agenda-window-w-night');
+    expect(row.props.role).toBeUndefined();
+    expect(row).not.toHaveTextContent(/›/);
+    fireEvent(row, 'keyDown', { key: 'Enter', preventDefault: jest.fn() });
+    expect(onOpenWindow).not.toHaveBeenCalled();
+  });
+
   test('the text filter narrows the windows; "Book a window" only for those who may book', () => {
     render(<Harness canBook={false} />);
     expect(screen.queryByTestId('calendar-book')).toBeNull();

@@ -1,6 +1,6 @@
 // Calendar: the visible month's windows (GET /api/windows?from=&to=) and freezes, with the selected day's agenda.
 // A tenant user's calendar holds the work it was notified of, as tenant views, and opens their notices.
-import { useRouter } from 'expo-router';
+import { useRouter, type Href } from 'expo-router';
 import { useMeQuery } from '@/hooks/queries/me';
 import { useFreezesQuery } from '@/hooks/queries/freezes';
 import { useTenantWindowsQuery } from '@/hooks/queries/tenant-windows';
@@ -33,10 +33,11 @@ export default function CalendarScreen() {
   if (windows.isError && !windows.data) return <ErrorState message={windows.error.message} onRetry={() => void windows.refetch()} />;
   if (!windows.data) return <LoadingState label="Loading the calendar…" />;
   const views = tenantWindows.data?.windows ?? [];
-  const openTenantWork = (windowId: string) => {
+  const tenantWorkHref = (windowId: string): Href | null => {
     const id = noticeIdOf(views, windowId);
-    if (id) router.push({ pathname: '/notices/[id]', params: { id } });
+    return id ? { pathname: '/notices/[id]', params: { id } } : null;
   };
+  const windowHref = tenant ? tenantWorkHref : (id: string): Href => ({ pathname: '/windows/[id]', params: { id } });
   return (
     <CalendarView
       state={state}
@@ -49,7 +50,7 @@ export default function CalendarScreen() {
       canBook={canBookWindows(roles)}
       showFilters={!tenant}
       onBook={() => router.push('/windows/new')}
-      onOpenWindow={tenant ? openTenantWork : (id) => router.push(`/windows/${encodeURIComponent(id)}`)}
+      windowHref={windowHref}
     />
   );
 }
