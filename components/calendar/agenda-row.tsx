@@ -7,7 +7,7 @@ import { formatDuration, formatWindowRange } from '@/components/time';
 import { STATUS_LABELS } from '@/components/windows/lifecycle';
 import type { CalendarWindow } from './calendar-types';
 import { statusColor } from './calendar-marks';
-import { keyDownProps, type KeyPress } from './key-props';
+import { keyDownProps, linkKeyProps, type KeyPress } from '@/components/key-props';
 import { WindowBadges } from './window-badges';
 
 /**
@@ -79,19 +79,12 @@ export function AgendaRow({ window, timeZone, onOpen, href }: Props) {
       </View>
     );
   }
-  // Without an href, react-native-web leaves Enter on a link-role element to the browser, which does nothing:
-  // both keys are handled here.
-  const openOnKey = (event: KeyPress) => {
-    if (event.key !== 'Enter' && !isSpace(event.key)) return;
-    event.preventDefault?.();
-    onOpen(window.id);
-  };
   return (
     <Pressable
       role="link"
       testID={`agenda-window-${window.id}`}
       onPress={() => onOpen(window.id)}
-      {...keyDownProps(openOnKey)}
+      {...linkKeyProps(() => onOpen(window.id))}
       style={({ pressed }) => [styles.link, pressed && styles.pressed]}
     >
       {content}

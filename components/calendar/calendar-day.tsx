@@ -8,7 +8,7 @@ import { calendarColors, colors, fonts, radii, space, WIDE_LAYOUT_MIN_WIDTH_PX }
 import { STATUS_MARKS } from './calendar-marks';
 import type { CalendarDayMark } from './calendar-types';
 import { dayLabel } from './day-label';
-import { keyDownProps, type KeyPress } from './key-props';
+import { keyDownProps, type KeyPress } from '@/components/key-props';
 import { FreezeHatch } from './freeze-hatch';
 
 /** react-native's Role type has no 'gridcell'; react-native-web passes the role to the DOM as given. */

@@ -9,7 +9,7 @@ import { colors, fonts } from '@/constants/theme';
 import { CalendarDay } from './calendar-day';
 import type { MarkedDays } from './calendar-types';
 import { nextFocusDay, tabStopDay } from './grid-keys';
-import type { KeyPress } from './key-props';
+import type { KeyPress } from '@/components/key-props';
 
 type Props = {
   /** 'YYYY-MM' */

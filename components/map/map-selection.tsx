@@ -3,6 +3,7 @@ import type { ReactNode } from 'react';
 import { ActivityIndicator, Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { useSiteQuery } from '@/hooks/queries/sites';
 import { useSpanQuery } from '@/hooks/queries/spans';
+import { linkKeyProps } from '@/components/key-props';
 import { formatUtilisation } from '@/components/map/colour-scale';
 import { MapSliceUses } from '@/components/map/map-slice-uses';
 import type { MapSelection } from '@/components/map/map-types';
@@ -36,7 +37,7 @@ function Frame({ title, subtitle, onClose, onOpen, children }: FrameProps) {
           <Text style={styles.subtitle}>{subtitle}</Text>
           <Text style={styles.title} numberOfLines={2} role="heading" aria-level={2} testID="map-selection-title">{title}</Text>
           {onOpen ? (
-            <Pressable onPress={onOpen} role="link" testID="map-selection-open" style={styles.open}>
+            <Pressable onPress={onOpen} role="link" {...linkKeyProps(onOpen)} testID="map-selection-open" style={styles.open}>
               <Text style={styles.openText}>Open full details →</Text>
             </Pressable>
           ) : null}

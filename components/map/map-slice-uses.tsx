@@ -1,5 +1,6 @@
 // "What uses it": the slices on a site or span, each with its tenant, what it puts there, and a caution mark when critical.
 import { Pressable, StyleSheet, Text, View } from 'react-native';
+import { linkKeyProps } from '@/components/key-props';
 import type { SliceUse } from '@/shared/inventory';
 import { colors, radii, space, type } from '@/constants/theme';
 
@@ -32,6 +33,7 @@ export function MapSliceUses({ title, uses, emptyText, onOpenSlice }: Props) {
           disabled={!onOpenSlice}
           onPress={() => onOpenSlice?.(use.sliceId)}
           role={onOpenSlice ? 'link' : undefined}
+          {...(onOpenSlice ? linkKeyProps(() => onOpenSlice(use.sliceId)) : {})}
           style={({ pressed }) => [styles.row, pressed && styles.pressed]}
         >
           <View style={styles.rowHead}>

@@ -97,3 +97,16 @@ test('the page is headed "Network map"; a site picked from the list opens the pa
   expect(screen.getByTestId('map-selection')).toHaveTextContent(/Compute used\s*25 % of 64 vCPU/);
   expect(screen.getByTestId(`map-list-site-${site.id}`).props['aria-pressed']).toBe(true);
 });
+
+test('the panel\'s links open on Enter too (they have no href for the browser to follow)', async () => {
+  const site = data.sites[0];
+  fetchMock.mockImplementation(async (url) =>
+    String(url) === '/api/network/map' ? reply(200, data) : reply(200, siteDetail(site.id)));
+  renderScreen();
+  fireEvent.press(await screen.findByTestId(`map-site-${site.id}`));
+  await screen.findByText('Harbour cameras');
+  fireEvent(screen.getByTestId('map-use-sl-a'), 'keyDown', { key: 'Enter', preventDefault: jest.fn() });
+  expect(mockPush).toHaveBeenLastCalledWith({ pathname: '/slices/[id]', params: { id: 'sl-a' } });
+  fireEvent(screen.getByTestId('map-selection-open'), 'keyDown', { key: 'Enter', preventDefault: jest.fn() });
+  expect(mockPush).toHaveBeenLastCalledWith({ pathname: '/network/sites/[id]', params: { id: site.id } });
+});
