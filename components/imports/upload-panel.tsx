@@ -6,6 +6,7 @@ import { Button } from '@/components/button';
 import { Segmented } from '@/components/inventory/segmented';
 import { KIND_LABELS, TEMPLATES } from './import-kinds';
 import { colors, radii, space, type } from '@/constants/theme';
+import { linkKeyProps } from '@/components/key-props';
 
 export type KindChoice = ImportKind | 'auto';
 
@@ -39,7 +40,8 @@ export function UploadPanel({ kind, onKindChange, onPick, uploading, uploadError
         <Text style={styles.label}>CSV templates</Text>
         {TEMPLATES.map((t) => (
           // Opening a link is fire-and-forget: it only rejects when no app can open an http URL, and a browser always can.
-          <Pressable key={t.kind} role="link" testID={`import-template-${t.kind}`} onPress={() => void Linking.openURL(importTemplateUrl(t.kind))}>
+          <Pressable key={t.kind} role="link" testID={`import-template-${t.kind}`} onPress={() => void Linking.openURL(importTemplateUrl(t.kind))}
+            {...linkKeyProps(() => void Linking.openURL(importTemplateUrl(t.kind)))}>
             <Text style={styles.link}>{t.label}</Text>
           </Pressable>
         ))}

@@ -3,6 +3,7 @@ import { Pressable, Text, View } from 'react-native';
 import type { TenantWindowView } from '@/shared/tenant-windows';
 import { formatWindowRange } from '@/components/time';
 import { UpcomingPanel, upcomingStyles as styles } from '@/components/overview/upcoming-panel';
+import { linkKeyProps } from '@/components/key-props';
 
 export function NextWork({ work, onOpenNotice }: { work: readonly TenantWindowView[]; onOpenNotice: (noticeId: string) => void }) {
   return (
@@ -14,7 +15,7 @@ export function NextWork({ work, onOpenNotice }: { work: readonly TenantWindowVi
             // Each link is named by what it shows: the work, its times, its effect and stage.
             <View role="listitem" key={item.windowId}>
               <Pressable role="link" testID={`next-work-${item.windowId}`}
-                onPress={() => onOpenNotice(item.noticeId)} style={[styles.row, index > 0 && styles.rowDivider]}>
+                onPress={() => onOpenNotice(item.noticeId)} {...linkKeyProps(() => onOpenNotice(item.noticeId))} style={[styles.row, index > 0 && styles.rowDivider]}>
                 <View style={styles.rowMain}>
                   <Text style={styles.lead}>{item.summary}</Text>
                   <Text style={styles.when}>{formatWindowRange(item.startsAt, item.endsAt, timeZone)}</Text>

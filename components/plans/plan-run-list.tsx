@@ -5,6 +5,7 @@ import { formatInstant } from '@/components/time';
 import { formatMovePoints, settingsSummary } from '@/components/plans/plan-format';
 import { PlanMarks, PlanStatusPill } from '@/components/plans/plan-status-pill';
 import { colors, radii, space, type } from '@/constants/theme';
+import { linkKeyProps } from '@/components/key-props';
 
 type Props = { plans: readonly PlanListItem[]; timeZone: string; onOpen: (planId: string) => void };
 
@@ -33,6 +34,7 @@ export function PlanRunList({ plans, timeZone, onOpen }: Props) {
           <Pressable
             role="link"
             onPress={() => onOpen(plan.id)}
+            {...linkKeyProps(() => onOpen(plan.id))}
             style={({ pressed }) => [styles.row, pressed && styles.pressed]}
             testID={`plan-row-${plan.id}`}
           >

@@ -7,6 +7,7 @@ import { formatInstant } from '@/components/time';
 import { StatusBadge } from '@/components/windows/status-badge';
 import { DECISION_WORDS } from '@/components/signoff/signoff-words';
 import { colors, radii, space, type } from '@/constants/theme';
+import { linkKeyProps } from '@/components/key-props';
 
 type Props = { items: DecidedByMeItem[]; timeZone: string; onOpen: (windowId: string) => void };
 
@@ -18,7 +19,7 @@ function DecidedRow({ item, timeZone, onOpen }: { item: DecidedByMeItem; timeZon
   const decided = `${DECISION_WORDS[item.decision]} ${formatInstant(item.decidedAt, timeZone)}`;
   return (
     <Pressable
-      role="link" onPress={() => onOpen(item.windowId)}
+      role="link" onPress={() => onOpen(item.windowId)} {...linkKeyProps(() => onOpen(item.windowId))}
       testID={`signoff-decided-${item.windowId}-${item.round}`} style={({ pressed }) => [styles.row, pressed && styles.pressed]}
     >
       <View style={styles.top}>

@@ -8,6 +8,7 @@ import { describeZone, formatWindowRange } from '@/components/time';
 import { RiskPill } from '@/components/signoff/risk-pill';
 import { quorumSentence } from '@/components/signoff/signoff-words';
 import { colors, radii, space, type } from '@/constants/theme';
+import { linkKeyProps } from '@/components/key-props';
 
 type Props = { items: SignoffQueueItem[]; timeZone: string; onOpen: (windowId: string) => void; footer?: ReactNode };
 
@@ -22,7 +23,7 @@ function QueueRow({ item, timeZone, onOpen }: { item: SignoffQueueItem; timeZone
   return (
     <Pressable
       role="link"
-      testID={`signoff-queue-item-${item.windowId}`} onPress={() => onOpen(item.windowId)}
+      testID={`signoff-queue-item-${item.windowId}`} onPress={() => onOpen(item.windowId)} {...linkKeyProps(() => onOpen(item.windowId))}
       style={({ pressed }) => [styles.row, pressed && styles.pressed]}
     >
       <View style={styles.top}>

@@ -3,6 +3,7 @@ import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { WindowConflict } from '@/shared/window-impact';
 import { formatWindowRange } from '@/components/time';
 import { calendarColors, colors, radii, space, type } from '@/constants/theme';
+import { linkKeyProps } from '@/components/key-props';
 
 const REASON_LABELS: Record<WindowConflict['reasons'][number]['reason'], string> = {
   'shared-element': 'Shares equipment',
@@ -21,6 +22,7 @@ export function ConflictsList({ conflicts, timeZone, onOpenWindow }: Props) {
           key={c.window.id}
           role="link"
           onPress={() => onOpenWindow(c.window.id)}
+          {...linkKeyProps(() => onOpenWindow(c.window.id))}
           style={({ pressed }) => [styles.item, pressed && styles.pressed]}
           testID={`window-conflict-${c.window.id}`}
         >

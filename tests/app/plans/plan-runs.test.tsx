@@ -96,4 +96,7 @@ test('runs are listed newest first with their totals or their failure', () => {
   expect(rows[1]).toHaveTextContent(/Accepted/);
   fireEvent.press(rows[1]);
   expect(onOpen).toHaveBeenCalledWith('p-old');
+  // A keyboard opens the run too: Enter on the link (it has no address for the browser to follow).
+  fireEvent(rows[0], 'keyDown', { key: 'Enter', preventDefault: () => undefined });
+  expect(onOpen).toHaveBeenLastCalledWith('p-new');
 });
