@@ -4,7 +4,7 @@ import { StyleSheet, Text, View } from 'react-native';
 import { calendarColors, colors, radii, space, type } from '@/constants/theme';
 import { formatWindowRange, startOfDayMs } from '@/components/time';
 import type { CalendarFreeze, CalendarWindow } from './calendar-types';
-import { AgendaRow } from './agenda-row';
+import { AgendaRow, type ElementNamer } from './agenda-row';
 
 type Props = {
   day: string;
@@ -14,6 +14,8 @@ type Props = {
   onOpenWindow?: (id: string) => void;
   /** where a window's row leads (its page, or a tenant's notice), making the row a real link */
   windowHref?: (id: string) => Href | null;
+  /** names the windows' sites and spans (the ids show without it) */
+  elementName?: ElementNamer;
   /** what to say when the day has no windows (filters may be hiding some) */
   emptyHint?: string;
 };
@@ -24,7 +26,7 @@ function dayHeading(day: string, timeZone: string): string {
   ).replace(',', '');
 }
 
-export function AgendaList({ day, timeZone, windows, freezes, onOpenWindow, windowHref, emptyHint }: Props) {
+export function AgendaList({ day, timeZone, windows, freezes, onOpenWindow, windowHref, elementName, emptyHint }: Props) {
   return (
     <View style={styles.panel} testID="calendar-agenda">
       <View style={styles.header}>
@@ -47,7 +49,7 @@ export function AgendaList({ day, timeZone, windows, freezes, onOpenWindow, wind
       ) : (
         windows.map((window, index) => (
           <View key={window.id} style={index > 0 && styles.divider}>
-            <AgendaRow window={window} timeZone={timeZone} onOpen={onOpenWindow} href={windowHref?.(window.id)} />
+            <AgendaRow window={window} timeZone={timeZone} onOpen={onOpenWindow} href={windowHref?.(window.id)} elementName={elementName} />
           </View>
         ))
       )}

@@ -14,18 +14,23 @@ import { WindowBadges } from './window-badges';
  * `href` makes the row a real link (open in a new tab works too); without one (undefined), `onOpen` makes it a
  * link-role element opening on a press, Enter or Space; with neither (or a null href) it is plain text.
  */
-type Props = { window: CalendarWindow; timeZone: string; onOpen?: (id: string) => void; href?: Href | null };
+/** A site's or span's name by kind and id; without one the ids show. */
+export type ElementNamer = (kind: 'site' | 'span', id: string) => string;
+const idOnly: ElementNamer = (_kind, id) => id;
+
+type Props = { window: CalendarWindow; timeZone: string; onOpen?: (id: string) => void; href?: Href | null; elementName?: ElementNamer };
 
 const MAX_ELEMENTS_SHOWN = 3;
 
-function elementSummary(window: CalendarWindow): string {
-  const ids = window.elements.map((e) => (e.effect === 'reduced' ? `${e.id} (reduced)` : e.id));
-  if (ids.length === 0) return 'No elements yet';
-  const shown = ids.slice(0, MAX_ELEMENTS_SHOWN).join(', ');
-  return ids.length > MAX_ELEMENTS_SHOWN ? `${shown} +${ids.length - MAX_ELEMENTS_SHOWN}` : shown;
+/** The window's equipment by name ("Orrindale, Orrindale – Vellaport (reduced)"), the first few and a count. */
+export function elementSummary(window: CalendarWindow, nameOf: ElementNamer): string {
+  const names = window.elements.map((e) => `${nameOf(e.kind, e.id)}${e.effect === 'reduced' ? ' (reduced)' : ''}`);
+  if (names.length === 0) return 'No elements yet';
+  const shown = names.slice(0, MAX_ELEMENTS_SHOWN).join(', ');
+  return names.length > MAX_ELEMENTS_SHOWN ? `${shown} +${names.length - MAX_ELEMENTS_SHOWN}` : shown;
 }
 
-function RowContent({ window, timeZone, linked }: { window: CalendarWindow; timeZone: string; linked: boolean }) {
+function RowContent({ window, timeZone, linked, nameOf }: { window: CalendarWindow; timeZone: string; linked: boolean; nameOf: ElementNamer }) {
   const tone = statusColor(window.status);
   const durationMs = Date.parse(window.endsAt) - Date.parse(window.startsAt);
   return (
@@ -42,7 +47,7 @@ function RowContent({ window, timeZone, linked }: { window: CalendarWindow; time
           {formatWindowRange(window.startsAt, window.endsAt, timeZone)} · {formatDuration(durationMs)}
         </Text>
         <Text style={styles.elements} numberOfLines={1}>
-          {window.detail ?? `${window.workType ? `${window.workType} · ` : ''}${elementSummary(window)}`}
+          {window.detail ?? `${window.workType ? `${window.workType} · ` : ''}${elementSummary(window, nameOf)}`}
         </Text>
         <WindowBadges window={window} />
       </View>
@@ -53,10 +58,10 @@ function RowContent({ window, timeZone, linked }: { window: CalendarWindow; time
 
 const isSpace = (key: string) => key === ' ' || key === 'Spacebar';
 
-export function AgendaRow({ window, timeZone, onOpen, href }: Props) {
+export function AgendaRow({ window, timeZone, onOpen, href, elementName = idOnly }: Props) {
   const router = useRouter();
   const linked = href ? true : href === undefined && onOpen !== undefined;
-  const content = <RowContent window={window} timeZone={timeZone} linked={linked} />;
+  const content = <RowContent window={window} timeZone={timeZone} linked={linked} nameOf={elementName} />;
   if (href) {
     // Enter follows the link natively; Space, which a link ignores, opens it too, as people press either on a row.
     const openOnSpace = (event: KeyPress) => {

@@ -13,6 +13,7 @@ import type { CalendarFreeze, CalendarWindow } from './calendar-types';
 import { MonthCalendar } from './month-calendar';
 import type { CalendarState } from './use-calendar-state';
 import { countActiveFilters, matchesText } from './window-filters';
+import type { ElementNamer } from './agenda-row';
 
 export type CalendarViewProps = {
   state: CalendarState;
@@ -32,6 +33,8 @@ export type CalendarViewProps = {
   onOpenWindow?: (id: string) => void;
   /** where a window's agenda row leads, making it a real link (null: nothing to open) */
   windowHref?: (id: string) => Href | null;
+  /** names the windows' sites and spans in the agenda */
+  elementName?: ElementNamer;
 };
 
 function emptyHint(filtered: boolean, windowCount: number): string {
@@ -40,7 +43,7 @@ function emptyHint(filtered: boolean, windowCount: number): string {
 }
 
 export function CalendarView(props: CalendarViewProps) {
-  const { state, timeZone, freezes, refreshing, refreshError, canBook, onBook, onOpenWindow, windowHref } = props;
+  const { state, timeZone, freezes, refreshing, refreshError, canBook, onBook, onOpenWindow, windowHref, elementName } = props;
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_LAYOUT_MIN_WIDTH_PX;
   const windows = useMemo(
@@ -91,6 +94,7 @@ export function CalendarView(props: CalendarViewProps) {
           freezes={freezesOnDay(freezes, state.selectedDay, timeZone)}
           onOpenWindow={onOpenWindow}
           windowHref={windowHref}
+          elementName={elementName}
           emptyHint={emptyHint(filtered, windows.length)}
         />
       </View>

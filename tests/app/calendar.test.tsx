@@ -99,9 +99,12 @@ describe('the list request', () => {
   });
 });
 
-type HarnessProps = { onOpenWindow?: (id: string) => void; canBook?: boolean; windowHref?: (id: string) => string | null };
+type HarnessProps = {
+  onOpenWindow?: (id: string) => void; canBook?: boolean; windowHref?: (id: string) => string | null;
+  elementName?: (kind: 'site' | 'span', id: string) => string;
+};
 
-function Harness({ onOpenWindow = jest.fn(), canBook = true, windowHref }: HarnessProps) {
+function Harness({ onOpenWindow = jest.fn(), canBook = true, windowHref, elementName }: HarnessProps) {
   const state = useCalendarState(BERLIN, '2026-12-03');
   return (
     <CalendarView
@@ -115,11 +118,18 @@ function Harness({ onOpenWindow = jest.fn(), canBook = true, windowHref }: Harne
       onBook={jest.fn()}
       onOpenWindow={onOpenWindow}
       windowHref={windowHref}
+      elementName={elementName}
     />
   );
 }
 
 describe('calendar view', () => {
+  test('agenda rows name the equipment as people call it, not by id', () => {
+    render(<Harness elementName={(kind, id) => `${kind === 'site' ? 'Site' : 'Span'} named ${id.replace('site-', '')}`} />);
+    expect(within(screen.getByTestId('calendar-agenda')).getByTestId('agenda-window-w-night')).toHaveTextContent(/Site named w-night/);
+    expect(within(screen.getByTestId('calendar-agenda')).getByTestId('agenda-window-w-night')).not.toHaveTextContent(/site-w-night/);
+  });
+
   test('the selected day lists its windows with times in the zone, named; tapping another day changes the list', () => {
     render(<Harness />);
     const agenda = () => within(screen.getByTestId('calendar-agenda'));

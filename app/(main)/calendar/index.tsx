@@ -14,6 +14,7 @@ import { canBookWindows, isOperator, tenantScopeOf } from '@/shared/permissions'
 import { visibleRange } from '@/components/time';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { usePageTitle } from '@/components/page-title';
+import { useElementNames } from '@/components/inventory/use-site-names';
 
 export default function CalendarScreen() {
   const router = useRouter();
@@ -29,6 +30,7 @@ export default function CalendarScreen() {
   const tenants = useTenantChoicesQuery(isOperator(roles));
   const windows = tenant ? tenantWindows : staffWindows;
   usePageTitle('Calendar');
+  const elementName = useElementNames();
 
   if (windows.isError && !windows.data) return <ErrorState message={windows.error.message} onRetry={() => void windows.refetch()} />;
   if (!windows.data) return <LoadingState label="Loading the calendar…" />;
@@ -51,6 +53,7 @@ export default function CalendarScreen() {
       showFilters={!tenant}
       onBook={() => router.push('/windows/new')}
       windowHref={windowHref}
+      elementName={elementName}
     />
   );
 }
