@@ -21,16 +21,25 @@ export function useNavBadges(roles: readonly RoleName[]): NavBadges {
 /** Past two digits the exact figure no longer helps on a badge; the label still says it. */
 const BADGE_MAX = 99;
 
+const shownCount = (badge: NavBadgeInfo) => (badge.count > BADGE_MAX ? `${BADGE_MAX}+` : String(badge.count));
+
+/**
+ * The figure on the tab. It has no name of its own: the tab's name says it in words (labelWithBadge). The leading
+ * space, collapsed on screen, keeps the figure apart from the tab's label in the tab's text.
+ */
 export function NavBadge({ areaKey, badge }: { areaKey: string; badge: NavBadgeInfo }) {
   return (
-    <View style={styles.badge} role="img" aria-label={badge.label} accessibilityLabel={badge.label} testID={`nav-badge-${areaKey}`}>
-      <Text style={styles.text}>{badge.count > BADGE_MAX ? `${BADGE_MAX}+` : String(badge.count)}</Text>
+    <View style={styles.badge} testID={`nav-badge-${areaKey}`}>
+      <Text style={styles.text}>{` ${shownCount(badge)}`}</Text>
     </View>
   );
 }
 
-/** The tab's accessible name with its badge, e.g. "Sign-off, 3 decisions waiting". */
-export const labelWithBadge = (label: string, badge: NavBadgeInfo | undefined) => (badge ? `${label}, ${badge.label}` : label);
+/**
+ * The tab's accessible name with its badge: the visible words first, as speech users say them ("Sign-off 3"),
+ * then in words ("Sign-off 3, 3 decisions waiting").
+ */
+export const labelWithBadge = (label: string, badge: NavBadgeInfo | undefined) => (badge ? `${label} ${shownCount(badge)}, ${badge.label}` : label);
 
 const styles = StyleSheet.create({
   badge: {

@@ -38,15 +38,15 @@ test('phone: the sign-off tab carries the count and says it in words', async () 
   renderShell(approver, 3);
   const badge = await screen.findByTestId('nav-badge-sign-off');
   expect(badge).toHaveTextContent('3');
-  expect(badge.props.accessibilityLabel).toBe('3 decisions waiting');
-  expect(screen.getByTestId('nav-sign-off').props.accessibilityLabel).toBe('Sign-off, 3 decisions waiting');
+  // The name starts with what the tab shows ("Sign-off 3"), then says it in words.
+  expect(screen.getByTestId('nav-sign-off').props.accessibilityLabel).toBe('Sign-off 3, 3 decisions waiting');
 });
 
 test('wide: the rail item carries it too, one decision in the singular', async () => {
   mockWidthPx = 1280;
   renderShell(approver, 1);
   expect(await screen.findByTestId('nav-badge-sign-off')).toHaveTextContent('1');
-  expect(screen.getByTestId('nav-badge-sign-off').props.accessibilityLabel).toBe('1 decision waiting');
+  expect(screen.getByTestId('nav-sign-off').props.accessibilityLabel).toBe('Sign-off 1, 1 decision waiting');
   expect(screen.getByTestId('side-rail')).toBeTruthy();
 });
 
@@ -54,7 +54,7 @@ test('a large count is capped on the badge but not in the label', async () => {
   renderShell(approver, 120);
   const badge = await screen.findByTestId('nav-badge-sign-off');
   expect(badge).toHaveTextContent('99+');
-  expect(badge.props.accessibilityLabel).toBe('120 decisions waiting');
+  expect(screen.getByTestId('nav-sign-off').props.accessibilityLabel).toBe('Sign-off 99+, 120 decisions waiting');
 });
 
 test('nothing waiting: no badge, and the tab keeps its plain name', async () => {
