@@ -21,7 +21,8 @@ export default function MainLayout() {
       signingOut={signOut.isPending}
       onSignOut={() => signOut.mutate(undefined, { onSuccess: () => router.replace('/sign-in') })}
     >
-      {/* Always mounted: a Slot swapped out and back in by address crashes on going back (see split-view.tsx). */}
+      {/* Always mounted: a Slot swapped out and back in by address crashes on going back (see split-view.tsx);
+          tenant users get their own view of window addresses inside those routes (staffWindowPage). */}
       <Slot />
     </AppShell>
   );

@@ -1,7 +1,11 @@
 // What a tenant user sees on an internal window address (/windows/...): the work in its notice's words with a
 // way to the notice, or a clear "not available" when it was not notified of that window. The internal window
-// pages never render for tenants (app/(main)/windows/_layout.tsx).
+// pages never render for tenants: each route under app/(main)/windows/ is wrapped in staffWindowPage.
+import type { ComponentType } from 'react';
+import { usePathname, useRouter } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
+import { useMeQuery } from '@/hooks/queries/me';
+import { tenantScopeOf } from '@/shared/permissions';
 import { useTenantWindowQuery } from '@/hooks/queries/tenant-windows';
 import { Button } from '@/components/button';
 import { titleWithName, usePageTitle } from '@/components/page-title';
@@ -22,6 +26,27 @@ const NOT_AVAILABLE = {
   title: 'This page is not available to tenants',
   hint: 'Planned work on your slices is under Notices once we have sent you its notice.',
 };
+
+/**
+ * A window route for staff; a tenant user reaching its address gets TenantWindowPage instead. The choice is made
+ * inside the route, not in a layout above it: a layout that leaves its Slot unrendered lets the router resolve the
+ * address to another route of the folder (a tenant's /windows/w-1 became /windows/new?id=w-1).
+ */
+export function staffWindowPage(StaffScreen: ComponentType): ComponentType {
+  function WindowPageForViewer() {
+    const me = useMeQuery();
+    if (me.data && tenantScopeOf(me.data) !== null) return <TenantWindowRoute />;
+    return <StaffScreen />;
+  }
+  WindowPageForViewer.displayName = `staffWindowPage(${StaffScreen.displayName ?? StaffScreen.name})`;
+  return WindowPageForViewer;
+}
+
+function TenantWindowRoute() {
+  const pathname = usePathname();
+  const router = useRouter();
+  return <TenantWindowPage pathname={pathname} onOpenNotice={(id) => router.push({ pathname: '/notices/[id]', params: { id } })} />;
+}
 
 export function TenantWindowPage({ pathname, onOpenNotice }: { pathname: string; onOpenNotice: (noticeId: string) => void }) {
   const id = windowIdFromPath(pathname);

@@ -7,8 +7,9 @@ import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { BookWindow } from '@/components/windows/book-window';
 import { detailHref, FormPage } from '@/components/windows/form-page';
 import { usePageTitle } from '@/components/page-title';
+import { staffWindowPage } from '@/components/notices/tenant-window-page';
 
-export default function NewWindowScreen() {
+function NewWindowScreen() {
   const timeZone = useViewerTimeZone();
   const router = useRouter();
   const me = useMeQuery();
@@ -27,3 +28,6 @@ export default function NewWindowScreen() {
     </FormPage>
   );
 }
+
+// Tenant users get their own view of a window's address (see staffWindowPage).
+export default staffWindowPage(NewWindowScreen);

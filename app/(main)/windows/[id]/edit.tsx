@@ -7,8 +7,9 @@ import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { EditWindow } from '@/components/windows/edit-window';
 import { detailHref, FormPage } from '@/components/windows/form-page';
 import { titleWithName, usePageTitle } from '@/components/page-title';
+import { staffWindowPage } from '@/components/notices/tenant-window-page';
 
-export default function EditWindowScreen() {
+function EditWindowScreen() {
   const timeZone = useViewerTimeZone();
   const { id } = useLocalSearchParams<{ id: string }>();
   const router = useRouter();
@@ -31,3 +32,6 @@ export default function EditWindowScreen() {
     </FormPage>
   );
 }
+
+// Tenant users get their own view of a window's address (see staffWindowPage).
+export default staffWindowPage(EditWindowScreen);

@@ -7,8 +7,9 @@ import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { ImpactReview } from '@/components/impact/impact-review';
 import { detailHref } from '@/components/windows/form-page';
 import { titleWithName, usePageTitle } from '@/components/page-title';
+import { staffWindowPage } from '@/components/notices/tenant-window-page';
 
-export default function WindowImpactScreen() {
+function WindowImpactScreen() {
   const timeZone = useViewerTimeZone();
   const { id } = useLocalSearchParams<{ id: string }>();
   const router = useRouter();
@@ -19,3 +20,6 @@ export default function WindowImpactScreen() {
   if (!window.data || !me.data) return <LoadingState label="Loading the window…" />;
   return <ImpactReview window={window.data} me={me.data} timeZone={timeZone} onOpenWindow={() => router.push(detailHref({ id }))} />;
 }
+
+// Tenant users get their own view of a window's address (see staffWindowPage).
+export default staffWindowPage(WindowImpactScreen);

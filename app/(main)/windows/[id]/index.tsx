@@ -10,8 +10,9 @@ import { WindowPlansEntry } from '@/components/plans/window-plans-entry';
 import { SubmitForSignoff } from '@/components/signoff/submit-for-signoff';
 import { WindowTenantNotices } from '@/components/notices/window-tenant-notices';
 import { titleWithName, usePageTitle } from '@/components/page-title';
+import { staffWindowPage } from '@/components/notices/tenant-window-page';
 
-export default function WindowScreen() {
+function WindowScreen() {
   const timeZone = useViewerTimeZone();
   const params = useLocalSearchParams<{ id: string; saved?: string; reverted?: string; mop?: string }>();
   const router = useRouter();
@@ -42,3 +43,6 @@ export default function WindowScreen() {
     </WindowDetail>
   );
 }
+
+// Tenant users get their own view of a window's address (see staffWindowPage).
+export default staffWindowPage(WindowScreen);

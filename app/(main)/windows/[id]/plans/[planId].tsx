@@ -8,8 +8,9 @@ import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { PlanDetailView } from '@/components/plans/plan-detail-view';
 import { WindowNextStep } from '@/components/windows/window-next-step';
 import { titleWithName, usePageTitle } from '@/components/page-title';
+import { staffWindowPage } from '@/components/notices/tenant-window-page';
 
-export default function PlanScreen() {
+function PlanScreen() {
   const timeZone = useViewerTimeZone();
   const { id, planId } = useLocalSearchParams<{ id: string; planId: string }>();
   const router = useRouter();
@@ -34,3 +35,6 @@ export default function PlanScreen() {
     />
   );
 }
+
+// Tenant users get their own view of a window's address (see staffWindowPage).
+export default staffWindowPage(PlanScreen);

@@ -9,8 +9,9 @@ import { PlansView } from '@/components/plans/plans-view';
 import { detailHref } from '@/components/windows/form-page';
 import { WindowNextStep } from '@/components/windows/window-next-step';
 import { titleWithName, usePageTitle } from '@/components/page-title';
+import { staffWindowPage } from '@/components/notices/tenant-window-page';
 
-export default function WindowPlansScreen() {
+function WindowPlansScreen() {
   const timeZone = useViewerTimeZone();
   const { id, from } = useLocalSearchParams<{ id: string; from?: string }>();
   const router = useRouter();
@@ -35,3 +36,6 @@ export default function WindowPlansScreen() {
     />
   );
 }
+
+// Tenant users get their own view of a window's address (see staffWindowPage).
+export default staffWindowPage(WindowPlansScreen);
