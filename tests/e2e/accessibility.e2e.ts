@@ -9,7 +9,7 @@
 // the decision screen). The sign-off policy is set to one approval without a code and put back afterwards; both
 // windows are withdrawn at the end. A role only visits the screens its roles open (shared/permissions), so a screen
 // that does not exist for a role is left out of that role's list rather than failing.
-import type { APIRequestContext, Browser, BrowserContext, Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import fs from 'node:fs';
 import path from 'node:path';
 import type { RoleName } from '../../shared/api';
@@ -17,9 +17,10 @@ import {
   ADMIN_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, PLAN_READER_ROLES, SIGNOFF_QUEUE_ROLES,
   TENANT_PORTAL_ROLES, WINDOW_BOOKER_ROLES,
 } from '../../shared/permissions';
-import { apiAs as apiAsUser, ok, prepareNotifiedWindow, prepareSubmittedWindow, setSignoffPolicies, slotAhead, withdrawWindow } from './helpers/api';
+import { ok, prepareNotifiedWindow, prepareSubmittedWindow, slotAhead } from './helpers/api';
 import { describeFinding, isBlocking, runAxe, summarise, type Finding } from './helpers/axe';
-import { BASE_URL, SHOTS, launchBrowser, submitSignIn } from './helpers/browser';
+import { BASE_URL, SHOTS, submitSignIn } from './helpers/browser';
+import { suiteUnderPolicies } from './helpers/suite';
 import { eventually } from './helpers/eventually';
 
 const SIZES = [
@@ -88,21 +89,15 @@ const SCREENS: Screen[] = [
 
 const screensFor = (role: RoleName) => SCREENS.filter((s) => !s.roles || holdsAnyRole([role], s.roles));
 
-let browser: Browser;
-const contexts: BrowserContext[] = [];
-let admin: APIRequestContext;
-let savedPolicies: Record<string, unknown> | null = null;
-const windowIds: string[] = [];
+const suite = suiteUnderPolicies({ signoffQuorumLow: 1, signoffQuorumHigh: 1, signoffRequireCode: false });
 let data: Data;
 /** Every screen's findings, written out at the end for whoever fixes them. */
 const report: { role: string; size: string; screen: string; path: string; findings: Finding[] }[] = [];
 
-const apiAs = (email: string) => apiAsUser(browser, email, contexts);
+const apiAs = (email: string) => suite.apiAs(email);
 
 beforeAll(async () => {
-  browser = await launchBrowser();
-  admin = await apiAs('admin@demo.test');
-  savedPolicies = await setSignoffPolicies(admin, { signoffQuorumLow: 1, signoffQuorumHigh: 1, signoffRequireCode: false });
+  const admin = suite.admin;
   const planner = await apiAs('planner@demo.test');
   const tenant = await apiAs('tenant@demo.test');
   const booking = (days: number) => ({
@@ -110,9 +105,9 @@ beforeAll(async () => {
     elements: [{ kind: 'site' as const, id: SITE_ID, effect: 'down' as const }],
   });
   const windowId = await prepareNotifiedWindow(planner, await apiAs('approver@demo.test'), booking(NOTIFIED_DAYS_AHEAD));
-  windowIds.push(windowId);
+  suite.windowIds.push(windowId);
   const inReviewId = await prepareSubmittedWindow(planner, booking(IN_REVIEW_DAYS_AHEAD));
-  windowIds.push(inReviewId);
+  suite.windowIds.push(inReviewId);
   // The tenant sees the window once its notice is out (the worker sends it a moment after the approval).
   await eventually(async () => expect((await tenant.get(`${BASE_URL}/api/windows/${windowId}`)).status()).toBe(200), 60_000);
 
@@ -135,10 +130,6 @@ beforeAll(async () => {
 afterAll(async () => {
   fs.mkdirSync(SHOTS, { recursive: true });
   fs.writeFileSync(path.join(SHOTS, 'accessibility.json'), JSON.stringify(report, null, 2));
-  if (savedPolicies) await admin.patch(`${BASE_URL}/api/policies`, { data: savedPolicies }).catch(() => undefined);
-  for (const windowId of windowIds) await withdrawWindow(admin, windowId);
-  for (const context of contexts) await context.close().catch(() => undefined);
-  await browser?.close();
 });
 
 /**
@@ -170,8 +161,8 @@ async function settle(page: Page, address: string, ready: string) {
 }
 
 test('the pages are served with a Content Security Policy that refuses inline script', async () => {
-  const context = await browser.newContext();
-  contexts.push(context);
+  const context = await suite.browser.newContext();
+  suite.contexts.push(context);
   const page = await context.newPage();
   const response = await page.goto(`${BASE_URL}/sign-in`);
   expect(response?.headers()['content-security-policy']).toMatch(/script-src 'self'(;|$)/);
@@ -191,8 +182,8 @@ describe.each(ROLES.flatMap((r) => SIZES.map((size) => ({ ...r, size }))))('$rol
   let page: Page;
 
   beforeAll(async () => {
-    const context = await browser.newContext({ viewport: size.viewport });
-    contexts.push(context);
+    const context = await suite.browser.newContext({ viewport: size.viewport });
+    suite.contexts.push(context);
     page = await context.newPage();
     await submitSignIn(page, email);
     await page.getByTestId('overview-sites').waitFor({ timeout: 30_000 });
