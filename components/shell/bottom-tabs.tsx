@@ -53,11 +53,11 @@ function TabFace({ label, Icon, active, areaKey, badge }: FaceProps) {
   return (
     <View style={styles.tab}>
       <View style={[styles.mark, active && styles.markActive]} />
-      <View>
-        <Icon color={tint} />
-        {badge && areaKey ? <View style={styles.badge}><NavBadge areaKey={areaKey} badge={badge} /></View> : null}
-      </View>
+      <Icon color={tint} />
       <Text style={[styles.label, { color: tint }]} numberOfLines={1}>{label}</Text>
+      {/* After the label in reading order, so the tab's text reads "Sign-off 3" as its name begins; drawn over
+          the icon's corner. */}
+      {badge && areaKey ? <View style={styles.badge}><NavBadge areaKey={areaKey} badge={badge} /></View> : null}
     </View>
   );
 }
@@ -75,6 +75,6 @@ const styles = StyleSheet.create({
   mark: { width: 24, height: 3, borderRadius: 2, backgroundColor: 'transparent', marginBottom: space.xxs },
   markActive: { backgroundColor: colors.buoyDeep },
   label: { ...type.caption },
-  // Over the icon's top-right corner, as phones show unread counts.
-  badge: { position: 'absolute', top: -space.xs, left: space.md },
+  // Over the icon's top-right corner (the icon is centred in the tab), as phones show unread counts.
+  badge: { position: 'absolute', top: space.xs, left: '50%', marginLeft: space.xs },
 });
