@@ -23,7 +23,7 @@ type Props = { window: CalendarWindow; timeZone: string; onOpen?: (id: string) =
 const MAX_ELEMENTS_SHOWN = 3;
 
 /** The window's equipment by name ("Orrindale, Orrindale – Vellaport (reduced)"), the first few and a count. */
-export function elementSummary(window: CalendarWindow, nameOf: ElementNamer): string {
+function elementSummary(window: CalendarWindow, nameOf: ElementNamer): string {
   const names = window.elements.map((e) => `${nameOf(e.kind, e.id)}${e.effect === 'reduced' ? ' (reduced)' : ''}`);
   if (names.length === 0) return 'No elements yet';
   const shown = names.slice(0, MAX_ELEMENTS_SHOWN).join(', ');

@@ -1,7 +1,7 @@
-// Pieces both table layouts share: the control that opens a row (named by the row's title cell alone), the mark on
-// the open row, and how a sort order is shown and read out.
+// Pieces both table layouts share: the row that opens on a tap, the control that opens it (named by the row's title
+// cell alone), the mark on the open row, and how a sort order is shown and read out.
 import type { ReactNode } from 'react';
-import { Pressable, StyleSheet, Text, View, type StyleProp, type TextStyle } from 'react-native';
+import { Pressable, StyleSheet, Text, View, type StyleProp, type TextStyle, type ViewStyle } from 'react-native';
 import type { SortState } from './types';
 import { colors, radii, space, type } from '@/constants/theme';
 
@@ -45,6 +45,42 @@ export function RowOpenButton({ testID, open, onPress, children }: OpenProps) {
     >
       {children}
     </Pressable>
+  );
+}
+
+type RowLooks = { base: ViewStyle; selected: ViewStyle; pressed: ViewStyle };
+
+/**
+ * A table row (wide) or card (phone) that opens on a tap anywhere. It is no Tab stop: the keyboard's way in is its
+ * title (OpenTitle), so each row is one stop, named by its title.
+ */
+export function OpenableRow({ testID, role, open, onOpen, looks, children }: {
+  testID: string; role: 'row' | 'listitem'; open: boolean; onOpen?: () => void; looks: RowLooks; children: ReactNode;
+}) {
+  return (
+    <Pressable
+      testID={testID}
+      role={role}
+      aria-current={open ? 'true' : undefined}
+      tabIndex={-1}
+      disabled={!onOpen}
+      onPress={onOpen}
+      style={({ pressed }) => [looks.base, open && looks.selected, pressed && looks.pressed]}
+    >
+      {children}
+    </Pressable>
+  );
+}
+
+/** The row's title as the button that opens it, with the "Open" mark beside it on the open row. */
+export function OpenTitle({ tableTestID, rowKey, open, onOpen, style, children }: {
+  tableTestID: string; rowKey: string; open: boolean; onOpen?: () => void; style: StyleProp<ViewStyle>; children: ReactNode;
+}) {
+  return (
+    <View style={style}>
+      <RowOpenButton testID={`${tableTestID}-open-${rowKey}`} open={open} onPress={onOpen}>{children}</RowOpenButton>
+      {open ? <OpenMark testID={`${tableTestID}-current-${rowKey}`} /> : null}
+    </View>
   );
 }
 

@@ -4,7 +4,7 @@ import { Pressable, ScrollView, StyleSheet, Text, View } from 'react-native';
 import { ChipRow } from '@/components/chip-row';
 import { useRovingChoice } from '@/components/roving-focus';
 import { Cell } from './cell';
-import { OpenMark, RowOpenButton, SortTitle } from './row-parts';
+import { OpenableRow, OpenTitle, SortTitle } from './row-parts';
 import { titleColumn, type RowsViewProps } from './table-columns-view';
 import { isSortable, type Column, type SortState } from './types';
 import { colors, radii, space, type } from '@/constants/theme';
@@ -63,25 +63,20 @@ export function TableCardsView<T>(props: RowsViewProps<T>) {
             {rows.map((row) => {
               const key = rowKey(row);
               const open = key === selectedKey;
+              const onOpen = onRowPress ? () => onRowPress(row) : undefined;
               return (
-                <Pressable
+                <OpenableRow
                   key={key}
                   testID={`${testID}-row-${key}`}
                   role="listitem"
-                  aria-current={open ? 'true' : undefined}
-                  // The title's button is the keyboard's way in; the whole card still takes a tap.
-                  tabIndex={-1}
-                  disabled={!onRowPress}
-                  onPress={onRowPress ? () => onRowPress(row) : undefined}
-                  style={({ pressed }) => [styles.card, open && styles.selected, pressed && styles.pressed]}
+                  open={open}
+                  onOpen={onOpen}
+                  looks={{ base: styles.card, selected: styles.selected, pressed: styles.pressed }}
                 >
                   {title ? (
-                    <View style={styles.titleLine}>
-                      <RowOpenButton testID={`${testID}-open-${key}`} open={open} onPress={onRowPress ? () => onRowPress(row) : undefined}>
-                        <Cell value={title.render(row)} strong />
-                      </RowOpenButton>
-                      {open ? <OpenMark testID={`${testID}-current-${key}`} /> : null}
-                    </View>
+                    <OpenTitle tableTestID={testID} rowKey={key} open={open} onOpen={onOpen} style={styles.titleLine}>
+                      <Cell value={title.render(row)} strong />
+                    </OpenTitle>
                   ) : null}
                   <View style={styles.fields}>
                     {fields.map((column) => (
@@ -91,7 +86,7 @@ export function TableCardsView<T>(props: RowsViewProps<T>) {
                       </View>
                     ))}
                   </View>
-                </Pressable>
+                </OpenableRow>
               );
             })}
           </View>

@@ -2,7 +2,7 @@
 // their column headers, which carry aria-sort; each row opens through its title cell.
 import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
 import { Cell } from './cell';
-import { ariaSort, OpenMark, RowOpenButton, SortTitle } from './row-parts';
+import { ariaSort, OpenableRow, OpenTitle, SortTitle } from './row-parts';
 import { isSortable, type Column, type SortState } from './types';
 import { colors, space, type } from '@/constants/theme';
 
@@ -60,33 +60,28 @@ export function TableColumnsView<T>(props: RowsViewProps<T>) {
               {rows.map((row) => {
                 const key = rowKey(row);
                 const open = key === selectedKey;
+                const onOpen = onRowPress ? () => onRowPress(row) : undefined;
                 return (
-                  <Pressable
+                  <OpenableRow
                     key={key}
                     testID={`${testID}-row-${key}`}
                     role="row"
-                    aria-current={open ? 'true' : undefined}
-                    // The title cell's button is the keyboard's way in; the whole row still takes a click.
-                    tabIndex={-1}
-                    disabled={!onRowPress}
-                    onPress={onRowPress ? () => onRowPress(row) : undefined}
-                    style={({ pressed }) => [styles.row, open && styles.selected, pressed && styles.pressed]}
+                    open={open}
+                    onOpen={onOpen}
+                    looks={{ base: styles.row, selected: styles.selected, pressed: styles.pressed }}
                   >
                     {columns.map((column) => (
                       <View key={column.key} role="cell" style={[styles.cell, { flex: column.flex ?? 1 }, column.align === 'end' && styles.cellEnd]}>
                         {column === title ? (
-                          <View style={styles.titleCell}>
-                            <RowOpenButton testID={`${testID}-open-${key}`} open={open} onPress={onRowPress ? () => onRowPress(row) : undefined}>
-                              <Cell value={column.render(row)} strong={column.primary} align={column.align} />
-                            </RowOpenButton>
-                            {open ? <OpenMark testID={`${testID}-current-${key}`} /> : null}
-                          </View>
+                          <OpenTitle tableTestID={testID} rowKey={key} open={open} onOpen={onOpen} style={styles.titleCell}>
+                            <Cell value={column.render(row)} strong={column.primary} align={column.align} />
+                          </OpenTitle>
                         ) : (
                           <Cell value={column.render(row)} strong={column.primary} align={column.align} />
                         )}
                       </View>
                     ))}
-                  </Pressable>
+                  </OpenableRow>
                 );
               })}
             </View>
