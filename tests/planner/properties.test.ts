@@ -28,13 +28,15 @@ interface Case {
   window: WindowSpec;
 }
 
+function makeCase({ seed, sites, slices }: { seed: number; sites: number; slices: number }): Case {
+  const scenario = buildScenario({ sites, slices, seed, windows: 0 });
+  const w = randomWindow(scenario, createRng(seed), 'w');
+  scenario.windows = [w];
+  return { scenario, inv: buildInventory(scenario), window: compileWindow(w) };
+}
+
 const caseArb = fc.record({ seed: fc.integer({ min: 1, max: 1_000_000 }), sites: fc.integer({ min: 5, max: 9 }), slices: fc.integer({ min: 3, max: 10 }) })
-  .map(({ seed, sites, slices }): Case => {
-    const scenario = buildScenario({ sites, slices, seed, windows: 0 });
-    const w = randomWindow(scenario, createRng(seed), 'w');
-    scenario.windows = [w];
-    return { scenario, inv: buildInventory(scenario), window: compileWindow(w) };
-  });
+  .map(makeCase);
 
 function plan(c: Case, mode: PlanMode, seed = 1): Promise<PlanResult> {
   return planWindow(c.inv, c.window, { ...DE, mode, seed, scenario: c.scenario, parallel: runner, exact: exactSolver });
@@ -65,13 +67,17 @@ describe('planner properties', () => {
     }), { numRuns: 3 });
   });
 
-  it('slices the window does not touch appear only as knock-on moves naming touched slices, never without knock-on', async () => {
+  // A slice that only crosses a reduced span may still fit, so it is touched without being affected; such a
+  // slice may then be moved to make room like any other. The invariant is on `affected`, which must lie
+  // within the touched set.
+  it('slices the window does not affect appear only as knock-on moves naming affected slices, never without knock-on', async () => {
     await fc.assert(fc.asyncProperty(caseArb, fc.boolean(), async (c, knockOn) => {
       const mine = touched(c);
       const r = await planWindow(c.inv, c.window, { ...DE, mode: 'serial', knockOn });
       for (const id of r.affected) expect(mine.has(id)).toBe(true);
+      const affected = new Set(r.affected);
       for (const s of r.slices) {
-        if (mine.has(s.slice)) {
+        if (affected.has(s.slice)) {
           expect(s.madeRoomFor).toBeUndefined();
           continue;
         }
@@ -80,7 +86,8 @@ describe('planner properties', () => {
         expect(s.madeRoomFor!.length).toBeGreaterThan(0);
         for (const t of s.madeRoomFor!) expect(r.affected).toContain(t);
       }
-    }), { numRuns: 8 });
+      // Found by a CI run: slice 3 only crosses a span reduced to 77 % and is moved to make room.
+    }), { numRuns: 8, examples: [[makeCase({ seed: 16, sites: 7, slices: 5 }), true]] });
   });
 
   it('no plan uses a down site, a down span or a span touching a down site', async () => {
