@@ -6,3 +6,4 @@ export * from './policies';
 export * from './plans';
 export * from './signoff';
 export * from './idempotency';
+export * from './feeds';
