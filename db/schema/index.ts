@@ -7,3 +7,4 @@ export * from './plans';
 export * from './signoff';
 export * from './idempotency';
 export * from './feeds';
+export * from './one-time-links';
