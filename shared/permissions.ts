@@ -27,6 +27,11 @@ export const NOTICE_RESENDER_ROLES: Roles = ['admin', 'planner'];
 export const PLAN_RUNNER_ROLES: Roles = ['planner'];
 /** Read move plans (tenants never see them; engineers are refused). */
 export const PLAN_READER_ROLES: Roles = ['planner', 'approver', 'admin'];
+/**
+ * The change-board pack and its moves CSV: every operator role. Engineers included on purpose: they carry out
+ * the moves in the field, and the pack shows the accepted plan only, not the runs behind it.
+ */
+export const CHANGE_PACK_READER_ROLES: Roles = OPERATOR_ROLES;
 /** Submit a window's accepted plan for sign-off. */
 export const SIGNOFF_SUBMITTER_ROLES: Roles = ['planner'];
 /** Decide a sign-off (approve or return). */
@@ -52,6 +57,7 @@ export const canReadWindowNotices = (roles: Roles) => holdsAnyRole(roles, WINDOW
 export const canResendNotices = (roles: Roles) => holdsAnyRole(roles, NOTICE_RESENDER_ROLES);
 export const canRunPlans = (roles: Roles) => holdsAnyRole(roles, PLAN_RUNNER_ROLES);
 export const canReadPlans = (roles: Roles) => holdsAnyRole(roles, PLAN_READER_ROLES);
+export const canReadChangePack = (roles: Roles) => holdsAnyRole(roles, CHANGE_PACK_READER_ROLES);
 export const canSubmitForSignoff = (roles: Roles) => holdsAnyRole(roles, SIGNOFF_SUBMITTER_ROLES);
 export const canSignOff = (roles: Roles) => holdsAnyRole(roles, SIGNOFF_APPROVER_ROLES);
 export const canOpenSignoffQueue = (roles: Roles) => holdsAnyRole(roles, SIGNOFF_QUEUE_ROLES);

@@ -1,5 +1,5 @@
 // /api/windows: list, book, read, edit (optimistic locking), assess, lifecycle, impact, conflicts; the sub-resources
-// (MOP, history, sign-off submission, plans, notices) live in routes/windows/ and are mounted here. A tenant user reads only
+// (MOP, history, sign-off submission, plans, notices, change-board pack) live in routes/windows/ and are mounted here. A tenant user reads only
 // tenant views (list and one window, from its notices); everything else about a window is not found for it.
 import express, { type Request, type Router } from 'express';
 import { windowCreateSchema, windowListQuerySchema, windowListSchema, windowMutationSchema,
@@ -23,6 +23,7 @@ import type { RouteDeps } from './deps';
 import { windowHistoryRouter } from './windows/history';
 import { windowMopRouter } from './windows/mop';
 import { windowNoticesRouter } from './windows/notices';
+import { windowPackRouter } from './windows/pack';
 import { windowPlansRouter } from './windows/plans';
 import { windowSubmitRouter } from './windows/submit';
 
@@ -108,5 +109,6 @@ export function windowsRouter(deps: RouteDeps): Router {
   router.use(windowSubmitRouter(deps));
   router.use(windowPlansRouter(deps));
   router.use(windowNoticesRouter(deps));
+  router.use(windowPackRouter(deps));
   return router;
 }
