@@ -1,10 +1,11 @@
-// Reads a GraphML topology: nodes → sites, edges → spans (values per graphml-keys.ts; merge fills or reports gaps).
+// Reads a GraphML topology: nodes → sites, edges → spans (values per graphml-keys.ts and the upload's mapping;
+// merge fills or reports gaps).
 import Graph from 'graphology';
 import { parse as parseGraphml } from 'graphology-graphml';
-import type { ImportIssue } from '../../shared/imports';
+import type { ImportIssue, ImportMapping } from '../../shared/imports';
 import { ImportFileError } from './errors';
-import { siteValues, spanValues } from './graphml-keys';
-import type { GraphmlSite, GraphmlSpan, ParsedImport } from './types';
+import { siteValues, spanValues, type Recognised } from './graphml-keys';
+import type { GraphmlNames, GraphmlSite, GraphmlSpan, ParsedImport } from './types';
 import { parseXmlStrict } from './xml-check';
 
 /** Duplicate node or edge ids and edges to unknown nodes: the library would merge or throw on them. */
@@ -42,20 +43,49 @@ function edgeId(given: Set<string>, used: Set<string>, key: string, source: stri
   return id;
 }
 
-export function parseGraphmlFile(text: string, fileName: string): ParsedImport {
+/** Attribute names as the file spells them, in order of first use. */
+function attributeNames(all: Record<string, unknown>[]): string[] {
+  const seen = new Set<string>();
+  for (const attrs of all) for (const name of Object.keys(attrs)) seen.add(name);
+  return [...seen];
+}
+
+/** A mapping may only name attributes the file has (case-insensitively, as our own names are matched). */
+function checkMapping(mapping: ImportMapping | undefined, attributes: GraphmlNames['attributes']): void {
+  for (const entity of ['site', 'span'] as const) {
+    const known = new Set(attributes[entity].map((a) => a.toLowerCase()));
+    for (const [field, attr] of Object.entries(mapping?.[entity] ?? {})) {
+      if (attr !== undefined && !known.has(attr.toLowerCase())) {
+        const where = entity === 'site' ? 'nodes' : 'edges';
+        throw new ImportFileError('BAD_MAPPING', `mapping ${entity}.${field}: the file's ${where} have no attribute "${attr}".`);
+      }
+    }
+  }
+}
+
+const noNames = (): GraphmlNames => ({ attributes: { site: [], span: [] }, recognised: { site: {}, span: {} } });
+
+export function parseGraphmlFile(text: string, fileName: string, options: { mapping?: ImportMapping } = {}): ParsedImport {
+  const { mapping } = options;
   const doc = parseXmlStrict(text, fileName);
   const { errors, edgeIds } = structureErrors(doc, fileName);
   const warnings: ImportIssue[] = [];
-  if (errors.length > 0) return { errors, warnings, content: { kind: 'graphml', sites: [], spans: [] } };
+  if (errors.length > 0) return { errors, warnings, content: { kind: 'graphml', sites: [], spans: [], names: noNames() } };
   let graph: Graph;
   try {
     graph = parseGraphml(Graph, text);
   } catch (err) {
     throw new ImportFileError('BAD_GRAPHML', `"${fileName}" could not be read as GraphML: ${(err as Error).message}`);
   }
+  const names = noNames();
+  names.attributes.site = attributeNames(graph.mapNodes((_id, attrs) => attrs));
+  names.attributes.span = attributeNames(graph.mapEdges((_key, attrs) => attrs));
+  checkMapping(mapping, names.attributes);
+  const siteFrom: Recognised = names.recognised.site;
+  const spanFrom: Recognised = names.recognised.span;
   const sites: GraphmlSite[] = graph.mapNodes((id, attrs) => {
     const problem = (message: string) => errors.push({ file: fileName, path: `node[${id}]`, message });
-    return { id, given: siteValues(attrs, problem) };
+    return { id, given: siteValues(attrs, problem, mapping?.site, siteFrom) };
   });
   const used = new Set<string>();
   const spans: GraphmlSpan[] = graph.mapEdges((key, attrs, source, target) => {
@@ -63,7 +93,7 @@ export function parseGraphmlFile(text: string, fileName: string): ParsedImport {
     used.add(id);
     if (!edgeIds.has(key)) warnings.push({ file: fileName, path: `edge[${id}]`, message: `edge ${source}–${target} has no id; named "${id}"` });
     const problem = (message: string) => errors.push({ file: fileName, path: `edge[${id}]`, message });
-    return { id, given: { ...spanValues(attrs, problem), a: source, b: target } };
+    return { id, given: { ...spanValues(attrs, problem, mapping?.span, spanFrom), a: source, b: target } };
   });
-  return { errors, warnings, content: { kind: 'graphml', sites, spans } };
+  return { errors, warnings, content: { kind: 'graphml', sites, spans, names } };
 }

@@ -12,6 +12,7 @@ import { printablePreview } from '../imports/printable-preview';
 import { recordPreview } from '../imports/record-preview';
 import { isTemplateKind, templateFile } from '../imports/templates';
 import { singleFileUpload } from '../imports/upload';
+import { parseDefaultsField, parseMappingField } from '../imports/upload-options';
 import type { RouteDeps } from './deps';
 
 export function importsRouter({ db, config, now }: RouteDeps): express.Router {
@@ -22,8 +23,10 @@ export function importsRouter({ db, config, now }: RouteDeps): express.Router {
     if (!req.file) throw new ImportFileError('NO_FILE', 'Send the file in the multipart field "file".');
     const fileName = req.file.originalname || 'upload';
     const kind = typeof req.body?.kind === 'string' ? req.body.kind : undefined;
+    const defaults = parseDefaultsField(req.body?.defaults);
+    const mapping = parseMappingField(req.body?.mapping);
     // Issues quote the file; a NUL or lone surrogate there is escaped so the preview can be stored.
-    const result = printablePreview(await buildPreview(db, { fileName, bytes: req.file.buffer, requestedKind: kind }));
+    const result = printablePreview(await buildPreview(db, { fileName, bytes: req.file.buffer, requestedKind: kind, defaults, mapping }));
     const id = await recordPreview(db, { ...result, fileName, sizeBytes: req.file.size, userId: currentUser(req).id, now: now() });
     res.status(201).json({ id, kind: result.kind, fileName, preview: result.preview });
   });
