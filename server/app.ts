@@ -15,6 +15,7 @@ import { originCheck } from './http/origin-check';
 import { securityHeaders } from './http/security-headers';
 import { webApp } from './http/web-app';
 import { authRouter } from './routes/auth';
+import { feedsRouter } from './routes/calendar-feeds';
 import { healthRouter } from './routes/health';
 import { importsRouter } from './routes/imports';
 import { meRouter } from './routes/me';
@@ -35,6 +36,8 @@ import { noticesRouter } from './routes/notices';
 import { signoffRouter } from './routes/signoff';
 import { plansRouter } from './routes/plans';
 import { portalRouter } from './routes/portal';
+import { setUpRouter } from './routes/set-up';
+import { demoDataRouter } from './routes/demo-data';
 
 export type AppDeps = {
   db: Db;
@@ -58,6 +61,8 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   const api = express.Router();
   api.use(noStore);
   api.use('/auth', authRouter(deps));
+  api.use('/set-up', setUpRouter(deps));
+  api.use('/demo-data', demoDataRouter(deps));
   api.use('/me', meRouter(deps));
   api.use('/overview', overviewRouter(deps));
   api.use('/users', usersRouter(deps));
@@ -90,6 +95,8 @@ export function createApp(deps: AppDeps): express.Application {
   app.use(securityHeaders());
   // Before sessions and body parsing: a health probe must not depend on a cookie's database look-up.
   app.use('/api/health', noStore, healthRouter({ db, config, now, jobs: deps.jobs ?? noJobQueue }));
+  // Calendar apps fetch feeds without a cookie: the token in the address is the credential (routes/calendar-feeds.ts).
+  app.use('/feeds', feedsRouter({ db, config, now }));
   app.use(express.json({ limit: config.jsonBodyLimit }));
   app.use(cookieParser());
   // After body parsing, before any router: NUL, lone surrogates and broken percent-encoding never reach a handler.

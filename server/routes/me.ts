@@ -1,9 +1,10 @@
 // GET /api/me: the signed-in user; its one-time codes under /api/me/otp, its sessions under /api/me/sessions,
-// its time zone under /api/me/time-zone.
+// its time zone under /api/me/time-zone, its calendar feed address under /api/me/calendar-feed.
 import express, { type Router } from 'express';
 import { meSchema } from '../../shared/api';
 import { currentUser, requireAuth } from '../auth/guards';
 import { toPublicSession } from '../auth/sessions';
+import { myCalendarFeedRouter } from './calendar-feeds';
 import type { RouteDeps } from './deps';
 import { otpRouter } from './me/otp';
 import { sessionsRouter } from './me/sessions';
@@ -14,6 +15,7 @@ export function meRouter(deps: RouteDeps): Router {
   router.use('/otp', otpRouter(deps));
   router.use('/sessions', sessionsRouter(deps));
   router.use('/time-zone', timeZoneRouter(deps));
+  router.use('/calendar-feed', myCalendarFeedRouter(deps));
   router.get('/', requireAuth, (req, res) => {
     res.json(meSchema.parse(toPublicSession({ user: currentUser(req) }).user));
   });
