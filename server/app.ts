@@ -36,6 +36,8 @@ import { noticesRouter } from './routes/notices';
 import { signoffRouter } from './routes/signoff';
 import { plansRouter } from './routes/plans';
 import { portalRouter } from './routes/portal';
+import { setUpRouter } from './routes/set-up';
+import { demoDataRouter } from './routes/demo-data';
 
 export type AppDeps = {
   db: Db;
@@ -59,6 +61,8 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   const api = express.Router();
   api.use(noStore);
   api.use('/auth', authRouter(deps));
+  api.use('/set-up', setUpRouter(deps));
+  api.use('/demo-data', demoDataRouter(deps));
   api.use('/me', meRouter(deps));
   api.use('/overview', overviewRouter(deps));
   api.use('/users', usersRouter(deps));
