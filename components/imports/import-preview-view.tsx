@@ -1,4 +1,5 @@
-// One import's preview: file and kind, the counts, errors and warnings, the add/change/remove lists, then Apply.
+// One import's preview: file and kind, the counts, errors and warnings, the mapping step (GraphML), where the values
+// came from, the add/change/remove lists, then Apply.
 import type { ReactNode } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { ImportApplied, ImportKind, ImportPreview, ImportStatus } from '@/shared/imports';
@@ -6,6 +7,7 @@ import { ApplyBar } from './apply-bar';
 import { ChangeLists } from './change-lists';
 import { KIND_LABELS } from './import-kinds';
 import { IssueList } from './issue-list';
+import { SourcesView } from './sources-view';
 import { colors, radii, space, type } from '@/constants/theme';
 
 export type ImportRecordView = { id: string; kind: ImportKind; fileName: string; status: ImportStatus; preview: ImportPreview };
@@ -18,6 +20,10 @@ type Props = {
   applied: ImportApplied | null;
   /** Where to go once applied (links into the app; passed in so this view stays free of the router). */
   appliedActions?: ReactNode;
+  /** The mapping step, when the file is at hand to be checked again (passed in: it belongs to the screen's flow). */
+  mappingStep?: ReactNode;
+  /** Tests force a table layout; the screen lets the width decide. */
+  tableLayout?: 'columns' | 'cards';
 };
 
 function Counts({ preview }: { preview: ImportPreview }) {
@@ -48,7 +54,7 @@ function AppliedNote({ applied, actions }: { applied: ImportApplied; actions?: R
   );
 }
 
-export function ImportPreviewView({ record, onApply, applying, applyError, applied, appliedActions }: Props) {
+export function ImportPreviewView({ record, onApply, applying, applyError, applied, appliedActions, mappingStep, tableLayout }: Props) {
   const { preview } = record;
   return (
     <View style={styles.panel} testID="import-preview">
@@ -59,6 +65,8 @@ export function ImportPreviewView({ record, onApply, applying, applyError, appli
       <Counts preview={preview} />
       <IssueList issues={preview.errors} tone="error" testID="import-errors" />
       <IssueList issues={preview.warnings} tone="warning" testID="import-warnings" />
+      {mappingStep}
+      {preview.sources ? <SourcesView sources={preview.sources} layout={tableLayout} /> : null}
       {/* With errors, the server may still list what the good part would change; an empty list would only mislead. */}
       {preview.errors.length === 0 || preview.counts.adds + preview.counts.changes + preview.counts.removes > 0 ? (
         <ChangeLists preview={preview} />

@@ -4,6 +4,7 @@ import type { ImportSummary } from '@/shared/imports';
 import { AppliedLinks } from './applied-links';
 import { ImportHistory } from './import-history';
 import { ImportPreviewView } from './import-preview-view';
+import { MappingStep } from './mapping-step';
 import { UploadPanel } from './upload-panel';
 import { useImportFlow } from './use-import-flow';
 import { colors, radii, space, type, WIDE_LAYOUT_MIN_WIDTH_PX } from '@/constants/theme';
@@ -13,7 +14,8 @@ export function ImportsView({ history }: { history: readonly ImportSummary[] }) 
   const wide = useWindowDimensions().width >= WIDE_LAYOUT_MIN_WIDTH_PX;
   const main = (
     <View style={styles.column}>
-      <UploadPanel kind={flow.kind} onKindChange={flow.setKind} onPick={flow.pick} uploading={flow.uploading} uploadError={flow.uploadError} />
+      <UploadPanel kind={flow.kind} onKindChange={flow.setKind} onPick={flow.pick} uploading={flow.uploading} uploadError={flow.uploadError}
+        defaults={flow.defaults} onCheckAgain={flow.previewAgain} keptFileName={flow.keptFileName} />
       {flow.record ? (
         <View style={styles.card}>
           <ImportPreviewView
@@ -23,6 +25,10 @@ export function ImportsView({ history }: { history: readonly ImportSummary[] }) 
             applyError={flow.applyError}
             applied={flow.applied}
             appliedActions={<AppliedLinks />}
+            mappingStep={flow.record.kind === 'graphml' && flow.record.preview.sources && flow.previewAgain && !flow.applied ? (
+              <MappingStep sources={flow.record.preview.sources} picks={flow.picks} onPicksChange={flow.setPicks}
+                onPreviewAgain={flow.previewAgain} busy={flow.uploading} />
+            ) : null}
           />
         </View>
       ) : null}

@@ -1,9 +1,12 @@
-// Choose what kind of file (or let the server tell), pick it, and it goes up for a preview; templates for the CSV kinds.
+// Choose what kind of file (or let the server tell), what fills its gaps, pick it, and it goes up for a preview;
+// the file last picked can be checked again; templates for the CSV kinds.
 import { Linking, Pressable, StyleSheet, Text, View } from 'react-native';
 import type { ImportKind } from '@/shared/imports';
 import { importTemplateUrl } from '@/hooks/queries/imports';
 import { Button } from '@/components/button';
 import { Segmented } from '@/components/inventory/segmented';
+import { DefaultsSection } from './defaults-section';
+import type { useDefaultsForm } from './use-defaults-form';
 import { KIND_LABELS, TEMPLATES } from './import-kinds';
 import { colors, radii, space, type } from '@/constants/theme';
 import { linkKeyProps } from '@/components/key-props';
@@ -21,9 +24,13 @@ type Props = {
   onPick: () => void;
   uploading: boolean;
   uploadError: string | null;
+  defaults: ReturnType<typeof useDefaultsForm>;
+  /** Check the file last picked again (with the values above); null when there is none. */
+  onCheckAgain: (() => void) | null;
+  keptFileName: string | null;
 };
 
-export function UploadPanel({ kind, onKindChange, onPick, uploading, uploadError }: Props) {
+export function UploadPanel({ kind, onKindChange, onPick, uploading, uploadError, defaults, onCheckAgain, keptFileName }: Props) {
   return (
     <View style={styles.panel} testID="import-upload">
       <Text style={styles.title} role="heading" aria-level={2}>Upload a file</Text>
@@ -32,7 +39,13 @@ export function UploadPanel({ kind, onKindChange, onPick, uploading, uploadError
       </Text>
       <Text style={styles.label}>Kind of file</Text>
       <Segmented choices={KIND_CHOICES} value={kind} onChange={onKindChange} testID="import-kind" label="Kind of file" />
-      <Button label={uploading ? 'Checking the file…' : 'Choose a file'} testID="import-pick" busy={uploading} onPress={onPick} />
+      <DefaultsSection open={defaults.open} onToggle={defaults.toggle} form={defaults.form} onChange={defaults.change} errors={defaults.errors} />
+      <View style={styles.actions}>
+        <Button label={uploading ? 'Checking the file…' : 'Choose a file'} testID="import-pick" busy={uploading} onPress={onPick} />
+        {onCheckAgain && keptFileName ? (
+          <Button label={`Check ${keptFileName} again`} variant="quiet" testID="import-check-again" disabled={uploading} onPress={onCheckAgain} />
+        ) : null}
+      </View>
       {uploadError ? (
         <Text style={styles.error} role="alert" testID="import-upload-error">{uploadError}</Text>
       ) : null}
@@ -56,6 +69,7 @@ const styles = StyleSheet.create({
   text: { ...type.body, color: colors.inkMuted },
   label: { ...type.label, color: colors.ink, marginTop: space.xs },
   error: { ...type.body, color: colors.danger },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   templates: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md, marginTop: space.xs },
   link: { ...type.bodyStrong, color: colors.primary },
 });

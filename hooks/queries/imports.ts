@@ -1,7 +1,8 @@
 // Imports: upload a file for a preview, apply a previewed import, the list of past imports and one import.
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import {
-  importAppliedSchema, importCreatedSchema, importDetailSchema, importListSchema, type ImportKind,
+  importAppliedSchema, importCreatedSchema, importDetailSchema, importListSchema,
+  type ImportDefaultsInput, type ImportKind, type ImportMapping,
 } from '@/shared/imports';
 import { apiFetch } from '@/hooks/api-fetch';
 import { networkMapKey } from '@/hooks/queries/network-map';
@@ -28,7 +29,10 @@ export function importTemplateUrl(kind: 'csv-sites' | 'csv-spans' | 'csv-slices'
  */
 export type UploadFile = { name: string; file?: Blob; uri?: string; mimeType?: string };
 
-function uploadBody(upload: UploadFile, kind: ImportKind | null): FormData {
+/** One upload: the file, its kind (null: the server decides) and, optionally, defaults and a mapping. */
+export type UploadRequest = { upload: UploadFile; kind: ImportKind | null; defaults?: ImportDefaultsInput | null; mapping?: ImportMapping | null };
+
+export function uploadBody({ upload, kind, defaults, mapping }: UploadRequest): FormData {
   const form = new FormData();
   if (upload.file) {
     form.append('file', upload.file, upload.name);
@@ -38,6 +42,9 @@ function uploadBody(upload: UploadFile, kind: ImportKind | null): FormData {
   }
   // No kind: the server decides from the extension and the content.
   if (kind) form.append('kind', kind);
+  // Absent fields keep the file as it is: missing values stay errors and our usual attribute names apply.
+  if (defaults) form.append('defaults', JSON.stringify(defaults));
+  if (mapping) form.append('mapping', JSON.stringify(mapping));
   return form;
 }
 
@@ -56,8 +63,8 @@ export function useImportQuery(id: string | null) {
 export function useImportUploadMutation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ upload, kind }: { upload: UploadFile; kind: ImportKind | null }) =>
-      apiFetch('/api/imports', importCreatedSchema, { method: 'POST', body: uploadBody(upload, kind) }),
+    mutationFn: (request: UploadRequest) =>
+      apiFetch('/api/imports', importCreatedSchema, { method: 'POST', body: uploadBody(request) }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: importListKey() }),
   });
 }
