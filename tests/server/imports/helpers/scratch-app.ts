@@ -56,9 +56,15 @@ export async function importRowCount(pool: pg.Pool): Promise<number> {
   return rows[0].n;
 }
 
-export function upload(ctx: ImportsContext, file: { text: string | Buffer; name: string; kind?: string }, cookie = ctx.planner) {
+/** `defaults` and `mapping` go as text fields, JSON-encoded unless already a string (to send broken JSON). */
+export function upload(
+  ctx: ImportsContext, file: { text: string | Buffer; name: string; kind?: string; defaults?: unknown; mapping?: unknown }, cookie = ctx.planner,
+) {
   const req = request(ctx.app).post('/api/imports').set('Cookie', cookie);
   if (file.kind) req.field('kind', file.kind);
+  const asText = (v: unknown) => (typeof v === 'string' ? v : JSON.stringify(v));
+  if (file.defaults !== undefined) req.field('defaults', asText(file.defaults));
+  if (file.mapping !== undefined) req.field('mapping', asText(file.mapping));
   const bytes = typeof file.text === 'string' ? Buffer.from(file.text, 'utf8') : file.text;
   return req.attach('file', bytes, { filename: file.name, contentType: 'application/octet-stream' });
 }
