@@ -3,6 +3,7 @@ import type { ReactNode } from 'react';
 import { ScrollView, StyleSheet, Text, View } from 'react-native';
 import type { PortalWork } from '@/shared/notices';
 import { ListPane } from '@/components/inventory/list-pane';
+import { CalendarFeedLink } from '@/components/security/calendar-feed-link';
 import { timesInLabel } from '@/components/time';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { colors, space, type } from '@/constants/theme';
@@ -11,6 +12,7 @@ import { PortalWorkRow } from './portal-work-row';
 export function PortalWorkPane({ children }: { children: ReactNode }) {
   return (
     <ListPane title="Planned work" hint="Maintenance that touches your slices, and the notices we sent you about it." testID="notices-pane">
+      <CalendarFeedLink what="this planned work" />
       {children}
     </ListPane>
   );
