@@ -27,14 +27,17 @@ function exactDetail(exact: ReferenceResult): string {
   return parts.join(' · ');
 }
 
+/** Only the figures it shows, so the change-board pack can hand over its copy of them. */
+type ReferenceFigures = Pick<PlanReview, 'objective' | 'computeMs' | 'search' | 'greedy' | 'exact'>;
+
 /** The run's figures are the greedy plan's when it was kept; the search's own then follow, so neither is hidden. */
-function runDetail(review: PlanReview): string {
+function runDetail(review: ReferenceFigures): string {
   const took = `search ${formatDurationMs(review.computeMs)}`;
   if (review.search?.usedFallback !== 'greedy') return took;
   return `${took} · greedy plan kept; the search alone: ${formatObjective(review.search.objective)}${review.search.feasible ? '' : ' (outside a limit)'}`;
 }
 
-export function PlanReferences({ review }: { review: PlanReview }) {
+export function PlanReferences({ review }: { review: ReferenceFigures }) {
   const { greedy, exact } = review;
   return (
     <View style={styles.list} testID="plan-references">

@@ -25,6 +25,8 @@ type Props = {
   onDecide: (body: SignoffDecisionBody) => void;
   onOpenPlan: (href: string) => void;
   onEnrol: () => void;
+  /** the printable change-board pack of this window */
+  onOpenPack?: () => void;
 };
 
 function What({ summary: s, timeZone }: Pick<Props, 'summary' | 'timeZone'>) {
@@ -60,6 +62,7 @@ export function SignoffSummaryView(props: Props) {
       <RiskFacts summary={s} />
       <View style={styles.row}>
         <Button label="Full plan" variant="quiet" onPress={() => props.onOpenPlan(s.plan.href)} testID="signoff-open-plan" />
+        {props.onOpenPack ? <Button label="Change-board pack" variant="quiet" onPress={props.onOpenPack} testID="signoff-open-pack" /> : null}
         {s.mop ? <Button label={`MOP: ${s.mop.fileName}`} variant="quiet" onPress={() => void Linking.openURL(s.mop!.href)} testID="signoff-mop" /> : (
           <Text style={styles.muted} testID="signoff-no-mop">No MOP attached.</Text>
         )}

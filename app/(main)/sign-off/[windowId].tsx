@@ -30,6 +30,7 @@ export default function SignoffWindowScreen() {
         decisionError={decision.error}
         onDecide={(body) => decision.mutate(body, { onSuccess: () => forgetDecisionDraft(draftKey) })}
         onOpenPlan={(href) => router.push(href as Href)}
+        onOpenPack={() => router.push(`/windows/${encodeURIComponent(windowId)}/pack`)}
         // Codes are set up inside the decision form now; nothing leaves this screen for them.
         onEnrol={() => undefined}
       />

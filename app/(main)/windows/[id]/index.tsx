@@ -9,6 +9,7 @@ import { WindowDetail } from '@/components/windows/window-detail';
 import { WindowPlansEntry } from '@/components/plans/window-plans-entry';
 import { SubmitForSignoff } from '@/components/signoff/submit-for-signoff';
 import { WindowTenantNotices } from '@/components/notices/window-tenant-notices';
+import { PackLink } from '@/components/pack/pack-link';
 import { titleWithName, usePageTitle } from '@/components/page-title';
 import { staffWindowPage } from '@/components/notices/tenant-window-page';
 
@@ -40,6 +41,7 @@ function WindowScreen() {
       />
       <SubmitForSignoff window={window.data} me={me.data} onOpenSignoff={() => router.push(`/sign-off/${encodeURIComponent(params.id)}`)} />
       <WindowTenantNotices windowId={params.id} me={me.data} timeZone={timeZone} />
+      <PackLink me={me.data} onOpen={() => router.push(`/windows/${encodeURIComponent(params.id)}/pack`)} />
     </WindowDetail>
   );
 }
