@@ -11,7 +11,9 @@ export function packPrintCss(): string {
     '@media print {',
     // 15 mm fits inside the printable area of both A4 (210 × 297 mm) and Letter (216 × 279 mm).
     '  @page { margin: 15mm; }',
+    // The app's tinted surfaces go white too (browsers often print backgrounds when asked to).
     '  html, body { background: #fff !important; }',
+    '  #root, #root * { background-color: transparent !important; }',
     // WARNING: the app's frames are full-height scroll views; on paper they must grow with their content, or only
     // the first screenful prints.
     '  html, body, #root, #root * { height: auto !important; max-height: none !important; overflow: visible !important; }',
