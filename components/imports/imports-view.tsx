@@ -27,7 +27,8 @@ export function ImportsView({ history }: { history: readonly ImportSummary[] }) 
             appliedActions={<AppliedLinks />}
             mappingStep={flow.record.kind === 'graphml' && flow.record.preview.sources && flow.previewAgain && !flow.applied ? (
               <MappingStep sources={flow.record.preview.sources} picks={flow.picks} onPicksChange={flow.setPicks}
-                onPreviewAgain={flow.previewAgain} busy={flow.uploading} />
+                onPreviewAgain={flow.previewAgain} busy={flow.uploading}
+                initiallyOpen={flow.record.preview.errors.length > 0} />
             ) : null}
           />
         </View>

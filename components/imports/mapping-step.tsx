@@ -1,6 +1,7 @@
 // After a GraphML preview: the file's attribute names, which of our fields each feeds, a picker per field, and
 // "Preview again" to check the same file with the picks (and the defaults) without choosing it again.
-import { StyleSheet, Text, View } from 'react-native';
+import { useState } from 'react';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { Button } from '@/components/button';
 import { Segmented } from '@/components/inventory/segmented';
 import type { ImportSources } from '@/shared/imports';
@@ -14,6 +15,8 @@ type Props = {
   /** Null when the file is no longer at hand (an import opened from the list): it must be chosen again. */
   onPreviewAgain: (() => void) | null;
   busy: boolean;
+  /** Open at first (a preview with errors); otherwise the step waits behind its title. */
+  initiallyOpen: boolean;
 };
 
 const NONE = 'none';
@@ -45,10 +48,27 @@ function EntityPickers({ entity, attributes, picks, onPicksChange }: {
   );
 }
 
-export function MappingStep({ sources, picks, onPicksChange, onPreviewAgain, busy }: Props) {
+export function MappingStep({ sources, picks, onPicksChange, onPreviewAgain, busy, initiallyOpen }: Props) {
+  const [open, setOpen] = useState(initiallyOpen);
   return (
     <View style={styles.box} testID="import-mapping">
-      <Text style={styles.title} role="heading" aria-level={3}>Which attribute is which field</Text>
+      {/* Disclosure pattern: the heading holds the button that opens the step. */}
+      <View role="heading" aria-level={3}>
+        <Pressable role="button" aria-expanded={open} onPress={() => setOpen((was) => !was)} testID="import-mapping-toggle">
+          <Text style={styles.title}>
+            <Text aria-hidden>{open ? '▾ ' : '▸ '}</Text>
+            Which attribute is which field
+          </Text>
+        </Pressable>
+      </View>
+      {open ? <MappingBody sources={sources} picks={picks} onPicksChange={onPicksChange} onPreviewAgain={onPreviewAgain} busy={busy} /> : null}
+    </View>
+  );
+}
+
+function MappingBody({ sources, picks, onPicksChange, onPreviewAgain, busy }: Omit<Props, 'initiallyOpen'>) {
+  return (
+    <View style={styles.body}>
       <Text style={styles.text}>
         Each field shows the attribute it was read from. Where the file names a field differently, pick its attribute and
         preview again. None: the field is read from our usual names (such as Latitude or lat), if the file has one.
@@ -66,7 +86,8 @@ export function MappingStep({ sources, picks, onPicksChange, onPreviewAgain, bus
 
 const styles = StyleSheet.create({
   box: { gap: space.sm, borderWidth: 1, borderColor: colors.border, borderRadius: radii.lg, padding: space.md },
-  title: { ...type.heading, color: colors.ink },
+  title: { ...type.heading, color: colors.primary },
+  body: { gap: space.sm },
   text: { ...type.body, color: colors.inkMuted },
   entity: { gap: space.sm, marginTop: space.xs },
   entityTitle: { ...type.bodyStrong, color: colors.ink },

@@ -125,7 +125,10 @@ test('the mapping step starts from what was recognised, and "Preview again" send
   renderWithQueries(<ImportsView history={[]} />);
   fireEvent.press(screen.getByTestId('import-pick'));
 
-  expect(await screen.findByTestId('import-mapping')).toBeTruthy();
+  // A clean preview keeps the step closed behind its title.
+  expect(await screen.findByTestId('import-mapping-toggle')).not.toBeExpanded();
+  expect(screen.queryByTestId('import-preview-again')).toBeNull();
+  fireEvent.press(screen.getByTestId('import-mapping-toggle'));
   expect(screen.getByTestId('import-mapping-site-attributes')).toHaveTextContent(/label, y, x/);
   expect(screen.getByTestId('import-map-site-name-a:label')).toBeChecked();
   expect(screen.getByTestId('import-map-site-lat-none')).toBeChecked();
