@@ -206,18 +206,22 @@ test('re-importing over the applied network: kinds kept from the inventory are n
 });
 
 test('a backbone-sized file (186 sites, 250 spans, no compute, few capacities) previews clean and its sources stay small', async () => {
-  // Invented points on a grid; a ring plus 64 chords gives 250 spans.
+  // Invented points on a grid; a ring plus 64 chords gives 250 spans. Ids apart from the sites applied above, so
+  // every kind is ranked here rather than kept from the inventory.
+  const id = (i: number) => `b${i}`;
   const big: GraphmlNode[] = [...Array(186).keys()].map((i) => ({
-    id: String(i), data: { label: `Site ${i}`, Latitude: 40 + (i % 14) * 0.7, Longitude: -10 + Math.floor(i / 14) * 0.9, type: 'Green' },
+    id: id(i), data: { label: `Site ${i}`, Latitude: 40 + (i % 14) * 0.7, Longitude: -10 + Math.floor(i / 14) * 0.9, type: 'Green' },
   }));
-  const links: GraphmlEdge[] = [...Array(186).keys()].map((i) => ({ source: String(i), target: String((i + 1) % 186), data: {} }));
-  for (let i = 0; i < 64; i++) links.push({ source: String(i), target: String((i * 7 + 40) % 186), data: { LinkSpeedRaw: 1e10 } });
+  const links: GraphmlEdge[] = [...Array(186).keys()].map((i) => ({ source: id(i), target: id((i + 1) % 186), data: {} }));
+  for (let i = 0; i < 64; i++) links.push({ source: id(i), target: id((i * 7 + 40) % 186), data: { LinkSpeedRaw: 1e10 } });
   const res = await upload(ctx, { text: graphmlText(big, links), name: 'backbone.graphml', defaults: DEFAULTS });
   const { preview: p } = importCreatedSchema.parse(res.body);
   expect(p.counts.errors).toBe(0);
   expect(Object.keys(p.sources!.values.sites)).toHaveLength(186);
   expect(Object.keys(p.sources!.values.spans)).toHaveLength(250);
+  // ceil(10 % of 186) = 19 core, ceil(30 % of 186) = 56 aggregation.
   expect(p.sources!.items!.sites.filter((x) => x.kind === 'core')).toHaveLength(19);
+  expect(p.sources!.items!.sites.filter((x) => x.kind === 'aggregation')).toHaveLength(56);
   // WARNING: the preview is stored as jsonb and sent whole to a phone; 256 kB is the budget for sources.
   expect(JSON.stringify(p.sources).length).toBeLessThan(256 * 1024);
 });
