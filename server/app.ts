@@ -15,7 +15,7 @@ import { originCheck } from './http/origin-check';
 import { securityHeaders } from './http/security-headers';
 import { webApp } from './http/web-app';
 import { authRouter } from './routes/auth';
-import { feedsRouter } from './routes/calendar-feeds';
+import { calendarFeedsRouter } from './routes/calendar-feeds';
 import { healthRouter } from './routes/health';
 import { importsRouter } from './routes/imports';
 import { meRouter } from './routes/me';
@@ -96,7 +96,7 @@ export function createApp(deps: AppDeps): express.Application {
   // Before sessions and body parsing: a health probe must not depend on a cookie's database look-up.
   app.use('/api/health', noStore, healthRouter({ db, config, now, jobs: deps.jobs ?? noJobQueue }));
   // Calendar apps fetch feeds without a cookie: the token in the address is the credential (routes/calendar-feeds.ts).
-  app.use('/feeds', feedsRouter({ db, config, now }));
+  app.use('/api/calendar-feeds', calendarFeedsRouter({ db, config, now }));
   app.use(express.json({ limit: config.jsonBodyLimit }));
   app.use(cookieParser());
   // After body parsing, before any router: NUL, lone surrogates and broken percent-encoding never reach a handler.

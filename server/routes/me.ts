@@ -4,8 +4,8 @@ import express, { type Router } from 'express';
 import { meSchema } from '../../shared/api';
 import { currentUser, requireAuth } from '../auth/guards';
 import { toPublicSession } from '../auth/sessions';
-import { myCalendarFeedRouter } from './calendar-feeds';
 import type { RouteDeps } from './deps';
+import { calendarFeedRouter } from './me/calendar-feed';
 import { otpRouter } from './me/otp';
 import { sessionsRouter } from './me/sessions';
 import { timeZoneRouter } from './me/time-zone';
@@ -15,7 +15,7 @@ export function meRouter(deps: RouteDeps): Router {
   router.use('/otp', otpRouter(deps));
   router.use('/sessions', sessionsRouter(deps));
   router.use('/time-zone', timeZoneRouter(deps));
-  router.use('/calendar-feed', myCalendarFeedRouter(deps));
+  router.use('/calendar-feed', calendarFeedRouter(deps));
   router.get('/', requireAuth, (req, res) => {
     res.json(meSchema.parse(toPublicSession({ user: currentUser(req) }).user));
   });

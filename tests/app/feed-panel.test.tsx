@@ -16,8 +16,8 @@ afterEach(() => {
   host.navigator = originalNavigator;
 });
 
-const OLD = 'http://127.0.0.1:8080/feeds/AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA.ics';
-const NEW = 'http://127.0.0.1:8080/feeds/BBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBB.ics';
+const OLD = 'http://127.0.0.1:8080/api/calendar-feeds/AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA.ics';
+const NEW = 'http://127.0.0.1:8080/api/calendar-feeds/BBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBBB.ics';
 const tenantUser: Me = { id: 'u-ten', email: 'tenant@demo.test', name: 'Tia Tenant', roles: ['tenant'], tenantId: 'ten-1' };
 const nobody: Me = { id: 'u-none', email: 'none@demo.test', name: 'No Roles', roles: [], tenantId: null };
 

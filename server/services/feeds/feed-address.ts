@@ -7,7 +7,7 @@ import { deleteFeedOfUser, insertFeedIfNone, selectFeedOfUser } from '../../quer
 import { hashFeedToken, newFeedToken } from './feed-token';
 
 export function feedUrl(publicUrl: string, token: string): string {
-  return `${publicUrl}/feeds/${token}.ics`;
+  return `${publicUrl}/api/calendar-feeds/${token}.ics`;
 }
 
 /** The user's address, made now when the user has none. */

@@ -38,14 +38,14 @@ async function feedOf(who: Who) {
 
 test('the address is made on first request, shown again after, and carries a 256-bit token', async () => {
   const first = await feedUrlOf('planner');
-  expect(first).toMatch(/\/feeds\/[A-Za-z0-9_-]{43}\.ics$/);
+  expect(first).toMatch(/\/api\/calendar-feeds\/[A-Za-z0-9_-]{43}\.ics$/);
   expect(first.startsWith(ctx.config.publicUrl)).toBe(true);
   expect(await feedUrlOf('planner')).toBe(first);
   expect(await feedUrlOf('engineer')).not.toBe(first);
   const made = await ctx.db.select().from(auditLog)
     .where(and(eq(auditLog.action, 'calendar-feed.create'), eq(auditLog.entityId, ctx.users.planner.id)));
   expect(made).toHaveLength(1);
-  expect(JSON.stringify(made)).not.toContain(new URL(first).pathname.slice(7, 50));
+  expect(JSON.stringify(made)).not.toContain(/([A-Za-z0-9_-]{43})\.ics$/.exec(first)![1]);
 });
 
 test('asking for an address needs a session and a role that reads windows', async () => {
@@ -147,8 +147,8 @@ test('revoking ends the address at once; the next request makes a new one that w
 });
 
 test('malformed and unknown addresses answer the same 404, which never repeats the address', async () => {
-  const unknown = `/feeds/${'A'.repeat(43)}.ics`;
-  for (const path of [unknown, '/feeds/short.ics', `/feeds/${'A'.repeat(43)}`, `/feeds/${'A'.repeat(42)}%2B.ics`]) {
+  const unknown = `/api/calendar-feeds/${'A'.repeat(43)}.ics`;
+  for (const path of [unknown, '/api/calendar-feeds/short.ics', `/api/calendar-feeds/${'A'.repeat(43)}`, `/api/calendar-feeds/${'A'.repeat(42)}%2B.ics`]) {
     const res = await request(ctx.app).get(path);
     expect([path, res.status, res.body.error?.code]).toEqual([path, 404, 'FEED_NOT_FOUND']);
     expect(JSON.stringify(res.body)).not.toContain('AAAAAAAAAA');

@@ -66,6 +66,8 @@ const probes: Probe[] = [
   ...['queue', 'waiting-count', 'decided-by-me']
     .map((sub) => ({ route: `GET /api/signoff/${sub}`, path: () => `/api/signoff/${sub}`, foreign: true })),
   { route: 'DELETE /api/signoff/otp-keys/:userId', path: () => `/api/signoff/otp-keys/${ctx.users.engineer.id}`, foreign: true },
+  // Feeds answer by the token in the address alone (no session): a made-up token is not found, for anyone.
+  { route: 'GET /api/calendar-feeds/:file', path: () => `/api/calendar-feeds/${'A'.repeat(43)}.ics`, foreign: true },
   // A made-up session id is malformed, so 400 is a refusal here too.
   { route: 'DELETE /api/me/sessions/:id', path: () => '/api/me/sessions/someone-elses-session', foreign: true, refusals: [400, 403, 404] },
   ...['GET /api/users', 'POST /api/scenarios/validate', 'GET /api/freezes', 'POST /api/freezes', 'PATCH /api/freezes/:id',
@@ -74,7 +76,8 @@ const probes: Probe[] = [
     'GET /api/export/graphml', 'GET /api/outbox', 'GET /api/outbox/:id', 'GET /api/outbox/:id/raw']
     .map((route) => ({ route, path: () => route.split(' ')[1].replace(/:\w+/, 'sites'), foreign: true })),
   // Own-user routes naming no one else: answered for the caller, checked for leaks only.
-  ...['POST /api/auth/sign-in', 'POST /api/me/otp/enrol', 'POST /api/me/otp/confirm', 'DELETE /api/me/otp', 'PATCH /api/me/time-zone']
+  ...['POST /api/auth/sign-in', 'POST /api/me/otp/enrol', 'POST /api/me/otp/confirm', 'DELETE /api/me/otp', 'PATCH /api/me/time-zone',
+    'GET /api/me/calendar-feed', 'DELETE /api/me/calendar-feed']
     .map((route) => ({ route, path: () => route.split(' ')[1], foreign: false })),
 ];
 /** They end the caller's own sessions and name no one else; calling them would sign the sweep out. */
