@@ -1,6 +1,7 @@
 // The Imports screen: upload and the current preview in the main column, past imports beside it (wide) or below (phone).
 import { ActivityIndicator, ScrollView, StyleSheet, Text, useWindowDimensions, View } from 'react-native';
 import type { ImportSummary } from '@/shared/imports';
+import { DemoDataNotice } from '@/components/demo-data/demo-data-notice';
 import { AppliedLinks } from './applied-links';
 import { ImportHistory } from './import-history';
 import { ImportPreviewView } from './import-preview-view';
@@ -46,6 +47,7 @@ export function ImportsView({ history }: { history: readonly ImportSummary[] }) 
   return (
     <ScrollView contentContainerStyle={styles.page} testID="imports-screen">
       <Text style={styles.title} role="heading" aria-level={1}>Imports</Text>
+      <DemoDataNotice />
       <View style={wide ? styles.row : styles.stack}>
         <View style={wide ? styles.mainWide : undefined}>{main}</View>
         <View style={wide ? styles.sideWide : undefined}>{side}</View>

@@ -5,6 +5,7 @@ import { FigureTiles } from '@/components/overview/figure-tiles';
 import { NextWindows } from '@/components/overview/next-windows';
 import { NextWork } from '@/components/overview/next-work';
 import { WaitingDecisions } from '@/components/overview/waiting-decisions';
+import { DemoDataNotice } from '@/components/demo-data/demo-data-notice';
 import { colors, CONTENT_MAX_WIDTH_PX, space, type } from '@/constants/theme';
 
 /** True when there is nothing to summarise yet (no network loaded); the screen then shows its empty state. */
@@ -25,6 +26,7 @@ export function OverviewView({ overview, onOpenNotice }: { overview: AnyOverview
         <Text style={styles.title} role="heading" aria-level={1}>
           Overview
         </Text>
+        <DemoDataNotice />
         <WaitingDecisions />
         <FigureTiles overview={overview} columns={columns} />
         {isTenantOverview(overview)

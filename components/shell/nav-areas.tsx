@@ -43,11 +43,6 @@ export const NAV_AREAS: readonly NavArea[] = [
     Icon: OutboxIcon, roles: ADMIN_ROLES,
   },
   {
-    // Removing the demo network and accounts before real use; the page says when none is left.
-    key: 'demo-data', label: 'Demo data', href: '/demo-data', matches: (pathname) => pathname.startsWith('/demo-data'),
-    Icon: ImportIcon, roles: ADMIN_ROLES,
-  },
-  {
     key: 'sign-off', label: 'Sign-off', href: '/sign-off', matches: (pathname) => pathname.startsWith('/sign-off') || pathname.startsWith('/security'),
     // Approvers decide; admins read the queue and set the sign-off policy.
     Icon: SignoffIcon, roles: SIGNOFF_QUEUE_ROLES,
