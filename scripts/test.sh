@@ -26,17 +26,22 @@ if [ -z "${DATABASE_URL:-}" ]; then
   bash scripts/pg.sh ensure
   bash scripts/pg.sh recreatedb slackwater_test
   bash scripts/pg.sh recreatedb slackwater_e2e
+  bash scripts/pg.sh recreatedb slackwater_e2e_fresh
   TEST_DATABASE_URL="$(bash scripts/pg.sh url slackwater_test)"
   E2E_DATABASE_URL="$(bash scripts/pg.sh url slackwater_e2e)"
+  E2E_FRESH_DATABASE_URL="$(bash scripts/pg.sh url slackwater_e2e_fresh)"
 else
   # An external server: the tests create their databases next to the one named in DATABASE_URL.
   base="${DATABASE_URL%/*}"
-  for name in slackwater_test slackwater_e2e; do
+  for name in slackwater_test slackwater_e2e slackwater_e2e_fresh; do
     psql "$DATABASE_URL" -v ON_ERROR_STOP=1 -qc "drop database if exists $name" -c "create database $name"
   done
   TEST_DATABASE_URL="$base/slackwater_test"
   E2E_DATABASE_URL="$base/slackwater_e2e"
+  E2E_FRESH_DATABASE_URL="$base/slackwater_e2e_fresh"
 fi
+# The first-day suite starts its own server without the demo on this empty database.
+export E2E_FRESH_DATABASE_URL
 export TEST_DATABASE_URL
 
 step "unit, property, API and component tests (jest)"
