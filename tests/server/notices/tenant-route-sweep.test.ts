@@ -68,6 +68,13 @@ const probes: Probe[] = [
   { route: 'DELETE /api/signoff/otp-keys/:userId', path: () => `/api/signoff/otp-keys/${ctx.users.engineer.id}`, foreign: true },
   // Feeds answer by the token in the address alone (no session): a made-up token is not found, for anyone.
   { route: 'GET /api/calendar-feeds/:file', path: () => `/api/calendar-feeds/${'A'.repeat(43)}.ics`, foreign: true },
+  ...['GET /api/windows/:id/pack', 'GET /api/windows/:id/moves.csv']
+    .map((route) => ({ route, path: () => route.split(' ')[1].replace(':id', ctx.notified), foreign: true })),
+  ...['GET /api/demo-data', 'DELETE /api/demo-data'].map((route) => ({ route, path: () => '/api/demo-data', foreign: true })),
+  // The first-admin set-up runs without a session: a made-up link is not found, and set-up is refused once an admin
+  // exists (or the body is not a set-up form).
+  { route: 'GET /api/set-up/:token', path: () => `/api/set-up/${'A'.repeat(43)}`, foreign: true },
+  { route: 'POST /api/set-up', path: () => '/api/set-up', foreign: true, refusals: [400, 404, 409] },
   // A made-up session id is malformed, so 400 is a refusal here too.
   { route: 'DELETE /api/me/sessions/:id', path: () => '/api/me/sessions/someone-elses-session', foreign: true, refusals: [400, 403, 404] },
   ...['GET /api/users', 'POST /api/scenarios/validate', 'GET /api/freezes', 'POST /api/freezes', 'PATCH /api/freezes/:id',
