@@ -21,7 +21,7 @@ export function UserSummary({ user, onSignOut, signingOut, tone, compact = false
           role="link"
           testID="user-account"
           // Starts with the visible words, so speech users can say what they see.
-          accessibilityLabel={`${user.name}, ${user.roles.join(', ')}: your time zone, codes and sessions`}
+          accessibilityLabel={`${user.name}, ${user.roles.join(', ')}: your time zone, codes, sessions and calendar subscription`}
           // Flattened: Link's asChild merge spreads a style array into an object, which crashes on the web.
           style={StyleSheet.flatten([styles.text, compact && styles.textCompact])}
         >
