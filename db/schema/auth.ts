@@ -1,5 +1,5 @@
 // Users, credentials, sessions and role grants.
-import { pgTable, text, timestamp, primaryKey, uniqueIndex, index, bigserial } from 'drizzle-orm/pg-core';
+import { pgTable, text, timestamp, primaryKey, uniqueIndex, index, bigserial, boolean } from 'drizzle-orm/pg-core';
 import { tenants } from './network';
 
 export const ROLES = ['admin', 'engineer', 'planner', 'approver', 'tenant'] as const;
@@ -16,6 +16,10 @@ export const users = pgTable(
     /** IANA zone the user reads times in; null = the network's zone (shared/time-zone.ts) */
     timeZone: text('time_zone'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    /** true from the invitation until the invitee sets a password (or signs in with single sign-on) */
+    invitationPending: boolean('invitation_pending').notNull().default(false),
+    /** set while the account is deactivated: no sign-in, no session; its history stays */
+    deactivatedAt: timestamp('deactivated_at', { withTimezone: true }),
   },
   (t) => [uniqueIndex('users_email_key').on(t.email)],
 );

@@ -3,8 +3,8 @@
 import { pgTable, text, timestamp, index, uniqueIndex } from 'drizzle-orm/pg-core';
 import { users } from './auth';
 
-/** `set-up`: create the first admin of an instance started without the demo. */
-export const ONE_TIME_LINK_KINDS = ['set-up'] as const;
+/** `set-up`: create the first admin of an instance started without the demo. `invite`: an invited person sets a password. */
+export const ONE_TIME_LINK_KINDS = ['set-up', 'invite'] as const;
 export type OneTimeLinkKind = (typeof ONE_TIME_LINK_KINDS)[number];
 
 export const oneTimeLinks = pgTable(
