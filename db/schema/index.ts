@@ -8,3 +8,4 @@ export * from './signoff';
 export * from './idempotency';
 export * from './feeds';
 export * from './one-time-links';
+export * from './sso';
