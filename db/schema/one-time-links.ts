@@ -3,8 +3,11 @@
 import { pgTable, text, timestamp, index, uniqueIndex } from 'drizzle-orm/pg-core';
 import { users } from './auth';
 
-/** `set-up`: create the first admin of an instance started without the demo. `invite`: an invited person sets a password. */
-export const ONE_TIME_LINK_KINDS = ['set-up', 'invite'] as const;
+/**
+ * `set-up`: create the first admin of an instance started without the demo. `invite`: an invited person sets a
+ * password. `reset`: a person who forgot their password chooses a new one.
+ */
+export const ONE_TIME_LINK_KINDS = ['set-up', 'invite', 'reset'] as const;
 export type OneTimeLinkKind = (typeof ONE_TIME_LINK_KINDS)[number];
 
 export const oneTimeLinks = pgTable(
