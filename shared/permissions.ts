@@ -38,6 +38,8 @@ export const SIGNOFF_SUBMITTER_ROLES: Roles = ['planner'];
 export const SIGNOFF_APPROVER_ROLES: Roles = ['approver'];
 /** Open the sign-off queue. */
 export const SIGNOFF_QUEUE_ROLES: Roles = ['approver', 'admin'];
+/** Read the audit trail and download it as CSV (nobody changes it). */
+export const AUDIT_READER_ROLES: Roles = ['admin', 'approver'];
 /** The tenant portal: upcoming work and acknowledging notices. */
 export const TENANT_PORTAL_ROLES: Roles = ['tenant'];
 
@@ -61,6 +63,7 @@ export const canReadChangePack = (roles: Roles) => holdsAnyRole(roles, CHANGE_PA
 export const canSubmitForSignoff = (roles: Roles) => holdsAnyRole(roles, SIGNOFF_SUBMITTER_ROLES);
 export const canSignOff = (roles: Roles) => holdsAnyRole(roles, SIGNOFF_APPROVER_ROLES);
 export const canOpenSignoffQueue = (roles: Roles) => holdsAnyRole(roles, SIGNOFF_QUEUE_ROLES);
+export const canReadAuditTrail = (roles: Roles) => holdsAnyRole(roles, AUDIT_READER_ROLES);
 export const usesTenantPortal = (roles: Roles) => holdsAnyRole(roles, TENANT_PORTAL_ROLES);
 
 /** States in which a window's plans may be run and accepted: its impact is known and the plan not yet signed off. */

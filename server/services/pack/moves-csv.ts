@@ -1,6 +1,6 @@
 // The moves CSV for field teams: one row per make-before-break step, in order, by name, with when it is due.
 // Reference: RFC 4180 (CSV: CRLF line ends, fields with comma, quote or line break quoted, quotes doubled).
-import Papa from 'papaparse';
+import { csvText } from '../csv-text';
 import type { PackStep } from '../../../shared/change-pack';
 
 export const MOVES_CSV_COLUMNS = [
@@ -32,16 +32,9 @@ function row(step: PackStep, w: MovesCsvWindow, timeZone: string): string[] {
   ];
 }
 
-/**
- * The CSV text, header row first. WARNING: `escapeFormulae` prefixes a ' to cells starting with = + - @ (and tab
- * or carriage return) so a spreadsheet shows them as text rather than running them as formulas — common practice
- * for CSV meant for spreadsheets; names come from imports and people, so they are not trusted.
- */
+/** The CSV text, header row first, guarded against spreadsheet formulas (services/csv-text.ts). */
 export function movesCsv(steps: readonly PackStep[], w: MovesCsvWindow, timeZone: string): string {
-  const body = Papa.unparse({ fields: [...MOVES_CSV_COLUMNS], data: steps.map((s) => row(s, w, timeZone)) }, {
-    newline: '\r\n', escapeFormulae: true, quotes: false,
-  });
-  return `${body}\r\n`;
+  return csvText(MOVES_CSV_COLUMNS, steps.map((s) => row(s, w, timeZone)));
 }
 
 /** "moves-harbour-fibre-splice.csv": the window's title in lower-case ASCII words, or "moves-window.csv". */

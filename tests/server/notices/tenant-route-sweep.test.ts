@@ -80,9 +80,20 @@ const probes: Probe[] = [
   ...['GET /api/users', 'POST /api/scenarios/validate', 'GET /api/freezes', 'POST /api/freezes', 'PATCH /api/freezes/:id',
     'DELETE /api/freezes/:id', 'GET /api/policies', 'PATCH /api/policies', 'POST /api/imports', 'GET /api/imports',
     'GET /api/imports/templates/:kind', 'GET /api/imports/:id', 'POST /api/imports/:id/apply', 'GET /api/export/scenario',
-    'GET /api/export/graphml', 'GET /api/outbox', 'GET /api/outbox/:id', 'GET /api/outbox/:id/raw']
+    'GET /api/export/graphml', 'GET /api/outbox', 'GET /api/outbox/:id', 'GET /api/outbox/:id/raw',
+    'GET /api/sso', 'PUT /api/sso']
     .map((route) => ({ route, path: () => route.split(' ')[1].replace(/:\w+/, 'sites'), foreign: true })),
+  // The audit trail (admins and approvers): a window's rows as CSV, and the filter choices (people, windows, actions).
+  { route: 'GET /api/audit', path: () => `/api/audit?window=${ctx.notified}&format=csv`, foreign: true },
+  { route: 'GET /api/audit/choices', path: () => '/api/audit/choices', foreign: true },
+  // Password resets run without a session: a made-up link is not found, and a reset without a token is refused.
+  { route: 'GET /api/auth/reset-password/:token', path: () => `/api/auth/reset-password/${'A'.repeat(43)}`, foreign: true },
+  { route: 'POST /api/auth/reset-password', path: () => '/api/auth/reset-password', foreign: true, refusals: [400, 404] },
+  // Single sign-on redirects (no SSO set up here: back to sign-in) and the button's words: the same for anyone.
+  ...['GET /api/auth/sso/button', 'GET /api/auth/sso/start', 'GET /api/auth/sso/callback']
+    .map((route) => ({ route, path: () => route.split(' ')[1], foreign: false })),
   // Own-user routes naming no one else: answered for the caller, checked for leaks only.
+  ...['POST /api/auth/forgot-password', 'POST /api/me/password'].map((route) => ({ route, path: () => route.split(' ')[1], foreign: false })),
   ...['POST /api/auth/sign-in', 'POST /api/me/otp/enrol', 'POST /api/me/otp/confirm', 'DELETE /api/me/otp', 'PATCH /api/me/time-zone',
     'GET /api/me/calendar-feed', 'DELETE /api/me/calendar-feed']
     .map((route) => ({ route, path: () => route.split(' ')[1], foreign: false })),
