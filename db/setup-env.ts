@@ -24,7 +24,10 @@ function parseSeedDemo(raw: string | undefined): boolean {
   throw new SetupEnvError(`SEED_DEMO is "${raw}"; use true (seed the demo, the default) or false (start empty).`);
 }
 
-function parseAdmin(env: Record<string, string | undefined>): NewAdmin | null {
+/** The password policy's judge (server/auth/password-policy.ts, passed in by db/setup.ts): problems, or none. */
+export type PasswordJudge = (password: string, person: { email: string; name: string }) => string[];
+
+function parseAdmin(env: Record<string, string | undefined>, judgePassword?: PasswordJudge): NewAdmin | null {
   const email = set(env.ADMIN_EMAIL)?.trim();
   const password = set(env.ADMIN_PASSWORD);
   if (email === undefined && password === undefined) return null;
@@ -34,7 +37,11 @@ function parseAdmin(env: Record<string, string | undefined>): NewAdmin | null {
   }
   const name = set(env.ADMIN_NAME)?.trim() ?? email.split('@')[0];
   const parsed = newAdminSchema.safeParse({ name, email, password });
-  if (parsed.success) return parsed.data;
+  if (parsed.success) {
+    const problems = judgePassword?.(parsed.data.password, parsed.data) ?? [];
+    if (problems.length > 0) throw new SetupEnvError(`ADMIN_PASSWORD: ${problems.join(' ')}`);
+    return parsed.data;
+  }
   const variable = { name: 'ADMIN_NAME', email: 'ADMIN_EMAIL', password: 'ADMIN_PASSWORD' } as const;
   const lines = parsed.error.issues.map((issue) => {
     const field = issue.path[0] as keyof typeof variable;
@@ -44,11 +51,11 @@ function parseAdmin(env: Record<string, string | undefined>): NewAdmin | null {
 }
 
 /** Parses `env`; throws SetupEnvError with a message that names the variable to fix. */
-export function parseSetupEnv(env: Record<string, string | undefined>): SetupEnv {
+export function parseSetupEnv(env: Record<string, string | undefined>, { judgePassword }: { judgePassword?: PasswordJudge } = {}): SetupEnv {
   const port = set(env.PORT) ?? '8080';
   return {
     seedDemo: parseSeedDemo(env.SEED_DEMO),
-    admin: parseAdmin(env),
+    admin: parseAdmin(env, judgePassword),
     publicUrl: (set(env.PUBLIC_URL) ?? `http://127.0.0.1:${port}`).replace(/\/$/, ''),
   };
 }

@@ -8,6 +8,8 @@ import { DEMO_FILE, readDemoFile } from './seed/demo-identity';
 import { parseSetupEnv, SetupEnvError } from './setup-env';
 import { runSetup } from './setup-run';
 import { SCENARIO_FORMAT } from '../shared/scenario';
+// eslint-disable-next-line no-restricted-imports -- the set-up entry applies the one password policy to ADMIN_PASSWORD
+import { judgePassword } from '../server/auth/password-policy';
 
 function loadDemoScenario(): unknown {
   const scenario = readDemoFile();
@@ -20,7 +22,12 @@ async function main(): Promise<void> {
   const url = process.env.DATABASE_URL;
   if (!url) throw new Error('DATABASE_URL is not set (npm start sets it for the project-local PostgreSQL)');
   // Before migrating: a wrong variable stops setup without touching the database.
-  const env = parseSetupEnv(process.env);
+  const env = parseSetupEnv(process.env, {
+    judgePassword: (password, person) => {
+      const verdict = judgePassword(password, person);
+      return verdict.acceptable ? [] : verdict.problems;
+    },
+  });
   await migrateDatabase(url);
   console.error('setup: migrations applied');
   const { db, pool } = createDb(url, { max: 1 });

@@ -4,6 +4,7 @@
 import express, { type ErrorRequestHandler, type Router } from 'express';
 import { signInResponseSchema } from '../../shared/api';
 import { setUpLinkStatusSchema, setUpRequestSchema, setUpTokenSchema } from '../../shared/setup';
+import { assertPasswordAcceptable } from '../auth/password-policy';
 import { setSessionCookie } from '../auth/session-cookie';
 import { toPublicSession } from '../auth/sessions';
 import { releaseSignInAttempt, reserveSignInAttempt, signInKeys, type SignInLimit } from '../auth/sign-in-limit';
@@ -33,6 +34,8 @@ export function setUpRouter({ db, config, now, signInLimit }: RouteDeps & { sign
 
   router.post('/', async (req, res) => {
     const input = setUpRequestSchema.parse(req.body);
+    // The first admin's password meets the same policy as every other (a refusal costs no limited attempt).
+    assertPasswordAcceptable(input.password, input);
     const reservation = await reserveSignInAttempt(db, { keys: signInKeys(input.email, req.ip), limit: signInLimit, now: now() });
     const { token, user } = await completeSetUp(db, {
       ...input, now: now(), userAgent: userAgentLabel(req.get('user-agent')), address: displayAddress(req.ip),
