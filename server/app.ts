@@ -38,6 +38,7 @@ import { plansRouter } from './routes/plans';
 import { portalRouter } from './routes/portal';
 import { setUpRouter } from './routes/set-up';
 import { demoDataRouter } from './routes/demo-data';
+import { invitationsRouter } from './routes/invitations';
 
 export type AppDeps = {
   db: Db;
@@ -66,6 +67,7 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   api.use('/me', meRouter(deps));
   api.use('/overview', overviewRouter(deps));
   api.use('/users', usersRouter(deps));
+  api.use('/invitations', invitationsRouter(deps));
   api.use('/scenarios', scenariosRouter());
   api.use('/windows', windowsRouter(deps));
   api.use('/signoff', signoffRouter(deps));

@@ -47,10 +47,6 @@ export const overviewSchema = z.object({
 });
 export type Overview = z.infer<typeof overviewSchema>;
 
-/** GET /api/users (admin): every user with its roles. */
-export const userListSchema = z.object({ users: z.array(meSchema) });
-export type UserList = z.infer<typeof userListSchema>;
-
 /** One problem found in a scenario, located by a JSON path such as `$.slices[3].ties[0].to`. */
 export const scenarioIssueSchema = z.object({ path: z.string(), message: z.string() });
 

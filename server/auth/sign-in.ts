@@ -2,6 +2,7 @@
 import type { Db } from '../../db/client';
 import type { Me } from '../../shared/api';
 import { BadCredentialsError } from '../errors';
+import { AccountDeactivatedError } from './account-deactivated-error';
 import { insertAuditEntry } from '../queries/audit/audit-log';
 import { getUserById, getUserCredentialsByEmail } from '../queries/auth/users';
 import { verifyDummyPassword, verifyPassword } from './password';
@@ -28,6 +29,10 @@ export async function signIn(db: Db, input: SignInInput): Promise<{ token: strin
   const passwordOk = credentials
     ? await verifyPassword(credentials.passwordHash, password)
     : await verifyDummyPassword(password);
+  if (credentials && passwordOk && credentials.deactivatedAt) {
+    await insertAuditEntry(db, { actorId: credentials.id, action: 'sign-in-refused-deactivated', entity: 'user', entityId: credentials.id, at: now });
+    throw new AccountDeactivatedError();
+  }
   const user = credentials && passwordOk ? await getUserById(db, { id: credentials.id }) : null;
   if (!user) {
     // Failed attempts are recorded too: the trail of guessing matters more than the noise.

@@ -1,7 +1,6 @@
 // Each role allowed and denied on the guarded routes /api/users (admin) and /api/scenarios/validate (admin, planner).
 import request from 'supertest';
-import { userListSchema } from '../../shared/api';
-import { NETWORK_TIME_ZONE } from '../../shared/time-zone';
+import { peopleListSchema } from '../../shared/people';
 import { signInAs } from './helpers/sign-in';
 import { setupTestApp, type TestContext, type TestUsers } from './helpers/test-app';
 
@@ -47,8 +46,11 @@ describe.each(expectations)('$route', ({ call, allowed }) => {
 
 test('the admin user list holds this file\'s users with their roles and no secrets', async () => {
   const res = await request(ctx.app).get('/api/users').set('Cookie', cookies.admin);
-  const { users } = userListSchema.parse(res.body);
+  const { users } = peopleListSchema.parse(res.body);
   const tenantUser = users.find((u) => u.id === ctx.users.tenant.id);
-  expect(tenantUser).toEqual({ id: ctx.users.tenant.id, email: ctx.users.tenant.email, name: `User ${ctx.users.tenant.id}`, roles: ['tenant'], tenantId: ctx.tenantId, timeZone: NETWORK_TIME_ZONE, timeZoneChosen: false });
+  expect(tenantUser).toEqual({
+    id: ctx.users.tenant.id, email: ctx.users.tenant.email, name: `User ${ctx.users.tenant.id}`, roles: ['tenant'], tenantId: ctx.tenantId,
+    tenantName: `Tenant ${ctx.prefix}`, status: 'active', createdAt: expect.any(String), deactivatedAt: null, invitationExpiresAt: null,
+  });
   expect(JSON.stringify(res.body)).not.toMatch(/argon2|password/i);
 });

@@ -1,17 +1,17 @@
-// User look-ups for sign-in, the session, the admin user list and the people a mail goes to.
-import { and, asc, eq, inArray, sql } from 'drizzle-orm';
+// User look-ups for sign-in, the session and the people a mail goes to.
+import { and, asc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import type { Db, Queryable } from '../../../db/client';
 import { passwordCredentials, roleGrants, users } from '../../../db/schema';
 import { ROLE_NAMES, type Me, type RoleName } from '../../../shared/api';
 import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 
-/** The user's id and password hash, matched case-insensitively on e-mail; null when unknown. */
+/** The user's id, password hash and deactivation, matched case-insensitively on e-mail; null when unknown. */
 export async function getUserCredentialsByEmail(
   db: Db,
   { email }: { email: string },
-): Promise<{ id: string; passwordHash: string } | null> {
+): Promise<{ id: string; passwordHash: string; deactivatedAt: Date | null } | null> {
   const rows = await db
-    .select({ id: users.id, passwordHash: passwordCredentials.passwordHash })
+    .select({ id: users.id, passwordHash: passwordCredentials.passwordHash, deactivatedAt: users.deactivatedAt })
     .from(users)
     .innerJoin(passwordCredentials, eq(passwordCredentials.userId, users.id))
     .where(sql`lower(${users.email}) = ${email.trim().toLowerCase()}`)
@@ -42,17 +42,12 @@ function toMe(row: UserRow, roles: RoleName[]): Me {
   return { ...row, roles, timeZone: row.timeZone ?? NETWORK_TIME_ZONE, timeZoneChosen: row.timeZone !== null };
 }
 
+/** The user as the app reads it; null when unknown or deactivated (a deactivated user's session and feed stop at once). */
 export async function getUserById(db: Db, { id }: { id: string }): Promise<Me | null> {
-  const rows = await db.select(userColumns).from(users).where(eq(users.id, id)).limit(1);
+  const rows = await db.select(userColumns).from(users).where(and(eq(users.id, id), isNull(users.deactivatedAt))).limit(1);
   if (!rows[0]) return null;
   const roles = await getRolesByUserIds(db, [id]);
   return toMe(rows[0], roles.get(id) ?? []);
-}
-
-export async function listUsersWithRoles(db: Db): Promise<Me[]> {
-  const rows = await db.select(userColumns).from(users).orderBy(asc(users.email));
-  const roles = await getRolesByUserIds(db, rows.map((row) => row.id));
-  return rows.map((row) => toMe(row, roles.get(row.id) ?? []));
 }
 
 /** Sets (or with null clears) the zone `id` reads times in; returns the zone it had before. */
@@ -64,10 +59,11 @@ export async function setUserTimeZone(db: Queryable, { id, timeZone }: { id: str
 
 export type UserContact = { id: string; email: string; name: string };
 
-/** Everyone holding `role`, by e-mail. */
+/** Everyone holding `role` who can sign in (not deactivated, invitation accepted), by e-mail. */
 export async function listUsersWithRole(db: Queryable, role: RoleName): Promise<UserContact[]> {
   return db.select({ id: users.id, email: users.email, name: users.name }).from(users)
     .innerJoin(roleGrants, and(eq(roleGrants.userId, users.id), eq(roleGrants.role, role)))
+    .where(and(isNull(users.deactivatedAt), eq(users.invitationPending, false)))
     .orderBy(asc(users.email));
 }
 

@@ -92,6 +92,13 @@ const probes: Probe[] = [
   // Single sign-on redirects (no SSO set up here: back to sign-in) and the button's words: the same for anyone.
   ...['GET /api/auth/sso/button', 'GET /api/auth/sso/start', 'GET /api/auth/sso/callback']
     .map((route) => ({ route, path: () => route.split(' ')[1], foreign: false })),
+  // People (admin): changes to another person and invitations; a tenant user is refused before the body is read.
+  ...['PUT /api/users/:id/roles', 'POST /api/users/:id/deactivate', 'POST /api/users/:id/reactivate', 'POST /api/invitations',
+    'POST /api/invitations/:id/resend', 'DELETE /api/invitations/:id']
+    .map((route) => ({ route, path: () => route.split(' ')[1].replace(':id', ctx.users.engineer.id), foreign: true })),
+  // The invitee's own routes need no session: a made-up link is not found, and a body without a token is refused.
+  { route: 'GET /api/invitations/link/:token', path: () => `/api/invitations/link/${'A'.repeat(43)}`, foreign: true },
+  { route: 'POST /api/invitations/accept', path: () => '/api/invitations/accept', foreign: true, refusals: [400, 404] },
   // Own-user routes naming no one else: answered for the caller, checked for leaks only.
   ...['POST /api/auth/forgot-password', 'POST /api/me/password'].map((route) => ({ route, path: () => route.split(' ')[1], foreign: false })),
   ...['POST /api/auth/sign-in', 'POST /api/me/otp/enrol', 'POST /api/me/otp/confirm', 'DELETE /api/me/otp', 'PATCH /api/me/time-zone',
