@@ -21,9 +21,9 @@ module.exports = {
     {
       displayName: 'server',
       testEnvironment: 'node',
-      // @oslojs/* ship only ES modules; ts-jest (allowJs) turns them into CommonJS for jest.
-      transform: { ...tsJest, '^.+/node_modules/@oslojs/.+\\.js$': ['ts-jest', { tsconfig: { allowJs: true }, diagnostics: false }] },
-      transformIgnorePatterns: ['/node_modules/(?!@oslojs/)'],
+      // @oslojs/* and arctic ship only ES modules; ts-jest (allowJs) turns them into CommonJS for jest.
+      transform: { ...tsJest, '^.+/node_modules/(@oslojs|arctic)/.+\\.js$': ['ts-jest', { tsconfig: { allowJs: true }, diagnostics: false }] },
+      transformIgnorePatterns: ['/node_modules/(?!(@oslojs|arctic)/)'],
       moduleNameMapper,
       testMatch: ['<rootDir>/tests/server/**/*.test.ts', '<rootDir>/tests/db/**/*.test.ts'],
     },

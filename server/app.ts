@@ -38,6 +38,8 @@ import { plansRouter } from './routes/plans';
 import { portalRouter } from './routes/portal';
 import { setUpRouter } from './routes/set-up';
 import { demoDataRouter } from './routes/demo-data';
+import { ssoSignInRouter } from './routes/auth/sso';
+import { ssoSettingsRouter } from './routes/sso';
 import { invitationsRouter } from './routes/invitations';
 
 export type AppDeps = {
@@ -61,8 +63,10 @@ const noStore: express.RequestHandler = (_req, res, next) => {
 function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signInLimit' | 'jobs'>>): express.Router {
   const api = express.Router();
   api.use(noStore);
+  api.use('/auth/sso', ssoSignInRouter(deps));
   api.use('/auth', authRouter(deps));
   api.use('/set-up', setUpRouter(deps));
+  api.use('/sso', ssoSettingsRouter(deps));
   api.use('/demo-data', demoDataRouter(deps));
   api.use('/me', meRouter(deps));
   api.use('/overview', overviewRouter(deps));

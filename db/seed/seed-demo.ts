@@ -9,6 +9,7 @@ import {
 import { scenarioRows } from './scenario-rows';
 import { windowShiftMs } from './shift-windows';
 import { seedDemoUsers } from './seed-users';
+import { seedDemoSso } from './seed-sso';
 import { DEMO_USERS, pickDemoTenantId } from './demo-users';
 import type { Tx } from '../client';
 
@@ -69,6 +70,7 @@ export async function seedDemo(db: Db, input: unknown, options: { now?: Date } =
     };
     summary.users = await seedDemoUsers(tx, pickDemoTenantId(scenario));
     summary.windows = await insertNewWindows(tx, rows);
+    summary.ssoSettings = await seedDemoSso(tx);
     return summary;
   });
 }

@@ -7,6 +7,7 @@ import { insertAuditEntry } from '../queries/audit/audit-log';
 import { getUserById, getUserCredentialsByEmail } from '../queries/auth/users';
 import { verifyDummyPassword, verifyPassword } from './password';
 import { createSession, invalidateSession } from './sessions';
+import { assertPasswordSignInAllowed } from './sso/settings';
 import { displayAddress } from './user-agent-label';
 import { releaseSignInAttempt, reserveSignInAttempt, signInKeys, type SignInLimit } from './sign-in-limit';
 
@@ -43,6 +44,8 @@ export async function signIn(db: Db, input: SignInInput): Promise<{ token: strin
     throw new BadCredentialsError();
   }
   await releaseSignInAttempt(db, reservation);
+  // After the password check, so a refusal tells only someone who knows the password that it is turned off.
+  await assertPasswordSignInAllowed(db, user, now);
   const { token, sessionId } = await createSession(db, {
     userId: user.id, now, userAgent: input.userAgent ?? null, address: displayAddress(input.address),
   });
