@@ -9,6 +9,7 @@ say() { printf 'start: %s\n' "$*" >&2; }
 
 started_pg=0
 server_pid=""
+issuer_pid=""
 
 cleanup() {
   local status=$?
@@ -17,6 +18,11 @@ cleanup() {
     say "stopping the server"
     kill -TERM "$server_pid" 2>/dev/null || true
     wait "$server_pid" 2>/dev/null || true
+  fi
+  if [ -n "$issuer_pid" ] && kill -0 "$issuer_pid" 2>/dev/null; then
+    say "stopping the local sign-on issuer"
+    kill -TERM "$issuer_pid" 2>/dev/null || true
+    wait "$issuer_pid" 2>/dev/null || true
   fi
   if [ "$started_pg" = 1 ]; then bash scripts/pg.sh stop || true; fi
   exit "$status"
@@ -37,6 +43,13 @@ TSX=node_modules/.bin/tsx
 
 $TSX db/setup.ts
 if [ -f scripts/export-web.sh ]; then bash scripts/export-web.sh; fi
+
+# The demo's single sign-on issuer (docs/sso.md), on loopback; OIDC_ISSUER_PORT=off skips it.
+if [ "${OIDC_ISSUER_PORT:-8181}" != off ]; then
+  OIDC_ISSUER_PORT="${OIDC_ISSUER_PORT:-8181}" $TSX scripts/oidc-issuer.ts &
+  issuer_pid=$!
+  say "local sign-on issuer on http://127.0.0.1:${OIDC_ISSUER_PORT:-8181}"
+fi
 
 say "API on http://127.0.0.1:${PORT:-8080}"
 # A background job plus `wait` lets the traps run as soon as a signal arrives.
