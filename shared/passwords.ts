@@ -1,7 +1,9 @@
 // Forgotten and changed passwords: the requests the sign-in, reset and Security screens send, and the answers.
 import { z } from 'zod';
 
-/** Longest password accepted anywhere (the policy on the server judges strength; this only bounds the request). */
+/** Shortest password a person may choose (the server's policy also judges strength). */
+export const PASSWORD_MIN_CHARS = 12;
+/** Longest password accepted anywhere. */
 export const PASSWORD_MAX_CHARS = 1024;
 /** How long a reset link works, in minutes. */
 export const RESET_LINK_VALID_MINUTES = 60;

@@ -3,10 +3,10 @@
 // Reference: NIST SP 800-63B §3.1.1.2 (length over composition rules; refuse common, breached and context words).
 import { ZxcvbnFactory, type ZxcvbnResult } from '@zxcvbn-ts/core';
 import { adjacencyGraphs, dictionary } from '@zxcvbn-ts/language-common';
+import { PASSWORD_MAX_CHARS, PASSWORD_MIN_CHARS } from '../../shared/passwords';
 import { domainError } from '../errors';
 
-export const PASSWORD_MIN_CHARS = 12;
-export const PASSWORD_MAX_CHARS = 1024;
+export { PASSWORD_MAX_CHARS, PASSWORD_MIN_CHARS };
 /**
  * WARNING: the lowest zxcvbn score accepted. 3 means about 10^8 guesses or more ("safely unguessable"): with
  * argon2id hashes and sign-in limits that is years of work online and slow offline, while 4 (10^10) refuses many

@@ -1,9 +1,10 @@
-// Security: your time zone, your calendar subscription, one-time codes for sign-off decisions (operators), and your
-// open sessions, with sign out everywhere.
+// Security: your time zone, your calendar subscription, one-time codes for sign-off decisions (operators), your
+// password, and your open sessions, with sign out everywhere.
 import { useRouter } from 'expo-router';
 import { useMeQuery } from '@/hooks/queries/me';
 import { PageColumn } from '@/components/page-column';
 import { CalendarFeedPanel } from '@/components/security/calendar-feed-panel';
+import { ChangePasswordPanel } from '@/components/security/change-password-panel';
 import { OtpSection } from '@/components/security/otp-section';
 import { SessionsPanel } from '@/components/security/sessions-panel';
 import { TimeZoneSection } from '@/components/security/time-zone-section';
@@ -22,6 +23,7 @@ export default function SecurityScreen() {
       <TimeZoneSection />
       <CalendarFeedPanel />
       {me.data && isOperator(me.data.roles) ? <OtpSection /> : null}
+      <ChangePasswordPanel />
       <SessionsPanel timeZone={timeZone} onSignedOutEverywhere={() => router.replace('/sign-in')} />
     </PageColumn>
   );
