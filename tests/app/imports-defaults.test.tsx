@@ -54,18 +54,21 @@ function pickerGives(name: string) {
   getDocument.mockResolvedValue({ canceled: false, assets: [{ name, uri: `file:///picked/${name}`, mimeType: 'application/xml' }] });
 }
 
+/** Answers uploads with `replies` in turn; `uploads()` lists the uploads sent so far (other reads, e.g. of the
+ * signed-in user, are left out). */
 function postImports(replies: ImportCreated[]) {
   let next = 0;
-  return routedFetch([
+  const { calls } = routedFetch([
     { method: 'POST', path: /\/api\/imports$/, reply: () => ({ status: 201, body: replies[Math.min(next++, replies.length - 1)] }) },
   ]);
+  return { uploads: () => calls.filter((c) => c.method === 'POST' && /\/api\/imports$/.test(c.url)) };
 }
 
 const type = (testID: string, text: string) => fireEvent.changeText(screen.getByTestId(testID), text);
 
 test('bad defaults show an error beside each field, and neither the picker nor the upload runs', async () => {
   pickerGives('coast.graphml');
-  const { calls } = postImports([created('imp-1')]);
+  const { uploads } = postImports([created('imp-1')]);
   renderWithQueries(<ImportsView history={[]} />);
   expect(screen.queryByTestId('import-defaults-body')).toBeNull();
   expect(screen.getByTestId('import-defaults-toggle')).not.toBeExpanded();
@@ -80,12 +83,12 @@ test('bad defaults show an error beside each field, and neither the picker nor t
   expect(screen.getByTestId('import-default-route-factor-error')).toHaveTextContent(/from 1 to 3/);
   expect(screen.getByTestId('import-upload-error')).toHaveTextContent(/Fill what the file lacks/);
   expect(getDocument).not.toHaveBeenCalled();
-  expect(calls).toEqual([]);
+  expect(uploads()).toEqual([]);
 });
 
 test('valid defaults go up as the JSON field "defaults" with only what was filled in', async () => {
   pickerGives('coast.graphml');
-  const { calls } = postImports([created('imp-1')]);
+  const { uploads } = postImports([created('imp-1')]);
   renderWithQueries(<ImportsView history={[]} />);
   fireEvent.press(screen.getByTestId('import-defaults-toggle'));
   fireEvent.press(screen.getByTestId('import-default-site-kind-by-degree'));
@@ -96,8 +99,8 @@ test('valid defaults go up as the JSON field "defaults" with only what was fille
   type('import-default-span-capacity', '100');
   fireEvent.press(screen.getByTestId('import-pick'));
 
-  await waitFor(() => expect(calls).toHaveLength(1));
-  const fields = formFields(calls[0]?.body);
+  await waitFor(() => expect(uploads()).toHaveLength(1));
+  const fields = formFields(uploads()[0]?.body);
   expect(JSON.parse(fields.defaults ?? 'null')).toEqual({
     siteKind: 'by-degree', cpuByKind: { core: 256, aggregation: 64, edge: 16.5 }, spanCapacityGbps: 100, routeFactor: 1.3,
   });
@@ -110,18 +113,18 @@ test('with the section closed no defaults are sent; a preview with missing value
     errors: [{ file: 'coast.graphml', path: 'node[n2]', message: 'missing cpu (key cpu or vcpu) for a new site' }],
     counts: { adds: 2, changes: 0, removes: 0, errors: 1, warnings: 0 },
   });
-  const { calls } = postImports([missing]);
+  const { uploads } = postImports([missing]);
   renderWithQueries(<ImportsView history={[]} />);
   fireEvent.press(screen.getByTestId('import-pick'));
 
   expect(await screen.findByTestId('import-defaults-body')).toBeTruthy();
   expect(screen.getByTestId('import-defaults-toggle')).toBeExpanded();
-  expect(formFields(calls[0]?.body).defaults).toBeUndefined();
+  expect(formFields(uploads()[0]?.body).defaults).toBeUndefined();
 });
 
 test('the mapping step starts from what was recognised, and "Preview again" sends the same file with the picks', async () => {
   pickerGives('coast.graphml');
-  const { calls } = postImports([created('imp-1', { sources: SOURCES }), created('imp-2', { sources: SOURCES })]);
+  const { uploads } = postImports([created('imp-1', { sources: SOURCES }), created('imp-2', { sources: SOURCES })]);
   renderWithQueries(<ImportsView history={[]} />);
   fireEvent.press(screen.getByTestId('import-pick'));
 
@@ -137,8 +140,8 @@ test('the mapping step starts from what was recognised, and "Preview again" send
   fireEvent.press(screen.getByTestId('import-map-span-capacityGbps-a:bw_bps'));
   fireEvent.press(screen.getByTestId('import-preview-again'));
 
-  await waitFor(() => expect(calls).toHaveLength(2));
-  const fields = formFields(calls[1]?.body);
+  await waitFor(() => expect(uploads()).toHaveLength(2));
+  const fields = formFields(uploads()[1]?.body);
   expect(JSON.parse(fields.mapping ?? 'null')).toEqual({ site: { name: 'label', lat: 'y', lon: 'x' }, span: { capacityGbps: 'bw_bps' } });
   expect(fields.kind).toBe('graphml');
   expect(getDocument).toHaveBeenCalledTimes(1);
