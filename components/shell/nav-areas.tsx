@@ -4,6 +4,7 @@ import type { Href } from 'expo-router';
 import type { RoleName } from '@/shared/api';
 import { ADMIN_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, SIGNOFF_QUEUE_ROLES, TENANT_PORTAL_ROLES } from '@/shared/permissions';
 import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, NoticeIcon, OutboxIcon, OverviewIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
+import { PersonIcon as SsoIcon } from '@/components/icons';
 
 export type NavArea = {
   key: string;
@@ -41,6 +42,10 @@ export const NAV_AREAS: readonly NavArea[] = [
   {
     key: 'outbox', label: 'Outbox', href: '/outbox', matches: (pathname) => pathname.startsWith('/outbox'),
     Icon: OutboxIcon, roles: ADMIN_ROLES,
+  },
+  {
+    key: 'sso', label: 'Single sign-on', href: '/settings/sso', matches: (pathname) => pathname.startsWith('/settings/sso'),
+    Icon: SsoIcon, roles: ADMIN_ROLES,
   },
   {
     key: 'sign-off', label: 'Sign-off', href: '/sign-off', matches: (pathname) => pathname.startsWith('/sign-off') || pathname.startsWith('/security'),
