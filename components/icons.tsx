@@ -158,3 +158,15 @@ export function NoticeIcon({ size = 24, color = colors.ink }: IconProps) {
     </Svg>
   );
 }
+
+/** Audit trail: a ruled ledger page with a magnifying lens over its lines. */
+export function AuditIcon({ size = 24, color = colors.ink }: IconProps) {
+  return (
+    <Svg width={size} height={size} viewBox="0 0 24 24" fill="none">
+      <Path d="M14 20 H5.5 A1.5 1.5 0 0 1 4 18.5 V4.5 A1.5 1.5 0 0 1 5.5 3 H15.5 A1.5 1.5 0 0 1 17 4.5 V9" stroke={color} strokeWidth={1.8} strokeLinejoin="round" />
+      <Path d="M7.5 7.5 H13.5 M7.5 11 H11.5 M7.5 14.5 H10" stroke={color} strokeWidth={1.8} strokeLinecap="round" />
+      <Circle cx={16} cy={15} r={3.5} stroke={color} strokeWidth={1.8} />
+      <Path d="M18.5 17.5 L21 20" stroke={color} strokeWidth={1.8} strokeLinecap="round" />
+    </Svg>
+  );
+}
