@@ -3,7 +3,7 @@ import type { ComponentType } from 'react';
 import type { Href } from 'expo-router';
 import type { RoleName } from '@/shared/api';
 import { ADMIN_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, SIGNOFF_QUEUE_ROLES, TENANT_PORTAL_ROLES } from '@/shared/permissions';
-import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, NoticeIcon, OutboxIcon, OverviewIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
+import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, NoticeIcon, OutboxIcon, OverviewIcon, PersonIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
 import { PersonIcon as SsoIcon } from '@/components/icons';
 
 export type NavArea = {
@@ -42,6 +42,10 @@ export const NAV_AREAS: readonly NavArea[] = [
   {
     key: 'outbox', label: 'Outbox', href: '/outbox', matches: (pathname) => pathname.startsWith('/outbox'),
     Icon: OutboxIcon, roles: ADMIN_ROLES,
+  },
+  {
+    key: 'people', label: 'People', href: '/people', matches: (pathname) => pathname.startsWith('/people'),
+    Icon: PersonIcon, roles: ADMIN_ROLES,
   },
   {
     key: 'sso', label: 'Single sign-on', href: '/settings/sso', matches: (pathname) => pathname.startsWith('/settings/sso'),
