@@ -41,6 +41,7 @@ import { demoDataRouter } from './routes/demo-data';
 import { ssoSignInRouter } from './routes/auth/sso';
 import { ssoSettingsRouter } from './routes/sso';
 import { invitationsRouter } from './routes/invitations';
+import { auditRouter } from './routes/audit';
 
 export type AppDeps = {
   db: Db;
@@ -88,6 +89,7 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   api.use('/plans', plansRouter(deps));
   api.use('/notices', noticesRouter(deps));
   api.use('/portal', portalRouter(deps));
+  api.use('/audit', auditRouter(deps));
   api.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.originalUrl.split('?')[0])));
   return api;
 }

@@ -2,8 +2,8 @@
 import type { ComponentType } from 'react';
 import type { Href } from 'expo-router';
 import type { RoleName } from '@/shared/api';
-import { ADMIN_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, SIGNOFF_QUEUE_ROLES, TENANT_PORTAL_ROLES } from '@/shared/permissions';
-import { CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, NoticeIcon, OutboxIcon, OverviewIcon, PersonIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
+import { ADMIN_ROLES, AUDIT_READER_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, SIGNOFF_QUEUE_ROLES, TENANT_PORTAL_ROLES } from '@/shared/permissions';
+import { AuditIcon, CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, NoticeIcon, OutboxIcon, OverviewIcon, PersonIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
 import { PersonIcon as SsoIcon } from '@/components/icons';
 
 export type NavArea = {
@@ -55,6 +55,11 @@ export const NAV_AREAS: readonly NavArea[] = [
     key: 'sign-off', label: 'Sign-off', href: '/sign-off', matches: (pathname) => pathname.startsWith('/sign-off') || pathname.startsWith('/security'),
     // Approvers decide; admins read the queue and set the sign-off policy.
     Icon: SignoffIcon, roles: SIGNOFF_QUEUE_ROLES,
+  },
+  {
+    key: 'audit', label: 'Audit trail', href: '/audit', matches: (pathname) => pathname.startsWith('/audit'),
+    // Read only, for the people who answer for changes: admins and change-board approvers.
+    Icon: AuditIcon, roles: AUDIT_READER_ROLES,
   },
   {
     key: 'notices', label: 'Notices', href: '/notices', matches: (pathname) => pathname.startsWith('/notices'),
