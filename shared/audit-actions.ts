@@ -34,6 +34,7 @@ export const AUDIT_ACTION_WORDS: Readonly<Record<string, string>> = {
   'sso-user-created': 'Joined through single sign-on',
   'sso-identity-linked': 'Linked their account to single sign-on',
   'sso-roles-changed': 'Had their roles set from single sign-on groups',
+  'sso-last-admin-kept': 'Kept the admin role as the last active admin, although their single sign-on groups no longer give it',
   'sso-sign-in-refused': 'A single sign-on attempt was refused',
   'sso-settings-changed': 'Changed the single sign-on settings',
   // Windows and their lifecycle

@@ -16,6 +16,8 @@ export const demoDataCountsSchema = z.object({
   signoffs: count,
   accounts: count,
   networkOutline: count,
+  /** 1 while single sign-on still points at the demo's local test issuer */
+  demoSignOn: count,
 });
 export type DemoDataCounts = z.infer<typeof demoDataCountsSchema>;
 export type DemoDataKind = keyof DemoDataCounts;

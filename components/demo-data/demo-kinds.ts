@@ -13,6 +13,7 @@ const KIND_WORDS: Record<DemoDataKind, [string, string]> = {
   signoffs: ['sign-off decision', 'sign-off decisions'],
   accounts: ['demo account', 'demo accounts'],
   networkOutline: ['map name and outline', 'map names and outlines'],
+  demoSignOn: ['single sign-on set-up', 'single sign-on set-ups'],
 };
 
 /** "45 sites", "1 tenant", … for each kind with rows, in the order of the counts. */
@@ -22,6 +23,7 @@ export function countLines(counts: DemoDataCounts): { kind: DemoDataKind; text: 
     .map((kind) => {
       const n = counts[kind];
       if (kind === 'networkOutline') return { kind, text: 'the map name and outline' };
+      if (kind === 'demoSignOn') return { kind, text: 'single sign-on through the local test issuer' };
       return { kind, text: `${n} ${KIND_WORDS[kind][n === 1 ? 0 : 1]}` };
     });
 }

@@ -7,7 +7,7 @@ import { DemoDataPanel, DemoRemovalResultView } from '@/components/demo-data/dem
 const summary: DemoDataSummary = {
   present: true,
   counts: {
-    sites: 45, spans: 79, tenants: 6, slices: 124, placements: 124, windows: 13, plans: 0, notices: 0, signoffs: 1, accounts: 5, networkOutline: 1,
+    sites: 45, spans: 79, tenants: 6, slices: 124, placements: 124, windows: 13, plans: 0, notices: 0, signoffs: 1, accounts: 5, networkOutline: 1, demoSignOn: 1,
   },
   accountNames: ['Sam Okafor', 'Priya Lund'],
   keptAccount: { name: 'Robin Hale', email: 'admin@demo.test' },

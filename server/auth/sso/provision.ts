@@ -4,6 +4,7 @@ import type { Db, Queryable } from '../../../db/client';
 import type { RoleName } from '../../../shared/api';
 import type { SsoGroupRoles } from '../../../shared/sso';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
+import { countActiveAdmins } from '../../queries/auth/users-people';
 import {
   clearInvitationPending, getUserByIdentity, getUserFactsByEmail, insertSsoUser, linkIdentity, replaceRoles, type SsoUserFacts,
 } from '../../queries/sso/identities';
@@ -44,11 +45,19 @@ async function findOrCreate(tx: Queryable, account: IssuerAccount, roles: RoleNa
 
 /** The user id to open a session for; throws SsoSignInError when the account may not sign in. */
 export async function provisionSsoUser(db: Db, account: IssuerAccount, mapping: SsoGroupRoles[], now: Date): Promise<string> {
-  const roles = rolesForGroups(account.groups, mapping);
+  const mapped = rolesForGroups(account.groups, mapping);
   const outcome = await db.transaction(async (tx) => {
+    let roles = mapped;
     const user = await findOrCreate(tx, account, roles, now);
     if (user.tenantId !== null || user.roles.includes('tenant')) throw new SsoSignInError('tenant');
     if (user.deactivated) throw new SsoSignInError('deactivated');
+    // The issuer's groups decide roles, except that they never take the admin role from the last active admin:
+    // nobody would be left to manage people or these settings.
+    if (user.roles.includes('admin') && !roles.includes('admin') && (await countActiveAdmins(tx, { exceptId: user.id })) === 0) {
+      roles = ROLE_ORDER.filter((r) => r === 'admin' || roles.includes(r));
+      await insertAuditEntry(tx, { actorId: user.id, action: 'sso-last-admin-kept', entity: 'user', entityId: user.id,
+        after: { groups: account.groups }, at: now });
+    }
     const linkedBefore = !user.created && (await getUserByIdentity(tx, account)) !== null;
     // A linked account whose groups no longer map loses its roles now, not at some later clean-up.
     if (roles.length === 0 && !linkedBefore) throw new SsoSignInError('no-access');

@@ -5,6 +5,7 @@ import type { Me } from '../../../shared/api';
 import { isOperator } from '../../../shared/permissions';
 import type { SsoSettings, SsoSettingsUpdate } from '../../../shared/sso';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
+import { countActiveAdmins } from '../../queries/auth/users-people';
 import { countAdminsWithSso } from '../../queries/sso/identities';
 import { getSsoSettings, getSsoSettingsForUpdate, upsertSsoSettings, type SsoSettingsRow } from '../../queries/sso/settings';
 import { PasswordSignInOffError, SsoLastAdminError, SsoSecretRequiredError } from './errors';
@@ -60,10 +61,14 @@ export async function saveSsoSettings(
   });
 }
 
-/** Refuses password sign-in to staff when an admin turned it off (tenant accounts always keep it). */
+/**
+ * Refuses password sign-in to staff when an admin turned it off. Tenant accounts always keep it, and so does the
+ * last active admin: if the issuer fails or is misconfigured, someone must still be able to sign in and fix it.
+ */
 export async function assertPasswordSignInAllowed(db: Db, user: Me, now: Date): Promise<void> {
   const settings = await getSsoSettings(db);
   if (!settings || !settings.enabled || settings.passwordSignInForStaff || !isOperator(user.roles)) return;
+  if (user.roles.includes('admin') && (await countActiveAdmins(db, { exceptId: user.id })) === 0) return;
   await insertAuditEntry(db, { actorId: user.id, action: 'sign-in-refused', entity: 'user', entityId: user.id,
     after: { reason: 'password sign-in is off for staff' }, at: now });
   throw new PasswordSignInOffError(settings.displayName);

@@ -1,5 +1,5 @@
 // User accounts that belong to tenants (tenant staff): who would be orphaned, whom a notice goes to.
-import { inArray } from 'drizzle-orm';
+import { and, eq, inArray, isNull } from 'drizzle-orm';
 import type { Queryable } from '../../../db/client';
 import { users } from '../../../db/schema';
 
@@ -10,4 +10,11 @@ export type TenantUser = { id: string; tenantId: string | null; email: string; t
 export async function selectUsersOfTenants(db: Queryable, tenantIds: string[]): Promise<TenantUser[]> {
   return db.select({ id: users.id, tenantId: users.tenantId, email: users.email, timeZone: users.timeZone }).from(users)
     .where(inArray(users.tenantId, tenantIds)).orderBy(users.id);
+}
+
+/** The accounts of the given tenants that can read a notice: not deactivated, invitation accepted. */
+export async function selectActiveUsersOfTenants(db: Queryable, tenantIds: string[]): Promise<TenantUser[]> {
+  return db.select({ id: users.id, tenantId: users.tenantId, email: users.email, timeZone: users.timeZone }).from(users)
+    .where(and(inArray(users.tenantId, tenantIds), isNull(users.deactivatedAt), eq(users.invitationPending, false)))
+    .orderBy(users.id);
 }

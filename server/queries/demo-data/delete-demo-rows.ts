@@ -4,7 +4,9 @@
 // and stay.
 import { and, eq, inArray, or } from 'drizzle-orm';
 import type { Tx } from '../../../db/client';
-import { networkMeta, notices, signoffs, sites, slices, spans, tenants, users, windows } from '../../../db/schema';
+import {
+  networkMeta, notices, signoffs, sites, slices, spans, ssoIdentities, ssoSettings, tenants, users, windows,
+} from '../../../db/schema';
 
 export type DemoRowIds = {
   windowIds: string[];
@@ -16,6 +18,8 @@ export type DemoRowIds = {
   /** the caller, who stays: detached from a tenant that goes */
   keepUserId: string;
   networkName: string | null;
+  /** the demo's test issuer, when single sign-on still points at it: its settings and account links go */
+  demoIssuerUrl: string | null;
 };
 
 export async function deleteDemoRows(tx: Tx, ids: DemoRowIds): Promise<void> {
@@ -29,6 +33,10 @@ export async function deleteDemoRows(tx: Tx, ids: DemoRowIds): Promise<void> {
   await tx.delete(tenants).where(inArray(tenants.id, ids.tenantIds));
   await tx.delete(spans).where(inArray(spans.id, ids.spanIds));
   await tx.delete(sites).where(inArray(sites.id, ids.siteIds));
+  if (ids.demoIssuerUrl !== null) {
+    await tx.delete(ssoIdentities).where(eq(ssoIdentities.issuer, ids.demoIssuerUrl));
+    await tx.delete(ssoSettings).where(eq(ssoSettings.issuerUrl, ids.demoIssuerUrl));
+  }
   if (ids.networkName !== null) {
     await tx.delete(networkMeta).where(and(eq(networkMeta.id, 'network'), eq(networkMeta.name, ids.networkName)));
   }

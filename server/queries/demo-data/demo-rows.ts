@@ -2,7 +2,7 @@
 import { and, count, eq, inArray, or, sql } from 'drizzle-orm';
 import type { Queryable } from '../../../db/client';
 import {
-  networkMeta, notices, placements, plans, signoffs, sites, slices, spans, tenants, users, windowElements, windows,
+  networkMeta, notices, placements, plans, signoffs, sites, slices, spans, ssoSettings, tenants, users, windowElements, windows,
 } from '../../../db/schema';
 
 const idsOf = (rows: { id: string }[]) => rows.map((r) => r.id);
@@ -77,6 +77,13 @@ export async function selectAccountsFor(
   return db.select({ id: users.id, email: users.email, name: users.name, tenantId: users.tenantId }).from(users).where(or(
     inArray(users.id, ids), inArray(sql<string>`lower(${users.email})`, emails), inArray(users.tenantId, tenantIds),
   )).orderBy(users.email);
+}
+
+/** Whether single sign-on is still the demo's: the local test issuer with the demo's client. */
+export async function ssoSettingsAre(db: Queryable, { issuerUrl, clientId }: { issuerUrl: string; clientId: string }): Promise<boolean> {
+  const rows = await db.select({ id: ssoSettings.id }).from(ssoSettings)
+    .where(and(eq(ssoSettings.issuerUrl, issuerUrl), eq(ssoSettings.clientId, clientId)));
+  return rows.length > 0;
 }
 
 /** Whether the map's name and outline are the demo's (by its name). */

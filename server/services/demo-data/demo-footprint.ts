@@ -3,11 +3,12 @@ import type { DemoIdentity } from '../../../db/seed/demo-identity';
 import type { Queryable } from '../../../db/client';
 import type { DemoDataCounts } from '../../../shared/demo-data';
 import {
-  countNoticesOf, countPlacementsOf, countPlansOf, countSignoffsOf, networkMetaNamed, selectAccountsFor,
+  countNoticesOf, countPlacementsOf, countPlansOf, countSignoffsOf, networkMetaNamed, selectAccountsFor, ssoSettingsAre,
   selectCurrentPlacements, selectPresentSiteIds, selectPresentTenantIds, selectSliceIdsFor, selectSpanIdsFor,
   selectWindowIdsFor, type AccountRow, type CurrentPlacement,
 } from '../../queries/demo-data/demo-rows';
 import type { DemoRowIds } from '../../queries/demo-data/delete-demo-rows';
+import { DEMO_ISSUER_URL, DEMO_SSO_CLIENT_ID } from '../../../db/seed/seed-sso';
 
 export type DemoFootprint = {
   ids: DemoRowIds;
@@ -37,6 +38,7 @@ export async function findDemoFootprint(db: Queryable, demo: DemoIdentity, calle
   const caller = matched.find((a) => a.id === callerId);
   const accountIds = accounts.map((a) => a.id);
   const metaIsDemo = await networkMetaNamed(db, demo.networkName);
+  const signOnIsDemo = await ssoSettingsAre(db, { issuerUrl: DEMO_ISSUER_URL, clientId: DEMO_SSO_CLIENT_ID });
   const counts: DemoDataCounts = {
     sites: siteIds.length,
     spans: spanIds.length,
@@ -49,9 +51,11 @@ export async function findDemoFootprint(db: Queryable, demo: DemoIdentity, calle
     signoffs: await countSignoffsOf(db, { windowIds, approverIds: accountIds }),
     accounts: accounts.length,
     networkOutline: metaIsDemo ? 1 : 0,
+    demoSignOn: signOnIsDemo ? 1 : 0,
   };
   return {
-    ids: { windowIds, accountIds, sliceIds, tenantIds, spanIds, siteIds, keepUserId: callerId, networkName: metaIsDemo ? demo.networkName : null },
+    ids: { windowIds, accountIds, sliceIds, tenantIds, spanIds, siteIds, keepUserId: callerId, networkName: metaIsDemo ? demo.networkName : null,
+      demoIssuerUrl: signOnIsDemo ? DEMO_ISSUER_URL : null },
     counts,
     accounts,
     keptAccount: caller ? { name: caller.name, email: caller.email } : null,

@@ -3,7 +3,7 @@
 import { planReviewSchema, planSettingsSchema, type PlanSlice } from '../../../shared/plans';
 import { spanLatencyMs } from '../../../shared/scenario';
 import type { Queryable } from '../../../db/client';
-import { selectUsersOfTenants } from '../../queries/auth/tenant-users';
+import { selectActiveUsersOfTenants } from '../../queries/auth/tenant-users';
 import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 import { selectNoticeWindow, selectSlicesByIds, selectTenantsByIds, selectWordingRows } from '../../queries/notices/notice-inputs';
 import { selectPlanRow } from '../../queries/plans/plan-rows';
@@ -58,7 +58,7 @@ async function missingSlices(db: Queryable, affected: string[], listed: Set<stri
 export async function loadTenants(db: Queryable, ids: string[]): Promise<Map<string, NoticeTenant>> {
   // One after another: inside a transaction there is one connection (pg refuses overlapping queries on it).
   const rows = await selectTenantsByIds(db, ids);
-  const tenantUsers = await selectUsersOfTenants(db, ids.length > 0 ? ids : ['']);
+  const tenantUsers = await selectActiveUsersOfTenants(db, ids.length > 0 ? ids : ['']);
   const policy = await getPolicies(db);
   const out = new Map<string, NoticeTenant>();
   for (const t of rows) {

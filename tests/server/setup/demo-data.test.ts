@@ -87,6 +87,7 @@ test('the summary counts the demo and what depends on it, and names the caller\'
     signoffs: 1,
     accounts: 5, // six demo accounts less the caller's
     networkOutline: 1,
+    demoSignOn: 1, // single sign-on as seeded, pointing at the local test issuer
   });
   expect(summary.keptAccount).toEqual({ name: 'Robin Hale', email: 'admin@demo.test' });
   expect(summary.accountNames).not.toContain('Robin Hale');
@@ -127,6 +128,7 @@ test('removal takes the demo and its dependants in one go, keeps our rows and th
   expect(await ids('windows')).toEqual(['own-w-own']);
   expect((await t.pool.query('select count(*)::int as n from signoffs')).rows[0].n).toBe(0);
   expect((await t.pool.query('select count(*)::int as n from network_meta')).rows[0].n).toBe(0);
+  expect((await t.pool.query('select count(*)::int as n from sso_settings')).rows[0].n).toBe(0);
   const emails = (await t.pool.query('select email from users order by email')).rows.map((r) => r.email as string);
   expect(emails.filter((e) => e.endsWith('@demo.test'))).toEqual(['admin@demo.test']);
   expect(emails).toEqual(expect.arrayContaining(Object.values(staff).map((u) => u.email)));

@@ -1,8 +1,8 @@
 // The admin's single sign-on settings: who may read and write them, the secret that is never sent back, the
 // checks on the mapping, and password sign-in for staff turned off only once an admin can get in through SSO.
-import { eq } from 'drizzle-orm';
+import { eq, inArray } from 'drizzle-orm';
 import request from 'supertest';
-import { auditLog } from '../../../db/schema';
+import { auditLog, roleGrants, users } from '../../../db/schema';
 import { signInAs } from '../helpers/sign-in';
 import { TEST_PASSWORD } from '../helpers/test-app';
 import { TEST_CLIENT_SECRET } from './local-issuer';
@@ -75,6 +75,16 @@ test('password sign-in off for staff: refused while no admin can sign in through
     expect(engineer.body.error.message).toContain('Harbourline');
     // Tenants keep their passwords.
     expect((await passwordSignIn(ctx.users.tenant.email)).status).toBe(200);
+    // An admin too needs SSO while another admin is active; the last active admin keeps the password.
+    expect((await passwordSignIn(ctx.users.admin.email)).status).toBe(403);
+    const others = (await ctx.db.select({ id: roleGrants.userId }).from(roleGrants).where(eq(roleGrants.role, 'admin')))
+      .map((r) => r.id).filter((id) => id !== ctx.users.admin.id);
+    await ctx.db.update(users).set({ deactivatedAt: new Date() }).where(inArray(users.id, others));
+    try {
+      expect((await passwordSignIn(ctx.users.admin.email)).status).toBe(200);
+    } finally {
+      await ctx.db.update(users).set({ deactivatedAt: null }).where(inArray(users.id, others));
+    }
   } finally {
     await asAdmin('put').send(ctx.settings);
   }

@@ -1,9 +1,9 @@
 // Single sign-on against the local OpenID Connect issuer: the redirect, the happy path, and each refusal
 // (wrong state, wrong nonce, expired or tampered ID token, no mapped group, tenant account), plus roles that
 // follow the issuer's groups at every sign-in.
-import { and, eq } from 'drizzle-orm';
+import { and, eq, inArray } from 'drizzle-orm';
 import request from 'supertest';
-import { auditLog, users } from '../../../db/schema';
+import { auditLog, roleGrants, users } from '../../../db/schema';
 import { sessionCookieFrom, sessionSetCookie } from '../helpers/test-app';
 import { person, pendingCookieFrom, setupSso, ssoSignIn, type SsoContext } from './sso-fixture';
 import { signInAtIssuer, TEST_CLIENT_ID } from './local-issuer';
@@ -114,4 +114,26 @@ test('a tampered ID token (claims changed after signing): refused with token', a
 test('an issuer account with a tenant user\'s e-mail is refused: tenants never sign in through SSO', async () => {
   refusedWith(await ssoSignIn(ctx.app, 'fay'), 'tenant');
   expect((await ctx.db.select().from(users).where(eq(users.id, ctx.users.tenant.id)))[0].tenantId).toBe(ctx.tenantId);
+});
+
+test('the issuer never takes the admin role from the last active admin; the role follows the groups again once another admin exists', async () => {
+  const admins = (groups: string[]) => [...people(ctx.prefix), person('gus', ctx.prefix, groups)];
+  ctx.issuer.setPeople(admins(['slackwater-admins']));
+  const gus = (await me(sessionCookieFrom(await ssoSignIn(ctx.app, 'gus')))).body as { id: string; roles: string[] };
+  expect(gus.roles).toEqual(['admin']);
+  // Every other admin deactivated: gus is the last active one.
+  const others = (await ctx.db.select({ id: roleGrants.userId }).from(roleGrants).where(eq(roleGrants.role, 'admin')))
+    .map((r) => r.id).filter((id) => id !== gus.id);
+  await ctx.db.update(users).set({ deactivatedAt: new Date() }).where(inArray(users.id, others));
+  try {
+    ctx.issuer.setPeople(admins(['noc-engineers']));
+    const kept = await me(sessionCookieFrom(await ssoSignIn(ctx.app, 'gus')));
+    expect(kept.body.roles).toEqual(['admin', 'engineer']);
+    const audit = await ctx.db.select().from(auditLog).where(and(eq(auditLog.action, 'sso-last-admin-kept'), eq(auditLog.entityId, gus.id)));
+    expect(audit).toHaveLength(1);
+  } finally {
+    await ctx.db.update(users).set({ deactivatedAt: null }).where(inArray(users.id, others));
+  }
+  const demoted = await me(sessionCookieFrom(await ssoSignIn(ctx.app, 'gus')));
+  expect(demoted.body.roles).toEqual(['engineer']);
 });
