@@ -14,8 +14,8 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { RoleName } from '../../shared/api';
 import {
-  ADMIN_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, PLAN_READER_ROLES, SIGNOFF_QUEUE_ROLES,
-  TENANT_PORTAL_ROLES, WINDOW_BOOKER_ROLES,
+  ADMIN_ROLES, AUDIT_READER_ROLES, CHANGE_PACK_READER_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES,
+  PLAN_READER_ROLES, SIGNOFF_QUEUE_ROLES, TENANT_PORTAL_ROLES, WINDOW_BOOKER_ROLES,
 } from '../../shared/permissions';
 import { ok, prepareNotifiedWindow, prepareSubmittedWindow, slotAhead } from './helpers/api';
 import { describeFinding, isBlocking, runAxe, summarise, type Finding } from './helpers/axe';
@@ -83,6 +83,11 @@ const SCREENS: Screen[] = [
   { name: 'sign-off decision', path: (d) => `/sign-off/${d.inReviewId}`, ready: id('signoff-title'), roles: SIGNOFF_QUEUE_ROLES },
   { name: 'sign-off policy', path: () => '/sign-off/policy', ready: id('signoff-policy'), roles: ADMIN_ROLES },
   { name: 'security', path: () => '/security', ready: id('sessions-list') },
+  { name: 'change-board pack', path: (d) => `/windows/${d.windowId}/pack`, ready: id('change-pack'), roles: CHANGE_PACK_READER_ROLES },
+  { name: 'people', path: () => '/people', ready: id('people-list'), roles: ADMIN_ROLES },
+  { name: 'audit trail', path: () => '/audit', ready: `${id('audit-list')}, ${id('state-empty')}`, roles: AUDIT_READER_ROLES },
+  { name: 'single sign-on', path: () => '/settings/sso', ready: id('sso-issuer'), roles: ADMIN_ROLES },
+  { name: 'demo data', path: () => '/demo-data', ready: `${id('demo-data-panel')}, ${id('state-empty')}`, roles: ADMIN_ROLES },
   { name: 'notices', path: () => '/notices', ready: id('notices-list'), roles: TENANT_PORTAL_ROLES },
   { name: 'notice', path: (d) => `/notices/${d.noticeId}`, ready: id('notice-view-title'), roles: TENANT_PORTAL_ROLES },
 ];
@@ -176,6 +181,32 @@ test('the pages are served with a Content Security Policy that refuses inline sc
     return document.documentElement.dataset.inlineRan ?? 'no';
   });
   expect(ran).toBe('no');
+});
+
+/** Screens before sign-in; a made-up token shows each link page's "this link no longer works" state. */
+const SIGNED_OUT_SCREENS = [
+  { name: 'sign-in', path: '/sign-in', ready: id('sign-in-email') },
+  { name: 'forgot password', path: '/forgot-password', ready: id('forgot-password-email') },
+  { name: 'reset password, spent link', path: `/reset-password?token=${'A'.repeat(43)}`, ready: id('reset-password-ask-again') },
+  { name: 'invitation, spent link', path: `/invitation?token=${'A'.repeat(43)}`, ready: id('invitation-sign-in') },
+  { name: 'first-admin set-up, spent link', path: `/set-up?token=${'A'.repeat(43)}`, ready: id('set-up-sign-in') },
+];
+
+describe.each(SIZES)('signed out at $name size', (size) => {
+  test.each(SIGNED_OUT_SCREENS)('$name has no serious or critical WCAG 2.1 AA violation', async (screen) => {
+    const context = await suite.browser.newContext({ viewport: size.viewport });
+    suite.contexts.push(context);
+    const page = await context.newPage();
+    await page.goto(`${BASE_URL}${screen.path}`);
+    // A spent link's page is an error state by design, so only its own content and the fonts are waited for.
+    await page.locator(screen.ready).first().waitFor({ state: 'visible', timeout: 30_000 });
+    await page.evaluate(() => document.fonts.ready.then(() => undefined));
+    await page.waitForTimeout(200);
+    const findings = await runAxe(page);
+    report.push({ role: 'signed out', size: size.name, screen: screen.name, path: screen.path, findings });
+    if (findings.length > 0) console.log(summarise(`signed out · ${size.name} · ${screen.name}`, findings));
+    expect(findings.filter(isBlocking).map(describeFinding)).toEqual([]);
+  });
 });
 
 describe.each(ROLES.flatMap((r) => SIZES.map((size) => ({ ...r, size }))))('$role at $size.name size', ({ email, role, size }) => {
