@@ -1,8 +1,14 @@
 // The frame around signed-out pages: the product's mark and name above a centred card.
 import type { ReactNode } from 'react';
+import { Link, type Href } from 'expo-router';
 import { ScrollView, StyleSheet, Text, View } from 'react-native';
 import { LogoMark } from '@/components/icons';
 import { colors, radii, space, type } from '@/constants/theme';
+
+/** A link under a signed-out page's card content (back to sign-in, ask for a new link), in the app's type. */
+export function AuthLink({ href, testID, children }: { href: Href; testID: string; children: string }) {
+  return <Link href={href} testID={testID} style={styles.link}>{children}</Link>;
+}
 
 export function AuthFrame({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -42,4 +48,5 @@ const styles = StyleSheet.create({
     gap: space.lg,
   },
   title: { ...type.heading, color: colors.ink },
+  link: { ...type.bodyStrong, color: colors.primary, textDecorationLine: 'underline', alignSelf: 'flex-start', paddingVertical: space.xs },
 });

@@ -1,9 +1,8 @@
 // An invitation opened from its e-mail: check the link, then let the invitee choose a password (and be signed in).
-import { Link, useLocalSearchParams, useRouter } from 'expo-router';
-import { Text } from 'react-native';
+import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useInvitationLinkQuery } from '@/hooks/queries/people';
 import { isApiError } from '@/hooks/api-fetch';
-import { AuthFrame } from '@/components/auth-frame';
+import { AuthFrame, AuthLink } from '@/components/auth-frame';
 import { InvitationForm } from '@/components/people/invitation-form';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { usePageTitle } from '@/components/page-title';
@@ -22,7 +21,7 @@ export default function InvitationScreen() {
     body = (
       <>
         <ErrorState message={message} />
-        <Link href="/sign-in" testID="invitation-sign-in"><Text>Go to sign-in</Text></Link>
+        <AuthLink href="/sign-in" testID="invitation-sign-in">Go to sign-in</AuthLink>
       </>
     );
   } else if (!link.data) body = <LoadingState label="Checking the invitation link…" />;

@@ -1,9 +1,8 @@
 // Opened from the reset link in the mail: check the link, then choose a new password and sign in with it.
-import { Link, useLocalSearchParams, useRouter } from 'expo-router';
-import { Text } from 'react-native';
+import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useResetLinkQuery } from '@/hooks/queries/passwords';
 import { isApiError } from '@/hooks/api-fetch';
-import { AuthFrame } from '@/components/auth-frame';
+import { AuthFrame, AuthLink } from '@/components/auth-frame';
 import { ResetPasswordForm } from '@/components/passwords/reset-password-form';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { usePageTitle } from '@/components/page-title';
@@ -21,7 +20,7 @@ export default function ResetPasswordScreen() {
     body = (
       <>
         <ErrorState message={token === '' ? NO_TOKEN : isApiError(link.error) && link.error.status === 404 ? LINK_GONE : link.error?.message ?? LINK_GONE} />
-        <Link href="/forgot-password" testID="reset-password-ask-again"><Text>Ask for a new link</Text></Link>
+        <AuthLink href="/forgot-password" testID="reset-password-ask-again">Ask for a new link</AuthLink>
       </>
     );
   } else if (!link.data) body = <LoadingState label="Checking the reset link…" />;

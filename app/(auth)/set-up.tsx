@@ -1,9 +1,8 @@
 // First admin of an instance started without the demo: opened from the one-time link printed at start.
-import { Link, useLocalSearchParams, useRouter } from 'expo-router';
-import { Text } from 'react-native';
+import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useSetUpLinkQuery } from '@/hooks/queries/setup';
 import { isApiError } from '@/hooks/api-fetch';
-import { AuthFrame } from '@/components/auth-frame';
+import { AuthFrame, AuthLink } from '@/components/auth-frame';
 import { SetUpForm } from '@/components/setup/set-up-form';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { usePageTitle } from '@/components/page-title';
@@ -22,7 +21,7 @@ export default function SetUpScreen() {
     body = (
       <>
         <ErrorState message={token === '' ? NO_TOKEN : isApiError(link.error) && link.error.status === 404 ? LINK_GONE : link.error?.message ?? LINK_GONE} />
-        <Link href="/sign-in" testID="set-up-sign-in"><Text>Go to sign-in</Text></Link>
+        <AuthLink href="/sign-in" testID="set-up-sign-in">Go to sign-in</AuthLink>
       </>
     );
   } else if (!link.data) body = <LoadingState label="Checking the set-up link…" />;

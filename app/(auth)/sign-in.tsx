@@ -1,7 +1,7 @@
 // Sign-in screen: the form, a way in for a forgotten password, and where to go once it succeeds.
-import { Link, useLocalSearchParams, useRouter } from 'expo-router';
+import { useLocalSearchParams, useRouter } from 'expo-router';
 import { Text } from 'react-native';
-import { AuthFrame } from '@/components/auth-frame';
+import { AuthFrame, AuthLink } from '@/components/auth-frame';
 import { SignInForm } from '@/components/sign-in-form';
 import { SsoSignInSection } from '@/components/sso/sso-sign-in-section';
 import { usePageTitle } from '@/components/page-title';
@@ -15,7 +15,7 @@ export default function SignInScreen() {
       {reset === 'done' ? <Text role="status" testID="sign-in-password-reset">Your new password is saved. Sign in with it.</Text> : null}
       <SsoSignInSection />
       <SignInForm onSignedIn={() => router.replace('/')} />
-      <Link href="/forgot-password" testID="sign-in-forgot-password"><Text>Forgot your password?</Text></Link>
+      <AuthLink href="/forgot-password" testID="sign-in-forgot-password">Forgot your password?</AuthLink>
     </AuthFrame>
   );
 }

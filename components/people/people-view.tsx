@@ -1,10 +1,12 @@
 // The People screen's body: search and filters, the invite form, and the list (error → loading → empty → data).
 import { useState } from 'react';
+import { Link } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import { ROLE_NAMES } from '@/shared/api';
 import { PERSON_STATUSES, type PeopleFilter } from '@/shared/people';
 import { usePeopleQuery } from '@/hooks/queries/people';
 import { Button } from '@/components/button';
+import { PageHeading } from '@/components/page-title';
 import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states';
 import { TextField } from '@/components/text-field';
 import { ChoiceChips } from '@/components/windows/choice-chips';
@@ -40,6 +42,10 @@ export function PeopleView({ tenants, viewerZone, myId }: Props) {
 
   return (
     <View style={styles.page}>
+      <View style={styles.head}>
+        <PageHeading>People</PageHeading>
+        <Link href="/settings/sso" style={styles.link} testID="people-sso-settings">Single sign-on settings</Link>
+      </View>
       {inviting ? <InviteForm tenants={tenants} onClose={() => setInviting(false)} /> : (
         <View style={styles.invite}><Button label="Invite someone" testID="people-invite-open" onPress={() => setInviting(true)} /></View>
       )}
@@ -67,6 +73,8 @@ export function PeopleView({ tenants, viewerZone, myId }: Props) {
 
 const styles = StyleSheet.create({
   page: { gap: space.xl },
+  head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'baseline', justifyContent: 'space-between', gap: space.md },
+  link: { ...type.bodyStrong, color: colors.primary, textDecorationLine: 'underline' },
   invite: { alignItems: 'flex-start' },
   filters: { gap: space.sm },
   label: { ...type.label, color: colors.ink },

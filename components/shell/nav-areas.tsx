@@ -4,7 +4,6 @@ import type { Href } from 'expo-router';
 import type { RoleName } from '@/shared/api';
 import { ADMIN_ROLES, AUDIT_READER_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, SIGNOFF_QUEUE_ROLES, TENANT_PORTAL_ROLES } from '@/shared/permissions';
 import { AuditIcon, CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, NoticeIcon, OutboxIcon, OverviewIcon, PersonIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
-import { PersonIcon as SsoIcon } from '@/components/icons';
 
 export type NavArea = {
   key: string;
@@ -44,12 +43,9 @@ export const NAV_AREAS: readonly NavArea[] = [
     Icon: OutboxIcon, roles: ADMIN_ROLES,
   },
   {
-    key: 'people', label: 'People', href: '/people', matches: (pathname) => pathname.startsWith('/people'),
+    // Who may sign in and how: the people, and the single sign-on settings reached from their screen.
+    key: 'people', label: 'People', href: '/people', matches: (pathname) => pathname.startsWith('/people') || pathname.startsWith('/settings/sso'),
     Icon: PersonIcon, roles: ADMIN_ROLES,
-  },
-  {
-    key: 'sso', label: 'Single sign-on', href: '/settings/sso', matches: (pathname) => pathname.startsWith('/settings/sso'),
-    Icon: SsoIcon, roles: ADMIN_ROLES,
   },
   {
     key: 'sign-off', label: 'Sign-off', href: '/sign-off', matches: (pathname) => pathname.startsWith('/sign-off') || pathname.startsWith('/security'),

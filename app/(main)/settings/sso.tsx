@@ -1,4 +1,6 @@
 // Single sign-on settings (admin): the company's OpenID Connect issuer and who gets which roles through it.
+import { Link } from 'expo-router';
+import { StyleSheet } from 'react-native';
 import { useMeQuery } from '@/hooks/queries/me';
 import { useSsoSettingsMutation, useSsoSettingsQuery } from '@/hooks/queries/sso';
 import { canAdminister } from '@/shared/permissions';
@@ -6,6 +8,7 @@ import { PageColumn } from '@/components/page-column';
 import { EmptyState, ErrorState, LoadingState } from '@/components/screen-states';
 import { SsoSettingsForm } from '@/components/sso/sso-settings-form';
 import { PageHeading, usePageTitle } from '@/components/page-title';
+import { colors, space, type } from '@/constants/theme';
 
 export default function SsoSettingsScreen() {
   const me = useMeQuery();
@@ -18,6 +21,7 @@ export default function SsoSettingsScreen() {
   if (!settings.data) return <LoadingState label="Loading single sign-on…" />;
   return (
     <PageColumn narrow>
+      <Link href="/people" style={styles.back} testID="sso-back-to-people">‹ People</Link>
       <PageHeading>Single sign-on</PageHeading>
       <SsoSettingsForm
         settings={settings.data} saving={save.isPending} saved={save.isSuccess}
@@ -26,3 +30,5 @@ export default function SsoSettingsScreen() {
     </PageColumn>
   );
 }
+
+const styles = StyleSheet.create({ back: { ...type.bodyStrong, color: colors.primary, alignSelf: 'flex-start', paddingVertical: space.xs } });
