@@ -98,7 +98,8 @@ export type Invitation = z.infer<typeof invitationSchema>;
 export const invitationTokenSchema = z.string().regex(/^[A-Za-z0-9_-]{43}$/, 'This invitation link is not complete');
 
 /** GET /api/invitations/link/:token while the link works: whom it is for. */
-export const invitationLinkSchema = z.object({ email: z.string(), name: z.string() });
+/** GET /api/invitations/link/:token: who the link is for; `staff` when single sign-on may stand in for a password. */
+export const invitationLinkSchema = z.object({ email: z.string(), name: z.string(), staff: z.boolean() });
 export type InvitationLink = z.infer<typeof invitationLinkSchema>;
 
 export const inviteePasswordSchema = z.string()

@@ -4,6 +4,7 @@ import { useInvitationLinkQuery } from '@/hooks/queries/people';
 import { isApiError } from '@/hooks/api-fetch';
 import { AuthFrame, AuthLink } from '@/components/auth-frame';
 import { InvitationForm } from '@/components/people/invitation-form';
+import { SsoSignInSection } from '@/components/sso/sso-sign-in-section';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { usePageTitle } from '@/components/page-title';
 
@@ -25,7 +26,11 @@ export default function InvitationScreen() {
       </>
     );
   } else if (!link.data) body = <LoadingState label="Checking the invitation link…" />;
-  // The single sign-on button goes in InvitationForm's `singleSignOn` slot once the instance offers it.
-  else body = <InvitationForm token={token} invitee={link.data} onDone={() => router.replace('/')} />;
+  // Staff may use the company's sign-on instead (it shows only when an admin set it up); the issuer's verified
+  // e-mail links the invited account and ends its invitation.
+  else {
+    const sso = link.data.staff ? <SsoSignInSection orText="or choose a password for Slackwater below" /> : undefined;
+    body = <InvitationForm token={token} invitee={link.data} onDone={() => router.replace('/')} singleSignOn={sso} />;
+  }
   return <AuthFrame title="Accept your invitation">{body}</AuthFrame>;
 }

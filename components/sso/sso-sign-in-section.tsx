@@ -12,7 +12,7 @@ function goToIssuer(): void {
 }
 
 /** Reads `?sso_error=` from the address itself, so the sign-in screen only places it. */
-export function SsoSignInSection({ onStart = goToIssuer }: { onStart?: () => void }) {
+export function SsoSignInSection({ onStart = goToIssuer, orText = 'or with your e-mail and password' }: { onStart?: () => void; orText?: string }) {
   const { sso_error: errorCode } = useLocalSearchParams<{ sso_error?: string }>();
   const button = useSsoButtonQuery();
   const message = ssoErrorMessage(errorCode);
@@ -28,7 +28,7 @@ export function SsoSignInSection({ onStart = goToIssuer }: { onStart?: () => voi
       {offered ? (
         <>
           <Button label={`Sign in with ${button.data!.displayName}`} variant="quiet" testID="sso-sign-in" onPress={onStart} />
-          <Text style={styles.or}>or with your e-mail and password</Text>
+          <Text style={styles.or}>{orText}</Text>
         </>
       ) : null}
     </View>

@@ -10,7 +10,7 @@ export const RESET_REQUEST_LIMIT: SignInLimit = { windowMs: 60 * 60 * 1000, perA
 
 /** A full reset-request limit: 429 RATE_LIMITED with Retry-After, worded for this request. */
 export class ResetRequestLimitedError extends SignInLimitedError {
-  constructor(limitKind: 'account' | 'address', retryAfterSeconds: number) {
+  constructor(limitKind: SignInLimitedError['limitKind'], retryAfterSeconds: number) {
     super(limitKind, retryAfterSeconds);
     const minutes = Math.ceil(retryAfterSeconds / 60);
     this.message = `Too many reset links asked for ${limitKind === 'account' ? 'this e-mail address' : 'from your network address'}. ` +

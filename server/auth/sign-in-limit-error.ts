@@ -5,11 +5,14 @@ export class SignInLimitedError extends AppError {
   override readonly code = 'RATE_LIMITED';
   override readonly status = 429;
 
-  constructor(readonly limitKind: 'account' | 'address', readonly retryAfterSeconds: number) {
+  constructor(readonly limitKind: 'account' | 'address' | 'link', readonly retryAfterSeconds: number) {
     const minutes = Math.ceil(retryAfterSeconds / 60);
     const wait = `Try again in ${minutes} minute${minutes === 1 ? '' : 's'}.`;
-    super(limitKind === 'account'
-      ? `Too many failed sign-in attempts for this e-mail address. ${wait}`
-      : `Too many failed sign-in attempts from your network address. ${wait}`);
+    const what = {
+      account: 'Too many failed sign-in attempts for this e-mail address.',
+      address: 'Too many failed sign-in attempts from your network address.',
+      link: 'Too many links that did not work were opened from your network address.',
+    }[limitKind];
+    super(`${what} ${wait}`);
   }
 }

@@ -12,7 +12,8 @@ import { countResetRequest } from '../auth/reset-request-limit';
 import { clearSessionCookie, setSessionCookie } from '../auth/session-cookie';
 import { toPublicSession } from '../auth/sessions';
 import { signIn, signOut } from '../auth/sign-in';
-import { releaseSignInAttempt, reserveSignInAttempt, signInKeys, type SignInLimit } from '../auth/sign-in-limit';
+import { releaseSignInAttempt, type SignInLimit } from '../auth/sign-in-limit';
+import { reserveLinkCheck } from '../auth/link-check-limit';
 import { SignInLimitedError } from '../auth/sign-in-limit-error';
 import { userAgentLabel } from '../auth/user-agent-label';
 import { describeError } from '../http/error-log';
@@ -56,9 +57,8 @@ export function authRouter({ db, config, now, jobs, signInLimit }: RouteDeps & {
       .catch((err: unknown) => console.error('[server] password reset request failed after the answer', describeError(err)));
   });
   // Checking or using a link counts per client address like sign-in failures: guessing tokens stays slow.
-  const linkKeys = (ip: string | undefined) => signInKeys(`reset-link@${ip ?? 'unknown'}`, ip);
   router.get('/reset-password/:token', async (req, res) => {
-    const reservation = await reserveSignInAttempt(db, { keys: linkKeys(req.ip), limit: signInLimit, now: now() });
+    const reservation = await reserveLinkCheck(db, { link: 'reset', address: req.ip, limit: signInLimit, now: now() });
     const token = resetTokenSchema.safeParse(req.params.token);
     if (!token.success) throw new ResetLinkInvalidError();
     await checkResetLink(db, { token: token.data, now: now() });
@@ -67,7 +67,7 @@ export function authRouter({ db, config, now, jobs, signInLimit }: RouteDeps & {
   });
   router.post('/reset-password', async (req, res) => {
     const input = resetPasswordRequestSchema.parse(req.body);
-    const reservation = await reserveSignInAttempt(db, { keys: linkKeys(req.ip), limit: signInLimit, now: now() });
+    const reservation = await reserveLinkCheck(db, { link: 'reset', address: req.ip, limit: signInLimit, now: now() });
     try {
       await resetPassword(db, { ...input, now: now() });
     } catch (err) {

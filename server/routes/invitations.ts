@@ -10,7 +10,8 @@ import { ADMIN_ROLES } from '../../shared/permissions';
 import { currentUser, requireRole } from '../auth/guards';
 import { setSessionCookie } from '../auth/session-cookie';
 import { toPublicSession } from '../auth/sessions';
-import { releaseSignInAttempt, reserveSignInAttempt, signInKeys, type SignInLimit } from '../auth/sign-in-limit';
+import { releaseSignInAttempt, type SignInLimit } from '../auth/sign-in-limit';
+import { reserveLinkCheck } from '../auth/link-check-limit';
 import { SignInLimitedError } from '../auth/sign-in-limit-error';
 import { displayAddress, userAgentLabel } from '../auth/user-agent-label';
 import { acceptInvitation, checkInvitationLink } from '../services/people/accept-invitation';
@@ -31,7 +32,7 @@ export function invitationsRouter({ db, config, now, jobs, signInLimit }: RouteD
   const peopleDeps = () => ({ db, jobs, publicUrl: config.publicUrl, now: now() });
 
   router.get('/link/:token', async (req, res) => {
-    const reservation = await reserveSignInAttempt(db, { keys: signInKeys(`invitation-link@${req.ip ?? 'unknown'}`, req.ip), limit: signInLimit, now: now() });
+    const reservation = await reserveLinkCheck(db, { link: 'invitation', address: req.ip, limit: signInLimit, now: now() });
     const token = invitationTokenSchema.safeParse(req.params.token);
     if (!token.success) throw new InvitationLinkInvalidError();
     const link = await checkInvitationLink(db, { token: token.data, now: now() });
@@ -41,7 +42,7 @@ export function invitationsRouter({ db, config, now, jobs, signInLimit }: RouteD
 
   router.post('/accept', async (req, res) => {
     const input = acceptInvitationSchema.parse(req.body);
-    const reservation = await reserveSignInAttempt(db, { keys: signInKeys(`invitation-link@${req.ip ?? 'unknown'}`, req.ip), limit: signInLimit, now: now() });
+    const reservation = await reserveLinkCheck(db, { link: 'invitation', address: req.ip, limit: signInLimit, now: now() });
     const { token, user } = await acceptInvitation(db, {
       ...input, now: now(), userAgent: userAgentLabel(req.get('user-agent')), address: displayAddress(req.ip),
     });

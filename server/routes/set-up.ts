@@ -8,6 +8,7 @@ import { assertPasswordAcceptable } from '../auth/password-policy';
 import { setSessionCookie } from '../auth/session-cookie';
 import { toPublicSession } from '../auth/sessions';
 import { releaseSignInAttempt, reserveSignInAttempt, signInKeys, type SignInLimit } from '../auth/sign-in-limit';
+import { reserveLinkCheck } from '../auth/link-check-limit';
 import { SignInLimitedError } from '../auth/sign-in-limit-error';
 import { displayAddress, userAgentLabel } from '../auth/user-agent-label';
 import { checkSetUpLink, completeSetUp } from '../services/setup/first-admin';
@@ -24,7 +25,7 @@ export function setUpRouter({ db, config, now, signInLimit }: RouteDeps & { sign
 
   router.get('/:token', async (req, res) => {
     // Link checks count per client address (the account key is the address too): guessing tokens is slow.
-    const reservation = await reserveSignInAttempt(db, { keys: signInKeys(`set-up-link@${req.ip ?? 'unknown'}`, req.ip), limit: signInLimit, now: now() });
+    const reservation = await reserveLinkCheck(db, { link: 'set-up', address: req.ip, limit: signInLimit, now: now() });
     const token = setUpTokenSchema.safeParse(req.params.token);
     if (!token.success) throw new SetUpLinkInvalidError();
     await checkSetUpLink(db, { token: token.data, now: now() });

@@ -6,7 +6,7 @@ import { INVITE_PASSWORDS_DIFFER, InvitationForm } from '@/components/people/inv
 import { clearQueries, renderWithQueries, routedFetch } from './window-test-kit';
 
 const TOKEN = 'y'.repeat(43);
-const invitee = { email: 'mara@operator.example', name: 'Mara Lock' };
+const invitee = { email: 'mara@operator.example', name: 'Mara Lock', staff: true };
 const user = { id: 'u-7', email: invitee.email, name: invitee.name, roles: ['approver'], tenantId: null };
 
 afterEach(clearQueries);

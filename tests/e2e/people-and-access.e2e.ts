@@ -66,6 +66,8 @@ test('an admin invites a planner; the mail arrives; the planner follows the link
 
   const invitee = await newPage({ width: 390, height: 844 });
   await invitee.goto(link!.replace(/^https?:\/\/[^/]+/, BASE_URL));
+  // A staff invitee may take the company's sign-on instead of a password (the demo has it set up).
+  await invitee.getByTestId('invitation-sso-slot').getByTestId('sso-sign-in').waitFor({ timeout: 30000 });
   await invitee.getByTestId('invitation-password').fill(PASSPHRASE);
   await invitee.getByTestId('invitation-password-again').fill(PASSPHRASE);
   await invitee.getByTestId('invitation-submit').click();

@@ -20,13 +20,13 @@ export async function insertInviteLink(
   });
 }
 
-export type UsableInviteLink = { id: string; userId: string; email: string; name: string };
+export type UsableInviteLink = { id: string; userId: string; email: string; name: string; tenantId: string | null };
 
 /** The link and its invitee when it exists, is unused, has not expired and its invitee still waits; else null. */
 export async function findUsableInviteLink(
   db: Queryable, { tokenHash, now, lock = false }: { tokenHash: string; now: Date; lock?: boolean },
 ): Promise<UsableInviteLink | null> {
-  const query = db.select({ id: oneTimeLinks.id, userId: users.id, email: users.email, name: users.name })
+  const query = db.select({ id: oneTimeLinks.id, userId: users.id, email: users.email, name: users.name, tenantId: users.tenantId })
     .from(oneTimeLinks)
     .innerJoin(users, eq(users.id, oneTimeLinks.userId))
     .where(and(

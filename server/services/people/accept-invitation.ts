@@ -14,7 +14,8 @@ import { InvitationLinkInvalidError } from './errors';
 export async function checkInvitationLink(db: Db, { token, now }: { token: string; now: Date }): Promise<InvitationLink> {
   const link = await findUsableInviteLink(db, { tokenHash: hashLinkToken(token), now });
   if (!link) throw new InvitationLinkInvalidError();
-  return { email: link.email, name: link.name };
+  // Staff may take single sign-on instead of a password; tenant users never sign in through it.
+  return { email: link.email, name: link.name, staff: link.tenantId === null };
 }
 
 export type AcceptInput = { token: string; password: string; now: Date; userAgent: string | null; address: string | null };

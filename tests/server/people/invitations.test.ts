@@ -39,7 +39,7 @@ test('an invitation answers 201 with the id and queues one mail to the invitee h
 
 test('the link opens once: it shows whom it is for, accepting signs in, and a second use is refused', async () => {
   const { email, id, token } = await inviteOne('once', ['engineer', 'approver']);
-  expect((await linkStatus(token)).body).toEqual({ email, name: 'Ada once' });
+  expect((await linkStatus(token)).body).toEqual({ email, name: 'Ada once', staff: true });
   const first = await accept(token);
   expect(first.status).toBe(201);
   expect(first.body.user).toMatchObject({ id, email, roles: ['engineer', 'approver'] });
@@ -119,6 +119,8 @@ test('a tenant contact is invited bound to exactly one tenant', async () => {
   expect(res.status).toBe(201);
   expect(res.body).toMatchObject({ roles: ['tenant'], tenantId: ctx.tenantId });
   expect(ctx.queue.mails.at(-1)!.text).toContain(`a contact for Tenant ${ctx.prefix}`);
+  // Tenant contacts never sign in through single sign-on, so their link offers only a password.
+  expect((await linkStatus(ctx.tokenMailedTo(email))).body).toEqual({ email, name: 'Tess', staff: false });
 });
 
 test('when the mail cannot be queued the invitation stands and says so', async () => {

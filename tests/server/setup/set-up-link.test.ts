@@ -163,8 +163,10 @@ describe('the set-up link', () => {
 
   test('guessing links is limited per address like sign-in', async () => {
     const app = appAt(NOW, { windowMs: 60_000, perAccount: 1000, perAddress: 2 });
-    const codes = [];
-    for (let i = 0; i < 3; i++) codes.push((await request(app).get(`/api/set-up/${'B'.repeat(43)}`)).status);
-    expect(codes).toEqual([404, 404, 429]);
+    const answers = [];
+    for (let i = 0; i < 3; i++) answers.push(await request(app).get(`/api/set-up/${'B'.repeat(43)}`));
+    expect(answers.map((a) => a.status)).toEqual([404, 404, 429]);
+    // Worded for links, not for a sign-in that never happened.
+    expect(answers[2].body.error.message).toMatch(/^Too many links that did not work were opened from your network address\. Try again in 1 minute\.$/);
   });
 });
