@@ -1,7 +1,8 @@
 // A window's history as a dated timeline: what happened, when (in the viewer's zone), by whom, and any comment.
+import { Link } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
 import type { Me } from '@/shared/api';
-import { isOperator } from '@/shared/permissions';
+import { canReadAuditTrail, isOperator } from '@/shared/permissions';
 import type { WindowEvent } from '@/shared/window-history';
 import { useWindowHistoryQuery } from '@/hooks/queries/window-history';
 import { formatInstant } from '@/components/time';
@@ -56,6 +57,11 @@ export function WindowTimeline({ windowId, me, timeZone }: { windowId: string; m
     <Section title="History" testID="window-timeline">
       <Text style={styles.muted}>Newest first · times in {timeZone}</Text>
       {body}
+      {canReadAuditTrail(me.roles) ? (
+        <Link href={{ pathname: '/audit', params: { window: windowId } }} style={styles.link} testID="window-open-audit">
+          Every recorded action on this window, in the audit trail
+        </Link>
+      ) : null}
     </Section>
   );
 }
@@ -68,4 +74,5 @@ const styles = StyleSheet.create({
   comment: { ...type.body, color: colors.ink, fontStyle: 'italic' },
   muted: { ...type.caption, color: colors.inkMuted },
   error: { ...type.bodyStrong, color: colors.danger },
+  link: { ...type.bodyStrong, color: colors.primary, textDecorationLine: 'underline', paddingTop: space.sm },
 });

@@ -5,6 +5,12 @@ import type { WindowEvent } from '@/shared/window-history';
 import { eventSentence, WindowTimeline } from '@/components/windows/window-timeline';
 import { clearQueries, engineer, renderWithQueries, routedFetch } from './window-test-kit';
 
+// The link to the audit trail is a router Link; a text stand-in keeps its words readable here.
+jest.mock('expo-router', () => {
+  const { Text } = jest.requireActual('react-native');
+  return { Link: ({ children, testID }: { children: string; testID?: string }) => <Text testID={testID}>{children}</Text> };
+});
+
 afterEach(clearQueries);
 
 function event(extra: Partial<WindowEvent>): WindowEvent {
@@ -30,6 +36,14 @@ test('rows come newest first with the Berlin time, the name and the comment', as
   expect(last).toHaveTextContent(/Booked the window/);
   expect(last).toHaveTextContent(/10:00 CET/);
   expect(calls).toHaveLength(1);
+  // Engineers do not read the audit trail, so they get no link to it.
+  expect(screen.queryByTestId('window-open-audit')).toBeNull();
+});
+
+test('admins and approvers get a link to every recorded action on the window in the audit trail', async () => {
+  routedFetch([{ method: 'GET', path: /\/api\/windows\/w-1\/history$/, reply: () => ({ status: 200, body: { windowId: 'w-1', events } }) }]);
+  renderWithQueries(<WindowTimeline windowId="w-1" me={{ ...engineer, roles: ['approver'] }} timeZone="UTC" />);
+  await waitFor(() => expect(screen.getByTestId('window-open-audit')).toHaveTextContent('Every recorded action on this window, in the audit trail'));
 });
 
 test('a tenant sees no history and no request is made', () => {
