@@ -1,12 +1,13 @@
 // E-mail + password form: validates with the shared schema before calling the API, then shows the server's answer.
 import { useState } from 'react';
-import { StyleSheet, Text, View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { signInRequestSchema, type Me } from '@/shared/api';
 import { useSignInMutation } from '@/hooks/queries/me';
+import { AlertBanner } from '@/components/alert-banner';
 import { Button } from '@/components/button';
 import { TextField } from '@/components/text-field';
 import { signInErrorMessage } from '@/components/sign-in-errors';
-import { colors, radii, space, type } from '@/constants/theme';
+import { space } from '@/constants/theme';
 
 type FieldErrors = { email?: string; password?: string };
 
@@ -38,9 +39,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: Me) => void }) {
   return (
     <View style={styles.form} role="form" aria-label="Sign in">
       {signIn.isError ? (
-        <View style={styles.banner} role="alert" testID="sign-in-error">
-          <Text style={styles.bannerText}>{signInErrorMessage(signIn.error)}</Text>
-        </View>
+        <AlertBanner message={signInErrorMessage(signIn.error)} testID="sign-in-error" />
       ) : null}
       <TextField
         label="E-mail"
@@ -71,6 +70,4 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: Me) => void }) {
 
 const styles = StyleSheet.create({
   form: { gap: space.lg },
-  banner: { backgroundColor: colors.dangerSoft, borderRadius: radii.md, padding: space.md },
-  bannerText: { ...type.bodyStrong, color: colors.danger },
 });

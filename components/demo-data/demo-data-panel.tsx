@@ -2,6 +2,7 @@
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { DemoDataSummary, DemoRemovalResult } from '@/shared/demo-data';
+import { AlertBanner } from '@/components/alert-banner';
 import { Button } from '@/components/button';
 import { countLines } from '@/components/demo-data/demo-kinds';
 import { DemoRemovalDialog } from '@/components/demo-data/demo-removal-dialog';
@@ -43,9 +44,7 @@ export function DemoDataPanel({ summary, removing, error, onRemove }: Props) {
         {countLines(summary.counts).map((line) => <Text key={line.kind} style={styles.body}>• {line.text}</Text>)}
         {!confirming ? <Button label="Remove demo data…" testID="demo-data-remove" onPress={() => setConfirming(true)} /> : null}
       </View>
-      {error ? (
-        <View style={styles.banner} role="alert" testID="demo-removal-error"><Text style={styles.bannerText}>{error}</Text></View>
-      ) : null}
+      {error ? <AlertBanner message={error} testID="demo-removal-error" /> : null}
       {confirming ? (
         <DemoRemovalDialog summary={summary} removing={removing} onConfirm={onRemove} onCancel={() => setConfirming(false)} />
       ) : null}
@@ -60,6 +59,4 @@ const styles = StyleSheet.create({
   heading: { ...type.heading, color: colors.ink },
   body: { ...type.body, color: colors.ink },
   note: { ...type.bodyStrong, color: colors.warning },
-  banner: { backgroundColor: colors.dangerSoft, borderRadius: radii.md, padding: space.md },
-  bannerText: { ...type.bodyStrong, color: colors.danger },
 });

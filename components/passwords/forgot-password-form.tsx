@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { forgotPasswordRequestSchema } from '@/shared/passwords';
 import { useForgotPasswordMutation } from '@/hooks/queries/passwords';
+import { AlertBanner } from '@/components/alert-banner';
 import { Button } from '@/components/button';
 import { TextField } from '@/components/text-field';
 import { passwordErrorMessage } from '@/components/passwords/password-fields';
@@ -32,9 +33,9 @@ export function ForgotPasswordForm() {
     <View style={styles.form} role="form" aria-label="Ask for a password reset link">
       <Text style={styles.body}>Enter the e-mail address of your account. We send a link to choose a new password.</Text>
       {ask.isError ? (
-        <View style={styles.banner} role="alert" testID="forgot-password-error">
-          <Text style={styles.bannerText}>{passwordErrorMessage(ask.error, 'Sending the link failed. Try again in a moment.')}</Text>
-        </View>
+        <AlertBanner
+          message={passwordErrorMessage(ask.error, 'Sending the link failed. Try again in a moment.')} testID="forgot-password-error"
+        />
       ) : null}
       <TextField
         label="E-mail" testID="forgot-password-email" value={email} onChangeText={setEmail} error={error}
@@ -50,6 +51,4 @@ const styles = StyleSheet.create({
   body: { ...type.body, color: colors.inkMuted },
   note: { backgroundColor: colors.primarySoft, borderRadius: radii.md, padding: space.md },
   noteText: { ...type.bodyStrong, color: colors.ink },
-  banner: { backgroundColor: colors.dangerSoft, borderRadius: radii.md, padding: space.md },
-  bannerText: { ...type.bodyStrong, color: colors.danger },
 });

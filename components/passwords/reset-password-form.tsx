@@ -3,10 +3,11 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { PASSWORD_MIN_CHARS } from '@/shared/passwords';
 import { useResetPasswordMutation } from '@/hooks/queries/passwords';
+import { AlertBanner } from '@/components/alert-banner';
 import { Button } from '@/components/button';
-import { TextField } from '@/components/text-field';
+import { NewPasswordFields } from '@/components/passwords/new-password-fields';
 import { checkNewPassword, passwordErrorMessage, type NewPasswordErrors } from '@/components/passwords/password-fields';
-import { colors, radii, space, type } from '@/constants/theme';
+import { colors, space, type } from '@/constants/theme';
 
 export function ResetPasswordForm({ token, onDone }: { token: string; onDone: () => void }) {
   const [password, setPassword] = useState('');
@@ -26,17 +27,16 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
         Choose a password you use nowhere else. A few unrelated words make a strong one. Saving it signs you out everywhere.
       </Text>
       {reset.isError ? (
-        <View style={styles.banner} role="alert" testID="reset-password-error">
-          <Text style={styles.bannerText}>{passwordErrorMessage(reset.error, 'Saving the password failed. Try again in a moment.')}</Text>
-        </View>
+        <AlertBanner
+          message={passwordErrorMessage(reset.error, 'Saving the password failed. Try again in a moment.')} testID="reset-password-error"
+        />
       ) : null}
-      <TextField
-        label={`New password (at least ${PASSWORD_MIN_CHARS} characters)`} testID="reset-password-new" value={password}
-        onChangeText={setPassword} error={errors.password} secureTextEntry autoComplete="new-password"
-      />
-      <TextField
-        label="New password again" testID="reset-password-again" value={again} onChangeText={setAgain}
-        error={errors.again} secureTextEntry autoComplete="new-password" onSubmitEditing={submit}
+      <NewPasswordFields
+        password={password} again={again} onChangePassword={setPassword} onChangeAgain={setAgain}
+        passwordError={errors.password} againError={errors.again}
+        passwordTestID="reset-password-new" againTestID="reset-password-again"
+        passwordLabel={`New password (at least ${PASSWORD_MIN_CHARS} characters)`} againLabel="New password again"
+        onSubmit={submit}
       />
       <Button label={reset.isPending ? 'Saving…' : 'Save the new password'} testID="reset-password-submit" onPress={submit} busy={reset.isPending} />
     </View>
@@ -46,6 +46,4 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
 const styles = StyleSheet.create({
   form: { gap: space.lg },
   body: { ...type.body, color: colors.inkMuted },
-  banner: { backgroundColor: colors.dangerSoft, borderRadius: radii.md, padding: space.md },
-  bannerText: { ...type.bodyStrong, color: colors.danger },
 });

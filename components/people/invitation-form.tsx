@@ -6,9 +6,10 @@ import type { Me } from '@/shared/api';
 import { INVITEE_PASSWORD_MIN_CHARS, inviteePasswordSchema, type InvitationLink } from '@/shared/people';
 import { useAcceptInvitationMutation } from '@/hooks/queries/people';
 import { CLIENT_ERROR_CODES, isApiError } from '@/hooks/api-fetch';
+import { AlertBanner } from '@/components/alert-banner';
 import { Button } from '@/components/button';
-import { TextField } from '@/components/text-field';
-import { colors, radii, space, type } from '@/constants/theme';
+import { NewPasswordFields } from '@/components/passwords/new-password-fields';
+import { colors, space, type } from '@/constants/theme';
 
 export const INVITE_PASSWORDS_DIFFER = 'The two passwords are not the same';
 
@@ -46,28 +47,20 @@ export function InvitationForm({ token, invitee, onDone, singleSignOn }: Props) 
       </Text>
       {singleSignOn ? <View style={styles.sso} testID="invitation-sso-slot">{singleSignOn}</View> : null}
       {accept.isError ? (
-        <View style={styles.banner} role="alert" testID="invitation-error">
-          <Text style={styles.bannerText}>{acceptErrorMessage(accept.error)}</Text>
-        </View>
+        <AlertBanner message={acceptErrorMessage(accept.error)} testID="invitation-error" />
       ) : null}
-      <TextField
-        label={`Password (at least ${INVITEE_PASSWORD_MIN_CHARS} characters)`}
-        testID="invitation-password"
-        value={password}
-        onChangeText={setPassword}
-        error={errors.password}
-        secureTextEntry
-        autoComplete="new-password"
-      />
-      <TextField
-        label="Password again"
-        testID="invitation-password-again"
-        value={again}
-        onChangeText={setAgain}
-        error={errors.again}
-        secureTextEntry
-        autoComplete="new-password"
-        onSubmitEditing={submit}
+      <NewPasswordFields
+        password={password}
+        again={again}
+        onChangePassword={setPassword}
+        onChangeAgain={setAgain}
+        passwordError={errors.password}
+        againError={errors.again}
+        passwordTestID="invitation-password"
+        againTestID="invitation-password-again"
+        passwordLabel={`Password (at least ${INVITEE_PASSWORD_MIN_CHARS} characters)`}
+        againLabel="Password again"
+        onSubmit={submit}
       />
       <Button label={accept.isPending ? 'Setting the password…' : 'Set password and sign in'} testID="invitation-submit" onPress={submit} busy={accept.isPending} />
     </View>
@@ -78,6 +71,4 @@ const styles = StyleSheet.create({
   form: { gap: space.lg },
   intro: { ...type.body, color: colors.inkMuted },
   sso: { gap: space.sm },
-  banner: { backgroundColor: colors.dangerSoft, borderRadius: radii.md, padding: space.md },
-  bannerText: { ...type.bodyStrong, color: colors.danger },
 });

@@ -3,7 +3,9 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { PASSWORD_MIN_CHARS } from '@/shared/passwords';
 import { useChangePasswordMutation } from '@/hooks/queries/passwords';
+import { AlertBanner } from '@/components/alert-banner';
 import { Button } from '@/components/button';
+import { NewPasswordFields } from '@/components/passwords/new-password-fields';
 import { TextField } from '@/components/text-field';
 import { checkNewPassword, passwordErrorMessage, type NewPasswordErrors } from '@/components/passwords/password-fields';
 import { colors, radii, space, type } from '@/constants/theme';
@@ -35,9 +37,9 @@ export function ChangePasswordPanel() {
       <Text style={styles.title} role="heading" aria-level={2}>Change password</Text>
       <Text style={styles.body}>Your other sessions are signed out when the password changes; this one stays.</Text>
       {change.isError ? (
-        <View style={styles.banner} role="alert" testID="change-password-error">
-          <Text style={styles.bannerText}>{passwordErrorMessage(change.error, 'Changing the password failed. Try again in a moment.')}</Text>
-        </View>
+        <AlertBanner
+          message={passwordErrorMessage(change.error, 'Changing the password failed. Try again in a moment.')} testID="change-password-error"
+        />
       ) : null}
       {change.isSuccess ? (
         <View style={styles.note} role="status" testID="change-password-done">
@@ -48,13 +50,12 @@ export function ChangePasswordPanel() {
         label="Current password" testID="change-password-current" value={current} onChangeText={setCurrent}
         error={errors.current} secureTextEntry autoComplete="current-password"
       />
-      <TextField
-        label={`New password (at least ${PASSWORD_MIN_CHARS} characters)`} testID="change-password-new" value={password}
-        onChangeText={setPassword} error={errors.password} secureTextEntry autoComplete="new-password"
-      />
-      <TextField
-        label="New password again" testID="change-password-again" value={again} onChangeText={setAgain}
-        error={errors.again} secureTextEntry autoComplete="new-password" onSubmitEditing={submit}
+      <NewPasswordFields
+        password={password} again={again} onChangePassword={setPassword} onChangeAgain={setAgain}
+        passwordError={errors.password} againError={errors.again}
+        passwordTestID="change-password-new" againTestID="change-password-again"
+        passwordLabel={`New password (at least ${PASSWORD_MIN_CHARS} characters)`} againLabel="New password again"
+        onSubmit={submit}
       />
       <View style={styles.buttons}>
         <Button label={change.isPending ? 'Changing…' : 'Change password'} testID="change-password-submit" onPress={submit} busy={change.isPending} />
@@ -67,8 +68,6 @@ const styles = StyleSheet.create({
   block: { gap: space.md, marginTop: space.lg },
   title: { ...type.title, color: colors.abyss },
   body: { ...type.body, color: colors.ink },
-  banner: { backgroundColor: colors.dangerSoft, borderRadius: radii.md, padding: space.md },
-  bannerText: { ...type.bodyStrong, color: colors.danger },
   note: { backgroundColor: colors.primarySoft, borderRadius: radii.md, padding: space.md },
   noteText: { ...type.bodyStrong, color: colors.ink },
   buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },

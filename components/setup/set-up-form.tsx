@@ -5,9 +5,11 @@ import type { Me } from '@/shared/api';
 import { ADMIN_PASSWORD_MIN_CHARS, newAdminSchema, type NewAdmin } from '@/shared/setup';
 import { useSetUpMutation } from '@/hooks/queries/setup';
 import { CLIENT_ERROR_CODES, isApiError } from '@/hooks/api-fetch';
+import { AlertBanner } from '@/components/alert-banner';
 import { Button } from '@/components/button';
+import { NewPasswordFields } from '@/components/passwords/new-password-fields';
 import { TextField } from '@/components/text-field';
-import { colors, radii, space, type } from '@/constants/theme';
+import { colors, space, type } from '@/constants/theme';
 
 type Field = 'name' | 'email' | 'password' | 'passwordAgain';
 type FieldErrors = Partial<Record<Field, string>>;
@@ -57,9 +59,7 @@ export function SetUpForm({ token, onDone }: { token: string; onDone: (user: Me)
         This Slackwater has no admin yet. The account you create here can add the other people and load the network.
       </Text>
       {setUp.isError ? (
-        <View style={styles.banner} role="alert" testID="set-up-error">
-          <Text style={styles.bannerText}>{setUpErrorMessage(setUp.error)}</Text>
-        </View>
+        <AlertBanner message={setUpErrorMessage(setUp.error)} testID="set-up-error" />
       ) : null}
       <TextField label="Your name" testID="set-up-name" value={values.name} onChangeText={change('name')} error={errors.name} autoComplete="name" />
       <TextField
@@ -73,24 +73,18 @@ export function SetUpForm({ token, onDone }: { token: string; onDone: (user: Me)
         autoCorrect={false}
         inputMode="email"
       />
-      <TextField
-        label={`Password (at least ${ADMIN_PASSWORD_MIN_CHARS} characters)`}
-        testID="set-up-password"
-        value={values.password}
-        onChangeText={change('password')}
-        error={errors.password}
-        secureTextEntry
-        autoComplete="new-password"
-      />
-      <TextField
-        label="Password again"
-        testID="set-up-password-again"
-        value={values.passwordAgain}
-        onChangeText={change('passwordAgain')}
-        error={errors.passwordAgain}
-        secureTextEntry
-        autoComplete="new-password"
-        onSubmitEditing={submit}
+      <NewPasswordFields
+        password={values.password}
+        again={values.passwordAgain}
+        onChangePassword={change('password')}
+        onChangeAgain={change('passwordAgain')}
+        passwordError={errors.password}
+        againError={errors.passwordAgain}
+        passwordTestID="set-up-password"
+        againTestID="set-up-password-again"
+        passwordLabel={`Password (at least ${ADMIN_PASSWORD_MIN_CHARS} characters)`}
+        againLabel="Password again"
+        onSubmit={submit}
       />
       <Button label={setUp.isPending ? 'Creating the account…' : 'Create admin and sign in'} testID="set-up-submit" onPress={submit} busy={setUp.isPending} />
     </View>
@@ -100,6 +94,4 @@ export function SetUpForm({ token, onDone }: { token: string; onDone: (user: Me)
 const styles = StyleSheet.create({
   form: { gap: space.lg },
   intro: { ...type.body, color: colors.inkMuted },
-  banner: { backgroundColor: colors.dangerSoft, borderRadius: radii.md, padding: space.md },
-  bannerText: { ...type.bodyStrong, color: colors.danger },
 });

@@ -2,9 +2,10 @@
 // admin set single sign-on up. The button is a full page load: the issuer's pages are not part of the app.
 import { useLocalSearchParams } from 'expo-router';
 import { StyleSheet, Text, View } from 'react-native';
+import { AlertBanner } from '@/components/alert-banner';
 import { Button } from '@/components/button';
 import { SSO_START_PATH, useSsoButtonQuery } from '@/hooks/queries/sso';
-import { colors, radii, space, type } from '@/constants/theme';
+import { colors, space, type } from '@/constants/theme';
 import { ssoErrorMessage } from './sso-error-messages';
 
 function goToIssuer(): void {
@@ -20,11 +21,7 @@ export function SsoSignInSection({ onStart = goToIssuer, orText = 'or with your 
   if (!message && !offered) return null;
   return (
     <View style={styles.section}>
-      {message ? (
-        <View style={styles.banner} role="alert" testID="sso-sign-in-error">
-          <Text style={styles.bannerText}>{message}</Text>
-        </View>
-      ) : null}
+      {message ? <AlertBanner message={message} testID="sso-sign-in-error" /> : null}
       {offered ? (
         <>
           <Button label={`Sign in with ${button.data!.displayName}`} variant="quiet" testID="sso-sign-in" onPress={onStart} />
@@ -37,7 +34,5 @@ export function SsoSignInSection({ onStart = goToIssuer, orText = 'or with your 
 
 const styles = StyleSheet.create({
   section: { gap: space.md },
-  banner: { backgroundColor: colors.dangerSoft, borderRadius: radii.md, padding: space.md },
-  bannerText: { ...type.bodyStrong, color: colors.danger },
   or: { ...type.caption, color: colors.inkMuted, textAlign: 'center' },
 });
