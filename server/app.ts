@@ -14,6 +14,8 @@ import { inputHygiene } from './http/input-hygiene';
 import { originCheck } from './http/origin-check';
 import { securityHeaders } from './http/security-headers';
 import { webApp } from './http/web-app';
+import { httpMetrics } from './metrics/http-metrics';
+import { metricsEndpoint } from './metrics/metrics-route';
 import { authRouter } from './routes/auth';
 import { calendarFeedsRouter } from './routes/calendar-feeds';
 import { healthRouter } from './routes/health';
@@ -100,7 +102,10 @@ export function createApp(deps: AppDeps): express.Application {
   const signInLimit = deps.signInLimit ?? config.signInLimit;
   const app = express();
   app.disable('x-powered-by');
+  app.use(httpMetrics());
   app.use(securityHeaders());
+  // Prometheus scrapes: no session, no body; METRICS_ACCESS decides who may read (metrics/metrics-route.ts).
+  app.get('/metrics', metricsEndpoint({ db, pool: deps.pool, config }));
   // Before sessions and body parsing: a health probe must not depend on a cookie's database look-up.
   app.use('/api/health', noStore, healthRouter({ db, config, now, jobs: deps.jobs ?? noJobQueue }));
   // Calendar apps fetch feeds without a cookie: the token in the address is the credential (routes/calendar-feeds.ts).

@@ -42,6 +42,11 @@ const envSchema = z.object({
   MAIL_FROM: z.string().min(3).default('Slackwater <maintenance@slackwater.invalid>'),
   /** Where links in e-mails point (the app's address as users reach it). */
   PUBLIC_URL: z.url().optional(),
+  /** Who may read /metrics: `loopback` (this machine, not through a proxy), `token` (Bearer METRICS_TOKEN) or `open`.
+   *  Default: `token` when METRICS_TOKEN is set, else `loopback`. */
+  METRICS_ACCESS: z.enum(['loopback', 'token', 'open']).optional(),
+  /** The bearer token a scraper sends to /metrics; at least 32 characters (e.g. `openssl rand -hex 32`). */
+  METRICS_TOKEN: z.string().min(32, 'METRICS_TOKEN is at least 32 characters (e.g. openssl rand -hex 32)').optional(),
 });
 
 export type ServerConfig = {
@@ -65,6 +70,7 @@ export type ServerConfig = {
   smtp: { mode: 'sink'; sinkPort: number } | { mode: 'relay'; url: string };
   mailFrom: string;
   publicUrl: string;
+  metrics: { mode: 'loopback' | 'token' | 'open'; token: string | null };
 };
 
 export class ConfigError extends Error {}
@@ -77,6 +83,9 @@ export function parseEnv(source: Record<string, string | undefined> = process.en
     throw new ConfigError(`Invalid server configuration:\n${lines.join('\n')}`);
   }
   const env = parsed.data;
+  if (env.METRICS_ACCESS === 'token' && !env.METRICS_TOKEN) {
+    throw new ConfigError('Invalid server configuration:\n  METRICS_TOKEN: required when METRICS_ACCESS=token');
+  }
   return {
     port: env.PORT,
     host: env.HOST,
@@ -100,6 +109,7 @@ export function parseEnv(source: Record<string, string | undefined> = process.en
     smtp: env.SMTP_URL === 'sink' ? { mode: 'sink', sinkPort: env.SMTP_SINK_PORT } : { mode: 'relay', url: env.SMTP_URL },
     mailFrom: env.MAIL_FROM,
     publicUrl: (env.PUBLIC_URL ?? `http://${env.HOST}:${env.PORT}`).replace(/\/$/, ''),
+    metrics: { mode: env.METRICS_ACCESS ?? (env.METRICS_TOKEN ? 'token' : 'loopback'), token: env.METRICS_TOKEN ?? null },
   };
 }
 

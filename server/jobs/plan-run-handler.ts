@@ -7,6 +7,7 @@ import { finishDone, finishFailed, markRunning, requeue } from '../queries/plans
 import { loadPlanInput, RunRefusedError } from './plan-run-input';
 import { ProgressBox, watchRun, type RunEnd, type StopReason } from './plan-run-watch';
 import { startPlanThread } from './plan-thread';
+import { observePlanRun, type PlanRunOutcome } from '../metrics/registry';
 
 export type PlanRunDeps = {
   db: Db;
@@ -29,7 +30,16 @@ function firstProgress(plan: PlanRow): PlanProgress {
 
 type Ctx = { deps: PlanRunDeps; plan: PlanRow; attempt: number; job: PlanRunJob; pickedAt: Date };
 
+/** The metrics label of a logged outcome (slackwater_plan_runs_total). */
+function outcomeKind(outcome: string): PlanRunOutcome {
+  if (outcome === 'done') return 'done';
+  if (outcome.startsWith('failed')) return 'failed';
+  if (outcome.startsWith('retry')) return 'retried';
+  return outcome === STOPPED.superseded ? 'superseded' : 'cancelled';
+}
+
 function logRun(c: Ctx, computeMs: number, outcome: string): void {
+  observePlanRun(outcomeKind(outcome), computeMs);
   const waitMs = c.pickedAt.getTime() - c.plan.createdAt.getTime();
   c.deps.log(`plan run ${c.plan.id}: window ${c.plan.windowId}, attempt ${c.attempt}, queue wait ${waitMs} ms, `
     + `compute ${computeMs} ms, ${outcome}`);

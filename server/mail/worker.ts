@@ -6,6 +6,7 @@ import type { Db } from '../../db/client';
 import type { ServerConfig } from '../env';
 import { QUEUES, type MailJob } from '../jobs/queue';
 import { markNoticeAttemptFailed, markNoticeFailed, markNoticeSent } from '../queries/mail/notice-sending';
+import { mailFailed, mailGivenUp, mailSent } from '../metrics/registry';
 import { composeMail } from './compose';
 import { noticeVersionState } from './notice-state';
 import { createMailTransport } from './transport';
@@ -45,14 +46,17 @@ export async function registerMailWorker(boss: PgBoss, deps: MailWorkerDeps): Pr
     try {
       await transport.sendMail(composeMail(mail, deps.config.mailFrom));
     } catch (err) {
+      mailFailed.inc();
       if (mail.noticeId) await markNoticeAttemptFailed(deps.db, mail.noticeId, mail.noticeSequence, readableMailError(err), now());
       throw err; // pg-boss retries it
     }
+    mailSent.inc();
     if (mail.noticeId) await markNoticeSent(deps.db, mail.noticeId, mail.noticeSequence, now());
   }
 
   const deadId = await boss.work<MailJob>(QUEUES.mailDead, options, async (jobs) => {
     for (const job of jobs) {
+      mailGivenUp.inc();
       if (job.data.noticeId) await markNoticeFailed(deps.db, job.data.noticeId, job.data.noticeSequence, now());
     }
   });
