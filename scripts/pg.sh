@@ -1,7 +1,7 @@
 #!/usr/bin/env bash
 # The project's own PostgreSQL: a cluster in .data/pg on 127.0.0.1, used by `npm start` and `npm test`.
-# Usage: scripts/pg.sh ensure | stop | status | url [db] | createdb NAME | recreatedb NAME
-# Progress goes to stderr; only `url` (and `status`) print to stdout.
+# Usage: scripts/pg.sh ensure | stop | status | url [db] | createdb NAME | recreatedb NAME | bindir
+# Progress goes to stderr; only `url`, `bindir` (the PostgreSQL binaries' directory) and `status` print to stdout.
 set -euo pipefail
 
 ROOT="$(cd "$(dirname "${BASH_SOURCE[0]}")/.." && pwd)"
@@ -159,5 +159,6 @@ case "${1:-}" in
   url) db="${2:-slackwater}"; check_name "$db"; echo "postgres://postgres@$HOST:$PORT/$db" ;;
   createdb) cmd_createdb "${2:-}" ;;
   recreatedb) cmd_recreatedb "${2:-}" ;;
-  *) echo "usage: scripts/pg.sh ensure|stop|status|url [db]|createdb NAME|recreatedb NAME" >&2; exit 2 ;;
+  bindir) bindir; echo ;;
+  *) echo "usage: scripts/pg.sh ensure|stop|status|url [db]|createdb NAME|recreatedb NAME|bindir" >&2; exit 2 ;;
 esac
