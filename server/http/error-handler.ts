@@ -1,10 +1,11 @@
 // The one error middleware: every failure leaves as { error: { code, message } } (+ details for validation).
 // Errors carrying a 4xx status answer with it and a code, never 500. Only a real 500 is logged, and only as the
-// route's pattern, a fixed message and the error's own description (describeError): never request values.
+// route's pattern, a fixed message and the error's safe fields (errorFields): never request values.
 import type { ErrorRequestHandler, Request } from 'express';
 import { ZodError } from 'zod';
 import { AppError } from '../errors';
-import { describeError } from './error-log';
+import { routePattern } from '../metrics/route-pattern';
+import { errorFields, type SafeError } from './error-log';
 import { knownFailure } from './error-status';
 
 type ErrorBody = { error: { code: string; message: string; details?: { path: string; message: string }[] } };
@@ -15,6 +16,8 @@ function zodPath(path: PropertyKey[]): string {
 
 /** The matched route's pattern (`/api/windows/:id`), never the URL with its values; "(no route)" before matching. */
 function routeOf(req: Request): string {
+  const tracked = routePattern(req);
+  if (tracked) return `${req.method} ${tracked}`;
   const pattern = (req.route as { path?: unknown } | undefined)?.path;
   return `${req.method} ${typeof pattern === 'string' ? `${req.baseUrl}${pattern}` : '(no route)'}`;
 }
@@ -30,10 +33,13 @@ function answerFor(err: unknown): { status: number; body: ErrorBody } | null {
   return known ? { status: known.status, body: { error: { code: known.code, message: known.message } } } : null;
 }
 
-export function errorHandler({ log }: { log: (message: string, err: unknown) => void }): ErrorRequestHandler {
+/** Receives the error's safe fields only, never the error itself (its message may hold SQL parameters). */
+export type ErrorLog = (message: string, err: SafeError, req: Request) => void;
+
+export function errorHandler({ log }: { log: ErrorLog }): ErrorRequestHandler {
   return (err, req, res, next) => {
     const answer = answerFor(err);
-    if (!answer) log(`INTERNAL on ${routeOf(req)}: unhandled error`, describeError(err));
+    if (!answer) log(`INTERNAL on ${routeOf(req)}: unhandled error`, errorFields(err), req);
     // Too late for our body: Express's default handler closes the connection.
     if (res.headersSent) return next(err);
     const { status, body } = answer ?? { status: 500, body: { error: { code: 'INTERNAL', message: 'Something went wrong on the server.' } } };

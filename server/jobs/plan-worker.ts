@@ -26,7 +26,7 @@ export interface PlanWorker {
 }
 
 export async function registerPlanWorker(boss: PgBoss, opts: PlanWorkerOptions): Promise<PlanWorker> {
-  const log = opts.log ?? ((l) => console.log(l));
+  const log = opts.log ?? (() => undefined);
   const stoppers = new Set<(reason: StopReason) => void>();
   let stopping = false;
   const running = new Set<Promise<void>>();

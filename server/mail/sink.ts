@@ -35,7 +35,7 @@ export async function startMailSink(
   options: { log?: SinkLog } = {},
 ): Promise<MailSink> {
   const requestedPort = config.smtp.mode === 'sink' ? config.smtp.sinkPort : 0;
-  const log: SinkLog = options.log ?? ((message, err) => console.error(`[mail-sink] ${message}`, err ?? ''));
+  const log: SinkLog = options.log ?? (() => undefined);
   const server = new SMTPServer({
     name: 'slackwater-sink',
     banner: 'Slackwater local SMTP sink (messages are kept, never delivered)',

@@ -7,7 +7,7 @@ import { startMailSink, type MailSink } from './sink';
 export async function startSinkIfConfigured(
   config: Pick<ServerConfig, 'smtp'>,
   db: Db,
-  log: (line: string) => void = console.log,
+  log: (line: string) => void = () => undefined,
 ): Promise<MailSink | null> {
   if (config.smtp.mode !== 'sink') return null;
   const sink = await startMailSink(config, db, {

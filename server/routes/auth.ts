@@ -16,7 +16,7 @@ import { releaseSignInAttempt, type SignInLimit } from '../auth/sign-in-limit';
 import { reserveLinkCheck } from '../auth/link-check-limit';
 import { SignInLimitedError } from '../auth/sign-in-limit-error';
 import { userAgentLabel } from '../auth/user-agent-label';
-import { describeError } from '../http/error-log';
+import { requestWarnLog } from '../http/request-log';
 import type { RouteDeps } from './deps';
 
 /** A full sign-in limit says when to come back (RFC 9110 §10.2.3); the error handler writes the body. */
@@ -29,9 +29,9 @@ export function authRouter({ db, config, now, jobs, signInLimit }: RouteDeps & {
   const router = express.Router();
   router.post('/sign-in', async (req, res) => {
     const { email, password } = signInRequestSchema.parse(req.body);
-    // WARNING: req.ip is the socket's address: `trust proxy` is not set (server/app.ts), so X-Forwarded-For is
-    // ignored and cannot be forged to dodge the per-address limit. Behind a reverse proxy, set `trust proxy` to
-    // that proxy, or every client counts as the proxy's one address.
+    // WARNING: req.ip is the socket's address unless TRUST_PROXY names the proxy in front (server/env.ts): then
+    // X-Forwarded-For from that proxy alone counts, so nobody else can forge it to dodge the per-address limit.
+    // Behind a reverse proxy without TRUST_PROXY, every client counts as the proxy's one address.
     const { token, user } = await signIn(db, {
       email, password, now: now(), address: req.ip, userAgent: userAgentLabel(req.get('user-agent')), limit: signInLimit,
     });
@@ -54,7 +54,7 @@ export function authRouter({ db, config, now, jobs, signInLimit }: RouteDeps & {
     await countResetRequest(db, { email, address: req.ip, now: at });
     res.status(202).json(forgotPasswordResponseSchema.parse({ message: FORGOT_PASSWORD_ANSWER }));
     void requestPasswordReset(db, jobs, { email, now: at, publicUrl: config.publicUrl })
-      .catch((err: unknown) => console.error('[server] password reset request failed after the answer', describeError(err)));
+      .catch((err: unknown) => requestWarnLog(req)('password reset request failed after the answer', err));
   });
   // Checking or using a link counts per client address like sign-in failures: guessing tokens stays slow.
   router.get('/reset-password/:token', async (req, res) => {

@@ -2,7 +2,7 @@
 // old one stops), DELETE /api/invitations/:id (revoke). The invitee, without a session: GET
 // /api/invitations/link/:token (does the link work, for whom) and POST /api/invitations/accept (set a password,
 // be signed in). The invitee's routes count attempts like sign-in does, so guessing tokens is slow.
-import express, { type ErrorRequestHandler, type Router } from 'express';
+import express, { type ErrorRequestHandler, type Request, type Router } from 'express';
 import { z } from 'zod';
 import { signInResponseSchema } from '../../shared/api';
 import { acceptInvitationSchema, invitationLinkSchema, invitationRequestSchema, invitationSchema, invitationTokenSchema } from '../../shared/people';
@@ -14,6 +14,7 @@ import { releaseSignInAttempt, type SignInLimit } from '../auth/sign-in-limit';
 import { reserveLinkCheck } from '../auth/link-check-limit';
 import { SignInLimitedError } from '../auth/sign-in-limit-error';
 import { displayAddress, userAgentLabel } from '../auth/user-agent-label';
+import { requestWarnLog } from '../http/request-log';
 import { acceptInvitation, checkInvitationLink } from '../services/people/accept-invitation';
 import { InvitationLinkInvalidError } from '../services/people/errors';
 import { createInvitation, resendInvitation, revokeInvitation } from '../services/people/invitations';
@@ -29,7 +30,7 @@ const retryAfter: ErrorRequestHandler = (err, _req, res, next) => {
 export function invitationsRouter({ db, config, now, jobs, signInLimit }: RouteDeps & { signInLimit: SignInLimit }): Router {
   const router = express.Router();
   const admin = requireRole(...ADMIN_ROLES);
-  const peopleDeps = () => ({ db, jobs, publicUrl: config.publicUrl, now: now() });
+  const peopleDeps = (req: Request) => ({ db, jobs, publicUrl: config.publicUrl, now: now(), log: requestWarnLog(req) });
 
   router.get('/link/:token', async (req, res) => {
     const reservation = await reserveLinkCheck(db, { link: 'invitation', address: req.ip, limit: signInLimit, now: now() });
@@ -54,15 +55,15 @@ export function invitationsRouter({ db, config, now, jobs, signInLimit }: RouteD
 
   router.post('/', admin, async (req, res) => {
     const input = invitationRequestSchema.parse(req.body);
-    res.status(201).json(invitationSchema.parse(await createInvitation(peopleDeps(), currentUser(req), input)));
+    res.status(201).json(invitationSchema.parse(await createInvitation(peopleDeps(req), currentUser(req), input)));
   });
 
   router.post('/:id/resend', admin, async (req, res) => {
-    res.json(invitationSchema.parse(await resendInvitation(peopleDeps(), currentUser(req), idSchema.parse(req.params.id))));
+    res.json(invitationSchema.parse(await resendInvitation(peopleDeps(req), currentUser(req), idSchema.parse(req.params.id))));
   });
 
   router.delete('/:id', admin, async (req, res) => {
-    await revokeInvitation(peopleDeps(), currentUser(req), idSchema.parse(req.params.id));
+    await revokeInvitation(peopleDeps(req), currentUser(req), idSchema.parse(req.params.id));
     res.status(204).end();
   });
 

@@ -6,6 +6,7 @@ import { DECIDED_BY_ME_LIMIT, decidedByMeSchema, signoffWaitingCountSchema } fro
 import { signoffDecisionBodySchema, signoffDecisionResultSchema, signoffQueueSchema, signoffSummarySchema } from '../../shared/signoff';
 import { currentUser, hideFromTenants, requireRole } from '../auth/guards';
 import { removeOtp } from '../auth/otp-keys';
+import { requestWarnLog } from '../http/request-log';
 import { countWindowsWaitingFor } from '../queries/signoff/my-decisions';
 import { decideSignoff } from '../services/signoff/decide';
 import { decidedByMe } from '../services/signoff/decided-by-me';
@@ -37,7 +38,7 @@ export function signoffRouter(deps: RouteDeps): Router {
   });
   router.post('/:windowId/decision', hide, requireRole(...SIGNOFF_APPROVER_ROLES), async (req, res) => {
     const body = signoffDecisionBodySchema.parse(req.body);
-    const result = await decideSignoff({ ...deps, now: now() }, windowIdOf(req), currentUser(req), body);
+    const result = await decideSignoff({ ...deps, now: now(), log: requestWarnLog(req) }, windowIdOf(req), currentUser(req), body);
     res.json(signoffDecisionResultSchema.parse(result));
   });
   // A lost phone: an admin removes the user's key so they can enrol again (audited with the admin as actor).

@@ -1,5 +1,5 @@
 // The error middleware: errors carrying a 4xx status answer with it and a code; a real 500 logs the route pattern
-// and the error's own description, never the SQL parameters or query of a database error.
+// and the error's safe fields (type, codes, message, stack frames), never the SQL parameters or query of a database error.
 import express from 'express';
 import request from 'supertest';
 import { errorHandler } from '../../server/http/error-handler';
@@ -11,7 +11,7 @@ const createError = (status: number, message: string, props: Record<string, unkn
 function appThrowing(err: unknown, logged: string[]) {
   const app = express();
   app.get('/api/things/:id', () => { throw err; });
-  app.use(errorHandler({ log: (message, detail) => logged.push(`${message}\n${String(detail)}`) }));
+  app.use(errorHandler({ log: (message, detail) => logged.push(`${message}\n${JSON.stringify(detail)}`) }));
   return app;
 }
 
@@ -58,9 +58,12 @@ test('a real 500 logs the route pattern, names and stack, but not the query, par
   expect(logged).toHaveLength(1);
   const [line] = logged;
   expect(line).toMatch(/^INTERNAL on GET \/api\/things\/:id/);
-  expect(line).toMatch(/DrizzleQueryError: database query failed/);
-  expect(line).toMatch(/caused by Error \[23505\]: duplicate key value violates unique constraint "windows_pkey"/);
-  expect(line).toMatch(/\n\s+at /);
+  const detail = JSON.parse(line.slice(line.indexOf('\n') + 1));
+  expect(detail).toMatchObject({
+    type: 'DrizzleQueryError', message: expect.stringMatching(/^database query failed/),
+    cause: { type: 'Error', pgCode: '23505', message: 'duplicate key value violates unique constraint "windows_pkey"' },
+  });
+  expect(detail.stack).toMatch(/^\s+at /);
   for (const secret of ['secret-title', 'secret-id', 'secret-where', 'secret-path-value', 'insert into', 'params']) {
     expect(line).not.toContain(secret);
   }

@@ -41,7 +41,7 @@ async function mailAndAnswer(deps: PeopleDeps, actor: Me, issued: Issued): Promi
   } catch (err) {
     // The invitation stands; the admin sees that the mail is not on its way and sends it again.
     mailQueued = false;
-    (deps.log ?? ((message, e) => console.error(`[people] ${message}`, e)))('the invitation mail could not be queued', err);
+    deps.log?.('the invitation mail could not be queued', err);
   }
   return {
     id: person.id, email: person.email, name: person.name, roles: person.roles, tenantId: person.tenantId,

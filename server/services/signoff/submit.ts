@@ -12,8 +12,8 @@ import { queueMails, signoffRequestMail } from './signoff-mail';
 
 export type SignoffDeps = { db: Db; config: ServerConfig; jobs: MailQueue; now: Date; log?: (message: string, err: unknown) => void };
 
-/** Where a mail that could not be queued is reported (the decision itself stands). */
-export const logOf = (deps: SignoffDeps) => deps.log ?? ((message: string, err: unknown) => console.error(`[signoff] ${message}`, err));
+/** Where a mail that could not be queued is reported (the decision itself stands); the route passes the request's log. */
+export const logOf = (deps: SignoffDeps) => deps.log ?? (() => undefined);
 
 export async function submitForSignoff(deps: SignoffDeps, windowId: string, user: Me): Promise<SignoffSubmitResult> {
   const { window, round } = await deps.db.transaction(async (tx) => {
