@@ -9,11 +9,13 @@ import type { SignInLimit } from './auth/sign-in-limit';
 import type { ServerConfig } from './env';
 import { RouteNotFoundError } from './errors';
 import { noJobQueue, type JobQueue } from './jobs/queue';
-import { errorHandler } from './http/error-handler';
+import { errorHandler, type ErrorLog } from './http/error-handler';
 import { inputHygiene } from './http/input-hygiene';
 import { originCheck } from './http/origin-check';
+import { requestLog } from './http/request-log';
 import { securityHeaders } from './http/security-headers';
 import { webApp } from './http/web-app';
+import { silentLogger, type Logger } from './log/logger';
 import { httpMetrics } from './metrics/http-metrics';
 import { metricsEndpoint } from './metrics/metrics-route';
 import { authRouter } from './routes/auth';
@@ -54,7 +56,10 @@ export type AppDeps = {
   /** plan runs and mail; default: none (routes that enqueue answer 503) */
   jobs?: JobQueue;
   signInLimit?: SignInLimit;
-  log?: (message: string, err: unknown) => void;
+  /** request lines and each request's child logger (req.log); default: a logger that writes nothing */
+  logger?: Logger;
+  /** where an unexpected (500) error is reported; default: the request's logger at `error`, safe fields only */
+  log?: ErrorLog;
 };
 
 // API answers depend on who asks and when; no shared cache may keep them.
@@ -104,6 +109,8 @@ export function createApp(deps: AppDeps): express.Application {
   app.disable('x-powered-by');
   // Off by default: only the proxies TRUST_PROXY names may set the client's address (sign-in limits, sessions).
   app.set('trust proxy', config.trustProxy);
+  // First: every request gets its id (X-Request-Id) and its one log line, whatever answers it.
+  app.use(requestLog(deps.logger ?? silentLogger()));
   app.use(httpMetrics());
   app.use(securityHeaders());
   // Prometheus scrapes: no session, no body; METRICS_ACCESS decides who may read (metrics/metrics-route.ts).
@@ -121,6 +128,6 @@ export function createApp(deps: AppDeps): express.Application {
   app.use('/api', sessionMiddleware({ db, config, now }), apiRouter({ db, config, now, signInLimit, jobs: deps.jobs ?? noJobQueue }));
   app.use(webApp({ webDist: config.webDist }));
   app.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.path)));
-  app.use(errorHandler({ log: deps.log ?? ((message, err) => console.error(`[server] ${message}`, err)) }));
+  app.use(errorHandler({ log: deps.log ?? ((message, err, req) => req.log.error({ err }, message)) }));
   return app;
 }

@@ -42,14 +42,20 @@ const envSchema = z.object({
   MAIL_FROM: z.string().min(3).default('Slackwater <maintenance@slackwater.invalid>'),
   /** Where links in e-mails point (the app's address as users reach it). */
   PUBLIC_URL: z.url().optional(),
-  /** Who may read /metrics: `loopback` (this machine, not through a proxy), `token` (Bearer METRICS_TOKEN) or `open`.
-   *  Default: `token` when METRICS_TOKEN is set, else `loopback`. */
+  /** Least severe log level written (pino's levels; `silent` writes nothing). */
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  /** `auto`: readable lines when standard output is a terminal, one JSON object per line otherwise. */
+  LOG_FORMAT: z.enum(['auto', 'json', 'pretty']).default('auto'),
+  /** On SIGTERM/SIGINT, how long requests in progress and a running plan job get to finish before the process exits. */
+  SHUTDOWN_GRACE_SECONDS: z.coerce.number().int().min(1).max(300).default(10),
   /** Which proxies in front may speak for the client (X-Forwarded-For, -Proto, -Host): `off`, `loopback`, a hop
    *  count, or comma-separated addresses / CIDR ranges (Express's `trust proxy`). */
   TRUST_PROXY: z.string().trim()
     .regex(/^(off|loopback|\d{1,2}|[0-9a-fA-F:.]+(\/\d{1,3})?(\s*,\s*[0-9a-fA-F:.]+(\/\d{1,3})?)*)$/,
       'TRUST_PROXY is off, loopback, a hop count or comma-separated proxy addresses / CIDR ranges')
     .default('off'),
+  /** Who may read /metrics: `loopback` (this machine, not through a proxy), `token` (Bearer METRICS_TOKEN) or `open`.
+   *  Default: `token` when METRICS_TOKEN is set, else `loopback`. */
   METRICS_ACCESS: z.enum(['loopback', 'token', 'open']).optional(),
   /** The bearer token a scraper sends to /metrics; at least 32 characters (e.g. `openssl rand -hex 32`). */
   METRICS_TOKEN: z.string().min(32, 'METRICS_TOKEN is at least 32 characters (e.g. openssl rand -hex 32)').optional(),
@@ -76,6 +82,8 @@ export type ServerConfig = {
   smtp: { mode: 'sink'; sinkPort: number } | { mode: 'relay'; url: string };
   mailFrom: string;
   publicUrl: string;
+  log: { level: 'fatal' | 'error' | 'warn' | 'info' | 'debug' | 'trace' | 'silent'; format: 'auto' | 'json' | 'pretty' };
+  shutdownGraceSeconds: number;
   metrics: { mode: 'loopback' | 'token' | 'open'; token: string | null };
   /** Express's `trust proxy`: false, a hop count, or `loopback` / addresses. */
   trustProxy: false | number | string;
@@ -117,6 +125,8 @@ export function parseEnv(source: Record<string, string | undefined> = process.en
     smtp: env.SMTP_URL === 'sink' ? { mode: 'sink', sinkPort: env.SMTP_SINK_PORT } : { mode: 'relay', url: env.SMTP_URL },
     mailFrom: env.MAIL_FROM,
     publicUrl: (env.PUBLIC_URL ?? `http://${env.HOST}:${env.PORT}`).replace(/\/$/, ''),
+    log: { level: env.LOG_LEVEL, format: env.LOG_FORMAT },
+    shutdownGraceSeconds: env.SHUTDOWN_GRACE_SECONDS,
     trustProxy: env.TRUST_PROXY === 'off' ? false : /^\d+$/.test(env.TRUST_PROXY) ? Number(env.TRUST_PROXY) : env.TRUST_PROXY,
     metrics: { mode: env.METRICS_ACCESS ?? (env.METRICS_TOKEN ? 'token' : 'loopback'), token: env.METRICS_TOKEN ?? null },
   };

@@ -16,7 +16,7 @@ import { releaseSignInAttempt, type SignInLimit } from '../auth/sign-in-limit';
 import { reserveLinkCheck } from '../auth/link-check-limit';
 import { SignInLimitedError } from '../auth/sign-in-limit-error';
 import { userAgentLabel } from '../auth/user-agent-label';
-import { describeError } from '../http/error-log';
+import { requestWarnLog } from '../http/request-log';
 import type { RouteDeps } from './deps';
 
 /** A full sign-in limit says when to come back (RFC 9110 §10.2.3); the error handler writes the body. */
@@ -54,7 +54,7 @@ export function authRouter({ db, config, now, jobs, signInLimit }: RouteDeps & {
     await countResetRequest(db, { email, address: req.ip, now: at });
     res.status(202).json(forgotPasswordResponseSchema.parse({ message: FORGOT_PASSWORD_ANSWER }));
     void requestPasswordReset(db, jobs, { email, now: at, publicUrl: config.publicUrl })
-      .catch((err: unknown) => console.error('[server] password reset request failed after the answer', describeError(err)));
+      .catch((err: unknown) => requestWarnLog(req)('password reset request failed after the answer', err));
   });
   // Checking or using a link counts per client address like sign-in failures: guessing tokens stays slow.
   router.get('/reset-password/:token', async (req, res) => {
