@@ -21,6 +21,7 @@ import { metricsEndpoint } from './metrics/metrics-route';
 import { authRouter } from './routes/auth';
 import { calendarFeedsRouter } from './routes/calendar-feeds';
 import { healthRouter } from './routes/health';
+import { readyRouter } from './routes/ready';
 import { importsRouter } from './routes/imports';
 import { meRouter } from './routes/me';
 import { overviewRouter } from './routes/overview';
@@ -115,8 +116,9 @@ export function createApp(deps: AppDeps): express.Application {
   app.use(securityHeaders());
   // Prometheus scrapes: no session, no body; METRICS_ACCESS decides who may read (metrics/metrics-route.ts).
   app.get('/metrics', metricsEndpoint({ db, pool: deps.pool, config }));
-  // Before sessions and body parsing: a health probe must not depend on a cookie's database look-up.
-  app.use('/api/health', noStore, healthRouter({ db, config, now, jobs: deps.jobs ?? noJobQueue }));
+  // Before sessions and body parsing: probes carry no cookie, and liveness must not wait on the database.
+  app.use('/api/health', noStore, healthRouter());
+  app.use('/api/ready', noStore, readyRouter({ db, jobs: deps.jobs ?? noJobQueue }));
   // Calendar apps fetch feeds without a cookie: the token in the address is the credential (routes/calendar-feeds.ts).
   app.use('/api/calendar-feeds', calendarFeedsRouter({ db, config, now }));
   app.use(express.json({ limit: config.jsonBodyLimit }));

@@ -9,6 +9,7 @@ import { registerPlanWorker } from './jobs/plan-worker';
 import type { JobQueue } from './jobs/queue';
 import { startSinkIfConfigured } from './mail/start-sink';
 import { registerMailWorker } from './mail/worker';
+import { surviveDatabaseOutages } from './outage-guard';
 
 export interface Background {
   jobs: JobQueue;
@@ -50,6 +51,8 @@ function stopOnce(boss: PgBoss, stoppers: Stopper[]): () => Promise<void> {
 
 /** Starts pg-boss and runs `setUp`, which adds what stop() stops (in list order); a failed set-up stops it all. */
 async function withBoss(deps: BackgroundDeps, setUp: (boss: PgBoss, stoppers: Stopper[]) => Promise<void>): Promise<Background> {
+  // The server and `npm run worker` both come through here: neither may end over a database outage.
+  surviveDatabaseOutages(deps.log);
   const boss = await startBoss(deps.config, { log: deps.log });
   const stoppers: Stopper[] = [];
   const stop = stopOnce(boss, stoppers);

@@ -10,7 +10,8 @@ export const apiErrorSchema = z.object({
 });
 export type ApiErrorBody = z.infer<typeof apiErrorSchema>;
 
-export const healthSchema = z.object({ ok: z.boolean(), db: z.boolean() });
+/** GET /api/health (liveness): the process answers. Readiness is shared/readiness.ts. */
+export const healthSchema = z.object({ ok: z.literal(true) });
 
 export const signInRequestSchema = z.object({
   email: z.email('Enter a valid e-mail address').max(254),

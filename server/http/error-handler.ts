@@ -22,7 +22,7 @@ function routeOf(req: Request): string {
   return `${req.method} ${typeof pattern === 'string' ? `${req.baseUrl}${pattern}` : '(no route)'}`;
 }
 
-function answerFor(err: unknown): { status: number; body: ErrorBody } | null {
+function answerFor(err: unknown): { status: number; body: ErrorBody; retryAfterSeconds?: number } | null {
   if (err instanceof AppError) return { status: err.status, body: { error: { code: err.code, message: err.message } } };
   if (err instanceof ZodError) {
     const details = err.issues.map((issue) => ({ path: zodPath(issue.path), message: issue.message }));
@@ -30,7 +30,9 @@ function answerFor(err: unknown): { status: number; body: ErrorBody } | null {
     return { status: 400, body: { error: { code: 'VALIDATION_FAILED', message, details } } };
   }
   const known = knownFailure(err);
-  return known ? { status: known.status, body: { error: { code: known.code, message: known.message } } } : null;
+  return known
+    ? { status: known.status, body: { error: { code: known.code, message: known.message } }, retryAfterSeconds: known.retryAfterSeconds }
+    : null;
 }
 
 /** Receives the error's safe fields only, never the error itself (its message may hold SQL parameters). */
@@ -43,6 +45,7 @@ export function errorHandler({ log }: { log: ErrorLog }): ErrorRequestHandler {
     // Too late for our body: Express's default handler closes the connection.
     if (res.headersSent) return next(err);
     const { status, body } = answer ?? { status: 500, body: { error: { code: 'INTERNAL', message: 'Something went wrong on the server.' } } };
+    if (answer?.retryAfterSeconds) res.setHeader('Retry-After', String(answer.retryAfterSeconds));
     res.status(status).json(body);
   };
 }

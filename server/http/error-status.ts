@@ -1,6 +1,17 @@
 // Errors raised by Express's own layers (body-parser, the router, multer, http-errors) carry an HTTP status
 // and sometimes a `type`; these become our { code, message } with that status. Messages never quote the request.
-export type KnownFailure = { status: number; code: string; message: string };
+// A database outage (connection refused, reset or ended by a restart) answers 503 with a Retry-After.
+import { isDatabaseUnavailable } from '../db-unavailable';
+
+export type KnownFailure = { status: number; code: string; message: string; retryAfterSeconds?: number };
+
+/** Seconds a client is asked to wait after a 503 DATABASE_UNAVAILABLE: a restart usually takes a few. */
+export const DATABASE_RETRY_AFTER_SECONDS = 5;
+
+const DATABASE_UNAVAILABLE: KnownFailure = {
+  status: 503, code: 'DATABASE_UNAVAILABLE', retryAfterSeconds: DATABASE_RETRY_AFTER_SECONDS,
+  message: 'The database cannot be reached just now. Try again in a few seconds.',
+};
 
 const BY_TYPE: Record<string, KnownFailure> = {
   'entity.parse.failed': { status: 400, code: 'BAD_JSON', message: 'The request body is not valid JSON.' },
@@ -40,9 +51,11 @@ function isPgBadText(err: Carrier): boolean {
   return false;
 }
 
-/** The answer for an error that carries a 4xx status (or is the database refusing the request's text); else null. */
+/** The answer for an error that carries a 4xx status, the database refusing the request's text, or a database
+ * outage; else null. */
 export function knownFailure(err: unknown): KnownFailure | null {
   if (err === null || typeof err !== 'object') return null;
+  if (isDatabaseUnavailable(err)) return DATABASE_UNAVAILABLE;
   const carrier = err as Carrier;
   if (isPgBadText(carrier)) {
     return { status: 400, code: 'BAD_TEXT', message: 'A text value contains a character that cannot be stored (such as NUL, U+0000); remove it and try again.' };

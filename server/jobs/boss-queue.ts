@@ -4,8 +4,18 @@ import { QUEUES, type JobQueue, type MailJob } from './queue';
 
 export type PlanRunJobData = { planId: string };
 
+/** Bosses pg-boss reported stopped; one listener per boss however many queues wrap it (the sweeper makes some). */
+const watched = new WeakSet<PgBoss>();
+const stopped = new WeakSet<PgBoss>();
+
+/** `boss` is started; the queue counts as running until pg-boss reports it stopped. */
 export function createJobQueue(boss: PgBoss): JobQueue {
+  if (!watched.has(boss)) {
+    watched.add(boss);
+    boss.once('stopped', () => stopped.add(boss));
+  }
   return {
+    isRunning: () => !stopped.has(boss),
     async sendPlanRun(planId, { expireInSeconds }) {
       const data: PlanRunJobData = { planId };
       const id = await boss.send(QUEUES.planRun, data, { expireInSeconds: Math.max(1, Math.ceil(expireInSeconds)) });

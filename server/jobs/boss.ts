@@ -1,5 +1,8 @@
 // pg-boss on the application's own PostgreSQL: one schema of queue tables shared by every API process and worker.
+import type { Pool } from 'pg';
 import PgBoss from 'pg-boss';
+import { createPool } from '../../db/client';
+import { retryWhileDatabaseUnavailable } from '../db-unavailable';
 import type { ServerConfig } from '../env';
 import { QUEUES } from './queue';
 
@@ -21,19 +24,54 @@ export async function startBoss(
   opts: { schema?: string; log?: BossLog } = {},
 ): Promise<PgBoss> {
   const log = opts.log ?? ((m) => console.error(m));
+  // The queue's own pool, built like the API's (db/client.ts): it survives a database restart. pg-boss only
+  // calls executeSql on a database it is given, and leaves closing it to us (on its 'stopped' event below).
+  const pool = createPool(config.databaseUrl, {
+    max: 4, applicationName: 'pgboss',
+    onConnectionLost: (err) => log(`job queue: a database connection was closed (${err.code ?? 'no code'}): ${err.message}`),
+  });
+  const schema = opts.schema ?? config.jobSchema;
   const boss = new PgBoss({
-    connectionString: config.databaseUrl,
-    schema: opts.schema ?? config.jobSchema,
+    db: { executeSql: outcomeKeepingSql(pool, schema, log) },
+    schema,
     // WARNING: expired jobs (a worker that died mid-run) are only noticed on a maintenance pass, so this
     // interval is part of how long a crashed plan run waits before its retry.
     maintenanceIntervalSeconds: config.jobMaintenanceSeconds,
-    max: 4,
   });
   // An unhandled 'error' event would crash the process; queue trouble (a lost connection) is logged and retried.
   boss.on('error', (err) => log(`job queue: ${err instanceof Error ? err.message : String(err)}`));
-  await boss.start();
-  await ensureQueues(boss);
+  boss.once('stopped', () => void pool.end().catch(() => undefined));
+  try {
+    await boss.start();
+    await ensureQueues(boss);
+  } catch (err) {
+    await pool.end().catch(() => undefined);
+    throw err;
+  }
   return boss;
+}
+
+// pg-boss's own statement texts, to recognise its job-outcome writes (the package has no exports map; 10.x).
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const bossSql = require('pg-boss/src/plans') as { completeJobs(schema: string): string; failJobsById(schema: string): string };
+
+/**
+ * pg-boss records a job's outcome (complete / fail) after its handler returns, without awaiting it: during a
+ * database outage that write would fail, its rejection go unhandled (ending the process), and the job be worked
+ * again after its expiry — a mail sent twice. These two statements wait out the outage instead; every other
+ * statement fails at once (a send from an API request answers 503 rather than hanging).
+ */
+export function outcomeKeepingSql(pool: Pool, schema: string, log: BossLog) {
+  const outcomes = new Map([[bossSql.completeJobs(schema), 'completed'], [bossSql.failJobsById(schema), 'failed']]);
+  return (text: string, values?: unknown[]) => {
+    const outcome = outcomes.get(text);
+    if (!outcome) return pool.query(text, values);
+    return retryWhileDatabaseUnavailable(() => pool.query(text, values), {
+      onWait: (_err, waitedMs) => {
+        if (waitedMs === 0) log(`job queue: the database is unavailable; a job's ${outcome} state is recorded when it is back`);
+      },
+    });
+  };
 }
 
 async function ensureQueue(boss: PgBoss, name: string, options: Omit<PgBoss.Queue, 'name'> = {}): Promise<void> {

@@ -3,6 +3,7 @@
 import type { Db } from '../../db/client';
 import { planReviewSchema, planSettingsSchema, type PlanProgress } from '../../shared/plans';
 import { selectPlanRow, type PlanRow } from '../queries/plans/plan-rows';
+import { retryWhileDatabaseUnavailable } from '../db-unavailable';
 import { finishDone, finishFailed, markRunning, requeue } from '../queries/plans/plan-run-rows';
 import { loadPlanInput, RunRefusedError } from './plan-run-input';
 import { ProgressBox, watchRun, type RunEnd, type StopReason } from './plan-run-watch';
@@ -72,9 +73,20 @@ export async function runPlanJob(deps: PlanRunDeps, job: PlanRunJob): Promise<vo
   await settle(c, end, progress, Date.now() - startMs);
 }
 
+/**
+ * A run's closing write (its result, its failure, its hand-back) waits out a database outage: the computed
+ * result is kept rather than thrown away and computed again. Guarded by the attempt, so a run another worker took
+ * over meanwhile is not overwritten.
+ */
+function closingWrite<T>(c: Ctx, write: () => Promise<T>): Promise<T> {
+  return retryWhileDatabaseUnavailable(write, {
+    onWait: (_err, waitedMs) => { if (waitedMs === 0) c.deps.log(`plan run ${c.plan.id}: the database is unavailable; storing the outcome when it is back`); },
+  });
+}
+
 /** The queue retries the job: the row waits as `queued` meanwhile, and the thrown error is the job's last error. */
 async function giveBack(c: Ctx, computeMs: number, reason: string): Promise<never> {
-  await requeue(c.deps.db, c.plan.id, c.attempt);
+  await closingWrite(c, () => requeue(c.deps.db, c.plan.id, c.attempt));
   logRun(c, computeMs, `retry (${reason})`);
   throw new Error(reason);
 }
@@ -94,17 +106,18 @@ async function settle(c: Ctx, end: RunEnd, progress: ProgressBox, computeMs: num
   if (end.kind === 'failed') {
     if (!end.error.deterministic) return giveBack(c, computeMs, end.error.message);
     const error = `The planner could not make a plan: ${end.error.message}`;
-    await finishFailed(db, c.plan.id, c.attempt, error, now);
+    await closingWrite(c, () => finishFailed(db, c.plan.id, c.attempt, error, now));
     return logRun(c, computeMs, `failed: ${end.error.message}`);
   }
   const review = planReviewSchema.safeParse(end.review);
   if (!review.success) {
-    await finishFailed(db, c.plan.id, c.attempt, `The planner's review is incomplete: ${review.error.issues[0]?.message}`, now);
+    const error = `The planner's review is incomplete: ${review.error.issues[0]?.message}`;
+    await closingWrite(c, () => finishFailed(db, c.plan.id, c.attempt, error, now));
     return logRun(c, computeMs, 'failed: unreadable review');
   }
   const last = progress.latest ?? firstProgress(c.plan);
-  const stored = await finishDone(db, c.plan.id, c.attempt, {
+  const stored = await closingWrite(c, () => finishDone(db, c.plan.id, c.attempt, {
     review: review.data, progress: { ...last, phase: 'finishing', elapsedMs: computeMs }, now,
-  });
+  }));
   logRun(c, computeMs, stored ? 'done' : 'cancelled before it was stored');
 }

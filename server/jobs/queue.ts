@@ -5,7 +5,10 @@ import type { MailJob, MailQueue, PlanQueue } from '../services/ports';
 export type { MailJob };
 
 /** Both queues the services ask for (server/services/ports.ts), in one. */
-export interface JobQueue extends PlanQueue, MailQueue {}
+export interface JobQueue extends PlanQueue, MailQueue {
+  /** started and not stopped (readiness asks); a queue without it counts as not running */
+  isRunning?(): boolean;
+}
 
 export const QUEUES = {
   planRun: 'plan-run',
@@ -20,4 +23,5 @@ export const noJobQueue: JobQueue = {
   sendPlanRun: () => Promise.reject(new Error('no job queue configured')),
   cancelPlanRun: () => Promise.reject(new Error('no job queue configured')),
   sendMail: () => Promise.reject(new Error('no job queue configured')),
+  isRunning: () => false,
 };

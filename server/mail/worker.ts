@@ -3,6 +3,7 @@
 // retries are used up the job lands in QUEUES.mailDead, whose handler marks the notice `failed`.
 import type PgBoss from 'pg-boss';
 import type { Db } from '../../db/client';
+import { retryWhileDatabaseUnavailable } from '../db-unavailable';
 import type { ServerConfig } from '../env';
 import { QUEUES, type MailJob } from '../jobs/queue';
 import { markNoticeAttemptFailed, markNoticeFailed, markNoticeSent } from '../queries/mail/notice-sending';
@@ -40,7 +41,7 @@ export async function registerMailWorker(boss: PgBoss, deps: MailWorkerDeps): Pr
   async function sendOne(mail: MailJob): Promise<void> {
     if (mail.noticeId) {
       const state = await noticeVersionState(deps.db, mail.noticeId, mail.noticeSequence);
-      if (state === 'superseded') return;
+      if (state === 'superseded' || state === 'sent') return;
       if (state === 'wait') throw new Error(`notice ${mail.noticeId} version ${mail.noticeSequence} is not committed yet`);
     }
     try {
@@ -51,7 +52,9 @@ export async function registerMailWorker(boss: PgBoss, deps: MailWorkerDeps): Pr
       throw err; // pg-boss retries it
     }
     mailSent.inc();
-    if (mail.noticeId) await markNoticeSent(deps.db, mail.noticeId, mail.noticeSequence, now());
+    // The mail is out: its record must land even if the database went away meanwhile, or a retry would send it again.
+    const sentAt = now();
+    if (mail.noticeId) await retryWhileDatabaseUnavailable(() => markNoticeSent(deps.db, mail.noticeId!, mail.noticeSequence, sentAt));
   }
 
   const deadId = await boss.work<MailJob>(QUEUES.mailDead, options, async (jobs) => {

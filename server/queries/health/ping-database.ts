@@ -1,17 +1,8 @@
-// Database reachability for the health route.
+// The database round trip readiness asks for.
 import { sql } from 'drizzle-orm';
 import type { Db } from '../../../db/client';
 
-/** True when `select 1` answers within `timeoutMs`; never throws. */
-export async function pingDatabase(db: Db, { timeoutMs }: { timeoutMs: number }): Promise<boolean> {
-  let timer: NodeJS.Timeout | undefined;
-  const timeout = new Promise<false>((resolve) => {
-    timer = setTimeout(() => resolve(false), timeoutMs);
-  });
-  const ping = db.execute(sql`select 1`).then(() => true, () => false);
-  try {
-    return await Promise.race([ping, timeout]);
-  } finally {
-    clearTimeout(timer);
-  }
+/** `select 1`: resolves when the database answers a query; rejects with the driver's error when it does not. */
+export async function selectOne(db: Db): Promise<void> {
+  await db.execute(sql`select 1`);
 }

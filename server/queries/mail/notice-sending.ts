@@ -4,10 +4,10 @@ import { and, eq, sql } from 'drizzle-orm';
 import type { Db } from '../../../db/client';
 import { notices } from '../../../db/schema';
 
-/** The committed version (sequence) of the notice, or null while it is not visible. */
-export async function selectNoticeSequence(db: Db, noticeId: string): Promise<number | null> {
-  const [row] = await db.select({ sequence: notices.sequence }).from(notices).where(eq(notices.id, noticeId));
-  return row?.sequence ?? null;
+/** The committed version (sequence) of the notice and its sending status, or null while it is not visible. */
+export async function selectNoticeSequence(db: Db, noticeId: string): Promise<{ sequence: number; status: string } | null> {
+  const [row] = await db.select({ sequence: notices.sequence, status: notices.status }).from(notices).where(eq(notices.id, noticeId));
+  return row ?? null;
 }
 
 const sameVersion = (noticeId: string, sequence: number | undefined) =>

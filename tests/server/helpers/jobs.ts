@@ -79,6 +79,7 @@ export function createRecordingQueue(): RecordingQueue {
   let next = 0;
   const q: RecordingQueue = {
     planRuns: [], cancelled: [], mails: [], failing: false,
+    isRunning: () => !q.failing,
     async sendPlanRun(planId, { expireInSeconds }) {
       if (q.failing) throw new Error('connection refused');
       const jobId = `job-${++next}`;

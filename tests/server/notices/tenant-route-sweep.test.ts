@@ -43,7 +43,7 @@ function foreignNames(who: TenantWho): string[] {
 
 const probes: Probe[] = [
   ...(['/api/me', '/api/overview', '/api/portal/work', '/api/sites', '/api/spans', '/api/tenants', '/api/slices',
-    '/api/network/map', '/api/health', '/api/me/otp', '/api/me/sessions'] as const)
+    '/api/network/map', '/api/health', '/api/ready', '/api/me/otp', '/api/me/sessions'] as const)
     .map((p) => ({ route: `GET ${p}`, path: () => p, foreign: false })),
   { route: 'GET /api/windows', path: (who) => `/api/windows?${RANGE}&tenant=${otherTenant(who)}`, foreign: true },
   { route: 'GET /api/windows/:id', path: () => `/api/windows/${w()}`, foreign: true },
