@@ -13,7 +13,11 @@ issuer_pid=""
 
 cleanup() {
   local status=$?
-  trap - EXIT INT TERM
+  # WARNING: ignore further signals from here on (a second Ctrl-C, the terminal's SIGINT reaching this shell
+  # as well as the server): PostgreSQL must be stopped after the server has exited, never skipped or before.
+  # The server bounds its own stop (SHUTDOWN_GRACE_SECONDS, then a few seconds to close), so this wait ends.
+  trap - EXIT
+  trap '' INT TERM
   if [ -n "$server_pid" ] && kill -0 "$server_pid" 2>/dev/null; then
     say "stopping the server"
     kill -TERM "$server_pid" 2>/dev/null || true

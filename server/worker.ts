@@ -3,27 +3,29 @@
 import { createDb } from '../db/client';
 import { startWorkers } from './background';
 import { parseEnvOrExit } from './env';
+import { createLogger, lineLog } from './log/logger';
 
 async function main(): Promise<void> {
   const config = parseEnvOrExit();
+  const logger = createLogger({ ...config.log, base: { component: 'worker' } });
   const { db, pool } = createDb(config.databaseUrl, { max: 4 });
-  const background = await startWorkers({ db, config });
-  console.log(`Slackwater worker ${process.pid} waiting for jobs (queue schema ${config.jobSchema})`);
+  const background = await startWorkers({ db, config, log: lineLog(logger) }).catch((err: unknown) => {
+    logger.fatal({ reason: err instanceof Error ? err.message : String(err) }, 'worker could not start');
+    process.exit(1);
+  });
+  logger.info(`Slackwater worker ${process.pid} waiting for jobs (queue schema ${config.jobSchema})`);
   let closing = false;
   const shutdown = (signal: string) => {
     if (closing) return;
     closing = true;
-    console.log(`${signal}: worker stopping (a run in progress goes back to the queue)`);
+    logger.info({ signal }, 'worker stopping (a run in progress goes back to the queue)');
     background.stop()
-      .catch((err: unknown) => console.error(`worker stop: ${err instanceof Error ? err.message : String(err)}`))
+      .catch((err: unknown) => logger.warn({ reason: err instanceof Error ? err.message : String(err) }, 'worker stop failed'))
       .finally(() => pool.end().finally(() => process.exit(0)));
-    setTimeout(() => process.exit(0), 15_000).unref();
+    setTimeout(() => process.exit(1), (config.shutdownGraceSeconds + 5) * 1000).unref();
   };
   process.on('SIGINT', () => shutdown('SIGINT'));
   process.on('SIGTERM', () => shutdown('SIGTERM'));
 }
 
-main().catch((err: unknown) => {
-  console.error(`worker could not start: ${err instanceof Error ? err.message : String(err)}`);
-  process.exit(1);
-});
+void main();
