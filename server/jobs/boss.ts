@@ -52,7 +52,6 @@ export async function startBoss(
 }
 
 // pg-boss's own statement texts, to recognise its job-outcome writes (the package has no exports map; 10.x).
-// eslint-disable-next-line @typescript-eslint/no-require-imports
 const bossSql = require('pg-boss/src/plans') as { completeJobs(schema: string): string; failJobsById(schema: string): string };
 
 /**
