@@ -1,6 +1,7 @@
 // Invitation lifecycle against PostgreSQL: invite (mail queued to the invitee), accept once, expired, reused,
 // revoked and superseded links refused, bad input refused with nothing stored, audit rows without secrets.
 import request from 'supertest';
+import { createLogger } from '../../../server/log/logger';
 import { peopleListSchema } from '../../../shared/people';
 import { sessionCookieFrom } from '../helpers/test-app';
 import { setupPeople, type PeopleContext } from './people-fixture';
@@ -126,11 +127,13 @@ test('a tenant contact is invited bound to exactly one tenant', async () => {
 test('when the mail cannot be queued the invitation stands and says so', async () => {
   // The default app has no job queue: every sendMail fails.
   const email = ctx.unique('no-queue');
-  const errors = jest.spyOn(console, 'error').mockImplementation(() => undefined);
-  const res = await request(ctx.makeApp()).post('/api/invitations').set('Cookie', ctx.cookies.admin).send({ email, name: 'Q', roles: ['planner'] });
+  const output: string[] = [];
+  const logger = createLogger({ level: 'warn', format: 'json', destination: { write: (line: string) => { output.push(line); } } });
+  const res = await request(ctx.makeApp({ logger })).post('/api/invitations').set('Cookie', ctx.cookies.admin).send({ email, name: 'Q', roles: ['planner'] });
   expect([res.status, res.body.mailQueued]).toEqual([201, false]);
-  expect(errors).toHaveBeenCalledWith('[people] the invitation mail could not be queued', expect.any(Error));
-  errors.mockRestore();
+  expect(output.map((line) => JSON.parse(line))).toContainEqual(expect.objectContaining({
+    msg: 'the invitation mail could not be queued', reqId: res.headers['x-request-id'], err: expect.objectContaining({ type: expect.any(String) }),
+  }));
 });
 
 test('audit rows name the actor and the change, never the token or the password', async () => {
