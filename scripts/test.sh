@@ -59,7 +59,7 @@ DATABASE_URL="$E2E_DATABASE_URL" PORT="$E2E_PORT" HOST=127.0.0.1 WORKER_IN_PROCE
   npx tsx server/index.ts > .data/e2e-server.log 2>&1 &
 server_pid=$!
 for _ in $(seq 1 60); do
-  curl -fs "http://127.0.0.1:$E2E_PORT/api/health" >/dev/null 2>&1 && break
+  curl -fs "http://127.0.0.1:$E2E_PORT/api/ready" >/dev/null 2>&1 && break
   kill -0 "$server_pid" 2>/dev/null || { cat .data/e2e-server.log >&2; exit 1; }
   sleep 0.5
 done

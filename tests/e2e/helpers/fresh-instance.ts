@@ -22,7 +22,7 @@ function freePort(): Promise<number> {
   });
 }
 
-/** Runs db/setup.ts without the demo, then the API server; resolves once /api/health answers. */
+/** Runs db/setup.ts without the demo, then the API server; resolves once /api/ready says the server is ready (database, queue, migrations). */
 export async function startFreshInstance(): Promise<FreshInstance> {
   const databaseUrl = process.env.E2E_FRESH_DATABASE_URL;
   if (!databaseUrl) throw new Error('E2E_FRESH_DATABASE_URL is not set (scripts/test.sh creates that empty database)');
@@ -44,7 +44,7 @@ export async function startFreshInstance(): Promise<FreshInstance> {
   const baseUrl = `http://127.0.0.1:${port}`;
   await eventually(async () => {
     if (server.exitCode !== null) throw new Error(`the fresh server exited (${server.exitCode}); see ${logPath}`);
-    const res = await fetch(`${baseUrl}/api/health`);
+    const res = await fetch(`${baseUrl}/api/ready`);
     expect(res.status).toBe(200);
   }, 60_000);
   return {
