@@ -47,6 +47,16 @@ export function validateScenario(input: unknown): ScenarioValidation {
   // Semantic checks assume the shapes the schema guarantees, so a malformed file stops here.
   if (!parsed.success) return { ok: false, errors: zodIssuesToScenarioIssues(parsed.error.issues), warnings: [] };
   const scenario = parsed.data;
+  const out = checkScenarioSemantics(scenario);
+  if (out.errors.length > 0) return { ok: false, errors: out.errors, warnings: out.warnings };
+  return { ok: true, scenario, warnings: out.warnings };
+}
+
+/**
+ * The semantic checks alone, on a scenario whose shapes are already known good (validateScenario runs the schema
+ * first; the streamed export checks each element's shape as it writes it, so it does not copy the whole document).
+ */
+export function checkScenarioSemantics(scenario: Scenario): { errors: ScenarioIssue[]; warnings: ScenarioIssue[] } {
   const ix = buildIndex(scenario);
   const out = new IssueCollector();
   checkDuplicateIds(scenario, out);
@@ -57,8 +67,7 @@ export function validateScenario(input: unknown): ScenarioValidation {
   checkPlacementContents(scenario, ix, out);
   warnCapacity(scenario, ix, out);
   warnAnchorsAndLatency(scenario, ix, out);
-  if (out.errors.length > 0) return { ok: false, errors: out.errors, warnings: out.warnings };
-  return { ok: true, scenario, warnings: out.warnings };
+  return { errors: out.errors, warnings: out.warnings };
 }
 
 export function formatIssue(issue: ScenarioIssue): string {

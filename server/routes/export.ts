@@ -1,11 +1,11 @@
-// GET /api/export/scenario and /api/export/graphml (planner, admin, engineer): the current inventory as files.
+// GET /api/export/scenario and /api/export/graphml (planner, admin, engineer): the current inventory as files,
+// streamed to the response a piece at a time (see services/inventory/stream-export.ts).
 import express, { type Response, type Router } from 'express';
 import { INVENTORY_EXPORT_ROLES } from '../../shared/permissions';
-import { formatIssue, validateScenario } from '../../shared/scenario-validate';
 import { requireRole } from '../auth/guards';
-import { ExportInvalidError } from '../services/inventory/errors';
-import { scenarioToGraphml } from '../services/inventory/graphml-export';
+import { graphmlPieces, loadGraphmlNetwork } from '../services/inventory/graphml-export';
 import { loadNetworkScenario } from '../services/inventory/load-network-scenario';
+import { assertExportable, scenarioJsonPieces, streamPieces } from '../services/inventory/stream-export';
 import type { RouteDeps } from './deps';
 
 function attachment(res: Response, fileName: string, contentType: string): void {
@@ -17,15 +17,16 @@ export function exportRouter({ db, now }: RouteDeps): Router {
   const router = express.Router();
   const stamp = () => now().toISOString().slice(0, 10);
   router.get('/scenario', requireRole(...INVENTORY_EXPORT_ROLES), async (_req, res) => {
-    const result = validateScenario(await loadNetworkScenario(db));
-    // Refuse to hand out a file our own import would reject.
-    if (!result.ok) throw new ExportInvalidError(formatIssue(result.errors[0]));
+    const scenario = await loadNetworkScenario(db);
+    // Refuse to hand out a file our own import would reject (before any byte is sent).
+    assertExportable(scenario);
     attachment(res, `slackwater-scenario-${stamp()}.json`, 'application/json; charset=utf-8');
-    res.send(JSON.stringify(result.scenario, null, 2));
+    await streamPieces(res, scenarioJsonPieces(scenario));
   });
   router.get('/graphml', requireRole(...INVENTORY_EXPORT_ROLES), async (_req, res) => {
+    const network = await loadGraphmlNetwork(db);
     attachment(res, `slackwater-network-${stamp()}.graphml`, 'application/graphml+xml; charset=utf-8');
-    res.send(scenarioToGraphml(await loadNetworkScenario(db)));
+    await streamPieces(res, graphmlPieces(network));
   });
   return router;
 }

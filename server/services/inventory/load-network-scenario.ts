@@ -61,22 +61,32 @@ function toSlices(t: ScenarioTables): ScenarioSlice[] {
   });
 }
 
+/** Site rows in natural id order, in the scenario's shape (shared with the GraphML export, which reads only these). */
+export function toScenarioSites(rows: ScenarioTables['siteRows']): Scenario['sites'] {
+  return [...rows].sort(byNaturalId).map((s) => present({
+    id: s.id, name: s.name, kind: s.kind, lat: s.lat, lon: s.lon, cpu: s.cpu, mtbfHours: s.mtbfHours, mttrHours: s.mttrHours,
+  }));
+}
+
+/** Span rows in natural id order, in the scenario's shape; an empty SRLG list stays absent. */
+export function toScenarioSpans(rows: ScenarioTables['spanRows']): Scenario['spans'] {
+  return [...rows].sort(byNaturalId).map((s) => ({
+    ...present({
+      id: s.id, a: s.siteA, b: s.siteB, capacityGbps: s.capacityGbps, lengthKm: s.lengthKm,
+      latencyMs: s.latencyMs, mtbfHours: s.mtbfHours, mttrHours: s.mttrHours,
+    }),
+    ...(s.srlg.length > 0 ? { srlg: [...s.srlg] } : {}),
+  }));
+}
+
 export function tablesToScenario(t: ScenarioTables): Scenario {
   const outline = t.meta?.outline == null ? undefined : outlineSchema.parse(t.meta.outline);
   return {
     format: SCENARIO_FORMAT,
     ...(t.meta?.name ? { name: t.meta.name } : {}),
     ...(outline ? { outline } : {}),
-    sites: [...t.siteRows].sort(byNaturalId).map((s) => present({
-      id: s.id, name: s.name, kind: s.kind, lat: s.lat, lon: s.lon, cpu: s.cpu, mtbfHours: s.mtbfHours, mttrHours: s.mttrHours,
-    })),
-    spans: [...t.spanRows].sort(byNaturalId).map((s) => ({
-      ...present({
-        id: s.id, a: s.siteA, b: s.siteB, capacityGbps: s.capacityGbps, lengthKm: s.lengthKm,
-        latencyMs: s.latencyMs, mtbfHours: s.mtbfHours, mttrHours: s.mttrHours,
-      }),
-      ...(s.srlg.length > 0 ? { srlg: [...s.srlg] } : {}),
-    })),
+    sites: toScenarioSites(t.siteRows),
+    spans: toScenarioSpans(t.spanRows),
     tenants: [...t.tenantRows].sort(byNaturalId).map((x) => ({
       id: x.id, name: x.name, noticeDays: x.noticeDays, ...(x.contacts.length > 0 ? { contacts: x.contacts } : {}),
     })),

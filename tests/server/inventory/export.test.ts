@@ -6,7 +6,11 @@ import { createDb } from '../../../db/client';
 import { migrateDatabase } from '../../../db/migrate';
 import { seedDemo } from '../../../db/seed';
 import { loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
-import { scenarioToGraphml } from '../../../server/services/inventory/graphml-export';
+import { Writable } from 'node:stream';
+import { graphmlPieces, loadGraphmlNetwork, scenarioToGraphml } from '../../../server/services/inventory/graphml-export';
+import {
+  assertExportable, scenarioJsonPieces, streamPieces,
+} from '../../../server/services/inventory/stream-export';
 import type { Scenario } from '../../../shared/scenario';
 import { validateScenario } from '../../../shared/scenario-validate';
 import { signInAs } from '../helpers/sign-in';
@@ -103,3 +107,78 @@ test('who may export: planner, admin, engineer yes; approver and tenant no; sign
   expect((await request(ctx.app).get('/api/export/scenario')).status).toBe(401);
   expect((await request(ctx.app).get('/api/export/graphml')).status).toBe(401);
 });
+
+/** What the export wrote before it streamed: the whole scenario validated, then printed in one piece. */
+async function oldScenarioText(): Promise<string> {
+  const result = validateScenario(await loadNetworkScenario(ctx.db));
+  if (!result.ok) throw new Error('the demo should validate');
+  return JSON.stringify(result.scenario, null, 2);
+}
+
+/** A sink that reads slowly (tiny buffer), so the writer has to wait for 'drain'. */
+function slowSink(): { sink: Writable; text: () => string; writes: () => number } {
+  const chunks: string[] = [];
+  const sink = new Writable({
+    highWaterMark: 16,
+    write(chunk: Buffer, _enc, done) { chunks.push(chunk.toString('utf8')); setImmediate(done); },
+  });
+  return { sink, text: () => chunks.join(''), writes: () => chunks.length };
+}
+
+test('the streamed scenario export is byte for byte what the one-piece export wrote', async () => {
+  const res = await exportAs(ctx.users.planner.email, 'scenario');
+  expect(res.status).toBe(200);
+  expect(res.body).toBe(await oldScenarioText());
+});
+
+test('the streamed GraphML export is byte for byte what the full-inventory export wrote', async () => {
+  const res = await exportAs(ctx.users.admin.email, 'graphml');
+  expect(res.status).toBe(200);
+  expect(res.body).toBe(scenarioToGraphml(await loadNetworkScenario(ctx.db)));
+});
+
+test('streaming goes out in several writes, waits for a slow reader and loses nothing', async () => {
+  const scenario = await loadNetworkScenario(ctx.db);
+  const { sink, text, writes } = slowSink();
+  await streamPieces(sink, scenarioJsonPieces(scenario));
+  expect(text()).toBe(await oldScenarioText());
+  expect(writes()).toBeGreaterThan(1);
+  expect(sink.writableEnded).toBe(true);
+});
+
+test('scenario pieces print empty sections and a missing name exactly as JSON.stringify does', () => {
+  const bare: Scenario = { format: 'slackwater-scenario/1', sites: [], spans: [], tenants: [], slices: [], placements: [] };
+  expect([...scenarioJsonPieces(bare)].join('')).toBe(JSON.stringify(bare, null, 2));
+});
+
+test('an element with a bad shape stops the export with its JSON path; a dangling reference is refused up front', async () => {
+  const scenario = await loadNetworkScenario(ctx.db);
+  const badShape = { ...scenario, sites: [{ ...scenario.sites[0], cpu: -1 }, ...scenario.sites.slice(1)] };
+  expect(() => [...scenarioJsonPieces(badShape)]).toThrow(/sites\[0\]\.cpu/);
+  const dangling = { ...scenario, spans: [{ ...scenario.spans[0], a: 'no-such-site' }, ...scenario.spans.slice(1)] };
+  expect(() => assertExportable(dangling)).toThrow(/EXPORT_INVALID|does not form a valid scenario/);
+  expect(() => assertExportable(scenario)).not.toThrow();
+});
+
+test('the GraphML export reads no slice, function, tie, placement or tenant rows: it works with those tables gone', async () => {
+  const expected = scenarioToGraphml(await loadNetworkScenario(ctx.db));
+  const dbName = 'slackwater_inv_export_sites_only';
+  const base = ctx.databaseUrl;
+  await admin(base, [`drop database if exists "${dbName}" with (force)`, `create database "${dbName}"`]);
+  const url = withDatabase(base, dbName);
+  try {
+    await migrateDatabase(url);
+    const scratch = createDb(url, { max: 2 });
+    try {
+      await seedDemo(scratch.db, ctx.demo, { now: NOW });
+      await scratch.pool.query('drop table placements, slice_ties, slice_functions, slices, tenants cascade');
+      const { sink, text } = slowSink();
+      await streamPieces(sink, graphmlPieces(await loadGraphmlNetwork(scratch.db)));
+      expect(text()).toBe(expected);
+    } finally {
+      await scratch.pool.end();
+    }
+  } finally {
+    await admin(base, [`drop database if exists "${dbName}" with (force)`]);
+  }
+}, 60_000);

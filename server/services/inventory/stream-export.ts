@@ -1,0 +1,96 @@
+// Writes an export to the response a piece at a time: the first bytes leave at once, the whole text is never held,
+// and the event loop gets a turn between batches so other requests are answered while a large file goes out.
+import type { Writable } from 'node:stream';
+import { once } from 'node:events';
+import type { z } from 'zod';
+import {
+  outlineSchema, placementSchema, scenarioSchema, siteSchema, sliceSchema, spanSchema, tenantSchema, type Scenario,
+} from '../../../shared/scenario';
+import { checkScenarioSemantics, formatIssue, zodIssuesToScenarioIssues } from '../../../shared/scenario-validate';
+import { ExportInvalidError } from './errors';
+
+/** Pieces gathered before one write: big enough to keep writes few, small enough to keep each turn short. */
+const BATCH_CHARS = 64 * 1024;
+
+const nextTurn = () => new Promise<void>((resolve) => { setImmediate(resolve); });
+
+/**
+ * Writes every piece to `out`, waiting for 'drain' when the client reads slower than we write (so a slow download
+ * does not pile the file up in memory), and yielding to the event loop after each batch. Ends `out` when done.
+ */
+export async function streamPieces(out: Writable, pieces: Iterable<string>): Promise<void> {
+  let batch = '';
+  const flush = async () => {
+    if (batch === '') return;
+    const ok = out.write(batch);
+    batch = '';
+    if (!ok && !out.destroyed) await once(out, 'drain');
+    await nextTurn();
+  };
+  for (const piece of pieces) {
+    if (out.destroyed) return;
+    batch += piece;
+    if (batch.length >= BATCH_CHARS) await flush();
+  }
+  await flush();
+  out.end();
+}
+
+/** `value` as JSON.stringify(value, null, 2) prints it when nested `depth` levels deep. */
+function nested(value: unknown, depth: number): string {
+  return JSON.stringify(value, null, 2).replace(/\n/g, `\n${'  '.repeat(depth)}`);
+}
+
+type Section = 'sites' | 'spans' | 'tenants' | 'slices' | 'placements';
+const SECTION_SCHEMAS: Record<Section, z.ZodType> = {
+  sites: siteSchema, spans: spanSchema, tenants: tenantSchema, slices: sliceSchema, placements: placementSchema,
+};
+const SECTIONS = Object.keys(SECTION_SCHEMAS) as Section[];
+
+/** One element checked against its own schema; the parsed value is what gets written (as validateScenario did). */
+function checked(schema: z.ZodType, value: unknown, path: (string | number)[]): unknown {
+  const parsed = schema.safeParse(value);
+  if (parsed.success) return parsed.data;
+  const issues = parsed.error.issues.map((issue) => ({ ...issue, path: [...path, ...issue.path] }));
+  throw new ExportInvalidError(formatIssue(zodIssuesToScenarioIssues(issues)[0]));
+}
+
+/**
+ * Validation without holding the document twice: before the first byte, the semantic checks (dangling references,
+ * duplicate ids, placements that miss a function or name an unknown site or span) run on the loaded scenario, so a
+ * broken inventory still answers 500 EXPORT_INVALID and no file. Each element's shape is then checked against its
+ * section's schema just before it is written; the database's column types and constraints make a failure there
+ * practically impossible, and if one happens the response is cut off (an incomplete download), never completed.
+ */
+export function assertExportable(scenario: Scenario): void {
+  const { errors } = checkScenarioSemantics(scenario);
+  if (errors.length > 0) throw new ExportInvalidError(formatIssue(errors[0]));
+}
+
+/**
+ * The scenario as `JSON.stringify(scenario, null, 2)` would print it, byte for byte, one element per piece.
+ * Windows are not part of the inventory export.
+ */
+export function* scenarioJsonPieces(scenario: Scenario): Generator<string> {
+  const head: string[] = [`  "format": ${JSON.stringify(checked(scenarioSchema.shape.format, scenario.format, ['format']))}`];
+  if (scenario.name !== undefined) head.push(`  "name": ${JSON.stringify(checked(scenarioSchema.shape.name, scenario.name, ['name']))}`);
+  if (scenario.outline !== undefined) {
+    head.push(`  "outline": ${nested(checked(outlineSchema, scenario.outline, ['outline']), 1)}`);
+  }
+  yield `{\n${head.join(',\n')}`;
+  for (const section of SECTIONS) {
+    const items: readonly unknown[] = scenario[section];
+    if (items.length === 0) {
+      yield `,\n  "${section}": []`;
+      continue;
+    }
+    yield `,\n  "${section}": [\n`;
+    for (let i = 0; i < items.length; i += 1) {
+      const value = checked(SECTION_SCHEMAS[section], items[i], [section, i]);
+      yield `${i === 0 ? '' : ',\n'}    ${nested(value, 2)}`;
+    }
+    yield '\n  ]';
+  }
+  yield '\n}';
+}
+
