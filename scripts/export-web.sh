@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Exports the web app to dist/ when dist/index.html is missing or older than any source it is built from.
-# Prints one line either way; on failure, the tail of the export log as well.
+# Then writes brotli and gzip copies of its compressible files (scripts/precompress-web.ts; kept copies are reused).
+# Prints one line either way, plus one for the copies; on failure, the tail of the export log as well.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
@@ -15,8 +16,11 @@ needs_export() {
   [ -n "$(find "${present[@]}" -type f -newer "$OUT/index.html" -print -quit)" ]
 }
 
+precompress() { npx tsx scripts/precompress-web.ts "$OUT"; }
+
 if ! needs_export; then
   echo "export-web: $OUT/ is up to date"
+  precompress
   exit 0
 fi
 
@@ -29,3 +33,4 @@ if ! CI=1 npx expo export --platform web --output-dir "$OUT" >"$LOG" 2>&1; then
   exit 1
 fi
 echo "export-web: exported the web app to $OUT/ in $((SECONDS - started_s)) s"
+precompress

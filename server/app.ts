@@ -9,6 +9,7 @@ import type { SignInLimit } from './auth/sign-in-limit';
 import type { ServerConfig } from './env';
 import { RouteNotFoundError } from './errors';
 import { noJobQueue, type JobQueue } from './jobs/queue';
+import { compressAnswers } from './http/compress-api';
 import { errorHandler, type ErrorLog } from './http/error-handler';
 import { inputHygiene } from './http/input-hygiene';
 import { originCheck } from './http/origin-check';
@@ -114,6 +115,8 @@ export function createApp(deps: AppDeps): express.Application {
   app.use(requestLog(deps.logger ?? silentLogger()));
   app.use(httpMetrics());
   app.use(securityHeaders());
+  // br or gzip for answers of 1 KB and more; the web app's precompressed copies already carry Content-Encoding and pass through.
+  app.use(compressAnswers());
   // Prometheus scrapes: no session, no body; METRICS_ACCESS decides who may read (metrics/metrics-route.ts).
   app.get('/metrics', metricsEndpoint({ db, pool: deps.pool, config }));
   // Before sessions and body parsing: probes carry no cookie, and liveness must not wait on the database.

@@ -1,7 +1,8 @@
 // Serves the exported web app (WEB_DIST) with an SPA fallback, after the API routes.
 import fs from 'node:fs';
 import path from 'node:path';
-import express, { type Router } from 'express';
+import express, { type Response, type Router } from 'express';
+import { precompressedAssets } from './precompressed';
 
 /** Expo puts content-hashed bundles here: safe to cache for a year. */
 const HASHED_ASSETS = `${path.sep}_expo${path.sep}static${path.sep}`;
@@ -10,14 +11,12 @@ export function webApp({ webDist }: { webDist: string }): Router {
   const root = path.resolve(webDist);
   const indexFile = path.join(root, 'index.html');
   const router = express.Router();
-  router.use(
-    express.static(root, {
-      index: false,
-      setHeaders: (res, filePath) => {
-        if (filePath.includes(HASHED_ASSETS)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
-      },
-    }),
-  );
+  const setHeaders = (res: Response, filePath: string) => {
+    if (filePath.includes(HASHED_ASSETS)) res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+  };
+  // The .br / .gz copies written at export (scripts/precompress-web.ts) first, then the files themselves.
+  router.use(precompressedAssets({ root, setHeaders }));
+  router.use(express.static(root, { index: false, setHeaders }));
   router.get('/{*splat}', (_req, res) => {
     if (!fs.existsSync(indexFile)) {
       res.status(404).json({
