@@ -1,7 +1,6 @@
 // Writes an export to the response a piece at a time: the first bytes leave at once, the whole text is never held,
 // and the event loop gets a turn between batches so other requests are answered while a large file goes out.
 import type { Writable } from 'node:stream';
-import { once } from 'node:events';
 import type { z } from 'zod';
 import {
   outlineSchema, placementSchema, scenarioSchema, siteSchema, sliceSchema, spanSchema, tenantSchema, type Scenario,
@@ -19,21 +18,33 @@ const nextTurn = () => new Promise<void>((resolve) => { setImmediate(resolve); }
  * does not pile the file up in memory), and yielding to the event loop after each batch. Ends `out` when done.
  */
 export async function streamPieces(out: Writable, pieces: Iterable<string>): Promise<void> {
+  // One 'drain' and one 'close' listener for the whole export (the compression middleware hands 'drain' listeners to
+  // its own stream and cannot take them back, so adding one per wait would pile them up). 'close' also wakes the
+  // writer, so a client that went away never leaves the export waiting.
+  let wake: (() => void) | null = null;
+  const onReady = () => { wake?.(); wake = null; };
+  out.on('drain', onReady);
+  out.on('close', onReady);
   let batch = '';
   const flush = async () => {
     if (batch === '') return;
     const ok = out.write(batch);
     batch = '';
-    if (!ok && !out.destroyed) await once(out, 'drain');
+    if (!ok && !out.destroyed) await new Promise<void>((resolve) => { wake = resolve; });
     await nextTurn();
   };
-  for (const piece of pieces) {
-    if (out.destroyed) return;
-    batch += piece;
-    if (batch.length >= BATCH_CHARS) await flush();
+  try {
+    for (const piece of pieces) {
+      if (out.destroyed) return;
+      batch += piece;
+      if (batch.length >= BATCH_CHARS) await flush();
+    }
+    await flush();
+    if (!out.destroyed) out.end();
+  } finally {
+    out.off('drain', onReady);
+    out.off('close', onReady);
   }
-  await flush();
-  out.end();
 }
 
 /** `value` as JSON.stringify(value, null, 2) prints it when nested `depth` levels deep. */

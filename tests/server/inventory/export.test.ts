@@ -146,6 +146,25 @@ test('streaming goes out in several writes, waits for a slow reader and loses no
   expect(sink.writableEnded).toBe(true);
 });
 
+test('a client that goes away mid-download does not leave the export waiting', async () => {
+  const scenario = await loadNetworkScenario(ctx.db);
+  let writes = 0;
+  // A reader that never finishes a write: the writer must wait for drain, then the connection closes.
+  const stuck = new Writable({ highWaterMark: 16, write() { writes += 1; setImmediate(() => stuck.destroy()); } });
+  await streamPieces(stuck, scenarioJsonPieces(scenario));
+  expect(writes).toBe(1);
+  expect(stuck.writableEnded).toBe(false);
+});
+
+test('a gzip-accepting client gets the same streamed file, compressed', async () => {
+  const app = ctx.makeApp({ now: () => NOW });
+  const cookie = await signInAs(app, ctx.users.planner.email);
+  const res = await request(app).get('/api/export/scenario').set('Cookie', cookie).set('Accept-Encoding', 'gzip');
+  expect(res.status).toBe(200);
+  expect(res.headers['content-encoding']).toBe('gzip');
+  expect(res.text).toBe(await oldScenarioText());
+});
+
 test('scenario pieces print empty sections and a missing name exactly as JSON.stringify does', () => {
   const bare: Scenario = { format: 'slackwater-scenario/1', sites: [], spans: [], tenants: [], slices: [], placements: [] };
   expect([...scenarioJsonPieces(bare)].join('')).toBe(JSON.stringify(bare, null, 2));
