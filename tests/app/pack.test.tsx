@@ -5,6 +5,12 @@ import { ChangePackView } from '@/components/pack/change-pack-view';
 import { changePackSchema, type ChangePack } from '@/shared/change-pack';
 import { clearQueries, renderWithQueries } from './window-test-kit';
 
+// Router links render as plain text here; what matters is their words and testIDs.
+jest.mock('expo-router', () => {
+  const { Text } = jest.requireActual('react-native');
+  return { Link: ({ children, testID }: { children: string; testID?: string }) => <Text testID={testID}>{children}</Text> };
+});
+
 afterEach(clearQueries);
 
 const objective = { unresolvedWeight: 0, unresolved: 0, moved: 2, rerouted: 1, moveCost: 2.25, usage: 3, peakUtilisation: 0.5 };
