@@ -20,7 +20,9 @@ export function parsePrometheusText(text: string): Samples {
     const m = SAMPLE.exec(line);
     if (!m) throw new Error(`not a Prometheus sample line: ${line}`);
     const value = Number(m[3] === '+Inf' ? Infinity : m[3] === '-Inf' ? -Infinity : m[3]);
-    if (Number.isNaN(value) && m[3] !== 'NaN') throw new Error(`bad value in: ${line}`);
+    // prom-client writes NaN as "Nan" (e.g. the event-loop lag before its first sample); Prometheus reads the
+    // value with Go's ParseFloat, which takes any case of NaN.
+    if (Number.isNaN(value) && m[3].toLowerCase() !== 'nan') throw new Error(`bad value in: ${line}`);
     const family = [m[1], ...SUFFIXES.filter((s) => m[1].endsWith(s)).map((s) => m[1].slice(0, -s.length))]
       .find((name) => typed.has(name));
     if (!family || !helped.has(family)) throw new Error(`sample without # HELP and # TYPE: ${line}`);
