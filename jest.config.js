@@ -35,9 +35,9 @@ module.exports = {
       preset: 'jest-expo',
       moduleNameMapper: { '^@/(.*)$': '<rootDir>/$1' },
       testMatch: ['<rootDir>/tests/app/**/*.test.tsx'],
-      // gifted-charts-core ships ES modules only (react-native-gifted-charts is already covered by react-native.*).
+      // gifted-charts-core and standard-navigation (under expo-router's Link) ship ES modules only (react-native-gifted-charts is already covered by react-native.*).
       transformIgnorePatterns: [
-        'node_modules/(?!((jest-)?react-native|@react-native(-community)?)|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|react-native-svg|@tanstack/.*|gifted-charts-core)',
+        'node_modules/(?!((jest-)?react-native|@react-native(-community)?)|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|react-native-svg|@tanstack/.*|gifted-charts-core|standard-navigation)',
       ],
     },
   ],

@@ -5,11 +5,6 @@ import { ChangePackView } from '@/components/pack/change-pack-view';
 import { changePackSchema, type ChangePack } from '@/shared/change-pack';
 import { clearQueries, renderWithQueries } from './window-test-kit';
 
-// Router links render as plain text here; what matters is their words and testIDs.
-jest.mock('expo-router', () => {
-  const { Text } = jest.requireActual('react-native');
-  return { Link: ({ children, testID }: { children: string; testID?: string }) => <Text testID={testID}>{children}</Text> };
-});
 
 afterEach(clearQueries);
 

@@ -6,11 +6,6 @@ import { PeopleView } from '@/components/people/people-view';
 import { toggleRole } from '@/components/people/role-picker';
 import { clearQueries, renderWithQueries, routedFetch } from './window-test-kit';
 
-// Router links render as plain text here; what matters is their words and testIDs.
-jest.mock('expo-router', () => {
-  const { Text } = jest.requireActual('react-native');
-  return { Link: ({ children, testID }: { children: string; testID?: string }) => <Text testID={testID}>{children}</Text> };
-});
 
 const tenants = [{ id: 't-harbour', name: 'Harbour Co' }];
 const person = (extra: Partial<Person>): Person => ({
