@@ -2,13 +2,13 @@
 // password; one tap to the page that removes it. Shows nothing once the demo is gone or for other roles.
 import { canAdminister } from '@/shared/permissions';
 import { useMeQuery } from '@/hooks/queries/me';
-import { useDemoDataQuery } from '@/hooks/queries/demo-data';
+import { DEMO_NOTICE_STALE_MS, useDemoDataQuery } from '@/hooks/queries/demo-data';
 import { colors } from '@/constants/theme';
 import { ActionPanel } from '@/components/overview/action-panel';
 
 export function DemoDataNotice() {
   const admin = canAdminister(useMeQuery().data?.roles ?? []);
-  const present = useDemoDataQuery({ enabled: admin }).data?.present ?? false;
+  const present = useDemoDataQuery({ enabled: admin, staleTime: DEMO_NOTICE_STALE_MS }).data?.present ?? false;
   if (!admin || !present) return null;
   return (
     <ActionPanel testID="demo-data-notice" lead="The invented demo is still here"

@@ -7,8 +7,17 @@ const DEMO_DATA_ROOT = ['demo-data'] as const;
 
 export const demoDataKey = () => [...DEMO_DATA_ROOT, 'summary'] as const;
 
-export function useDemoDataQuery({ enabled = true }: { enabled?: boolean } = {}) {
-  return useQuery({ queryKey: demoDataKey(), queryFn: () => apiFetch('/api/demo-data', demoDataSummarySchema), enabled });
+/**
+ * The notice on Overview and Imports only asks "is the demo still here?", which changes once (on removal, which
+ * invalidates every query), so it may keep its answer for a while instead of re-reading the counts on every visit.
+ */
+export const DEMO_NOTICE_STALE_MS = 5 * 60_000;
+
+export function useDemoDataQuery({ enabled = true, staleTime }: { enabled?: boolean; staleTime?: number } = {}) {
+  return useQuery({
+    queryKey: demoDataKey(), queryFn: () => apiFetch('/api/demo-data', demoDataSummarySchema), enabled,
+    ...(staleTime === undefined ? {} : { staleTime }),
+  });
 }
 
 export function useDemoRemovalMutation() {
