@@ -3,7 +3,7 @@ import type { ImportDefaults, ImportIssue, ImportKind, ImportMapping, ImportPrev
 import type { Scenario } from '../../shared/scenario';
 import { validateScenario } from '../../shared/scenario-validate';
 import type { Queryable } from '../../db/client';
-import { loadNetworkScenario } from '../services/inventory/load-network-scenario';
+import { currentInventory } from '../services/inventory/inventory-cache';
 import { scenarioChecksum } from './canonical';
 import { uploadChecks } from './check-thread';
 import { diffScenarios, emptyDiff, type ScenarioDiff } from './diff';
@@ -51,7 +51,7 @@ export async function buildPreview(
   const { kind, parsed } = await uploadChecks.read({ fileName, bytes: input.bytes, requestedKind: input.requestedKind, mapping: input.mapping });
   const errors = [...parsed.errors];
   const warnings = [...parsed.warnings, ...ignoredOptions(kind, input)];
-  const before = await loadNetworkScenario(db);
+  const { scenario: before } = await currentInventory(db);
   const merged: ReturnType<typeof mergeImport> = WHOLE_STATE.has(kind) && errors.length > 0 ? { target: null, errors: [] } : mergeImport(before, parsed.content, fileName, defaults);
   errors.push(...merged.errors);
   warnings.push(...(merged.graphml?.warnings ?? []));

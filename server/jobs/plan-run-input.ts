@@ -2,9 +2,8 @@
 // and what overlapping accepted plans reserve. Problems that a retry cannot fix are RunRefusedError.
 import type { Db } from '../../db/client';
 import type { PlanRow } from '../queries/plans/plan-rows';
-import { buildInventory } from '../../planner/model/build-inventory';
 import { planSettingsSchema } from '../../shared/plans';
-import { loadNetworkScenario } from '../services/inventory/load-network-scenario';
+import { currentInventory } from '../services/inventory/inventory-cache';
 import { reservationsFor } from '../services/plans/reservations';
 import { WindowNotFoundError } from '../services/windows/errors';
 import { loadWindow, type LoadedWindow } from '../services/windows/window-view';
@@ -36,9 +35,9 @@ export async function loadPlanInput(db: Db, plan: PlanRow): Promise<PlanThreadIn
     throw new RunRefusedError(`The run's settings are not valid: ${settings.error.issues.map((i) => i.message).join('; ')}`);
   }
   const w = await loadCurrentWindow(db, plan);
-  const scenario = await loadNetworkScenario(db);
-  // The scenario just read is the current inventory: compiled only if an overlapping accepted plan needs it.
-  const { reservations, reservedFor } = await reservationsFor(db, w.id, () => buildInventory(scenario));
+  // The process's compiled inventory of the current revision (built once, shared with the API's reads).
+  const { scenario, inventory } = await currentInventory(db);
+  const { reservations, reservedFor } = await reservationsFor(db, w.id, inventory);
   return {
     scenario: { ...scenario, windows: [scenarioWindowOf(w)] },
     windowId: w.id, settings: settings.data, reservations, reservedFor,

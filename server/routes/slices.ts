@@ -3,7 +3,7 @@ import express, { type Router } from 'express';
 import { inventoryIdParamSchema, sliceDetailSchema, sliceListQuerySchema, sliceListSchema } from '../../shared/inventory';
 import { tenantScopeOf } from '../../shared/permissions';
 import { currentUser, requireAuth } from '../auth/guards';
-import { loadInventoryView } from '../services/inventory/inventory-view';
+import { inventoryView } from '../services/inventory/inventory-cache';
 import { getSliceDetail } from '../services/inventory/slice-detail';
 import { listSlices } from '../services/inventory/slice-rows';
 import type { RouteDeps } from './deps';
@@ -12,11 +12,11 @@ export function slicesRouter({ db }: RouteDeps): Router {
   const router = express.Router();
   router.get('/', requireAuth, async (req, res) => {
     const query = sliceListQuerySchema.parse(req.query);
-    const view = await loadInventoryView(db, tenantScopeOf(currentUser(req)));
+    const view = await inventoryView(db, tenantScopeOf(currentUser(req)));
     res.json(sliceListSchema.parse(listSlices(view, query)));
   });
   router.get('/:id', requireAuth, async (req, res) => {
-    const view = await loadInventoryView(db, tenantScopeOf(currentUser(req)));
+    const view = await inventoryView(db, tenantScopeOf(currentUser(req)));
     res.json(sliceDetailSchema.parse(await getSliceDetail(db, view, inventoryIdParamSchema.parse(req.params).id)));
   });
   return router;

@@ -3,7 +3,7 @@ import express, { type Router } from 'express';
 import { inventoryIdParamSchema, tenantDetailSchema, tenantListQuerySchema, tenantListSchema } from '../../shared/inventory';
 import { tenantScopeOf } from '../../shared/permissions';
 import { currentUser, requireAuth } from '../auth/guards';
-import { loadInventoryView } from '../services/inventory/inventory-view';
+import { inventoryView } from '../services/inventory/inventory-cache';
 import { getTenantDetail, listTenants } from '../services/inventory/tenant-rows';
 import type { RouteDeps } from './deps';
 
@@ -11,11 +11,11 @@ export function tenantsRouter({ db }: RouteDeps): Router {
   const router = express.Router();
   router.get('/', requireAuth, async (req, res) => {
     const query = tenantListQuerySchema.parse(req.query);
-    const view = await loadInventoryView(db, tenantScopeOf(currentUser(req)));
+    const view = await inventoryView(db, tenantScopeOf(currentUser(req)));
     res.json(tenantListSchema.parse(listTenants(view, query)));
   });
   router.get('/:id', requireAuth, async (req, res) => {
-    const view = await loadInventoryView(db, tenantScopeOf(currentUser(req)));
+    const view = await inventoryView(db, tenantScopeOf(currentUser(req)));
     res.json(tenantDetailSchema.parse(getTenantDetail(view, inventoryIdParamSchema.parse(req.params).id)));
   });
   return router;

@@ -1,4 +1,4 @@
-// One request's view of the inventory: the current data, what the asker may see of it, and the load it puts on the network.
+// A view of the inventory: the data of one revision, what the asker may see of it, and the load it puts on the network.
 import { buildInventory } from '../../../planner/model/build-inventory';
 import type { Inventory } from '../../../planner/model/types';
 import { placementLoad } from '../../../planner/model/window-capacity';
@@ -24,6 +24,8 @@ export interface InventoryView {
   cpuUsed: Map<string, number>;
   gbpsUsed: Map<string, number>;
   uses: UseIndex;
+  /** derived data kept with the view (list rows, sort orders), see memoised() */
+  memo: Map<string, unknown>;
 }
 
 /** The tenant's footprint: sites hosting its functions or at either end of a span its ties cross; those spans. */
@@ -50,10 +52,21 @@ function loadsOf(inventory: Inventory, slices: readonly ScenarioSlice[]) {
   return { cpuUsed, gbpsUsed };
 }
 
-export async function loadInventoryView(db: Queryable, tenantId: string | null): Promise<InventoryView> {
-  const tables = await selectScenarioTables(db);
+/** One revision's inventory as read and compiled: the base every view of that revision shares. */
+export interface CompiledInventory {
+  tables: ScenarioTables;
+  scenario: Scenario;
+  inventory: Inventory;
+}
+
+export function compileInventory(tables: ScenarioTables): CompiledInventory {
   const scenario = tablesToScenario(tables);
-  const inventory = buildInventory(scenario);
+  return { tables, scenario, inventory: buildInventory(scenario) };
+}
+
+/** What one asker may see of a compiled inventory (null = network-wide), with its loads and use index. */
+export function viewOf(compiled: CompiledInventory, tenantId: string | null): InventoryView {
+  const { scenario, inventory, tables } = compiled;
   const slices = tenantId === null ? scenario.slices : scenario.slices.filter((s) => s.tenant === tenantId);
   let sites = scenario.sites;
   let spans = scenario.spans;
@@ -68,7 +81,19 @@ export async function loadInventoryView(db: Queryable, tenantId: string | null):
     spanById: new Map(spans.map((s) => [s.id, s])),
     ...loadsOf(inventory, slices),
     uses: buildUseIndex(scenario, slices),
+    memo: new Map(),
   };
+}
+
+/** Reads and compiles the inventory without any cache (inside a transaction, or for a one-off read). */
+export async function loadInventoryView(db: Queryable, tenantId: string | null): Promise<InventoryView> {
+  return viewOf(compileInventory(await selectScenarioTables(db)), tenantId);
+}
+
+/** What `build` returns for this view, computed once per view (a view lives as long as its revision). */
+export function memoised<T>(view: InventoryView, key: string, build: () => T): T {
+  if (!view.memo.has(key)) view.memo.set(key, build());
+  return view.memo.get(key) as T;
 }
 
 /** used ÷ capacity, 0 for an element without capacity (never NaN or Infinity on the wire). */

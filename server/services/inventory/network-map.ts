@@ -1,8 +1,12 @@
 // The map: sites at their coordinates and spans between them, each with its utilisation, over the outline.
 import type { NetworkMap } from '../../../shared/inventory';
-import { ratioOf, type InventoryView } from './inventory-view';
+import { memoised, ratioOf, type InventoryView } from './inventory-view';
 
 export function getNetworkMap(view: InventoryView): NetworkMap {
+  return memoised(view, 'network-map', () => networkMapOf(view));
+}
+
+function networkMapOf(view: InventoryView): NetworkMap {
   return {
     name: view.scenario.name ?? null,
     outline: view.scenario.outline ?? null,

@@ -2,8 +2,8 @@
 import type { SiteDetail, SiteList, SiteListQuery, SiteRow } from '../../../shared/inventory';
 import type { ScenarioSite } from '../../../shared/scenario';
 import { InventoryNotFoundError } from './errors';
-import { ratioOf, type InventoryView } from './inventory-view';
-import { pageRows } from './paging';
+import { memoised, ratioOf, type InventoryView } from './inventory-view';
+import { indexRows, pageIndexed, type IndexedRows } from './paging';
 import { spanRow } from './span-rows';
 
 function spanCounts(view: InventoryView): Map<string, number> {
@@ -25,11 +25,17 @@ export function siteRow(view: InventoryView, site: ScenarioSite, spanCount: numb
   };
 }
 
+/** Every site row of the view, built once per view. */
+function siteTable(view: InventoryView): IndexedRows<SiteRow> {
+  return memoised(view, 'site-rows', () => {
+    const counts = spanCounts(view);
+    return indexRows(view.sites.map((s) => siteRow(view, s, counts.get(s.id) ?? 0)), (row) => `${row.id} ${row.name}`);
+  });
+}
+
 export function listSites(view: InventoryView, query: SiteListQuery): SiteList {
-  const counts = spanCounts(view);
-  const sites = query.kind ? view.sites.filter((s) => s.kind === query.kind) : view.sites;
-  const rows = sites.map((s) => siteRow(view, s, counts.get(s.id) ?? 0));
-  return pageRows(rows, query, (row, key) => row[key], (row) => `${row.id} ${row.name}`);
+  const kind = query.kind;
+  return pageIndexed(siteTable(view), query, (row, key) => row[key], kind ? (row) => row.kind === kind : undefined);
 }
 
 export function getSiteDetail(view: InventoryView, id: string): SiteDetail {

@@ -6,8 +6,8 @@ import {
 import { listPlacementRevisions } from '../../queries/inventory/placement-history';
 import type { Queryable } from '../../../db/client';
 import { InventoryNotFoundError } from './errors';
-import type { InventoryView } from './inventory-view';
-import { sliceRowBuilder } from './slice-rows';
+import { memoised, type InventoryView } from './inventory-view';
+import { sliceTable } from './slice-rows';
 import { pathSites } from './slice-uses';
 
 function tieView(view: InventoryView, tie: ScenarioTie, placement: ScenarioPlacement | undefined): SliceTieView {
@@ -19,7 +19,7 @@ function tieView(view: InventoryView, tie: ScenarioTie, placement: ScenarioPlace
   const fromSite = placement?.sites[tie.from];
   if (!spanIds || !fromSite) return { ...base, path: null };
   // The whole network, not the asker's view: every span on the slice's own path is in its view anyway.
-  const spans = new Map(view.scenario.spans.map((s) => [s.id, s]));
+  const spans = memoised(view, 'all-spans', () => new Map(view.scenario.spans.map((s) => [s.id, s])));
   const onPath = spanIds.map((id) => spans.get(id)).filter((s) => s !== undefined);
   return {
     ...base,
@@ -33,10 +33,16 @@ function tieView(view: InventoryView, tie: ScenarioTie, placement: ScenarioPlace
 }
 
 export async function getSliceDetail(db: Queryable, view: InventoryView, id: string): Promise<SliceDetail> {
-  const slice = view.slices.find((s) => s.id === id);
-  if (!slice) throw new InventoryNotFoundError('slice', id);
-  const placement = view.scenario.placements.find((p) => p.slice === id);
-  const siteNames = new Map(view.scenario.sites.map((s) => [s.id, s.name]));
+  const index = memoised(view, 'slice-detail', () => ({
+    slices: new Map(view.slices.map((s, i) => [s.id, { slice: s, row: sliceTable(view).rows[i] }])),
+    placements: new Map(view.scenario.placements.map((p) => [p.slice, p])),
+    siteNames: new Map(view.scenario.sites.map((s) => [s.id, s.name])),
+  }));
+  const found = index.slices.get(id);
+  if (!found) throw new InventoryNotFoundError('slice', id);
+  const { slice, row } = found;
+  const placement = index.placements.get(id);
+  const siteNames = index.siteNames;
   const functions = slice.functions.map((f) => {
     const siteId = placement?.sites[f.id] ?? null;
     return {
@@ -47,7 +53,7 @@ export async function getSliceDetail(db: Queryable, view: InventoryView, id: str
   });
   const revisions = await listPlacementRevisions(db, { sliceId: id });
   return {
-    slice: sliceRowBuilder(view)(slice),
+    slice: row,
     functions,
     ties: slice.ties.map((t) => tieView(view, t, placement)),
     history: revisions.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() })),

@@ -1,13 +1,13 @@
 // Slices: list rows (tenant, service type, priority, totals, current revision) with their filters.
 import type { SliceList, SliceListQuery, SliceRow } from '../../../shared/inventory';
 import type { ScenarioSlice } from '../../../shared/scenario';
-import type { InventoryView } from './inventory-view';
-import { pageRows } from './paging';
+import { memoised, type InventoryView } from './inventory-view';
+import { indexRows, pageIndexed, type IndexedRows } from './paging';
 
 const sum = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0);
 
 /** Row builder with the per-request look-ups (tenant names, status, current revision) made once. */
-export function sliceRowBuilder(view: InventoryView): (slice: ScenarioSlice) => SliceRow {
+function sliceRowBuilder(view: InventoryView): (slice: ScenarioSlice) => SliceRow {
   const tenantNames = new Map(view.tables.tenantRows.map((t) => [t.id, t.name]));
   const status = new Map(view.tables.sliceRows.map((s) => [s.id, s.status]));
   const revision = new Map(view.tables.placementRows.map((p) => [p.sliceId, p.revision]));
@@ -29,20 +29,24 @@ export function sliceRowBuilder(view: InventoryView): (slice: ScenarioSlice) => 
   });
 }
 
-function matchesFilters(slice: ScenarioSlice, query: SliceListQuery): boolean {
-  if (query.tenant !== undefined && slice.tenant !== query.tenant) return false;
-  if (query.sst !== undefined && slice.sst !== query.sst) return false;
-  if (query.priority !== undefined && slice.priority !== query.priority) return false;
-  if (query.critical !== undefined && (slice.critical ?? false) !== query.critical) return false;
+function matchesFilters(row: SliceRow, query: SliceListQuery): boolean {
+  if (query.tenant !== undefined && row.tenantId !== query.tenant) return false;
+  if (query.sst !== undefined && row.sst !== query.sst) return false;
+  if (query.priority !== undefined && row.priority !== query.priority) return false;
+  if (query.critical !== undefined && row.critical !== query.critical) return false;
   return true;
 }
 
+/** Every slice row of the view in the view's order, built once per view. */
+export function sliceTable(view: InventoryView): IndexedRows<SliceRow> {
+  return memoised(view, 'slice-rows', () =>
+    indexRows(view.slices.map(sliceRowBuilder(view)), (row) => `${row.id} ${row.name} ${row.tenantName}`));
+}
+
 export function listSlices(view: InventoryView, query: SliceListQuery): SliceList {
-  const toRow = sliceRowBuilder(view);
-  const rows = view.slices.filter((s) => matchesFilters(s, query)).map(toRow);
-  return pageRows(
-    rows, query,
+  return pageIndexed(
+    sliceTable(view), query,
     (row, key) => (key === 'tenant' ? row.tenantName : row[key]),
-    (row) => `${row.id} ${row.name} ${row.tenantName}`,
+    (row) => matchesFilters(row, query),
   );
 }

@@ -2,8 +2,8 @@
 import type { SpanDetail, SpanList, SpanListQuery, SpanRow } from '../../../shared/inventory';
 import { spanLatencyMs, type ScenarioSpan } from '../../../shared/scenario';
 import { InventoryNotFoundError } from './errors';
-import { ratioOf, type InventoryView } from './inventory-view';
-import { pageRows } from './paging';
+import { memoised, ratioOf, type InventoryView } from './inventory-view';
+import { indexRows, pageIndexed } from './paging';
 
 export function spanRow(view: InventoryView, span: ScenarioSpan): SpanRow {
   const usedGbps = view.gbpsUsed.get(span.id) ?? 0;
@@ -20,11 +20,12 @@ export function spanRow(view: InventoryView, span: ScenarioSpan): SpanRow {
 }
 
 export function listSpans(view: InventoryView, query: SpanListQuery): SpanList {
-  let spans = view.spans;
-  if (query.site) spans = spans.filter((s) => s.a === query.site || s.b === query.site);
-  if (query.srlg) spans = spans.filter((s) => (s.srlg ?? []).includes(query.srlg!));
-  const rows = spans.map((s) => spanRow(view, s));
-  return pageRows(rows, query, (row, key) => row[key], (row) => `${row.id} ${row.aName} ${row.bName} ${row.srlg.join(' ')}`);
+  const table = memoised(view, 'span-rows', () => indexRows(
+    view.spans.map((s) => spanRow(view, s)), (row) => `${row.id} ${row.aName} ${row.bName} ${row.srlg.join(' ')}`,
+  ));
+  const { site, srlg } = query;
+  const keep = (row: SpanRow) => (!site || row.a === site || row.b === site) && (!srlg || row.srlg.includes(srlg));
+  return pageIndexed(table, query, (row, key) => row[key], keep);
 }
 
 export function getSpanDetail(view: InventoryView, id: string): SpanDetail {

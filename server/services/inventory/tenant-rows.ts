@@ -2,15 +2,19 @@
 import type { TenantDetail, TenantList, TenantListQuery, TenantRow } from '../../../shared/inventory';
 import type { ScenarioTenant } from '../../../shared/scenario';
 import { InventoryNotFoundError } from './errors';
-import type { InventoryView } from './inventory-view';
-import { pageRows } from './paging';
-import { sliceRowBuilder } from './slice-rows';
+import { memoised, type InventoryView } from './inventory-view';
+import { indexRows, pageIndexed } from './paging';
+import { sliceTable } from './slice-rows';
 
 function visibleTenants(view: InventoryView): ScenarioTenant[] {
   return view.tenantId === null ? view.scenario.tenants : view.scenario.tenants.filter((t) => t.id === view.tenantId);
 }
 
 function tenantRowBuilder(view: InventoryView): (t: ScenarioTenant) => TenantRow {
+  return memoised(view, 'tenant-row', () => tenantRowOf(view));
+}
+
+function tenantRowOf(view: InventoryView): (t: ScenarioTenant) => TenantRow {
   const counts = new Map<string, { all: number; critical: number }>();
   for (const s of view.slices) {
     const c = counts.get(s.tenant) ?? { all: 0, critical: 0 };
@@ -25,17 +29,17 @@ function tenantRowBuilder(view: InventoryView): (t: ScenarioTenant) => TenantRow
 }
 
 export function listTenants(view: InventoryView, query: TenantListQuery): TenantList {
-  const rows = visibleTenants(view).map(tenantRowBuilder(view));
-  return pageRows(rows, query, (row, key) => row[key], (row) => `${row.id} ${row.name}`);
+  const table = memoised(view, 'tenant-rows', () =>
+    indexRows(visibleTenants(view).map(tenantRowBuilder(view)), (row) => `${row.id} ${row.name}`));
+  return pageIndexed(table, query, (row, key) => row[key]);
 }
 
 export function getTenantDetail(view: InventoryView, id: string): TenantDetail {
   const tenant = visibleTenants(view).find((t) => t.id === id);
   if (!tenant) throw new InventoryNotFoundError('tenant', id);
-  const toSliceRow = sliceRowBuilder(view);
   return {
     tenant: tenantRowBuilder(view)(tenant),
     contacts: tenant.contacts ?? [],
-    slices: view.slices.filter((s) => s.tenant === id).map(toSliceRow),
+    slices: sliceTable(view).rows.filter((row) => row.tenantId === id),
   };
 }

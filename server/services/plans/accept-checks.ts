@@ -4,7 +4,7 @@ import { verifyPlan } from '../../../planner/verify/verify-plan';
 import type { PlacementView, PlanReview, PlanSlice } from '../../../shared/plans';
 import type { Scenario } from '../../../shared/scenario';
 import type { Queryable } from '../../../db/client';
-import { loadInventory } from '../inventory/load-network-scenario';
+import { currentInventory, type InventoryCache } from '../inventory/inventory-cache';
 import { windowSpecOf } from '../windows/window-spec';
 import { loadWindow } from '../windows/window-view';
 import { OutageNotAcceptedError, PlanNotAcceptableError } from './errors';
@@ -45,10 +45,13 @@ export function changedSlices(scenario: Scenario, slices: PlanSlice[]): string[]
  * Throws NETWORK_CHANGED or PLAN_NO_LONGER_FITS with the reason; returns the windows whose plans were reserved.
  * WARNING: everything is read through the accept's own transaction. A second pool connection taken while the
  * transaction holds the accept lock and the window's row lock can wait forever once other requests of the process
- * hold every pool connection while waiting on those same locks.
+ * hold every pool connection while waiting on those same locks. The process's cache is used only when the
+ * transaction sees the revision it holds (one query on the transaction's own connection).
  */
-export async function checkStillFits(tx: Queryable, windowId: string, review: PlanReview): Promise<string[]> {
-  const { scenario, inventory } = await loadInventory(tx);
+export async function checkStillFits(
+  tx: Queryable, windowId: string, review: PlanReview, cache?: InventoryCache,
+): Promise<string[]> {
+  const { scenario, inventory } = cache ? await cache.compiledIn(tx) : await currentInventory(tx);
   const changed = changedSlices(scenario, review.slices);
   if (changed.length > 0) {
     throw new PlanNotAcceptableError('NETWORK_CHANGED',

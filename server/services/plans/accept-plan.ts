@@ -7,6 +7,7 @@ import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { lockForTransaction } from '../../queries/locks/advisory-locks';
 import { markPlanAccepted, selectPlanRow } from '../../queries/plans/plan-rows';
 import { setWindowStatus } from '../windows/set-window-status';
+import { inventoryCacheFor } from '../inventory/inventory-cache';
 import { checkOutageAccepted, checkStillFits } from './accept-checks';
 import { PlanAlreadyAcceptedError, PlanNotAcceptableError, PlanNotFoundError, WindowNotPlannableError } from './errors';
 import { isStale, loadWindowFacts } from './plan-view';
@@ -40,7 +41,7 @@ export async function acceptPlan(deps: { db: Db; now: Date }, planId: string, bo
     }
     const review = planReviewSchema.parse(row.result);
     const outageAccepted = checkOutageAccepted(review, body.outageAccepted);
-    const reservedFor = await checkStillFits(tx, row.windowId, review);
+    const reservedFor = await checkStillFits(tx, row.windowId, review, inventoryCacheFor(db));
     await markPlanAccepted(tx, planId, { userId: user.id, outageAccepted, now });
     await setWindowStatus(tx, {
       windowId: row.windowId, from: PLANNABLE_STATES, to: 'planned', actorId: user.id, action: 'plan.accept', now,

@@ -4,7 +4,7 @@ import { overlapReservations, type OverlappingPlan } from '../../../planner/plan
 import type { Inventory, Reservation, SlicePlan } from '../../../planner/model/types';
 import type { PlanSlice } from '../../../shared/plans';
 import { ACTIVE_WINDOW_STATUSES } from '../../../shared/windows';
-import { loadInventory } from '../inventory/load-network-scenario';
+import { currentInventory } from '../inventory/inventory-cache';
 import { selectOverlappingAcceptedPlans } from '../../queries/plans/overlapping-plans';
 import { selectWindowTimes } from '../../queries/plans/plan-window';
 import { selectElementsByWindow } from '../../queries/windows/window-rows';
@@ -46,7 +46,7 @@ export async function reservationsFor(
   if (!self) throw new WindowNotFoundError(windowId);
   const rows = await selectOverlappingAcceptedPlans(db, windowId, self, ACTIVE_WINDOW_STATUSES);
   if (rows.length === 0) return { reservations: {}, reservedFor: [] };
-  const inventory = typeof inv === 'function' ? inv() : inv ?? (await loadInventory(db)).inventory;
+  const inventory = typeof inv === 'function' ? inv() : inv ?? (await currentInventory(db)).inventory;
   const elements = await selectElementsByWindow(db, rows.map((r) => r.id));
   const others: OverlappingPlan[] = rows.map((r) => ({
     window: windowSpecOf({ ...r, elements: elements.get(r.id) ?? [] }),

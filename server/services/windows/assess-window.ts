@@ -5,7 +5,7 @@ import { windowIsAssessable } from '../../../shared/permissions';
 import type { WindowImpact } from '../../../shared/window-impact';
 import { findUnknownElements } from '../../queries/windows/elements';
 import { upsertWindowImpact } from '../../queries/windows/impacts';
-import { loadInventory } from '../inventory/load-network-scenario';
+import { currentInventory } from '../inventory/inventory-cache';
 import { computeWindowImpact } from './compute-impact';
 import { IllegalTransitionError, StaleVersionError, UnknownElementsError } from './errors';
 import { setWindowStatus } from './set-window-status';
@@ -22,7 +22,7 @@ export async function assessWindow(
   // The network may have changed since booking (an import); name what vanished rather than fail inside the planner.
   const unknown = await findUnknownElements(db, w.elements);
   if (unknown.length > 0) throw new UnknownElementsError(unknown);
-  const { scenario, inventory } = await loadInventory(db);
+  const { scenario, inventory } = await currentInventory(db);
   return db.transaction(async (tx) => {
     let impact: WindowImpact | undefined;
     await setWindowStatus(tx, {

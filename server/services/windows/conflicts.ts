@@ -8,7 +8,7 @@ import {
   selectActiveOverlapping, selectElementsByWindow, selectWindowRows, type ElementRow,
 } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
-import { loadInventory } from '../inventory/load-network-scenario';
+import { currentInventory } from '../inventory/inventory-cache';
 import { outageOf, pairConflictReasons, strandMessage, type Outage } from './pair-conflicts';
 
 export type ConflictSubject = { id: string; title: string; startsAt: Date; endsAt: Date; status: string; elements: ElementRow[] };
@@ -54,7 +54,7 @@ export async function conflictsByWindow(
   const others = await overlappingOthers(db, active);
   const pairs = active.flatMap((w) => others.filter((o) => o.id !== w.id && overlaps(w, o)).map((o) => [w, o] as const));
   if (pairs.length === 0) return byWindow;
-  const { inventory: inv } = await loadInventory(db);
+  const { inventory: inv } = await currentInventory(db);
   const base = countComponents(inv.network);
   const outages = new Map<string, Outage>();
   const outage = (w: ConflictSubject) => {
