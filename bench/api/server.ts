@@ -9,6 +9,7 @@ const TSX = path.join(ROOT, 'node_modules', '.bin', 'tsx');
 const READY_TIMEOUT_MS = 120_000;
 const STOP_TIMEOUT_MS = 20_000;
 const RSS_EVERY_MS = 250;
+const SCRIPT = 'server/index.ts';
 
 export type BenchServer = { baseUrl: string; pid: number; logPath: string; stop: () => Promise<void> };
 
@@ -29,12 +30,23 @@ function parentPids(): Map<number, number> {
   return parents;
 }
 
-/** The deepest descendant of `root`: tsx runs the server in a node process of its own below the one it was started as. */
-function deepestDescendant(root: number): number {
+function commandLine(pid: number): string {
+  try {
+    return fs.readFileSync(`/proc/${pid}/cmdline`, 'utf8').replaceAll('\0', ' ');
+  } catch {
+    return '';
+  }
+}
+
+/**
+ * The process that runs the server: tsx starts it as a node process of its own below the one it was started as,
+ * and that one has children of its own (esbuild's service), so the walk follows only processes running `script`.
+ */
+function serverProcess(root: number, script: string): number {
   const parents = parentPids();
   let current = root;
   for (;;) {
-    const child = [...parents.entries()].find(([, parent]) => parent === current)?.[0];
+    const child = [...parents.entries()].find(([pid, parent]) => parent === current && commandLine(pid).includes(script))?.[0];
     if (child === undefined) return current;
     current = child;
   }
@@ -64,7 +76,7 @@ export async function startServer(databaseUrl: string, port: number): Promise<Be
   fs.mkdirSync(path.dirname(logPath), { recursive: true });
   const log = fs.openSync(logPath, 'w');
   // Its own process group, so stop() reaches tsx and the node process below it with one signal.
-  const child = spawn(TSX, ['server/index.ts'], {
+  const child = spawn(TSX, [SCRIPT], {
     cwd: ROOT, detached: true, stdio: ['ignore', log, log],
     env: {
       ...process.env, DATABASE_URL: databaseUrl, PORT: String(port), HOST: '127.0.0.1',
@@ -85,7 +97,7 @@ export async function startServer(databaseUrl: string, port: number): Promise<Be
     await stop();
     throw err;
   }
-  return { baseUrl, pid: deepestDescendant(child.pid!), logPath, stop };
+  return { baseUrl, pid: serverProcess(child.pid!, SCRIPT), logPath, stop };
 }
 
 /** VmRSS of one process in bytes, or null once it is gone. */
