@@ -1,8 +1,10 @@
 // Pickers for the form's date and time fields: a month to tap a day on (react-native-calendars) and a list of
 // clock times in 15-minute steps. Both open inline under their field, so they fit a 390 px phone and a desk alike;
 // typing stays possible beside them.
+import { Suspense } from 'react';
 import { ScrollView, Pressable, StyleSheet, Text, View } from 'react-native';
-import { Calendar, type DateData } from 'react-native-calendars';
+import type { DateData } from 'react-native-calendars';
+import { PickerMonth } from '@/components/date-picker-month';
 import { FIRST_WEEKDAY } from '@/components/time';
 import { colors, fonts, radii, space, type } from '@/constants/theme';
 
@@ -30,15 +32,17 @@ type DateProps = {
 export function DatePicker({ value, fallbackDay, onPick, testID }: DateProps) {
   return (
     <View style={styles.panel} testID={testID}>
-      <Calendar
-        testID={`${testID}-calendar`}
-        initialDate={value ?? fallbackDay}
-        firstDay={FIRST_WEEKDAY}
-        markedDates={value ? { [value]: { selected: true } } : {}}
-        onDayPress={(date: DateData) => onPick(date.dateString)}
-        enableSwipeMonths
-        theme={CALENDAR_THEME as never}
-      />
+      <Suspense fallback={<Text style={styles.hint} testID={`${testID}-loading`}>Loading the month…</Text>}>
+        <PickerMonth
+          testID={`${testID}-calendar`}
+          initialDate={value ?? fallbackDay}
+          firstDay={FIRST_WEEKDAY}
+          markedDates={value ? { [value]: { selected: true } } : {}}
+          onDayPress={(date: DateData) => onPick(date.dateString)}
+          enableSwipeMonths
+          theme={CALENDAR_THEME as never}
+        />
+      </Suspense>
     </View>
   );
 }
