@@ -1,13 +1,14 @@
 #!/usr/bin/env bash
 # Exports the web app to dist/ when dist/index.html is missing or older than any source it is built from.
-# Then writes brotli and gzip copies of its compressible files (scripts/precompress-web.ts; kept copies are reused).
-# Prints one line either way, plus one for the copies; on failure, the tail of the export log as well.
+# Then adds preload tags to index.html (scripts/preload-web.ts) and writes brotli and gzip copies of its compressible
+# files (scripts/precompress-web.ts; kept copies are reused), in that order so index.html's copies carry the tags.
+# Prints one line either way, plus one for each of the two steps; on failure, the tail of the export log as well.
 set -euo pipefail
 cd "$(dirname "$0")/.."
 
 OUT=dist
 LOG=.expo/export-web.log
-SOURCES=(app components hooks constants shared assets app.json package.json babel.config.js metro.config.js)
+SOURCES=(app components hooks constants shared assets metro app.json package.json babel.config.js metro.config.js)
 
 needs_export() {
   [ -f "$OUT/index.html" ] || return 0
@@ -16,7 +17,7 @@ needs_export() {
   [ -n "$(find "${present[@]}" -type f -newer "$OUT/index.html" -print -quit)" ]
 }
 
-precompress() { npx tsx scripts/precompress-web.ts "$OUT"; }
+precompress() { npx tsx scripts/preload-web.ts "$OUT" && npx tsx scripts/precompress-web.ts "$OUT"; }
 
 if ! needs_export; then
   echo "export-web: $OUT/ is up to date"
