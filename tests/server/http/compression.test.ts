@@ -48,6 +48,8 @@ function decode(answer: RawAnswer): Buffer {
 let ctx: TestContext;
 let webDist: string;
 const BUNDLE = '/_expo/static/js/web/entry-0123abcd.js';
+const ROUTE_CHUNK = '/_expo/static/js/web/[windowId]-4567cdef.js';
+const FONT = '/assets/node_modules/@expo-google-fonts/work-sans/400Regular/WorkSans_400Regular.25a94460959b4950ae6ed4086fd21d69.ttf';
 // Varied text so the compressed copies differ in size from each other and from the original.
 const bundleText = Array.from({ length: 4000 }, (_, i) => `var slice${i} = { sst: ${i % 4}, name: "slice ${i * 7919}" };`).join('\n');
 
@@ -62,6 +64,13 @@ beforeAll(async () => {
   fs.writeFileSync(`${bundle}.br`, zlib.brotliCompressSync(`${bundleText}\n// br copy`));
   fs.writeFileSync(`${bundle}.gz`, zlib.gzipSync(`${bundleText}\n// gz copy`));
   fs.writeFileSync(path.join(webDist, 'plain.js'), bundleText);
+  // A route's chunk (a dynamic segment keeps its brackets in the name) and a font Metro copied under its content hash.
+  const chunk = path.join(webDist, ROUTE_CHUNK);
+  fs.writeFileSync(chunk, bundleText);
+  fs.writeFileSync(`${chunk}.br`, zlib.brotliCompressSync(`${bundleText}\n// chunk br copy`));
+  fs.mkdirSync(path.join(webDist, path.dirname(FONT)), { recursive: true });
+  fs.writeFileSync(path.join(webDist, FONT), 'font bytes');
+  fs.writeFileSync(path.join(webDist, 'assets', 'unhashed.png'), 'image bytes');
 });
 afterAll(async () => {
   fs.rmSync(webDist, { recursive: true, force: true });
@@ -116,6 +125,26 @@ describe('precompressed web assets', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-encoding']).toBe('br');
     expect(res.body.length).toBe(0);
+  });
+
+  test('a route chunk, asked for as a browser writes its brackets, gets its brotli copy and the long cache lifetime under the CSP', async () => {
+    for (const urlPath of [ROUTE_CHUNK, ROUTE_CHUNK.replace('[', '%5B').replace(']', '%5D')]) {
+      const res = await rawRequest(webApp(), urlPath, { 'Accept-Encoding': 'br' });
+      expect(res.status).toBe(200);
+      expect(res.headers['content-encoding']).toBe('br');
+      expect(res.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+      expect(decode(res).toString()).toBe(`${bundleText}\n// chunk br copy`);
+    }
+    // Chunks load from the app's own origin, so script-src stays 'self' alone.
+    const page = await rawRequest(webApp(), '/windows/some-window');
+    const scriptSrc = /script-src ([^;]*)/.exec(String(page.headers['content-security-policy']))?.[1];
+    expect(scriptSrc).toBe("'self'");
+  });
+
+  test('files Metro names after their content hash are cached for a year; other assets and index.html are not', async () => {
+    expect((await rawRequest(webApp(), FONT)).headers['cache-control']).toBe('public, max-age=31536000, immutable');
+    expect((await rawRequest(webApp(), '/assets/unhashed.png')).headers['cache-control']).not.toMatch(/immutable/);
+    expect((await rawRequest(webApp(), '/calendar')).headers['cache-control']).toBe('no-cache');
   });
 
   test('a file without copies is compressed on the fly, and a path outside the web app is never served', async () => {
