@@ -21,7 +21,7 @@ export function siteRow(view: InventoryView, site: ScenarioSite, spanCount: numb
     id: site.id, name: site.name, kind: site.kind, lat: site.lat, lon: site.lon, cpu: site.cpu,
     cpuUsed, utilisation: ratioOf(cpuUsed, site.cpu),
     mtbfHours: site.mtbfHours ?? null, mttrHours: site.mttrHours ?? null,
-    spanCount, sliceCount: view.uses.hosted.get(site.id)?.length ?? 0,
+    spanCount, sliceCount: view.uses.count('hosted', site.id),
   };
 }
 
@@ -45,7 +45,7 @@ export function getSiteDetail(view: InventoryView, id: string): SiteDetail {
   return {
     site: siteRow(view, site, spans.length),
     spans: spans.map((s) => spanRow(view, s)),
-    hosted: view.uses.hosted.get(id) ?? [],
-    transit: view.uses.transit.get(id) ?? [],
+    hosted: view.uses.list('hosted', id),
+    transit: view.uses.list('transit', id),
   };
 }

@@ -15,7 +15,7 @@ export function spanRow(view: InventoryView, span: ScenarioSpan): SpanRow {
     latencyMs: spanLatencyMs(span), latencyDerived: span.latencyMs === undefined,
     mtbfHours: span.mtbfHours ?? null, mttrHours: span.mttrHours ?? null, srlg: span.srlg ?? [],
     usedGbps, utilisation: ratioOf(usedGbps, span.capacityGbps),
-    sliceCount: view.uses.spans.get(span.id)?.length ?? 0,
+    sliceCount: view.uses.count('spans', span.id),
   };
 }
 
@@ -31,5 +31,5 @@ export function listSpans(view: InventoryView, query: SpanListQuery): SpanList {
 export function getSpanDetail(view: InventoryView, id: string): SpanDetail {
   const span = view.spanById.get(id);
   if (!span) throw new InventoryNotFoundError('span', id);
-  return { span: spanRow(view, span), slices: view.uses.spans.get(id) ?? [] };
+  return { span: spanRow(view, span), slices: view.uses.list('spans', id) };
 }
