@@ -32,9 +32,7 @@ export function demoDatabaseUrl(): Promise<string> {
       await client.query('select pg_advisory_lock($1)', [DEMO_DB_LOCK_KEY]);
       const { rowCount } = await client.query('select 1 from pg_database where datname = $1', [name]);
       if (rowCount === 0) await client.query(`create database "${name}"`);
-      await migrateDatabase(url.toString());
-      const { db, pool } = createDb(url.toString(), { max: 1 });
-      await seedDemo(db, JSON.parse(fs.readFileSync(DEMO_FILE, 'utf8'))).finally(() => pool.end());
+      await migrateAndSeed(url.toString());
     } finally {
       await client.query('select pg_advisory_unlock($1)', [DEMO_DB_LOCK_KEY]).catch(() => undefined);
       await client.end();
@@ -42,6 +40,39 @@ export function demoDatabaseUrl(): Promise<string> {
     return url.toString();
   })();
   return ready;
+}
+
+async function migrateAndSeed(url: string): Promise<void> {
+  await migrateDatabase(url);
+  const { db, pool } = createDb(url, { max: 1 });
+  await seedDemo(db, JSON.parse(fs.readFileSync(DEMO_FILE, 'utf8'))).finally(() => pool.end());
+}
+
+export type FreshDemoDatabase = { url: string; drop(): Promise<void> };
+
+/**
+ * postgres://…/<test db>_<suffix>, dropped if left over, created, migrated and seeded with the demo: a database for
+ * one test file alone (its queue schema too), for tests that run whole processes on it. drop() removes it, closing
+ * any connection a killed process left behind.
+ */
+export async function freshDemoDatabase(suffix: string): Promise<FreshDemoDatabase> {
+  const base = new URL(testDatabaseUrl());
+  const name = `${base.pathname.slice(1)}_${suffix}`;
+  const url = new URL(base);
+  url.pathname = `/${name}`;
+  const admin = async (sql: string) => {
+    const client = new pg.Client({ connectionString: base.toString() });
+    await client.connect();
+    try {
+      await client.query(sql);
+    } finally {
+      await client.end();
+    }
+  };
+  await admin(`drop database if exists "${name}" with (force)`);
+  await admin(`create database "${name}"`);
+  await migrateAndSeed(url.toString());
+  return { url: url.toString(), drop: () => admin(`drop database if exists "${name}" with (force)`) };
 }
 
 /** Server config on the demo database; overrides as environment variables (e.g. JOB_MAINTENANCE_SECONDS). */
