@@ -6,6 +6,7 @@ import { startBackground } from './background';
 import { parseEnvOrExit, type ServerConfig } from './env';
 import { uploadChecks } from './imports/check-thread';
 import { createLogger, lineLog, type Logger } from './log/logger';
+import { inventoryCacheFor } from './services/inventory/inventory-cache';
 import { countInFlight, gracefulShutdown } from './shutdown';
 
 async function main(): Promise<void> {
@@ -21,6 +22,9 @@ async function main(): Promise<void> {
 
 async function serve(config: ServerConfig, logger: Logger): Promise<void> {
   const { db, pool } = createDb(config.databaseUrl);
+  // Builds the inventory now and again after every write any process makes (LISTEN/NOTIFY), off the request path.
+  const inventory = inventoryCacheFor(db);
+  void inventory.listen(config.databaseUrl, (what, err) => logger.warn({ reason: err.message }, what));
   const background = await startBackground({ db, config, log: lineLog(logger.child({ component: 'jobs' })) });
   const app = createApp({ db, pool, config, jobs: background.jobs, logger });
   const server = app.listen(config.port, config.host, () => {
@@ -35,7 +39,7 @@ async function serve(config: ServerConfig, logger: Logger): Promise<void> {
   const shutdown = gracefulShutdown({
     server, logger, graceMs: config.shutdownGraceSeconds * 1000,
     stopBackground: () => background.stop(),
-    closeOthers: [() => uploadChecks.close()],
+    closeOthers: [() => uploadChecks.close(), () => inventory.close()],
     closePools: () => pool.end(),
   }, inFlight);
   process.on('SIGINT', () => shutdown('SIGINT'));

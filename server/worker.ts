@@ -4,6 +4,7 @@ import { createDb } from '../db/client';
 import { startWorkers } from './background';
 import { parseEnvOrExit } from './env';
 import { createLogger, lineLog } from './log/logger';
+import { inventoryCacheFor } from './services/inventory/inventory-cache';
 
 async function main(): Promise<void> {
   const config = parseEnvOrExit();
@@ -13,13 +14,16 @@ async function main(): Promise<void> {
     logger.fatal({ reason: err instanceof Error ? err.message : String(err) }, 'worker could not start');
     process.exit(1);
   });
+  // Plan runs read the compiled inventory; kept current by notifications so a run's input is ready at once.
+  const inventory = inventoryCacheFor(db);
+  void inventory.listen(config.databaseUrl, (what, err) => logger.warn({ reason: err.message }, what));
   logger.info(`Slackwater worker ${process.pid} waiting for jobs (queue schema ${config.jobSchema})`);
   let closing = false;
   const shutdown = (signal: string) => {
     if (closing) return;
     closing = true;
     logger.info({ signal }, 'worker stopping (a run in progress goes back to the queue)');
-    background.stop()
+    Promise.all([background.stop(), inventory.close()])
       .catch((err: unknown) => logger.warn({ reason: err instanceof Error ? err.message : String(err) }, 'worker stop failed'))
       .finally(() => pool.end().finally(() => process.exit(0)));
     setTimeout(() => process.exit(1), (config.shutdownGraceSeconds + 5) * 1000).unref();
