@@ -107,6 +107,7 @@ async function measureAll(server: BenchServer, targets: WindowTargets): Promise<
     method: 'POST', path: `/api/windows/${enc(windows.busiest)}/assess`, body: {} }, SEQUENTIAL_REQUESTS, ROUTE_BUDGET_MS);
   log(`${CONCURRENT_CLIENTS} concurrent clients for ${CONCURRENT_SECONDS} s`);
   const load = await concurrentLoad(loadMix(routes, planner, windows), CONCURRENT_CLIENTS, CONCURRENT_SECONDS);
+  for (const r of load.byRoute) log(`  under load: ${r.label}: ${r.requests} answers, p50 ${Math.round(r.p50)} ms`);
   log('timing the exports');
   const scenarioExport = await timeExportMedian(planner, '/api/export/scenario', EXPORT_RUNS);
   const graphmlExport = await timeExportMedian(planner, '/api/export/graphml', EXPORT_RUNS);

@@ -30,11 +30,16 @@ export async function timeRoute(route: Route, count: number, budgetMs: number): 
   return { route, samples, p50: percentile(samples, 50), p95: percentile(samples, 95), failure: null };
 }
 
-export type LoadResult = { requests: number; errors: number; seconds: number; perSecond: number; p50: number; p99: number };
+export type LoadResult = {
+  requests: number; errors: number; seconds: number; perSecond: number; p50: number; p99: number;
+  /** p50 per route of the mix, to tell which one holds the others up */
+  byRoute: { label: string; requests: number; p50: number }[];
+};
 
 /** `clients` loops sending the routes round-robin until `seconds` have passed; requests under way then still count. */
 export async function concurrentLoad(routes: Route[], clients: number, seconds: number): Promise<LoadResult> {
   const latencies: number[] = [];
+  const byLabel = new Map<string, number[]>(routes.map((r) => [r.label, []]));
   let errors = 0;
   let next = 0;
   const started = performance.now();
@@ -44,7 +49,10 @@ export async function concurrentLoad(routes: Route[], clients: number, seconds: 
       const route = routes[next++ % routes.length];
       const res = await route.client.timed(route.method, route.path, route.body).catch(() => null);
       if (!res || res.status < 200 || res.status > 299) errors += 1;
-      else latencies.push(res.ms);
+      else {
+        latencies.push(res.ms);
+        byLabel.get(route.label)!.push(res.ms);
+      }
     }
   };
   await Promise.all(Array.from({ length: clients }, client));
@@ -52,6 +60,7 @@ export async function concurrentLoad(routes: Route[], clients: number, seconds: 
   return {
     requests: latencies.length + errors, errors, seconds: elapsed, perSecond: latencies.length / elapsed,
     p50: latencies.length ? percentile(latencies, 50) : NaN, p99: latencies.length ? percentile(latencies, 99) : NaN,
+    byRoute: [...byLabel.entries()].map(([label, ms]) => ({ label, requests: ms.length, p50: ms.length ? percentile(ms, 50) : NaN })),
   };
 }
 
