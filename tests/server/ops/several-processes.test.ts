@@ -150,8 +150,10 @@ test('two workers share eight runs sent through an API that works none; a worker
     `select id, (extract(epoch from now() - heartbeat_at) * 1000)::float8 as "ageMs" from plans where status = 'running' and id = any($1)`,
     [planIds])).rows;
   let orphanId: string | undefined;
+  let freezes = 0;
   try {
     while (orphanId === undefined) {
+      freezes += 1;
       await waitWhileAlive('a run on each worker, after a finished run each', [api, ...workers], async () => {
         if (!workers.every((w) => doneLines(w).length > 0)) return undefined;
         return (await running()).length === 2 ? true : undefined;
@@ -160,13 +162,19 @@ test('two workers share eight runs sent through an API that works none; a worker
       await new Promise((r) => setTimeout(r, FROZEN_MS));
       const rows = await running();
       const stale = rows.filter((r) => r.ageMs >= FROZEN_MS - HEARTBEAT_TICK_MS);
-      if (rows.length === 2 && stale.length === 1) orphanId = stale[0].id;
-      else process.kill(-victim.child.pid!, 'SIGCONT');
+      if (rows.length === 2 && stale.length === 1) {
+        orphanId = stale[0].id;
+      } else {
+        // Let it write a heartbeat again before the next try, so that freezes never add up to a stale run.
+        process.kill(-victim.child.pid!, 'SIGCONT');
+        await new Promise((r) => setTimeout(r, 2 * HEARTBEAT_TICK_MS));
+      }
     }
   } finally {
     await client.end();
   }
   await killHard(victim);
+  if (process.env.JOBS_TEST_TIMINGS) console.log(`victim's run told apart after ${freezes} freeze(s)`);
 
   const finished = await waitWhileAlive('every run to end', [api, survivor], async () => {
     const all = await runs();
