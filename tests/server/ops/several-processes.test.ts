@@ -1,6 +1,7 @@
 // Several processes on one PostgreSQL: one API process that works no jobs (WORKER_IN_PROCESS=false) and two
 // `server/worker.ts` processes share the queue. Eight plan runs asked for through the API spread over both workers;
-// one worker is killed (SIGKILL) while both are computing, and the other takes its run over: every run ends done.
+// one worker is frozen while both are computing, known by its run's stopped heartbeat, and killed (SIGKILL); the
+// other worker's sweep takes its run back and every run ends done.
 import { spawn, type ChildProcess } from 'node:child_process';
 import net from 'node:net';
 import path from 'node:path';
