@@ -6,10 +6,14 @@ import type { SliceUse } from '../../../shared/inventory';
 
 type UseKind = 'hosted' | 'transit' | 'spans';
 
+/** How many elements' lists of uses a view keeps once made (least recently asked for goes first). */
+const RECENT_LISTS = 64;
+
 /**
  * Which slices use each site (hosted, transit) and span, as positions in the view's slice list: one small number
  * per (element, slice) rather than an object, so that 20,000 slices cost little to index and to keep. The
- * element's list of uses, with its functions and ties, is made when someone asks for that element.
+ * element's list of uses, with its functions and ties, is made when someone asks for that element (and shared:
+ * callers must not change it).
  */
 export interface UseIndex {
   /** how many slices use the element that way */
@@ -63,7 +67,7 @@ export function buildUseIndex(scenario: Scenario, slices: readonly ScenarioSlice
       else if (list[list.length - 1] !== position) list.push(position);
     });
   });
-  const list = (kind: UseKind, element: string): SliceUse[] => (users[kind].get(element) ?? []).map((position) => {
+  const made = (kind: UseKind, element: string): SliceUse[] => (users[kind].get(element) ?? []).map((position) => {
     const slice = slices[position];
     const use: SliceUse = {
       sliceId: slice.id, sliceName: slice.name, tenantId: slice.tenant,
@@ -76,5 +80,15 @@ export function buildUseIndex(scenario: Scenario, slices: readonly ScenarioSlice
     });
     return use;
   });
+  // The busiest elements are asked for again and again (thousands of uses each): the last few lists are kept.
+  const recent = new Map<string, SliceUse[]>();
+  const list = (kind: UseKind, element: string): SliceUse[] => {
+    const key = `${kind}:${element}`;
+    const kept = recent.get(key) ?? made(kind, element);
+    recent.delete(key);
+    recent.set(key, kept);
+    if (recent.size > RECENT_LISTS) recent.delete(recent.keys().next().value!);
+    return kept;
+  };
   return { count: (kind, element) => users[kind].get(element)?.length ?? 0, list };
 }
