@@ -3,7 +3,7 @@
 import { InvalidOptionError } from '../errors';
 import type { Rng } from '../random/rng';
 import { compareFitness, type Fitness } from './fitness';
-import { bestIndex, initPopulation, makeTrials, selectTrials, type BoundRepair, type DEProblem } from './population';
+import { bestIndex, initPopulation, makeTrials, selectTrials, UNEVALUATED, type BoundRepair, type DEProblem } from './population';
 
 export { compareFitness, compareObjectiveVectors, isFeasible, type Fitness } from './fitness';
 export {
@@ -61,8 +61,9 @@ export function runDE(problem: DEProblem, options: DEOptions, rng: Rng, seeds?: 
   checkDEOptions(options);
   const now = options.now ?? Date.now;
   const startMs = now();
-  const pop = initPopulation(problem, options.population, rng, seeds);
-  let evaluations = pop.x.length;
+  const timeUp = () => options.timeLimitMs !== undefined && now() - startMs >= options.timeLimitMs;
+  const pop = initPopulation(problem, options.population, rng, seeds, timeUp);
+  let evaluations = pop.fit.filter((f) => f !== UNEVALUATED).length;
   let best = bestIndex(pop);
   let bestFit = pop.fit[best];
   const trace: DETracePoint[] = [{ generation: 0, evaluations, best: bestFit }];
@@ -71,7 +72,7 @@ export function runDE(problem: DEProblem, options: DEOptions, rng: Rng, seeds?: 
   let stall = 0;
   let generation = 0;
   while (generation < options.generations) {
-    if (options.timeLimitMs !== undefined && now() - startMs >= options.timeLimitMs) break;
+    if (timeUp()) break;
     if (options.stallGenerations !== undefined && stall >= options.stallGenerations) break;
     generation += 1;
     trials = makeTrials(pop, problem, rng, options, trials);
@@ -79,9 +80,11 @@ export function runDE(problem: DEProblem, options: DEOptions, rng: Rng, seeds?: 
     // unevaluated when time is up lose to their parents (the generation still completes deterministically
     // whenever time is not up).
     const trialFit: Fitness[] = [];
-    for (const t of trials) {
-      const late = options.timeLimitMs !== undefined && trialFit.length > 0 && now() - startMs >= options.timeLimitMs;
-      trialFit.push(late ? { objective: [], violation: Infinity } : problem.evaluate(t));
+    for (let i = 0; i < trials.length; i += 1) {
+      const t = trials[i];
+      const late = trialFit.length > 0 && timeUp();
+      const evaluate = () => (problem.evaluateTrial ? problem.evaluateTrial(t, pop.x[i]) : problem.evaluate(t));
+      trialFit.push(late ? UNEVALUATED : evaluate());
       if (!late) evaluations += 1;
     }
     selectTrials(pop, trials, trialFit);

@@ -10,6 +10,8 @@ export interface DEProblem {
   lower: Float64Array;
   upper: Float64Array;
   evaluate(x: Float64Array): Fitness;
+  /** evaluate a trial made from `parent` (a population member); when given, must equal evaluate(trial) */
+  evaluateTrial?(trial: Float64Array, parent: Float64Array): Fitness;
 }
 
 export interface Population {
@@ -28,8 +30,22 @@ export interface TrialOptions {
   repair?: BoundRepair;
 }
 
-/** Population members: the seeds first (clipped to the bounds), then uniform random points. */
-export function initPopulation(problem: DEProblem, size: number, rng: Rng, seeds: Float64Array[] = []): Population {
+/** Genes in which `a` and `b` differ. */
+function differing(a: Float64Array, b: Float64Array): number {
+  let n = 0;
+  for (let j = 0; j < a.length; j += 1) if (a[j] !== b[j]) n += 1;
+  return n;
+}
+
+/** Fitness of a member that was not evaluated (time ran out): it loses to every evaluated candidate. */
+export const UNEVALUATED: Fitness = { objective: [], violation: Infinity };
+
+/**
+ * Population members: the seeds first (clipped to the bounds), then uniform random points. With
+ * `problem.evaluateTrial`, a member after the first is evaluated as a trial of the nearer of the first two
+ * (seeds are mostly near-copies of those). Once `timeUp` says so, the rest are left UNEVALUATED.
+ */
+export function initPopulation(problem: DEProblem, size: number, rng: Rng, seeds: Float64Array[] = [], timeUp?: () => boolean): Population {
   if (!Number.isInteger(size) || size < 4) throw new InvalidOptionError('population must be an integer ≥ 4');
   const { dimension, lower, upper } = problem;
   const x: Float64Array[] = [];
@@ -41,7 +57,16 @@ export function initPopulation(problem: DEProblem, size: number, rng: Rng, seeds
     }
     x.push(v);
   }
-  return { x, fit: x.map((v) => problem.evaluate(v)) };
+  const fit: Fitness[] = [];
+  for (let i = 0; i < size; i += 1) {
+    if (i > 0 && timeUp?.()) fit.push(UNEVALUATED);
+    else if (i === 0 || !problem.evaluateTrial) fit.push(problem.evaluate(x[i]));
+    else {
+      const parent = i > 1 && differing(x[i], x[1]) < differing(x[i], x[0]) ? x[1] : x[0];
+      fit.push(problem.evaluateTrial(x[i], parent));
+    }
+  }
+  return { x, fit };
 }
 
 function repairGene(v: number, parent: number, lo: number, hi: number, rng: Rng, repair: BoundRepair): number {

@@ -164,4 +164,10 @@ export interface PlanResult {
    * when the search's own was worse or infeasible (the product keeps the better plan; the figures stay honest).
    */
   search?: { objective: Objective; feasible: boolean; usedFallback: 'greedy' | null };
+  /**
+   * DE modes: the greedy plan the search started from, scored as a greedy-mode run would score it (same problem),
+   * and the time such a run would take (building the problem, greedy, scoring). It serves as the greedy reference
+   * without solving the window a second time.
+   */
+  greedy?: { objective: Objective; elapsedMs: number };
 }

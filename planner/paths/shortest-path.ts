@@ -12,6 +12,8 @@ export interface PathOptions {
   minGbps?: number;
   /** give up on anything longer (also prunes the search) */
   maxLatencyMs?: number;
+  /** when given, each bandwidth test is appended as (span, 1 when minGbps fits else 0), in the order made */
+  examined?: number[];
 }
 
 export interface LatencyPath {
@@ -27,7 +29,9 @@ export function spanUsable(net: NetworkModel, span: number, opts: PathOptions): 
   if (opts.siteDown && (opts.siteDown[s.a] || opts.siteDown[s.b])) return false;
   if (opts.minGbps !== undefined) {
     const residual = opts.residualGbps ? opts.residualGbps[span] : s.capacityGbps;
-    if (!fits(opts.minGbps, residual)) return false;
+    const ok = fits(opts.minGbps, residual);
+    opts.examined?.push(span, ok ? 1 : 0);
+    if (!ok) return false;
   }
   return true;
 }

@@ -10,7 +10,7 @@ import { buildInventory, compileWindow } from '../model/build-inventory';
 import type { Inventory, PlanResult, WindowSpec } from '../model/types';
 import { PLAN_DEFAULTS, planWindow, type PlanOptions } from '../remap/plan-window';
 import { buildReview } from '../review/build-review';
-import { exactReference, greedyReference } from './plan-references';
+import { exactReference, greedyFromSearch, greedyReference } from './plan-references';
 
 /** The run was cancelled between two of its phases. */
 export class PlanCancelledError extends PlannerError {
@@ -26,7 +26,7 @@ export interface ComputePlanOptions {
   plan?: Partial<Omit<PlanOptions, 'onProgress' | 'scenario' | 'exact'>>;
   /** the inventory built from the scenario, when the caller already has it */
   inventory?: Inventory;
-  /** reference solvers run after the search: greedy always when asked, exact only on small windows */
+  /** reference solvers: greedy when asked (from the search's own run in DE modes), exact up to EXACT_MAX_SLICES */
   references?: { greedy?: boolean; exact?: boolean };
   /** build the review (needs both references); `reservedFor` names the windows whose plans reserved capacity */
   review?: { reservedFor: string[] };
@@ -74,9 +74,10 @@ export async function computePlan(scenario: Scenario, window: WindowSpec, option
   });
   const wanted = options.references ?? {};
   if (wanted.greedy || wanted.exact) enter('references');
-  // The references solve the search's problem (same options) with their own solver.
+  // The references solve the search's problem (same options) with their own solver. A DE run brings greedy's
+  // plan with it (it started from it), so its time limit covers the greedy reference; exact has its own limit.
   const { mode: _mode, parallel: _parallel, ...shared } = plan;
-  const greedy = wanted.greedy ? await greedyReference(inventory, window, shared) : null;
+  const greedy = wanted.greedy ? greedyFromSearch(result) ?? await greedyReference(inventory, window, shared) : null;
   const exact = wanted.exact ? await exactReference(inventory, window, result, shared) : null;
   if (!options.review) return { inventory, window, result, greedy, exact, review: null };
   if (!greedy) throw new InvalidOptionError('the review needs the greedy reference (options.references.greedy)');

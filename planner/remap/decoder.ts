@@ -4,8 +4,12 @@
 import type { DEProblem, Fitness } from '../de/differential-evolution';
 import type { Objective, SlicePlacement } from '../model/types';
 import { sliceWeight } from '../plan/evaluate-plan';
-import { createClaimState, loadClaimState, releaseHeld, resetClaimState, saveClaimState, type ClaimState } from './claims';
-import { claimPlacement, placeSlice } from './place-slice';
+import { fits } from '../model/tolerance';
+import {
+  createClaimState, loadClaimState, newBlockRecord, releaseHeld, resetClaimState, saveClaimState,
+  STEP_CPU_CHECK, STEP_CPU_CLAIM, STEP_GBPS_CHECK, STEP_SPAN_CLAIM, type BlockRecord, type ClaimState,
+} from './claims';
+import { claimPlacement, placeSlice, replayAttempt } from './place-slice';
 import type { RemapProblem, RemapSlice } from './remap-types';
 
 /** Genes at the middle of their cell, so small DE steps do not flip them. */
@@ -31,6 +35,20 @@ export interface Decoder {
   evaluateFrom(genes: Float64Array, changedBlocks: readonly number[]): Fitness;
   /** block indices in the decode order of `genes` (a fresh array) */
   orderOf(genes: Float64Array): number[];
+  /**
+   * evaluate, keeping a log of every block's decode (written into `into` when given). With the log of `parent`,
+   * blocks whose own genes are unchanged and whose recorded capacity checks still come out the same are replayed
+   * from the parent's log instead of decoded: the same fitness as evaluate, with no path searches for them.
+   */
+  evaluateLogged(genes: Float64Array, parent: DecodeLog | null, into?: DecodeLog): { fitness: Fitness; log: DecodeLog };
+}
+
+/** One decode of a genome, block by block (see Decoder.evaluateLogged). */
+export interface DecodeLog {
+  /** a copy of the genes decoded */
+  genes: Float64Array;
+  /** by block index; records are shared between logs, never changed once made */
+  records: BlockRecord[];
 }
 
 /** Objective vector order: the lexicographic keys, then counts as tie-breakers (fewer is better there too). */
@@ -53,22 +71,138 @@ function sortByKeys(problem: RemapProblem, genes: Float64Array, order: Int32Arra
   order.sort((a, b) => key(a) - key(b) || a - b);
 }
 
-function decodeBlock(problem: RemapProblem, state: ClaimState, block: RemapSlice, genes: Float64Array, sites: Int32Array): SlicePlacement | null {
-  releaseHeld(state, block);
+/** Whether an untouched block may be moved now: not blocked, and the knock-on cap not reached. */
+function mayMoveNow(problem: RemapProblem, state: ClaimState, block: RemapSlice): boolean {
+  return block.blockedReason === undefined && state.knockOnMoves < problem.maxKnockOnMoves;
+}
+
+/** After the placement attempt (or none): unresolved for a touched block, kept where it is for an untouched one. */
+function settle(problem: RemapProblem, state: ClaimState, block: RemapSlice, placed: SlicePlacement | null): SlicePlacement | null {
   if (block.touched) {
-    const placed = block.blockedReason === undefined && genes[block.keepGene] >= 0.5 ? placeSlice(problem, state, block, genes, sites) : null;
     if (placed === null) {
       state.unresolvedWeight += sliceWeight(problem.inv.slices[block.slice].priority);
       state.unresolved += 1;
     }
     return placed;
   }
-  const mayMove = block.blockedReason === undefined && state.knockOnMoves < problem.maxKnockOnMoves;
-  const placed = mayMove ? placeSlice(problem, state, block, genes, sites) : null;
   if (placed !== null) return placed;
   const current = problem.inv.placements[block.slice];
   claimPlacement(problem, state, block.slice, current);
   return current;
+}
+
+/** Decodes one block whose held paths are already released; records into `rec` when given. */
+function decodeReleased(problem: RemapProblem, state: ClaimState, block: RemapSlice, genes: Float64Array, sites: Int32Array, rec: BlockRecord | null): SlicePlacement | null {
+  let attempt: boolean;
+  if (block.touched) attempt = block.blockedReason === undefined && genes[block.keepGene] >= 0.5;
+  else {
+    attempt = mayMoveNow(problem, state, block);
+    if (rec) rec.mayMove = attempt;
+  }
+  state.rec = rec;
+  const placed = attempt ? placeSlice(problem, state, block, genes, sites) : null;
+  state.rec = null;
+  return settle(problem, state, block, placed);
+}
+
+function decodeBlock(problem: RemapProblem, state: ClaimState, block: RemapSlice, genes: Float64Array, sites: Int32Array): SlicePlacement | null {
+  releaseHeld(state, block);
+  return decodeReleased(problem, state, block, genes, sites, null);
+}
+
+/**
+ * Scratch for replayHolds: the block's own claims so far, as (kind, index, amount) triples, and per site and span
+ * the pass that last claimed it (so a check on an element the block has not claimed skips the scan).
+ */
+const pending: number[] = [];
+let pendingCpu = new Uint32Array(0);
+let pendingSpan = new Uint32Array(0);
+let pass = 0;
+// Local copies of the step kinds: read in the hottest loop, where an imported binding may cost a property read.
+const CPU_CHECK = STEP_CPU_CHECK;
+const GBPS_CHECK = STEP_GBPS_CHECK;
+const CPU_CLAIM = STEP_CPU_CLAIM;
+const SPAN_CLAIM = STEP_SPAN_CLAIM;
+
+function nextPass(state: ClaimState): void {
+  if (pendingCpu.length !== state.cpu.length) pendingCpu = new Uint32Array(state.cpu.length);
+  if (pendingSpan.length !== state.gbps.length) pendingSpan = new Uint32Array(state.gbps.length);
+  pass += 1;
+  if (pass === 0xffffffff) {
+    pendingCpu.fill(0);
+    pendingSpan.fill(0);
+    pass = 1;
+  }
+  pending.length = 0;
+}
+
+/**
+ * Whether a recorded decode of the block (held paths already released) would decide the same in `state`: every
+ * capacity check gives the same answer on the values it would read now, including the block's own earlier claims
+ * (subtracted in the same order, so the arithmetic is the decode's own). Then replaying it is exact.
+ */
+function replayHolds(problem: RemapProblem, state: ClaimState, block: RemapSlice, rec: BlockRecord): boolean {
+  if (!block.touched && mayMoveNow(problem, state, block) !== rec.mayMove) return false;
+  const steps = rec.steps;
+  const { cpu, gbps, protectedGbps } = state;
+  nextPass(state);
+  for (let i = 0; i < steps.length; i += 4) {
+    const kind = steps[i];
+    const at = steps[i + 1];
+    const amount = steps[i + 2];
+    if (kind === CPU_CLAIM || kind === SPAN_CLAIM) {
+      pending.push(kind, at, amount);
+      if (kind === CPU_CLAIM) pendingCpu[at] = pass;
+      else pendingSpan[at] = pass;
+      continue;
+    }
+    let value: number;
+    if (kind === CPU_CHECK) {
+      value = cpu[at];
+      if (pendingCpu[at] === pass) {
+        for (let j = 0; j < pending.length; j += 3) if (pending[j] === CPU_CLAIM && pending[j + 1] === at) value -= pending[j + 2];
+      }
+    } else {
+      value = kind === GBPS_CHECK ? gbps[at] : protectedGbps[at];
+      if (pendingSpan[at] === pass) {
+        for (let j = 0; j < pending.length; j += 3) if (pending[j] === SPAN_CLAIM && pending[j + 1] === at) value -= pending[j + 2];
+      }
+    }
+    if (fits(amount, value) !== (steps[i + 3] === 1)) return false;
+  }
+  return true;
+}
+
+/** Replays a record that holds (see replayHolds). */
+function replayBlock(problem: RemapProblem, state: ClaimState, block: RemapSlice, rec: BlockRecord): void {
+  if (rec.attempted && replayAttempt(problem, state, block, rec)) return;
+  settle(problem, state, block, null);
+}
+
+/** Whether the block's own genes (keep, sites, paths; not the order key) are the same in both genomes. */
+function sameBlockGenes(problem: RemapProblem, block: RemapSlice, a: Float64Array, b: Float64Array): boolean {
+  if (block.keepGene >= 0 && a[block.keepGene] !== b[block.keepGene]) return false;
+  for (const k of block.functions) if (a[problem.functions[k].gene] !== b[problem.functions[k].gene]) return false;
+  for (const k of block.ties) if (a[problem.ties[k].gene] !== b[problem.ties[k].gene]) return false;
+  return true;
+}
+
+function runLogged(problem: RemapProblem, state: ClaimState, sites: Int32Array, genes: Float64Array, order: Int32Array, parent: DecodeLog | null, out: BlockRecord[]): void {
+  resetClaimState(problem, state);
+  for (let p = 0; p < order.length; p += 1) {
+    const b = order[p];
+    const block = problem.slices[b];
+    releaseHeld(state, block);
+    const prev = parent ? parent.records[b] : undefined;
+    if (prev !== undefined && sameBlockGenes(problem, block, genes, parent!.genes) && replayHolds(problem, state, block, prev)) {
+      replayBlock(problem, state, block, prev);
+      out[b] = prev;
+    } else {
+      const rec = newBlockRecord();
+      decodeReleased(problem, state, block, genes, sites, rec);
+      out[b] = rec;
+    }
+  }
 }
 
 interface Run {
@@ -137,6 +271,14 @@ export function createDecoder(problem: RemapProblem): Decoder {
       sortByKeys(problem, genes, order);
       return Array.from(order);
     },
+    evaluateLogged(genes, parent, into) {
+      const log = into && into !== parent && into.genes.length === genes.length
+        ? into : { genes: new Float64Array(genes.length), records: new Array<BlockRecord>(n) };
+      sortByKeys(problem, genes, order);
+      runLogged(problem, state, sites, genes, order, parent, log.records);
+      log.genes.set(genes);
+      return { fitness: toFitness(state), log };
+    },
   };
 }
 
@@ -144,9 +286,23 @@ export function decode(problem: RemapProblem, genes: Float64Array): Decoded {
   return createDecoder(problem).decode(genes);
 }
 
-/** The problem as DE sees it: bounds plus an allocation-light evaluator. */
-export function toDEProblem(problem: RemapProblem, decoder: Decoder = createDecoder(problem)): DEProblem {
-  return { dimension: problem.dimension, lower: problem.lower, upper: problem.upper, evaluate: (x) => decoder.evaluate(x) };
+/**
+ * The problem as DE sees it: bounds plus an allocation-light evaluator. `incremental`: trials are evaluated
+ * against their parent's decode log (Decoder.evaluateLogged) — the same fitness, far fewer path searches on
+ * large windows, where a trial re-draws a few slices' genes and the rest replay.
+ */
+export function toDEProblem(problem: RemapProblem, decoder: Decoder = createDecoder(problem), options: { incremental?: boolean } = {}): DEProblem {
+  const base = { dimension: problem.dimension, lower: problem.lower, upper: problem.upper };
+  if (!options.incremental) return { ...base, evaluate: (x) => decoder.evaluate(x) };
+  // Logs by genome buffer: DE reuses and swaps its buffers, so a buffer's log is replaced whenever it is
+  // evaluated again; a log also carries the genes it decoded, so a stale one is never taken for current.
+  const logs = new WeakMap<Float64Array, DecodeLog>();
+  const logged = (x: Float64Array, parent: DecodeLog | null) => {
+    const r = decoder.evaluateLogged(x, parent, logs.get(x));
+    logs.set(x, r.log);
+    return r.fitness;
+  };
+  return { ...base, evaluate: (x) => logged(x, null), evaluateTrial: (trial, parent) => logged(trial, logs.get(parent) ?? null) };
 }
 
 /** Order keys in the problem's block order: knock-on candidates first, then touched slices by priority. */

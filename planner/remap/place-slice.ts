@@ -4,7 +4,9 @@ import { fits } from '../model/tolerance';
 import type { SlicePlacement } from '../model/types';
 import { REROUTE_COST } from '../plan/evaluate-plan';
 import { shortestLatencyPath } from '../paths/shortest-path';
-import { claimCpu, claimPath, commit, mark, undoSince, type ClaimState } from './claims';
+import {
+  claimCpu, claimPath, commit, cpuFits, mark, spanFits, STEP_GBPS_CHECK, STEP_PROTECTED_CHECK, undoSince, type BlockRecord, type ClaimState,
+} from './claims';
 import type { PathList } from './path-catalog';
 import type { RemapProblem, RemapSlice } from './remap-types';
 
@@ -13,8 +15,8 @@ export function geneIndex(gene: number, count: number, range: number): number {
   return i < 0 ? 0 : i >= count ? count - 1 : i;
 }
 
-function pathFits(path: readonly number[], gbps: number, residual: Float64Array): boolean {
-  for (const span of path) if (!fits(gbps, residual[span])) return false;
+function pathFits(state: ClaimState, path: readonly number[], gbps: number, residual: Float64Array): boolean {
+  for (const span of path) if (!spanFits(state, residual, span, gbps)) return false;
   return true;
 }
 
@@ -31,11 +33,11 @@ const REPAIR_PATHS = 3;
 function pickFromCatalogue(list: PathList, gene: number, gbps: number, state: ClaimState): readonly number[] | null {
   const chosen = list.at(Math.max(0, Math.floor(gene)));
   if (chosen === null) return null;
-  if (pathFits(chosen.spans, gbps, state.gbps)) return chosen.spans;
+  if (pathFits(state, chosen.spans, gbps, state.gbps)) return chosen.spans;
   for (const residual of [state.protectedGbps, state.gbps]) {
     for (let i = 0; i < REPAIR_PATHS; i += 1) {
       const p = list.at(i)!;
-      if (p !== chosen && pathFits(p.spans, gbps, residual)) return p.spans;
+      if (p !== chosen && pathFits(state, p.spans, gbps, residual)) return p.spans;
     }
   }
   return null;
@@ -53,13 +55,16 @@ function keptPath(problem: RemapProblem, state: ClaimState, block: RemapSlice, t
   const path = current.paths[tie];
   let latencyMs = 0;
   for (const span of path) {
-    if (problem.spanDown[span] || !fits(t.bandwidthGbps, state.gbps[span])) return null;
+    if (problem.spanDown[span] || !spanFits(state, state.gbps, span, t.bandwidthGbps)) return null;
     latencyMs += problem.inv.network.spans[span].latencyMs;
   }
   if (latencyMs > t.maxLatencyMs) return null;
   if (t.minAvailability !== undefined && availability(problem, path) < t.minAvailability) return null;
   return path;
 }
+
+/** Scratch for the free path search's bandwidth tests. */
+const examined: number[] = [];
 
 /** Routes tie `tie` of the block between the chosen sites; null when nothing fits. Claims nothing. */
 function routeTie(problem: RemapProblem, state: ClaimState, block: RemapSlice, tie: number, sites: Int32Array, gene: number): readonly number[] | null {
@@ -71,10 +76,18 @@ function routeTie(problem: RemapProblem, state: ClaimState, block: RemapSlice, t
   const listed = pickFromCatalogue(problem.paths.get(block.slice, tie, from, to), gene, t.bandwidthGbps, state);
   if (listed !== null) return listed;
   // Beyond the catalogue: the shortest route on what is left, around later slices' current paths first.
+  // The search's bandwidth tests are recorded like the other checks: with the same answers it finds the same route.
   for (const o of [state.protectedOptions, state.pathOptions]) {
     o.minGbps = t.bandwidthGbps;
     o.maxLatencyMs = t.maxLatencyMs;
+    o.examined = state.rec ? examined : undefined;
+    examined.length = 0;
     const found = shortestLatencyPath(problem.inv.network, from, to, o);
+    o.examined = undefined;
+    if (state.rec) {
+      const kind = o === state.pathOptions ? STEP_GBPS_CHECK : STEP_PROTECTED_CHECK;
+      for (let i = 0; i < examined.length; i += 2) state.rec.steps.push(kind, examined[i], t.bandwidthGbps, examined[i + 1]);
+    }
     if (found && (t.minAvailability === undefined || availability(problem, found.spans) >= t.minAvailability)) return found.spans;
   }
   return null;
@@ -110,26 +123,52 @@ function tally(problem: RemapProblem, state: ClaimState, slice: number, sites: A
 export function placeSlice(problem: RemapProblem, state: ClaimState, block: RemapSlice, genes: Float64Array, sites: Int32Array): SlicePlacement | null {
   const slice = problem.inv.slices[block.slice];
   const m = mark(state);
+  const rec = state.rec;
+  if (rec) rec.attempted = true;
   for (let fn = 0; fn < block.functions.length; fn += 1) {
     const f = problem.functions[block.functions[fn]];
     const cpu = slice.functions[fn].cpu;
     let i = geneIndex(genes[f.gene], f.candidates.length, f.candidates.length);
-    if (!fits(cpu, state.cpu[f.candidates[i]])) i = f.candidates.findIndex((site) => fits(cpu, state.cpu[site]));
+    if (!cpuFits(state, f.candidates[i], cpu)) i = f.candidates.findIndex((site) => cpuFits(state, site, cpu));
     if (i < 0) { undoSince(state, m); return null; }
     sites[fn] = f.candidates[i];
+    rec?.sites.push(sites[fn]);
     claimCpu(state, sites[fn], cpu);
   }
   const paths: number[][] = [];
   for (let tie = 0; tie < block.ties.length; tie += 1) {
     const path = routeTie(problem, state, block, tie, sites, genes[problem.ties[block.ties[tie]].gene]);
     if (path === null) { undoSince(state, m); return null; }
+    rec?.paths.push(path);
     claimPath(problem, state, path, slice.ties[tie].bandwidthGbps);
     paths.push(path as number[]);
   }
+  if (rec) rec.placed = true;
+  return finishPlacement(problem, state, block, Array.from(sites.subarray(0, block.functions.length)), paths);
+}
+
+/** The block's claims are complete: commits them and counts the move. */
+function finishPlacement(problem: RemapProblem, state: ClaimState, block: RemapSlice, sites: number[], paths: number[][]): SlicePlacement {
   commit(state);
-  const placement = { sites: Array.from(sites.subarray(0, block.functions.length)), paths };
+  const placement = { sites, paths };
   if (tally(problem, state, block.slice, placement.sites, paths) && !block.touched) state.knockOnMoves += 1;
   return placement;
+}
+
+/**
+ * Claims what a recorded attempt claimed, in the same order and with the same arithmetic, without deciding
+ * anything: the caller has checked that the attempt would decide the same now (see BlockRecord). Returns whether
+ * the slice was placed (else its claims were taken back); the placement itself is the record's.
+ */
+export function replayAttempt(problem: RemapProblem, state: ClaimState, block: RemapSlice, rec: BlockRecord): boolean {
+  const slice = problem.inv.slices[block.slice];
+  const m = mark(state);
+  for (let fn = 0; fn < rec.sites.length; fn += 1) claimCpu(state, rec.sites[fn], slice.functions[fn].cpu);
+  for (let tie = 0; tie < rec.paths.length; tie += 1) claimPath(problem, state, rec.paths[tie], slice.ties[tie].bandwidthGbps);
+  if (!rec.placed) { undoSince(state, m); return false; }
+  commit(state);
+  if (tally(problem, state, block.slice, rec.sites, rec.paths) && !block.touched) state.knockOnMoves += 1;
+  return true;
 }
 
 /**

@@ -35,6 +35,8 @@ interface Search {
   genes?: Float64Array;
   /** DE modes: the search's own result before any fallback */
   alone?: PlanResult['search'];
+  /** DE modes: the greedy plan's score and the time to get it (see PlanResult.greedy) */
+  greedy?: PlanResult['greedy'];
 }
 
 function toTrace(points: DETracePoint[]): TracePoint[] {
@@ -43,14 +45,45 @@ function toTrace(points: DETracePoint[]): TracePoint[] {
   }));
 }
 
+/**
+ * Genes a trial takes from its mutant, on average, at most: on a window touching thousands of slices the
+ * genome has tens of thousands of genes, and CR = 0.1 would re-draw most slices in every trial (almost every
+ * such trial loses to its parent, and none can be evaluated incrementally). Capping the expected count keeps
+ * trials a few slices away from their parents, as on small windows. Genomes up to MAX_TRIAL_GENES / CR genes
+ * (320 at the default CR) keep the given CR.
+ */
+export const MAX_TRIAL_GENES = 32;
+
+export function crossoverRate(problem: Pick<RemapProblem, 'dimension'>, CR: number): number {
+  return Math.min(CR, MAX_TRIAL_GENES / Math.max(1, problem.dimension));
+}
+
+/**
+ * Genomes longer than this many genes get a smaller population, in proportion (never below BIG_MIN_POPULATION):
+ * a window touching a thousand slices has over 10,000 genes, every trial still replays every slice's decode
+ * (tens of milliseconds), and with the full population the search ran only a handful of generations in its
+ * limit. Its members are near-copies of the greedy and stay-put plans either way, so generations — steps of
+ * improvement — count for more there than the population's breadth.
+ */
+export const BIG_GENOME_GENES = 2000;
+const BIG_MIN_POPULATION = 6;
+
+export function populationFor(problem: Pick<RemapProblem, 'dimension'>, population: number): number {
+  if (problem.dimension <= BIG_GENOME_GENES) return population;
+  return Math.min(population, Math.max(BIG_MIN_POPULATION, Math.floor((population * BIG_GENOME_GENES) / problem.dimension)));
+}
+
 /** Serial DE, or the parallel runner; both seeded with stay-put and greedy genes. */
 async function evolve(problem: RemapProblem, decoder: Decoder, o: PlanOptions, seeds: Float64Array[], startMs: number, now: () => number): Promise<Search> {
-  const timeLimitMs = Math.max(0, o.timeLimitMs * (1 - FINAL_POLISH_SHARE - FINISH_SHARE) - (now() - startMs));
+  const timeLimitMs = Math.max(0, o.timeLimitMs * (1 - FINAL_POLISH_SHARE) - finishMs(problem, o) - (now() - startMs));
   const report = (generation: number, evaluations: number, best: TracePoint['best']) =>
     o.onProgress?.({ generation, evaluations, best, elapsedMs: now() - startMs });
-  const de = { population: o.population, F: o.F, CR: o.CR, generations: o.generations, stallGenerations: o.stallGenerations, timeLimitMs };
+  const de = {
+    population: populationFor(problem, o.population), F: o.F, CR: crossoverRate(problem, o.CR), generations: o.generations,
+    stallGenerations: o.stallGenerations, timeLimitMs,
+  };
   if (o.mode === 'serial') {
-    const r = runDE(toDEProblem(problem, decoder), {
+    const r = runDE(toDEProblem(problem, decoder, { incremental: true }), {
       ...de, now, onGeneration: (g, best, evaluations) => report(g, evaluations, objectiveFromFitness(best)),
     }, createRng(o.seed), seeds);
     return { next: decoder.decode(r.best).next, trace: toTrace(r.trace), feasible: r.fitness.violation <= 0, genes: r.best };
@@ -69,15 +102,22 @@ async function evolve(problem: RemapProblem, decoder: Decoder, o: PlanOptions, s
   return { next: decoded.next, trace: toTrace(r.trace), feasible: decoded.fitness.violation <= 0, genes: r.best };
 }
 
+/**
+ * Slices a wide initial member re-draws at most: a fifth of a window touching a thousand slices is hundreds of
+ * new end-site pairs per member, each a path search the first time, and the first population alone then took
+ * the whole time limit.
+ */
+const WIDE_MAX_SLICES = 30;
+
 /** Stay-put and greedy first, then perturbed copies of them (a few slices re-drawn, or many for a quarter). */
 function initialMembers(problem: RemapProblem, greedyGenes: Float64Array, o: PlanOptions): Float64Array[] {
   const bases = [greedyGenes, stayPutGenes(problem)];
-  const rest = Math.max(0, o.population - bases.length);
+  const rest = Math.max(0, populationFor(problem, o.population) - bases.length);
   const near = Math.floor((rest * 3) / 4);
   const rng = createRng(deriveSeed(o.seed, SEEDING_STREAM));
   // The last quarter re-draws up to a fifth of the slices, for diversity. Uniformly random members would be
   // hopeless on a genome this size, and on large windows each costs a path search for nearly every tie.
-  const wide = Math.max(3, Math.ceil(problem.slices.length / 5));
+  const wide = Math.min(WIDE_MAX_SLICES, Math.max(3, Math.ceil(problem.slices.length / 5)));
   return [...bases, ...perturbedSeeds(problem, bases, near, rng), ...perturbedSeeds(problem, bases, rest - near, rng, wide)];
 }
 
@@ -100,6 +140,15 @@ const SEED_POLISH_SHARE = 0.15;
 const FINAL_POLISH_SHARE = 0.15;
 /** Left at the end for scoring, explaining and verifying the plan, so the whole run keeps its time limit. */
 const FINISH_SHARE = 0.03;
+/**
+ * …and at least this long per block: scoring, explaining and verifying a plan, then the review, grow with the
+ * slices re-placed (about 2 s for 1,400 slices on a shared core), which 3 % of a 20 s limit does not cover.
+ */
+const FINISH_MS_PER_BLOCK = 1.5;
+
+function finishMs(problem: RemapProblem, o: PlanOptions): number {
+  return Math.min(o.timeLimitMs / 4, Math.max(o.timeLimitMs * FINISH_SHARE, FINISH_MS_PER_BLOCK * problem.slices.length));
+}
 
 function polishFound(problem: RemapProblem, decoder: Decoder, found: Search, budget: number, o: PlanOptions, timeUp: () => boolean): Search {
   if (!found.genes) return found;
@@ -111,7 +160,9 @@ function polishFound(problem: RemapProblem, decoder: Decoder, found: Search, bud
 
 async function search(problem: RemapProblem, o: PlanOptions, startMs: number, now: () => number): Promise<Search> {
   const decoder = createDecoder(problem);
+  const greedyStartMs = now();
   const greedy = greedyPlan(problem);
+  const greedyMs = now() - greedyStartMs;
   const greedyFit = decoder.evaluate(greedy.genes);
   const greedyPoint: TracePoint = { generation: 0, evaluations: 1, best: objectiveFromFitness(greedyFit), feasible: greedyFit.violation <= 0 };
   if (o.mode === 'greedy' || problem.slices.length === 0) return { next: greedy.next, trace: [greedyPoint] };
@@ -126,15 +177,18 @@ async function search(problem: RemapProblem, o: PlanOptions, startMs: number, no
   const until = (share: number) => () => now() - startMs >= o.timeLimitMs * share;
   const seed = localSearch(problem, decoder, greedy.genes, budget, until(SEED_POLISH_SHARE)).genes;
   const evolved = await evolve(problem, decoder, o, initialMembers(problem, seed, o), startMs, now);
-  const found = polishFound(problem, decoder, evolved, budget, o, until(1 - FINISH_SHARE));
+  const found = polishFound(problem, decoder, evolved, budget, o, () => now() - startMs >= o.timeLimitMs - finishMs(problem, o));
   // The product keeps the better of the search's plan and greedy's; `alone` records the search's own figures,
   // so benchmarks and tests judge the search, not the fallback.
   const score = (next: Map<number, SlicePlacement | null>) =>
     evaluatePlan(problem.inv, problem.window, finalPlan(problem, next).next, problem.options.reservations);
   const own = score(found.next);
-  const better = found.feasible === true && compareObjectives(own, score(greedy.next)) <= 0;
+  const scoreStartMs = now();
+  const greedyObjective = score(greedy.next);
+  const greedyRun = { objective: greedyObjective, elapsedMs: (greedyStartMs - startMs) + greedyMs + (now() - scoreStartMs) };
+  const better = found.feasible === true && compareObjectives(own, greedyObjective) <= 0;
   const alone = { objective: own, feasible: found.feasible === true, usedFallback: better ? null : ('greedy' as const) };
-  return better ? { ...found, alone } : { ...found, next: greedy.next, alone };
+  return better ? { ...found, alone, greedy: greedyRun } : { ...found, next: greedy.next, alone, greedy: greedyRun };
 }
 
 function checkOptions(o: PlanOptions): void {
@@ -171,5 +225,6 @@ export async function planWindow(inv: Inventory, window: WindowSpec, options: Pa
   };
   if (found.exact) result.exact = found.exact;
   if (found.alone) result.search = found.alone;
+  if (found.greedy) result.greedy = found.greedy;
   return result;
 }

@@ -78,9 +78,22 @@ describe('runDE', () => {
     const stalled = runDE(flat, { population: 6, F: 0.5, CR: 0.9, generations: 100, stallGenerations: 5 }, createRng(1));
     expect(stalled.generations).toBe(5);
     let t = 0;
-    const timed = runDE(flat, { population: 6, F: 0.5, CR: 0.9, generations: 100, timeLimitMs: 30, now: () => (t += 10) }, createRng(1));
+    const timed = runDE(flat, { population: 6, F: 0.5, CR: 0.9, generations: 100, timeLimitMs: 30, now: () => (t += 2) }, createRng(1));
     expect(timed.generations).toBeLessThan(100);
     expect(timed.generations).toBeGreaterThan(0);
+  });
+
+  it('evaluates the first population within the time limit too, leaving the rest unevaluated', () => {
+    let t = 0;
+    let evaluated = 0;
+    const counted = { ...boxProblem(sphere, 2, -1, 1) };
+    const evaluate = counted.evaluate;
+    counted.evaluate = (x) => { evaluated += 1; return evaluate(x); };
+    const r = runDE(counted, { population: 10, F: 0.5, CR: 0.9, generations: 100, timeLimitMs: 30, now: () => (t += 10) }, createRng(1));
+    expect(r.generations).toBe(0);
+    expect(r.evaluations).toBe(evaluated);
+    expect(evaluated).toBeLessThan(10);
+    expect(r.fitness.violation).toBe(0);
   });
 
   it('rejects F, CR and population outside their ranges', () => {
