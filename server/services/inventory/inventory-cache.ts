@@ -10,7 +10,9 @@ import { selectInventoryRevision } from '../../queries/inventory/inventory-revis
 import { selectScenarioTables } from '../../queries/inventory/scenario-tables';
 import { InventoryListener } from './inventory-listener';
 import { tablesToScenario } from './load-network-scenario';
-import { compileInventory, loadInventoryView, viewOf, type CompiledInventory, type InventoryView } from './inventory-view';
+import {
+  compileInventory, loadInventoryView, sliceFactsOf, viewOf, type CompiledInventory, type InventoryView,
+} from './inventory-view';
 import { warmLists, yieldToLoop } from './warm-lists';
 
 /** How many tenants' views one revision keeps (least recently used goes first). */
@@ -34,7 +36,7 @@ export async function buildCompiledInventory(db: Queryable): Promise<BuiltInvent
   await yieldToLoop();
   const inventory = buildInventory(scenario);
   await yieldToLoop();
-  return { revision, compiled: { tables, scenario, inventory } };
+  return { revision, compiled: { scenario, inventory, sliceFacts: sliceFactsOf(tables) } };
 }
 
 type Snapshot = { revision: number; compiled: CompiledInventory; staff: InventoryView; tenants: Map<string, InventoryView> };
@@ -150,7 +152,7 @@ export class InventoryCache {
 
   private async rebuild(): Promise<Snapshot> {
     const { revision, compiled } = await this.build(this.db);
-    if (this.freeze) { deepFreeze(compiled.scenario); deepFreeze(compiled.tables); }
+    if (this.freeze) deepFreeze(compiled.scenario);
     const snap: Snapshot = { revision, compiled, staff: viewOf(compiled, null), tenants: new Map() };
     await yieldToLoop();
     await warmLists(snap.staff);

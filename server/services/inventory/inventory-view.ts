@@ -13,7 +13,8 @@ export interface InventoryView {
   tenantId: string | null;
   scenario: Scenario;
   inventory: Inventory;
-  tables: ScenarioTables;
+  /** what the scenario format does not carry: each slice's status and current placement revision */
+  sliceFacts: SliceFacts;
   /** what the asker may see: every element for staff, the tenant's footprint for a tenant user */
   sites: ScenarioSite[];
   spans: ScenarioSpan[];
@@ -52,21 +53,34 @@ function loadsOf(inventory: Inventory, slices: readonly ScenarioSlice[]) {
   return { cpuUsed, gbpsUsed };
 }
 
+export interface SliceFacts {
+  status: Map<string, string>;
+  revision: Map<string, number>;
+}
+
 /** One revision's inventory as read and compiled: the base every view of that revision shares. */
 export interface CompiledInventory {
-  tables: ScenarioTables;
   scenario: Scenario;
   inventory: Inventory;
+  sliceFacts: SliceFacts;
+}
+
+/** The row data the lists need beyond the scenario; the rows themselves are not kept (they would double the memory). */
+export function sliceFactsOf(tables: ScenarioTables): SliceFacts {
+  return {
+    status: new Map(tables.sliceRows.map((s) => [s.id, s.status])),
+    revision: new Map(tables.placementRows.map((p) => [p.sliceId, p.revision])),
+  };
 }
 
 export function compileInventory(tables: ScenarioTables): CompiledInventory {
   const scenario = tablesToScenario(tables);
-  return { tables, scenario, inventory: buildInventory(scenario) };
+  return { scenario, inventory: buildInventory(scenario), sliceFacts: sliceFactsOf(tables) };
 }
 
 /** What one asker may see of a compiled inventory (null = network-wide), with its loads and use index. */
 export function viewOf(compiled: CompiledInventory, tenantId: string | null): InventoryView {
-  const { scenario, inventory, tables } = compiled;
+  const { scenario, inventory, sliceFacts } = compiled;
   const slices = tenantId === null ? scenario.slices : scenario.slices.filter((s) => s.tenant === tenantId);
   let sites = scenario.sites;
   let spans = scenario.spans;
@@ -76,7 +90,7 @@ export function viewOf(compiled: CompiledInventory, tenantId: string | null): In
     spans = spans.filter((s) => seen.spans.has(s.id));
   }
   return {
-    tenantId, scenario, inventory, tables, sites, spans, slices,
+    tenantId, scenario, inventory, sliceFacts, sites, spans, slices,
     siteById: new Map(sites.map((s) => [s.id, s])),
     spanById: new Map(spans.map((s) => [s.id, s])),
     ...loadsOf(inventory, slices),

@@ -8,9 +8,8 @@ const sum = (xs: readonly number[]) => xs.reduce((a, b) => a + b, 0);
 
 /** Row builder with the per-request look-ups (tenant names, status, current revision) made once. */
 function sliceRowBuilder(view: InventoryView): (slice: ScenarioSlice) => SliceRow {
-  const tenantNames = new Map(view.tables.tenantRows.map((t) => [t.id, t.name]));
-  const status = new Map(view.tables.sliceRows.map((s) => [s.id, s.status]));
-  const revision = new Map(view.tables.placementRows.map((p) => [p.sliceId, p.revision]));
+  const tenantNames = new Map(view.scenario.tenants.map((t) => [t.id, t.name]));
+  const { status, revision } = view.sliceFacts;
   return (slice) => ({
     id: slice.id,
     name: slice.name,
