@@ -28,10 +28,13 @@ export interface BlockRecord {
   paths: (readonly number[])[];
   /** the attempt placed the whole slice (else its claims were taken back) */
   placed: boolean;
+  /** placed: the move cost terms in the order added, and the move's kind (0 same, 1 rerouted, 2 moved) */
+  moveTerms: number[];
+  move: number;
 }
 
 export function newBlockRecord(): BlockRecord {
-  return { steps: [], mayMove: false, attempted: false, sites: [], paths: [], placed: false };
+  return { steps: [], mayMove: false, attempted: false, sites: [], paths: [], placed: false, moveTerms: [], move: 0 };
 }
 
 /** Running totals of one decode; the residual arrays are working copies that claims consume. */

@@ -99,21 +99,31 @@ function samePath(a: readonly number[], b: readonly number[]): boolean {
   return true;
 }
 
-/** Move cost and counts of a placed slice against its current placement; true when it differs. */
-function tally(problem: RemapProblem, state: ClaimState, slice: number, sites: ArrayLike<number>, paths: readonly (readonly number[])[]): boolean {
+/** What tally found: the slice stays as it was, only reroutes, or moves a function. */
+const SAME = 0;
+const REROUTED = 1;
+const MOVED = 2;
+
+/** Adds the move to the totals: its move cost terms in order, then the moved or rerouted count. */
+function countMove(state: ClaimState, terms: readonly number[], kind: number): void {
+  for (let i = 0; i < terms.length; i += 1) state.moveCost += terms[i];
+  if (kind === MOVED) state.moved += 1;
+  else if (kind === REROUTED) state.rerouted += 1;
+}
+
+/** Move cost terms (in the order they are added) and kind of a placed slice's move against its current placement. */
+function tally(problem: RemapProblem, slice: number, sites: ArrayLike<number>, paths: readonly (readonly number[])[], terms: number[]): number {
   const info = problem.inv.slices[slice];
   const current = problem.inv.placements[slice];
   let moved = false;
   let changed = false;
   info.functions.forEach((f, fn) => {
-    if (sites[fn] !== current.sites[fn]) { moved = true; state.moveCost += f.moveCost; }
+    if (sites[fn] !== current.sites[fn]) { moved = true; terms.push(f.moveCost); }
   });
   paths.forEach((path, tie) => {
-    if (!samePath(path, current.paths[tie])) { changed = true; state.moveCost += REROUTE_COST; }
+    if (!samePath(path, current.paths[tie])) { changed = true; terms.push(REROUTE_COST); }
   });
-  if (moved) state.moved += 1;
-  else if (changed) state.rerouted += 1;
-  return moved || changed;
+  return moved ? MOVED : changed ? REROUTED : SAME;
 }
 
 /**
@@ -147,12 +157,15 @@ export function placeSlice(problem: RemapProblem, state: ClaimState, block: Rema
   return finishPlacement(problem, state, block, Array.from(sites.subarray(0, block.functions.length)), paths);
 }
 
-/** The block's claims are complete: commits them and counts the move. */
+/** The block's claims are complete: commits them and counts the move (kept in the record, for replays). */
 function finishPlacement(problem: RemapProblem, state: ClaimState, block: RemapSlice, sites: number[], paths: number[][]): SlicePlacement {
   commit(state);
-  const placement = { sites, paths };
-  if (tally(problem, state, block.slice, placement.sites, paths) && !block.touched) state.knockOnMoves += 1;
-  return placement;
+  const terms = state.rec ? state.rec.moveTerms : [];
+  const kind = tally(problem, block.slice, sites, paths, terms);
+  if (state.rec) state.rec.move = kind;
+  countMove(state, terms, kind);
+  if (kind !== SAME && !block.touched) state.knockOnMoves += 1;
+  return { sites, paths };
 }
 
 /**
@@ -167,7 +180,8 @@ export function replayAttempt(problem: RemapProblem, state: ClaimState, block: R
   for (let tie = 0; tie < rec.paths.length; tie += 1) claimPath(problem, state, rec.paths[tie], slice.ties[tie].bandwidthGbps);
   if (!rec.placed) { undoSince(state, m); return false; }
   commit(state);
-  if (tally(problem, state, block.slice, rec.sites, rec.paths) && !block.touched) state.knockOnMoves += 1;
+  countMove(state, rec.moveTerms, rec.move);
+  if (rec.move !== SAME && !block.touched) state.knockOnMoves += 1;
   return true;
 }
 
