@@ -151,6 +151,9 @@ export class InventoryCache {
   }
 
   private async rebuild(): Promise<Snapshot> {
+    // Every reader from now on waits for the newer revision, so the old one is let go before the new one is read:
+    // the process then keeps one revision alive while building, not two (at 20,000 slices one is about 200 MB of heap).
+    this.snapshot = null;
     const { revision, compiled } = await this.build(this.db);
     if (this.freeze) deepFreeze(compiled.scenario);
     const snap: Snapshot = { revision, compiled, staff: viewOf(compiled, null), tenants: new Map() };
