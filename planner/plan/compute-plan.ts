@@ -10,7 +10,7 @@ import { buildInventory, compileWindow } from '../model/build-inventory';
 import type { Inventory, PlanResult, WindowSpec } from '../model/types';
 import { PLAN_DEFAULTS, planWindow, type PlanOptions } from '../remap/plan-window';
 import { buildReview } from '../review/build-review';
-import { exactReference, greedyFromSearch, greedyReference } from './plan-references';
+import { EXACT_TIME_LIMIT_MS, exactReference, greedyFromSearch, greedyReference } from './plan-references';
 
 /** The run was cancelled between two of its phases. */
 export class PlanCancelledError extends PlannerError {
@@ -78,7 +78,9 @@ export async function computePlan(scenario: Scenario, window: WindowSpec, option
   // plan with it (it started from it), so its time limit covers the greedy reference; exact has its own limit.
   const { mode: _mode, parallel: _parallel, ...shared } = plan;
   const greedy = wanted.greedy ? greedyFromSearch(result) ?? await greedyReference(inventory, window, shared) : null;
-  const exact = wanted.exact ? await exactReference(inventory, window, result, shared) : null;
+  // Exact gets its own limit, but at most twice the search's: the plan job's queue expiry allows a run about three
+  // times its limit (server/services/plans/expire.ts), and greedy no longer takes any of that.
+  const exact = wanted.exact ? await exactReference(inventory, window, result, shared, Math.min(EXACT_TIME_LIMIT_MS, 2 * timeLimitMs)) : null;
   if (!options.review) return { inventory, window, result, greedy, exact, review: null };
   if (!greedy) throw new InvalidOptionError('the review needs the greedy reference (options.references.greedy)');
   enter('finishing');

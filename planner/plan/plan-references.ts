@@ -15,7 +15,7 @@ import { planWindow, type PlanOptions } from '../remap/plan-window';
  */
 export const EXACT_MAX_SLICES = 100;
 export const EXACT_MAX_DECISIONS = 800;
-/** HiGHS's own time budget, apart from the search's limit. */
+/** HiGHS's own time budget, apart from the search's limit (the plan job gives it at most twice the search's, see computePlan). */
 export const EXACT_TIME_LIMIT_MS = 60_000;
 /**
  * Candidate paths per tie in the integer program: every simple path while a pair of sites has at most 20
@@ -74,8 +74,8 @@ function skipped(inv: Inventory, result: PlanResult): ReferenceResult | null {
 }
 
 /** Why an exact run that stopped at its limit is not proven: its gap to the best bound, when it has one. */
-function stoppedNote(gap: number, bound: number): string {
-  const limit = `Stopped at the ${EXACT_TIME_LIMIT_MS / 1000} s limit before proving the optimum`;
+function stoppedNote(gap: number, bound: number, limitMs: number): string {
+  const limit = `Stopped at the ${Number((limitMs / 1000).toFixed(1))} s limit before proving the optimum`;
   if (!(bound > 0) || !Number.isFinite(gap)) return `${limit}; it proved no bound above zero.`;
   return `${limit}; its plan is within ${(100 * gap).toFixed(1)} % of the best proven bound.`;
 }
@@ -85,7 +85,7 @@ function stoppedNote(gap: number, bound: number): string {
  * program lists, the note says the proof covers the listed routes only.
  */
 export async function exactReference(
-  inv: Inventory, window: WindowSpec, result: PlanResult, options: Partial<PlanOptions>,
+  inv: Inventory, window: WindowSpec, result: PlanResult, options: Partial<PlanOptions>, limitMs = EXACT_TIME_LIMIT_MS,
 ): Promise<ReferenceResult> {
   const skip = skipped(inv, result);
   if (skip) return skip;
@@ -95,10 +95,10 @@ export async function exactReference(
   // The hook records whether every route was in the program, which planWindow's result does not carry.
   const exact = exactSolverFor(EXACT_PATHS, (r) => { seen.complete = r.complete; });
   try {
-    const r = await planWindow(inv, window, { ...options, mode: 'exact', timeLimitMs: EXACT_TIME_LIMIT_MS, exact });
+    const r = await planWindow(inv, window, { ...options, mode: 'exact', timeLimitMs: limitMs, exact });
     const figures = r.exact;
     const notes = [
-      figures && !figures.optimal ? stoppedNote(figures.gap, figures.bound) : '',
+      figures && !figures.optimal ? stoppedNote(figures.gap, figures.bound, limitMs) : '',
       seen.complete ? '' : `The program lists the ${EXACT_PATHS.kPaths} shortest routes per tie (and its current one), so its optimum covers those routes, not every route.`,
     ].filter(Boolean);
     return {
