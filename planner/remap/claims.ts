@@ -171,6 +171,30 @@ export function claimPath(problem: RemapProblem, state: ClaimState, path: readon
   }
 }
 
+/**
+ * claimCpu and claimPath for claims that are final at once (a replayed slice that was placed whole): the same
+ * arithmetic, without the undo log, which commit would empty straight away.
+ */
+export function claimFinal(problem: RemapProblem, state: ClaimState, block: RemapSlice, sites: readonly number[], paths: readonly (readonly number[])[]): void {
+  const info = problem.inv.slices[block.slice];
+  const { cpu, gbps, protectedGbps } = state;
+  for (let fn = 0; fn < sites.length; fn += 1) cpu[sites[fn]] -= info.functions[fn].cpu;
+  const spans = problem.inv.network.spans;
+  const capacity = problem.capacityGbps;
+  for (let tie = 0; tie < paths.length; tie += 1) {
+    const amount = info.ties[tie].bandwidthGbps;
+    const path = paths[tie];
+    for (let i = 0; i < path.length; i += 1) {
+      const span = path[i];
+      gbps[span] -= amount;
+      protectedGbps[span] -= amount;
+      state.usage += amount * spans[span].latencyMs;
+      const cap = capacity[span];
+      if (cap > 0) state.peakUtilisation = Math.max(state.peakUtilisation, (cap - gbps[span]) / cap);
+    }
+  }
+}
+
 /** Marks the start of one slice's claims; `undoSince` takes them back. */
 export interface Mark { log: number; usage: number; peak: number }
 

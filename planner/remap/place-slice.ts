@@ -5,7 +5,7 @@ import type { SlicePlacement } from '../model/types';
 import { REROUTE_COST } from '../plan/evaluate-plan';
 import { shortestLatencyPath } from '../paths/shortest-path';
 import {
-  claimCpu, claimPath, commit, cpuFits, mark, spanFits, STEP_GBPS_CHECK, STEP_PROTECTED_CHECK, undoSince, type BlockRecord, type ClaimState,
+  claimCpu, claimFinal, claimPath, commit, cpuFits, mark, spanFits, STEP_GBPS_CHECK, STEP_PROTECTED_CHECK, undoSince, type BlockRecord, type ClaimState,
 } from './claims';
 import type { PathList } from './path-catalog';
 import type { RemapProblem, RemapSlice } from './remap-types';
@@ -174,11 +174,15 @@ function finishPlacement(problem: RemapProblem, state: ClaimState, block: RemapS
  * the slice was placed (else its claims were taken back); the placement itself is the record's.
  */
 export function replayAttempt(problem: RemapProblem, state: ClaimState, block: RemapSlice, rec: BlockRecord): boolean {
-  const slice = problem.inv.slices[block.slice];
-  const m = mark(state);
-  for (let fn = 0; fn < rec.sites.length; fn += 1) claimCpu(state, rec.sites[fn], slice.functions[fn].cpu);
-  for (let tie = 0; tie < rec.paths.length; tie += 1) claimPath(problem, state, rec.paths[tie], slice.ties[tie].bandwidthGbps);
-  if (!rec.placed) { undoSince(state, m); return false; }
+  if (!rec.placed) {
+    const slice = problem.inv.slices[block.slice];
+    const m = mark(state);
+    for (let fn = 0; fn < rec.sites.length; fn += 1) claimCpu(state, rec.sites[fn], slice.functions[fn].cpu);
+    for (let tie = 0; tie < rec.paths.length; tie += 1) claimPath(problem, state, rec.paths[tie], slice.ties[tie].bandwidthGbps);
+    undoSince(state, m);
+    return false;
+  }
+  claimFinal(problem, state, block, rec.sites, rec.paths);
   commit(state);
   countMove(state, rec.moveTerms, rec.move);
   if (rec.move !== SAME && !block.touched) state.knockOnMoves += 1;
