@@ -159,7 +159,9 @@ export class InventoryCache {
     const snap: Snapshot = { revision, compiled, staff: viewOf(compiled, null), tenants: new Map() };
     await yieldToLoop();
     await warmLists(snap.staff);
-    if (!this.snapshot || this.snapshot.revision <= revision) this.snapshot = snap;
+    // Another build may have finished meanwhile (TypeScript cannot see that across the awaits, hence the cast).
+    const held = this.snapshot as Snapshot | null;
+    if (!held || held.revision <= revision) this.snapshot = snap;
     this.builds += 1;
     return snap;
   }
