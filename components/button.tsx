@@ -30,7 +30,7 @@ export function Button({ label, onPress, testID, disabled = false, busy = false,
         inactive && styles.inactive,
       ]}
     >
-      {busy ? <ActivityIndicator size="small" color={primary ? colors.onPrimary : colors.primary} /> : null}
+      {busy ? <ActivityIndicator size="small" color={primary ? colors.onPrimary : colors.primary} aria-label="Working" /> : null}
       <Text style={[styles.label, { color: primary ? colors.onPrimary : colors.primary }]}>{label}</Text>
     </Pressable>
   );

@@ -6,7 +6,7 @@ import { colors, space, type } from '@/constants/theme';
 export function LoadingState({ label = 'Loading…' }: { label?: string }) {
   return (
     <View style={styles.centre} testID="state-loading" aria-busy>
-      <ActivityIndicator color={colors.primary} />
+      <ActivityIndicator color={colors.primary} aria-label={label} />
       <Text style={styles.muted}>{label}</Text>
     </View>
   );

@@ -34,7 +34,7 @@ export function ImportsView({ history }: { history: readonly ImportSummary[] }) 
           />
         </View>
       ) : null}
-      {flow.detailLoading ? <ActivityIndicator color={colors.primary} testID="import-detail-loading" /> : null}
+      {flow.detailLoading ? <ActivityIndicator color={colors.primary} testID="import-detail-loading" aria-label="Loading the import" /> : null}
       {flow.detailError ? <Text style={styles.error} role="alert">{flow.detailError}</Text> : null}
     </View>
   );

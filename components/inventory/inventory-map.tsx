@@ -29,7 +29,7 @@ export function InventoryMap({ highlight, selected = null, compact = false }: Pr
   if (!map.data) {
     return (
       <View style={[styles.waiting, compact && styles.waitingCompact]} testID="inventory-map-loading">
-        <ActivityIndicator color={colors.primary} />
+        <ActivityIndicator color={colors.primary} aria-label="Loading the map" />
       </View>
     );
   }

@@ -52,7 +52,7 @@ function Frame({ title, subtitle, onClose, onOpen, children }: FrameProps) {
 }
 
 function Waiting({ error, onRetry }: { error: Error | null; onRetry: () => void }) {
-  if (!error) return <ActivityIndicator color={colors.primary} style={styles.waiting} />;
+  if (!error) return <ActivityIndicator color={colors.primary} style={styles.waiting} aria-label="Loading the details" />;
   return (
     <Pressable onPress={onRetry} role="button" style={styles.waiting}>
       <Text style={styles.error}>{error.message} Tap to try again.</Text>

@@ -90,7 +90,7 @@ function Body(props: CalendarFeedSectionProps) {
   if (!props.feed) {
     return (
       <View style={styles.state} testID="calendar-feed-loading" aria-busy>
-        <ActivityIndicator color={colors.primary} />
+        <ActivityIndicator color={colors.primary} aria-label="Loading the calendar feed" />
         <Text style={styles.muted}>Loading your calendar address…</Text>
       </View>
     );

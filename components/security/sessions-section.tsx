@@ -47,7 +47,7 @@ function Body(props: SessionsSectionProps) {
   if (!sessions) {
     return (
       <View style={styles.state} testID="sessions-loading" aria-busy>
-        <ActivityIndicator color={colors.primary} />
+        <ActivityIndicator color={colors.primary} aria-label="Loading your sessions" />
         <Text style={styles.muted}>Loading your sessions…</Text>
       </View>
     );

@@ -58,7 +58,7 @@ function bodyState({ status, errorMessage, onRetry, empty, emptyTitle, emptyHint
   if (status === 'loading') {
     return (
       <View style={styles.state} testID={`${testID}-loading`} aria-busy>
-        <ActivityIndicator color={colors.primary} />
+        <ActivityIndicator color={colors.primary} aria-label="Loading the rows" />
       </View>
     );
   }

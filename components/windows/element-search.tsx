@@ -36,7 +36,7 @@ function SpanResults(props: ResultsProps) {
 
 function Results({ q, pickedKeys, onPick, disabled, options, loading, error }: ResultsProps & { options?: ElementOption[]; loading: boolean; error?: string }) {
   if (error) return <Text style={styles.error}>Could not search: {error}</Text>;
-  if (!options) return loading ? <ActivityIndicator color={colors.primary} /> : null;
+  if (!options) return loading ? <ActivityIndicator color={colors.primary} aria-label="Searching the network" /> : null;
   if (options.length === 0) return <Text style={styles.muted}>Nothing matches “{q}”.</Text>;
   return options.map((option) => {
     const picked = pickedKeys.has(`${option.kind}:${option.id}`);

@@ -158,7 +158,8 @@ async function settle(page: Page, address: string, ready: string) {
   await page.locator(ready).first().waitFor({ state: 'visible', timeout: 30_000 });
   expect(new URL(page.url()).pathname).toBe(address);
   await eventually(async () => {
-    expect(await page.locator(`${id('state-loading')}, ${id('inventory-map-loading')}, ${id('state-error')}`).count()).toBe(0);
+    // Any spinner counts: a table or a lazily loaded part of the screen may still be loading after its heading shows.
+    expect(await page.locator(`${id('state-loading')}, ${id('inventory-map-loading')}, ${id('state-error')}, [role="progressbar"]`).count()).toBe(0);
   }, 20_000);
   await page.evaluate(() => document.fonts.ready.then(() => undefined));
   // Let a fade-in or a layout pass that follows the data finish before colours and sizes are read.
