@@ -103,7 +103,7 @@ async function measureAll(server: BenchServer, targets: WindowTargets): Promise<
     timings.push(await timeRoute(route, SEQUENTIAL_REQUESTS, ROUTE_BUDGET_MS));
   }
   log(`timing assessing the busiest window (${windows.busiestTouched} slices touched)`);
-  const assess = await timeRoute({ label: `assess the busiest site's window (${windows.busiestTouched} slices touched)`, client: planner,
+  const assess = await timeRoute({ label: `assess the busiest site's window (${windows.busiestTouched.toLocaleString('en-GB')} slices touched)`, client: planner,
     method: 'POST', path: `/api/windows/${enc(windows.busiest)}/assess`, body: {} }, SEQUENTIAL_REQUESTS, ROUTE_BUDGET_MS);
   log(`${CONCURRENT_CLIENTS} concurrent clients for ${CONCURRENT_SECONDS} s`);
   const load = await concurrentLoad(loadMix(routes, planner, windows), CONCURRENT_CLIENTS, CONCURRENT_SECONDS);
