@@ -1,5 +1,5 @@
 // The stored impact of a window (one row per window, replaced on each assessment).
-import { eq } from 'drizzle-orm';
+import { eq, sql } from 'drizzle-orm';
 import type { Tx } from '../../../db/client';
 import { windowImpacts } from '../../../db/schema';
 import type { WindowImpact } from '../../../shared/window-impact';
@@ -14,6 +14,16 @@ export async function upsertWindowImpact(tx: Tx, impact: WindowImpact): Promise<
 export async function getWindowImpact(db: Queryable, windowId: string): Promise<WindowImpact | null> {
   const rows = await db.select({ impact: windowImpacts.impact }).from(windowImpacts).where(eq(windowImpacts.windowId, windowId));
   return (rows[0]?.impact as WindowImpact | undefined) ?? null;
+}
+
+/**
+ * The stored impact as JSON text, for serving as is: on a big window (2,500 slices touched, 1.5 MB) parsing,
+ * re-validating and re-serialising it cost more than the rest of the request. It was validated when computed.
+ */
+export async function getWindowImpactJson(db: Queryable, windowId: string): Promise<string | null> {
+  const rows = await db.select({ json: sql<string>`${windowImpacts.impact}::text` }).from(windowImpacts)
+    .where(eq(windowImpacts.windowId, windowId));
+  return rows[0]?.json ?? null;
 }
 
 /** Returns whether a stored impact was dropped. */

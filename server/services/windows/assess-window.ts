@@ -2,7 +2,7 @@
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import { windowIsAssessable } from '../../../shared/permissions';
-import type { WindowImpact } from '../../../shared/window-impact';
+import { windowImpactSchema, type WindowImpact } from '../../../shared/window-impact';
 import { findUnknownElements } from '../../queries/windows/elements';
 import { upsertWindowImpact } from '../../queries/windows/impacts';
 import { currentInventory } from '../inventory/inventory-cache';
@@ -28,7 +28,8 @@ export async function assessWindow(
     await setWindowStatus(tx, {
       windowId: id, version: w.version, to: 'assessed', actorId: opts.user.id, action: 'window.assess', now: opts.now,
       alongside: async (version) => {
-        impact = computeWindowImpact(scenario, inventory, { ...w, version }, opts.now);
+        // Checked against the API contract before it is stored: GET …/impact serves the stored JSON as is.
+        impact = windowImpactSchema.parse(computeWindowImpact(scenario, inventory, { ...w, version }, opts.now));
         await upsertWindowImpact(tx, impact);
         return { affectedSlices: impact.affected.length, touchesCritical: impact.touchesCritical, splits: impact.splits };
       },
