@@ -74,9 +74,19 @@ function checked(schema: z.ZodType, value: unknown, path: (string | number)[]): 
  * practically impossible, and if one happens the response is cut off (an incomplete download), never completed.
  */
 export function assertExportable(scenario: Scenario): void {
-  const { errors } = checkScenarioSemantics(scenario);
-  if (errors.length > 0) throw new ExportInvalidError(formatIssue(errors[0]));
+  let first = firstSemanticError.get(scenario);
+  if (first === undefined) {
+    first = checkScenarioSemantics(scenario).errors[0] ?? null;
+    firstSemanticError.set(scenario, first);
+  }
+  if (first !== null) throw new ExportInvalidError(formatIssue(first));
 }
+
+/**
+ * The checks' verdict per scenario object: the cached inventory hands every export of one revision the same
+ * (read-only) scenario, so the checks run once per revision, not once per download.
+ */
+const firstSemanticError = new WeakMap<Scenario, ReturnType<typeof checkScenarioSemantics>['errors'][number] | null>();
 
 /**
  * The scenario as `JSON.stringify(scenario, null, 2)` would print it, byte for byte, one element per piece.
