@@ -9,7 +9,6 @@ import { tenantScopeOf, WINDOW_BOOKER_ROLES, WINDOW_READER_ROLES } from '../../s
 import { tenantWindowListSchema, tenantWindowViewSchema } from '../../shared/tenant-windows';
 import { currentUser, hideFromTenants, requireRole } from '../auth/guards';
 import { idempotencyKeyOf } from '../http/idempotency-key';
-import { getWindowImpactJson } from '../queries/windows/impacts';
 import type { WindowFilter } from '../queries/windows/window-rows';
 import { tenantWindowView, tenantWindowViews } from '../services/notices/tenant-window-views';
 import { assessWindow } from '../services/windows/assess-window';
@@ -19,6 +18,7 @@ import { editWindow } from '../services/windows/edit-window';
 import { ImpactNotFoundError, WindowNotFoundError } from '../services/windows/errors';
 import { transitionWindow } from '../services/windows/transition-window';
 import { loadWindow, windowView, windowViews } from '../services/windows/window-view';
+import { storedImpactJson } from '../services/windows/stored-impact';
 import type { RouteDeps } from './deps';
 import { windowHistoryRouter } from './windows/history';
 import { windowMopRouter } from './windows/mop';
@@ -94,7 +94,7 @@ export function windowsRouter(deps: RouteDeps): Router {
   });
   router.get('/:id/impact', staffOnly, anyRole, async (req, res) => {
     await loadWindow(db, idOf(req), null);
-    const impact = await getWindowImpactJson(db, idOf(req));
+    const impact = await storedImpactJson(db, idOf(req));
     if (impact === null) throw new ImpactNotFoundError();
     res.type('application/json').send(impact);
   });

@@ -26,6 +26,13 @@ export async function getWindowImpactJson(db: Queryable, windowId: string): Prom
   return rows[0]?.json ?? null;
 }
 
+/** What identifies one stored impact: the window version it was computed for, and when. */
+export async function getWindowImpactStamp(db: Queryable, windowId: string): Promise<string | null> {
+  const rows = await db.select({ version: windowImpacts.windowVersion, at: windowImpacts.computedAt }).from(windowImpacts)
+    .where(eq(windowImpacts.windowId, windowId));
+  return rows[0] ? `${rows[0].version}@${rows[0].at.toISOString()}` : null;
+}
+
 /** Returns whether a stored impact was dropped. */
 export async function deleteWindowImpact(tx: Tx, windowId: string): Promise<boolean> {
   const deleted = await tx.delete(windowImpacts).where(eq(windowImpacts.windowId, windowId)).returning({ id: windowImpacts.windowId });

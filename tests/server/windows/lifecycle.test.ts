@@ -70,6 +70,20 @@ test('editing the times after assessment sends it back to draft, drops the impac
   expect(audit.rows.map((r) => [r.after.reverted, r.after.impactDropped, r.after.status])).toEqual([[false, false, 'assessed'], [true, true, 'draft']]);
 });
 
+test('a read of the impact always serves the stored one: after a re-assessment and after it is dropped', async () => {
+  const w = await bookOne('reread', 7);
+  const planner = await ctx.as('planner');
+  const first = await planner('post', `/api/windows/${w.id}/assess`).send({});
+  expect((await planner('get', `/api/windows/${w.id}/impact`)).body).toEqual(first.body);
+  const again = await planner('post', `/api/windows/${w.id}/assess`).send({});
+  expect(again.body.windowVersion).toBe(first.body.windowVersion + 1);
+  const reread = await planner('get', `/api/windows/${w.id}/impact`);
+  expect(reread.headers['content-type']).toMatch(/^application\/json/);
+  expect(reread.body).toEqual(again.body);
+  await planner('patch', `/api/windows/${w.id}`).send({ version: again.body.windowVersion, endsAt: '2027-07-08T03:00:00Z' });
+  expect((await planner('get', `/api/windows/${w.id}/impact`)).status).toBe(404);
+});
+
 test('changing the elements after assessment also reverts it', async () => {
   const w = await bookOne('revert-elements', 5);
   const planner = await ctx.as('planner');
