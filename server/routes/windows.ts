@@ -18,7 +18,8 @@ import { editWindow } from '../services/windows/edit-window';
 import { ImpactNotFoundError, WindowNotFoundError } from '../services/windows/errors';
 import { transitionWindow } from '../services/windows/transition-window';
 import { loadWindow, windowView, windowViews } from '../services/windows/window-view';
-import { storedImpactJson } from '../services/windows/stored-impact';
+import { storedImpact } from '../services/windows/stored-impact';
+import { COMPRESS_THRESHOLD_BYTES } from '../http/compress-api';
 import type { RouteDeps } from './deps';
 import { windowHistoryRouter } from './windows/history';
 import { windowMopRouter } from './windows/mop';
@@ -94,9 +95,13 @@ export function windowsRouter(deps: RouteDeps): Router {
   });
   router.get('/:id/impact', staffOnly, anyRole, async (req, res) => {
     await loadWindow(db, idOf(req), null);
-    const impact = await storedImpactJson(db, idOf(req));
+    const impact = await storedImpact(db, idOf(req));
     if (impact === null) throw new ImpactNotFoundError();
-    res.type('application/json').send(impact);
+    // Sent compressed from the kept copy when the client takes it (the compression middleware leaves encoded answers be).
+    res.vary('Accept-Encoding').type('application/json');
+    const coding = impact.json.length >= COMPRESS_THRESHOLD_BYTES ? req.acceptsEncodings('br', 'gzip') : false;
+    if (coding === 'br' || coding === 'gzip') res.setHeader('Content-Encoding', coding).send(impact.encoded(coding));
+    else res.send(impact.json);
   });
   router.get('/:id/conflicts', staffOnly, anyRole, async (req, res) => {
     const w = await loadWindow(db, idOf(req), null);

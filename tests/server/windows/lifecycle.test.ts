@@ -80,6 +80,12 @@ test('a read of the impact always serves the stored one: after a re-assessment a
   const reread = await planner('get', `/api/windows/${w.id}/impact`);
   expect(reread.headers['content-type']).toMatch(/^application\/json/);
   expect(reread.body).toEqual(again.body);
+  // The kept copy goes out compressed when the client takes it, and decodes to the same impact.
+  for (const coding of ['gzip', 'br']) {
+    const coded = await planner('get', `/api/windows/${w.id}/impact`).set('Accept-Encoding', coding);
+    expect([coded.headers['content-encoding'], coded.headers.vary]).toEqual([coding, expect.stringMatching(/Accept-Encoding/i)]);
+    expect(coded.body).toEqual(again.body);
+  }
   await planner('patch', `/api/windows/${w.id}`).send({ version: again.body.windowVersion, endsAt: '2027-07-08T03:00:00Z' });
   expect((await planner('get', `/api/windows/${w.id}/impact`)).status).toBe(404);
 });
