@@ -3,7 +3,6 @@
 // one worker is frozen while both are computing, known by its run's stopped heartbeat, and killed (SIGKILL); the
 // other worker's sweep takes its run back and every run ends done.
 import { spawn, type ChildProcess } from 'node:child_process';
-import net from 'node:net';
 import path from 'node:path';
 import pg from 'pg';
 import request from 'supertest';
@@ -13,6 +12,7 @@ import { SESSION_COOKIE } from '../../../server/auth/session-cookie';
 import { planListResponseSchema, type PlanListItem } from '../../../shared/plans';
 import { testConfig } from '../helpers/test-app';
 import { freshDemoDatabase, waitFor, type FreshDemoDatabase } from '../jobs/helpers/demo-db';
+import { freePort } from '../helpers/free-port';
 
 const ROOT = path.resolve(__dirname, '../../..');
 /** Demo windows with a dozen touched slices each, whose runs take a second or two. */
@@ -28,15 +28,6 @@ const HEARTBEAT_STALE_SECONDS = 5;
 const GUARD_MS = 150_000;
 
 type Proc = { name: string; child: ChildProcess; output: string[]; exited: Promise<void> };
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = net.createServer().listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as net.AddressInfo;
-      probe.close(() => resolve(port));
-    }).on('error', reject);
-  });
-}
 
 let database: FreshDemoDatabase;
 let baseEnv: NodeJS.ProcessEnv;

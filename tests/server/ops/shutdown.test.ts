@@ -8,21 +8,13 @@ import path from 'node:path';
 import { createDb } from '../../../db/client';
 import { startTestJobs, type TestJobs } from '../helpers/jobs';
 import { demoConfig, insertQueuedPlan, readPlan, waitFor } from '../jobs/helpers/demo-db';
+import { freePort } from '../helpers/free-port';
 
 const ROOT = path.resolve(__dirname, '../../..');
 // w-12 takes an edge site down: the search and then the reference solvers keep a run busy for a few seconds.
 const WINDOW = 'w-12';
 
 type Server = { child: ChildProcess; port: number; output: string[]; exited: Promise<number | null> };
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = net.createServer().listen(0, '127.0.0.1', () => {
-      const { port } = probe.address() as net.AddressInfo;
-      probe.close(() => resolve(port));
-    }).on('error', reject);
-  });
-}
 
 let jobs: TestJobs;
 let baseEnv: NodeJS.ProcessEnv;

@@ -2,9 +2,9 @@
 // stop and start the database. Never the project's shared cluster: other suites and helpers use that one.
 import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
-import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { freePort } from '../helpers/free-port';
 
 /** Newest installed major version, as scripts/pg.sh finds it. */
 function bindir(): string {
@@ -21,17 +21,6 @@ const isRoot = () => process.getuid?.() === 0;
 function asPg(command: string, args: string[]): string {
   const [file, argv] = isRoot() ? ['runuser', ['-u', 'postgres', '--', command, ...args]] : [command, args];
   return execFileSync(file, argv, { encoding: 'utf8', stdio: ['ignore', 'pipe', 'pipe'] });
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = net.createServer();
-    server.once('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const { port } = server.address() as net.AddressInfo;
-      server.close(() => resolve(port));
-    });
-  });
 }
 
 export type TempCluster = {
