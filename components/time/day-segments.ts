@@ -1,6 +1,6 @@
 // Splits a window into the calendar days it touches in the viewer's zone, so a window from 23:00 to 03:00
 // is drawn on both days and a day with a daylight-saving change keeps its true length.
-import { addDays, dayKeyAt, endOfDayMs, startOfDayMs } from './zone-clock';
+import { addDays, dayKeyAt, endOfDayMs, startOfDayMs } from '@/shared/zone-clock';
 
 export type DaySegment = {
   /** Calendar day in the zone, 'YYYY-MM-DD'. */

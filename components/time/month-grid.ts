@@ -1,5 +1,5 @@
 // The range of days a month view shows (whole weeks, Monday first) and the instants to ask the API for.
-import { addDays, endOfDayMs, startOfDayMs, weekdayOf } from './zone-clock';
+import { addDays, endOfDayMs, startOfDayMs, weekdayOf } from '@/shared/zone-clock';
 
 /** Monday first, as in most of the places our operators work; react-native-calendars' `firstDay={1}`. */
 export const FIRST_WEEKDAY = 1;

@@ -1,5 +1,5 @@
 // Instants shown in the viewer's time zone with the zone named, so nobody has to guess (windows are stored in UTC).
-import { dayKeyAt } from './zone-clock';
+import { dayKeyAt } from '@/shared/zone-clock';
 
 /**
  * This device's IANA zone, e.g. "Europe/Oslo"; UTC where the runtime does not know it. Only offered as a choice

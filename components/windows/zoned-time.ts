@@ -1,6 +1,6 @@
 // Form fields (a date and a clock time in the viewer's zone) ↔ an exact instant, so people type local time
 // and the API gets ISO 8601 with an offset. Builds on the calendar's zone clock (components/time).
-import { wallClockAt, zoneOffsetMinutes, type WallClock } from '@/components/time/zone-clock';
+import { wallClockAt, zoneOffsetMinutes, type WallClock } from '@/shared/zone-clock';
 
 const MS_PER_MINUTE = 60_000;
 const HALF_DAY_MS = 12 * 60 * MS_PER_MINUTE;
