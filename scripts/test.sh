@@ -54,9 +54,10 @@ DATABASE_URL="$E2E_DATABASE_URL" npx tsx db/setup.ts
 # A free port picked by the OS, so a server left over elsewhere can never answer for ours.
 E2E_PORT="${E2E_PORT:-$(node -e "const s=require('net').createServer().listen(0,'127.0.0.1',()=>{console.log(s.address().port);s.close()})")}"
 # The server works plan runs and mail itself (WORKER_IN_PROCESS); its SMTP sink takes any free port so
-# parallel runs never clash.
+# parallel runs never clash. The local tsx binary passes the clean-up's signal on to the server; `npx` would not,
+# and left the server running after the suite.
 DATABASE_URL="$E2E_DATABASE_URL" PORT="$E2E_PORT" HOST=127.0.0.1 WORKER_IN_PROCESS=true SMTP_SINK_PORT=0 \
-  npx tsx server/index.ts > .data/e2e-server.log 2>&1 &
+  node_modules/.bin/tsx server/index.ts > .data/e2e-server.log 2>&1 &
 server_pid=$!
 for _ in $(seq 1 60); do
   curl -fs "http://127.0.0.1:$E2E_PORT/api/ready" >/dev/null 2>&1 && break
