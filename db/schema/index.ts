@@ -9,3 +9,4 @@ export * from './idempotency';
 export * from './feeds';
 export * from './one-time-links';
 export * from './sso';
+export * from './slots';
