@@ -51,6 +51,11 @@ export const AUDIT_ACTION_WORDS: Readonly<Record<string, string>> = {
   'placement.plan-apply': 'Moved a slice as the accepted plan says',
   'placement.plan-return': 'Returned a slice to where it was before the window',
   'placement.plan-rollback': 'Rolled a slice back after the work was rolled back',
+  // Campaigns of windows
+  'campaign.create': 'Started planning a campaign of windows',
+  'campaign.update': 'Moved windows of a draft campaign',
+  'campaign.book': 'Booked every window of a campaign',
+  'campaign.discard': 'Discarded a draft campaign',
   // Sign-off
   'signoff.submit': 'Submitted a plan for sign-off',
   'signoff.decision': 'Decided on a plan',

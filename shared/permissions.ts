@@ -27,6 +27,12 @@ export const NOTICE_RESENDER_ROLES: Roles = ['admin', 'planner'];
 export const PLAN_RUNNER_ROLES: Roles = ['planner'];
 /** Read move plans (tenants never see them; engineers are refused). */
 export const PLAN_READER_ROLES: Roles = ['planner', 'approver', 'admin'];
+/** Find slots for a window, and read any staff member's slot searches (they are not secret). */
+export const SLOT_SEARCH_ROLES: Roles = ['engineer', 'planner', 'admin'];
+/** Plan, change, book and discard campaigns of windows. */
+export const CAMPAIGN_PLANNER_ROLES: Roles = ['planner'];
+/** Read campaigns, drafts included (the calendar's draft overlay). */
+export const CAMPAIGN_READER_ROLES: Roles = ['planner', 'admin', 'engineer'];
 /**
  * The change-board pack and its moves CSV: every operator role. Engineers included on purpose: they carry out
  * the moves in the field, and the pack shows the accepted plan only, not the runs behind it.
@@ -59,6 +65,9 @@ export const canReadWindowNotices = (roles: Roles) => holdsAnyRole(roles, WINDOW
 export const canResendNotices = (roles: Roles) => holdsAnyRole(roles, NOTICE_RESENDER_ROLES);
 export const canRunPlans = (roles: Roles) => holdsAnyRole(roles, PLAN_RUNNER_ROLES);
 export const canReadPlans = (roles: Roles) => holdsAnyRole(roles, PLAN_READER_ROLES);
+export const canSearchSlots = (roles: Roles) => holdsAnyRole(roles, SLOT_SEARCH_ROLES);
+export const canPlanCampaigns = (roles: Roles) => holdsAnyRole(roles, CAMPAIGN_PLANNER_ROLES);
+export const canReadCampaigns = (roles: Roles) => holdsAnyRole(roles, CAMPAIGN_READER_ROLES);
 export const canReadChangePack = (roles: Roles) => holdsAnyRole(roles, CHANGE_PACK_READER_ROLES);
 export const canSubmitForSignoff = (roles: Roles) => holdsAnyRole(roles, SIGNOFF_SUBMITTER_ROLES);
 export const canSignOff = (roles: Roles) => holdsAnyRole(roles, SIGNOFF_APPROVER_ROLES);
