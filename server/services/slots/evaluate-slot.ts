@@ -1,0 +1,279 @@
+// One element group over its candidate slots: what each slot costs and why, or why it is excluded. Work that
+// depends only on the network state (the group's elements plus the other windows out at the same time) is done
+// once per state: impact, conflicts per window, the quick re-map (also shared across searches) and risk.
+import { assessImpact } from '../../../planner/impact/assess-impact';
+import type { Severity } from '../../../planner/impact/severity';
+import { compileWindow } from '../../../planner/model/build-inventory';
+import type { Inventory, SlicePlacement, WindowSpec } from '../../../planner/model/types';
+import { computePlan } from '../../../planner/plan/compute-plan';
+import { overlapReservations } from '../../../planner/plan/overlap-reservations';
+import { fromSlicePlans } from '../../../planner/plan/slice-plans';
+import { sliceRisk } from '../../../planner/risk/slice-risk';
+import { planSettingsSchema } from '../../../shared/plans';
+import type { SlotCandidate, SlotExclusionCode } from '../../../shared/slots';
+import type { SlotTime } from '../../../shared/slot-times';
+import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
+import { touchCounts, type PlannedSlice, type TouchedSlice } from '../../../shared/touch-counts';
+import type { ElementRow } from '../../queries/windows/window-rows';
+import { outageOf, pairConflictReasons, type Outage } from '../windows/pair-conflicts';
+import { remapKey, type RemapAnswer, type RemapCache } from './remap-cache';
+import type { ContextWindow, SlotContext } from './slot-context';
+import {
+  conflictReason, conflictReasonWords, explain, freezeReason, leadTimeReason, strandedReason,
+} from './slot-words';
+
+/**
+ * The ranking's weights, in points (lower cost ranks first). A slice the quick re-map cannot keep is an outage a
+ * tenant feels, so it outweighs everything else: one such slice costs more than 20 slices that move and keep
+ * running. A critical slice touched adds on top of being touched (it moves even when it is kept: more at stake).
+ * Risk counts per percent of failure chance: a slot where equipment the slices still use is 1 % likely to fail
+ * weighs like two more touched slices. Every other window out at the same time leaves less room to recover and is
+ * a small penalty; notice days to spare give a small bonus, capped so they only break near-ties.
+ */
+export const SLOT_COST_WEIGHTS = {
+  /** per slice the quick re-map finds no place for */
+  unresolved: 100,
+  /** per critical slice the work touches (on top of `touched`) */
+  criticalTouched: 20,
+  /** per slice the work touches */
+  touched: 5,
+  /** per percent of the highest failure chance among slices kept in service */
+  riskPercent: 10,
+  /** per other active window out at the same time */
+  overlapping: 3,
+  /** taken off per day of notice to spare, up to NOTICE_SPARE_CAP_DAYS */
+  noticeSpareDay: 0.2,
+} as const;
+export const NOTICE_SPARE_CAP_DAYS = 14;
+
+/** The quick re-map's limit per run when the caller sets none. */
+export const DEFAULT_REMAP_LIMIT_MS = 300;
+
+const DAY_MS = 86_400_000;
+const GROUP_WINDOW_ID = 'slot-candidate';
+
+export type SlotGroup = { sites: readonly string[]; spans: readonly string[] };
+
+export type EvaluatedSlot = {
+  candidate: Omit<SlotCandidate, 'rank'>;
+  startMs: number;
+  /** slice ids the work touches in this slot */
+  touchedIds: readonly string[];
+};
+
+export type RemapStats = { runs: number; reused: number };
+
+/** Shared by every group of one search: the remap answers computed or reused so far, and the counts. */
+export type SearchRemaps = { memo: Map<string, RemapAnswer>; cache: RemapCache; stats: RemapStats; limitMs: number };
+
+type StateFacts = {
+  key: string;
+  overlapping: ContextWindow[];
+  spec: WindowSpec;
+  touched: TouchedSlice[];
+  touchedIds: string[];
+  criticalTouched: number;
+  tenants: string[];
+  reservations: ReturnType<typeof overlapReservations>;
+  remap: { answer: RemapAnswer; risk: RiskFacts } | null;
+  riskWithoutPlan: RiskFacts | null;
+};
+
+type RiskFacts = { riskPercent: number; riskLevel: SlotCandidate['riskLevel'] };
+
+const LEVEL_OF: Record<Severity, SlotCandidate['riskLevel']> = { low: 'Low', medium: 'Medium', high: 'High', critical: 'High' };
+const LEVEL_ORDER: SlotCandidate['riskLevel'][] = ['Low', 'Medium', 'High'];
+
+/** Highest failure chance (percent) among the shown slices, and their highest severity on the plan review's scale. */
+function riskFacts(inv: Inventory, spec: WindowSpec, next: Map<number, SlicePlacement | null>, shown: ReadonlySet<string>): RiskFacts {
+  let worst = 0;
+  let level = 0;
+  for (const r of sliceRisk(inv, spec, next)) {
+    if (!shown.has(r.slice)) continue;
+    worst = Math.max(worst, r.failureProbability);
+    level = Math.max(level, LEVEL_ORDER.indexOf(LEVEL_OF[r.severity]));
+  }
+  return { riskPercent: Math.min(100, worst * 100), riskLevel: LEVEL_ORDER[level] };
+}
+
+const overlapsMs = (a: { startMs: number; endMs: number }, b: { startMs: number; endMs: number }) =>
+  a.startMs < b.endMs && b.startMs < a.endMs;
+
+export function slotCost(f: {
+  unresolved: number | null; criticalTouched: number; touched: number; riskPercent: number; overlapping: number;
+  noticeSpareDays: number | null;
+}): number {
+  const w = SLOT_COST_WEIGHTS;
+  const spare = Math.min(NOTICE_SPARE_CAP_DAYS, Math.max(0, f.noticeSpareDays ?? 0));
+  const cost = w.unresolved * (f.unresolved ?? 0) + w.criticalTouched * f.criticalTouched + w.touched * f.touched
+    + w.riskPercent * f.riskPercent + w.overlapping * f.overlapping - w.noticeSpareDay * spare;
+  return Math.round(cost * 100) / 100;
+}
+
+export class GroupEvaluator {
+  private readonly rows: ElementRow[];
+  private readonly outage: Outage;
+  private readonly states = new Map<string, StateFacts>();
+  private readonly conflicts = new Map<string, string[]>();
+
+  constructor(
+    private readonly ctx: SlotContext, readonly group: SlotGroup, private readonly durationHours: number,
+    private readonly remaps: SearchRemaps,
+  ) {
+    this.rows = [
+      ...group.sites.map((id): ElementRow => ({ kind: 'site', id, effect: 'down', fraction: null })),
+      ...group.spans.map((id): ElementRow => ({ kind: 'span', id, effect: 'down', fraction: null })),
+    ];
+    this.outage = outageOf(ctx.inventory.network, this.rows);
+  }
+
+  /** Reasons (in words) the group and window `w` must not be out together; [] when they may. */
+  private conflictWith(w: ContextWindow): string[] {
+    let words = this.conflicts.get(w.id);
+    if (!words) {
+      const reasons = pairConflictReasons(this.ctx.inventory, { elements: this.rows, outage: this.outage },
+        { elements: w.elements, outage: w.outage }, this.ctx.baseComponents);
+      words = reasons.map((r) => conflictReasonWords(r, this.ctx.names));
+      this.conflicts.set(w.id, words);
+    }
+    return words;
+  }
+
+  private state(overlapping: ContextWindow[]): StateFacts {
+    const key = remapKey({
+      revision: this.ctx.revision, sites: this.group.sites, spans: this.group.spans,
+      windows: overlapping.map((w) => ({ id: w.id, version: w.version, acceptedPlanId: w.acceptedPlanId })),
+      limitMs: this.remaps.limitMs,
+    });
+    let facts = this.states.get(key);
+    if (facts) return facts;
+    const inv = this.ctx.inventory;
+    const start = new Date(0);
+    const spec = compileWindow({
+      id: GROUP_WINDOW_ID, start: start.toISOString(), end: new Date(this.durationHours * 3_600_000).toISOString(),
+      down: { sites: [...this.group.sites], spans: [...this.group.spans] }, reduced: [],
+    });
+    const reservations = overlapping.length === 0 ? {}
+      : overlapReservations(inv, overlapping.map((w) => ({ window: w.spec, slices: w.slices })));
+    const impact = assessImpact(inv, spec, { reservations });
+    const touched = impact.affected.map((a) => ({ slice: a.slice, reasons: a.reasons, tenantId: inv.slices[a.sliceIndex].tenant }));
+    facts = {
+      key, overlapping, spec, touched, touchedIds: touched.map((t) => t.slice),
+      criticalTouched: impact.affected.filter((a) => inv.slices[a.sliceIndex].critical).length,
+      tenants: [...new Set(touched.map((t) => t.tenantId))].sort(),
+      reservations, remap: null, riskWithoutPlan: null,
+    };
+    this.states.set(key, facts);
+    return facts;
+  }
+
+  /** The quick re-map of a state: this search's earlier run, the process cache, or a new run. */
+  private async remap(facts: StateFacts): Promise<{ answer: RemapAnswer; risk: RiskFacts; reused: boolean }> {
+    const { memo, cache, stats, limitMs } = this.remaps;
+    const inv = this.ctx.inventory;
+    if (facts.remap) {
+      stats.reused += 1;
+      return { ...facts.remap, reused: true };
+    }
+    let answer = memo.get(facts.key) ?? cache.get(facts.key, inv);
+    const reused = answer !== null && answer !== undefined;
+    if (!answer) {
+      const defaults = planSettingsSchema.parse({});
+      const computed = await computePlan(this.ctx.scenario, facts.spec, {
+        inventory: inv,
+        plan: {
+          mode: defaults.mode, seed: defaults.seed, population: defaults.population, knockOn: defaults.knockOn,
+          maxKnockOnMoves: defaults.maxKnockOnMoves, timeLimitMs: limitMs, reservations: facts.reservations,
+        },
+      });
+      answer = { slices: computed.result.slices, affected: computed.result.affected };
+      cache.set(facts.key, inv, answer);
+      stats.runs += 1;
+    } else {
+      stats.reused += 1;
+    }
+    memo.set(facts.key, answer);
+    const shown = new Set([...answer.affected, ...answer.slices.map((s) => s.slice)]);
+    const risk = riskFacts(inv, facts.spec, fromSlicePlans(inv, answer.slices), shown);
+    facts.remap = { answer, risk };
+    return { answer, risk, reused };
+  }
+
+  private riskWithoutPlan(facts: StateFacts): RiskFacts {
+    facts.riskWithoutPlan ??= riskFacts(this.ctx.inventory, facts.spec, new Map(), new Set(facts.touchedIds));
+    return facts.riskWithoutPlan;
+  }
+
+  async evaluate(slot: SlotTime, now: Date): Promise<EvaluatedSlot> {
+    const { ctx } = this;
+    const inv = ctx.inventory;
+    const overlapping = ctx.windows.filter((w) => overlapsMs(w, slot));
+    const facts = this.state(overlapping);
+    const conflicts = overlapping.map((w) => ({ id: w.id, title: w.title, reasons: this.conflictWith(w) }))
+      .filter((c) => c.reasons.length > 0);
+
+    let excluded: { code: SlotExclusionCode; reason: string } | null = null;
+    const freeze = ctx.freezes.find((f) => overlapsMs(f, slot));
+    if (freeze) excluded = { code: 'FREEZE', reason: freezeReason(freeze, NETWORK_TIME_ZONE) };
+    else if (conflicts.length > 0) excluded = { code: 'CONFLICT', reason: conflictReason(conflicts[0], conflicts[0].reasons) };
+
+    // Notice: each touched tenant must be told its lead days before the start, counted from now.
+    const daysLeft = (slot.startMs - now.getTime()) / DAY_MS;
+    let noticeSpareDays: number | null = null;
+    let lateTenant: { id: string; lead: number; spare: number } | null = null;
+    for (const tenant of facts.tenants) {
+      const lead = ctx.leadDays.get(tenant) ?? ctx.policies.noticeLeadDays;
+      const spare = daysLeft - lead;
+      noticeSpareDays = noticeSpareDays === null ? spare : Math.min(noticeSpareDays, spare);
+      if (spare < 0 && (!lateTenant || spare < lateTenant.spare)) lateTenant = { id: tenant, lead, spare };
+    }
+    if (!excluded && lateTenant) {
+      excluded = { code: 'LEAD_TIME', reason: leadTimeReason(ctx.names.tenant(lateTenant.id), lateTenant.lead, daysLeft) };
+    }
+
+    let planned: PlannedSlice[] | null = null;
+    let unresolvedIds: string[] | null = null;
+    let criticalUnresolved: string[] | null = null;
+    let risk: RiskFacts;
+    let reused = false;
+    if (!excluded) {
+      const run = await this.remap(facts);
+      reused = run.reused;
+      risk = run.risk;
+      planned = run.answer.slices.map((s) => ({
+        slice: s.slice, outcome: s.outcome, madeRoomFor: s.madeRoomFor ?? [],
+        tenantId: inv.slices[inv.sliceIndex.get(s.slice) ?? -1]?.tenant ?? '',
+      }));
+      unresolvedIds = run.answer.slices.filter((s) => s.outcome === 'unresolved' && (s.madeRoomFor?.length ?? 0) === 0)
+        .map((s) => s.slice);
+      criticalUnresolved = unresolvedIds.filter((id) => inv.slices[inv.sliceIndex.get(id) ?? -1]?.critical);
+      if (criticalUnresolved.length > 0) {
+        excluded = { code: 'CRITICAL_STRANDED', reason: strandedReason(criticalUnresolved.map((id) => ctx.names.slice(id))) };
+      }
+    } else {
+      risk = this.riskWithoutPlan(facts);
+    }
+    const counts = touchCounts(facts.touched, planned);
+    const figures = {
+      touched: facts.touched.length, unresolved: unresolvedIds?.length ?? null, criticalTouched: facts.criticalTouched,
+      riskPercent: risk.riskPercent, overlapping: overlapping.length, noticeSpareDays,
+    };
+    const explanation = excluded ? excluded.reason : explain({
+      ...figures, unresolved: figures.unresolved ?? 0, riskLevel: risk.riskLevel,
+      overlapping: overlapping.map((w) => w.title), reused,
+    });
+    return {
+      startMs: slot.startMs,
+      touchedIds: facts.touchedIds,
+      candidate: {
+        start: new Date(slot.startMs).toISOString(), end: new Date(slot.endMs).toISOString(), excluded,
+        touched: figures.touched, unresolved: figures.unresolved, criticalTouched: figures.criticalTouched,
+        criticalUnresolved: criticalUnresolved?.length ?? null, counts,
+        riskPercent: risk.riskPercent, riskLevel: risk.riskLevel,
+        overlapping: overlapping.map((w) => ({ id: w.id, title: w.title })), conflicts,
+        noticeSpareDays: noticeSpareDays === null ? null : Math.round(noticeSpareDays * 10) / 10,
+        cost: slotCost(figures), reused, explanation,
+      },
+    };
+  }
+}
