@@ -48,6 +48,9 @@ import { ssoSignInRouter } from './routes/auth/sso';
 import { ssoSettingsRouter } from './routes/sso';
 import { invitationsRouter } from './routes/invitations';
 import { auditRouter } from './routes/audit';
+import { slotSearchesRouter } from './routes/slot-searches';
+import { campaignsRouter } from './routes/campaigns';
+import type { SlotEngine } from './services/campaigns/engine';
 
 export type AppDeps = {
   db: Db;
@@ -60,6 +63,8 @@ export type AppDeps = {
   signInLimit?: SignInLimit;
   /** request lines and each request's child logger (req.log); default: a logger that writes nothing */
   logger?: Logger;
+  /** the slot finder and campaign scheduler the slot-search and campaign routes check with; default the real ones */
+  slotEngine?: SlotEngine;
   /** where an unexpected (500) error is reported; default: the request's logger at `error`, safe fields only */
   log?: ErrorLog;
 };
@@ -70,7 +75,9 @@ const noStore: express.RequestHandler = (_req, res, next) => {
   next();
 };
 
-function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signInLimit' | 'jobs'>>): express.Router {
+function apiRouter(
+  deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signInLimit' | 'jobs'>> & Pick<AppDeps, 'slotEngine'>,
+): express.Router {
   const api = express.Router();
   api.use(noStore);
   api.use('/auth/sso', ssoSignInRouter(deps));
@@ -99,6 +106,8 @@ function apiRouter(deps: Required<Pick<AppDeps, 'db' | 'config' | 'now' | 'signI
   api.use('/notices', noticesRouter(deps));
   api.use('/portal', portalRouter(deps));
   api.use('/audit', auditRouter(deps));
+  api.use('/slot-searches', slotSearchesRouter({ ...deps, engine: deps.slotEngine }));
+  api.use('/campaigns', campaignsRouter({ ...deps, engine: deps.slotEngine }));
   api.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.originalUrl.split('?')[0])));
   return api;
 }
@@ -130,7 +139,9 @@ export function createApp(deps: AppDeps): express.Application {
   app.use(inputHygiene());
   app.use(originCheck({ allowedOrigins: config.allowedOrigins }));
   // Only the API needs to know who is asking; static files skip the session look-up.
-  app.use('/api', sessionMiddleware({ db, config, now }), apiRouter({ db, config, now, signInLimit, jobs: deps.jobs ?? noJobQueue }));
+  app.use('/api', sessionMiddleware({ db, config, now }), apiRouter({
+    db, config, now, signInLimit, jobs: deps.jobs ?? noJobQueue, slotEngine: deps.slotEngine,
+  }));
   app.use(webApp({ webDist: config.webDist }));
   app.use((req, _res, next) => next(new RouteNotFoundError(req.method, req.path)));
   app.use(errorHandler({ log: deps.log ?? ((message, err, req) => req.log.error({ err }, message)) }));

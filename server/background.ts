@@ -6,10 +6,12 @@ import type { ServerConfig } from './env';
 import { createJobQueue } from './jobs/boss-queue';
 import { startBoss } from './jobs/boss';
 import { registerPlanWorker } from './jobs/plan-worker';
+import { registerSlotWorker } from './jobs/slot-worker';
 import type { JobQueue } from './jobs/queue';
 import { startSinkIfConfigured } from './mail/start-sink';
 import { registerMailWorker } from './mail/worker';
 import { surviveDatabaseOutages } from './outage-guard';
+import { slotEngine } from './services/campaigns/slot-engine';
 
 export interface Background {
   jobs: JobQueue;
@@ -30,7 +32,8 @@ async function registerWorkers(boss: PgBoss, deps: BackgroundDeps, sinkPort?: nu
     db: deps.db, log: deps.log,
     heartbeatStaleSeconds: deps.config.planHeartbeatStaleSeconds, expireMarginSeconds: deps.config.planExpireMarginSeconds,
   });
-  const stoppers: Stopper[] = [() => plans.stop()];
+  const slots = await registerSlotWorker(boss, { db: deps.db, engine: slotEngine, log: deps.log });
+  const stoppers: Stopper[] = [() => plans.stop(), () => slots.stop()];
   // Mail: to the in-process sink's actual port when there is one, else as configured.
   const mail = await registerMailWorker(boss, { db: deps.db, config: deps.config, sinkPort });
   stoppers.push(() => mail.stop());

@@ -4,6 +4,12 @@ import { QUEUES, type JobQueue, type MailJob } from './queue';
 
 export type PlanRunJobData = { planId: string };
 
+/**
+ * A slot search or campaign plan that has not finished in this long is taken from its worker (which died or hung)
+ * and retried: the largest searches take about a minute, a campaign of many groups some more.
+ */
+export const SLOT_SEARCH_EXPIRE_SECONDS = 30 * 60;
+
 /** Bosses pg-boss reported stopped; one listener per boss however many queues wrap it (the sweeper makes some). */
 const watched = new WeakSet<PgBoss>();
 const stopped = new WeakSet<PgBoss>();
@@ -26,6 +32,11 @@ export function createJobQueue(boss: PgBoss): JobQueue {
     async cancelPlanRun(jobId) {
       // A running job is not interrupted by this: the worker sees the plan row's `cancelled` status and stops.
       await boss.cancel(QUEUES.planRun, jobId);
+    },
+    async sendSlotSearch(job) {
+      const id = await boss.send(QUEUES.slotSearch, job, { expireInSeconds: SLOT_SEARCH_EXPIRE_SECONDS });
+      if (!id) throw new Error(`the job queue did not accept the search ${job.id}`);
+      return id;
     },
     async sendMail(job: MailJob) {
       const id = await boss.send(QUEUES.mail, job);

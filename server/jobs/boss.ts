@@ -9,6 +9,9 @@ import { QUEUES } from './queue';
 /** Plan runs: a retry covers a worker that crashed or was restarted mid-run (3 attempts in all). */
 export const PLAN_RUN_RETRY_LIMIT = 2;
 const PLAN_RUN_RETRY_DELAY_SECONDS = 2;
+/** Slot searches and campaign plans: one retry covers a worker that died mid-search (2 attempts in all). */
+export const SLOT_SEARCH_RETRY_LIMIT = 1;
+const SLOT_SEARCH_RETRY_DELAY_SECONDS = 2;
 /** Mail: a relay can be down for a while, so more attempts with exponential backoff. */
 export const MAIL_RETRY_LIMIT = 3;
 const MAIL_RETRY_DELAY_SECONDS = 15;
@@ -84,6 +87,10 @@ export async function ensureQueues(boss: PgBoss): Promise<void> {
   await ensureQueue(boss, QUEUES.planRunDead, { retryLimit: 2, retryDelay: 5 });
   await ensureQueue(boss, QUEUES.planRun, {
     retryLimit: PLAN_RUN_RETRY_LIMIT, retryDelay: PLAN_RUN_RETRY_DELAY_SECONDS, deadLetter: QUEUES.planRunDead,
+  });
+  await ensureQueue(boss, QUEUES.slotSearchDead, { retryLimit: 2, retryDelay: 5 });
+  await ensureQueue(boss, QUEUES.slotSearch, {
+    retryLimit: SLOT_SEARCH_RETRY_LIMIT, retryDelay: SLOT_SEARCH_RETRY_DELAY_SECONDS, deadLetter: QUEUES.slotSearchDead,
   });
   await ensureQueue(boss, QUEUES.mailDead, { retryLimit: 2, retryDelay: 5 });
   await ensureQueue(boss, QUEUES.mail, {

@@ -30,3 +30,12 @@ export interface PlanQueue {
   /** Cancels a queued or running plan run's job (the worker stops the computation). */
   cancelPlanRun(jobId: string): Promise<void>;
 }
+
+/** What the slot-search queue works: a slot search or the planning of a campaign (the row's id). */
+export type SlotSearchJob = { kind: 'slots' | 'campaign'; id: string };
+
+/** Queues slot searches and campaign plans for the slot-search worker. */
+export interface SlotSearchQueue {
+  /** Enqueues one search or campaign plan; returns the queue's job id. */
+  sendSlotSearch(job: SlotSearchJob): Promise<string>;
+}
