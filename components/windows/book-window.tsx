@@ -5,13 +5,17 @@ import { canBookInsideFreeze } from '@/shared/permissions';
 import { newIdempotencyKey } from '@/hooks/idempotency-key';
 import { useBookingPolicies, useWindowCreateMutation, useWindowMopUploadMutation } from '@/hooks/queries/windows';
 import { WindowForm, type WindowSubmission } from '@/components/windows/window-form';
-import { EMPTY_FORM } from '@/components/windows/window-form-state';
+import { EMPTY_FORM, type WindowFormValues } from '@/components/windows/window-form-state';
 
 export type SavedOutcome = { id: string; reverted: boolean; conflictCount: number; mopError: string | null };
 
-type Props = { me: Me; timeZone: string; onSaved: (outcome: SavedOutcome) => void; onCancel: () => void };
+type Props = {
+  me: Me; timeZone: string; onSaved: (outcome: SavedOutcome) => void; onCancel: () => void;
+  /** the form's starting values, e.g. a slot picked in the slot finder; empty when unset */
+  initialValues?: WindowFormValues;
+};
 
-export function BookWindow({ me, timeZone, onSaved, onCancel }: Props) {
+export function BookWindow({ me, timeZone, onSaved, onCancel, initialValues = EMPTY_FORM }: Props) {
   const policy = useBookingPolicies();
   const create = useWindowCreateMutation();
   const upload = useWindowMopUploadMutation();
@@ -37,7 +41,7 @@ export function BookWindow({ me, timeZone, onSaved, onCancel }: Props) {
 
   return (
     <WindowForm
-      initialValues={EMPTY_FORM}
+      initialValues={initialValues}
       timeZone={timeZone}
       policy={policy}
       submitLabel="Book window"

@@ -1,5 +1,5 @@
 // Book a maintenance window (engineers, planners, admins); on success, open the new window's page.
-import { useRouter } from 'expo-router';
+import { useLocalSearchParams, useRouter } from 'expo-router';
 import { canBookWindows } from '@/shared/permissions';
 import { useMeQuery } from '@/hooks/queries/me';
 import { ErrorState, LoadingState } from '@/components/screen-states';
@@ -8,20 +8,27 @@ import { BookWindow } from '@/components/windows/book-window';
 import { detailHref, FormPage } from '@/components/windows/form-page';
 import { usePageTitle } from '@/components/page-title';
 import { staffWindowPage } from '@/components/notices/tenant-window-page';
+import { PrefillNote } from '@/components/slots/prefill-note';
+import { prefillFromParams } from '@/components/slots/slot-prefill';
 
 function NewWindowScreen() {
   const timeZone = useViewerTimeZone();
   const router = useRouter();
   const me = useMeQuery();
+  const params = useLocalSearchParams();
+  // The form reads its starting values once, when it opens (after the viewer's zone is known), then owns them.
+  const prefill = prefillFromParams(params, timeZone);
   usePageTitle('Book a window');
   if (me.isError) return <ErrorState message={me.error.message} onRetry={() => void me.refetch()} />;
   if (!me.data) return <LoadingState />;
   if (!canBookWindows(me.data.roles)) return <ErrorState message="Your roles do not include booking windows." />;
   return (
     <FormPage title="Book a window">
+      {prefill ? <PrefillNote /> : null}
       <BookWindow
         me={me.data}
         timeZone={timeZone}
+        initialValues={prefill ?? undefined}
         onSaved={(outcome) => router.replace(detailHref({ ...outcome, saved: 'booked' }))}
         onCancel={() => (router.canGoBack() ? router.back() : router.replace('/calendar'))}
       />

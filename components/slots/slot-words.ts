@@ -1,0 +1,68 @@
+// How the slot finder's figures read: exclusion reasons in words, risk with its scale, notice days to spare,
+// and the excluded slots grouped by reason. Pure, so the list and its tests read the same words.
+import { SLOT_EXCLUSION_CODES, type SearchProgress, type SlotCandidate, type SlotExclusionCode } from '@/shared/slots';
+import { formatRiskPercent } from '@/components/impact/impact-format';
+
+export const EXCLUSION_LABELS: Record<SlotExclusionCode, string> = {
+  FREEZE: 'Freeze',
+  CONFLICT: 'Conflicts with another window',
+  LEAD_TIME: 'Too late to give notice',
+  CRITICAL_STRANDED: 'A critical slice would be cut off',
+};
+
+/** What the risk figure is and which scale its Low/Medium/High comes from, said once above the list. */
+export const SLOT_RISK_MEANING =
+  'Risk = chance that a slice kept in service fails unplanned during the slot, from each site’s and span’s mean time between failures. Low, Medium and High are its level on the plan review’s risk scale.';
+
+/** "0.4 % (Low on the plan review’s risk scale)" */
+export function riskText(c: Pick<SlotCandidate, 'riskPercent' | 'riskLevel'>): string {
+  return `${formatRiskPercent(c.riskPercent / 100)} (${c.riskLevel} on the plan review’s risk scale)`;
+}
+
+const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+
+/** Days to spare before the last day notices can go out; negative means some tenant can no longer be told in time. */
+export function noticeText(spareDays: number | null): string {
+  if (spareDays === null) return 'No tenant to notify';
+  const days = Math.floor(spareDays);
+  if (days < 0) return `${plural(-days, 'day', 'days')} too late for a tenant’s notice`;
+  if (days === 0) return 'Notices must go out today';
+  return `${plural(days, 'day', 'days')} to spare for notices`;
+}
+
+/** Usable slots in rank order (the server sends them so; sorted again so the list never depends on it). */
+export function rankedSlots(candidates: readonly SlotCandidate[]): SlotCandidate[] {
+  return candidates
+    .filter((c) => c.excluded === null && c.rank !== null)
+    .sort((a, b) => (a.rank ?? 0) - (b.rank ?? 0));
+}
+
+export type ExcludedGroup = { code: SlotExclusionCode; label: string; slots: SlotCandidate[] };
+
+/** Excluded slots by reason, in the reasons' fixed order, each group by start; groups with none left out. */
+export function excludedGroups(candidates: readonly SlotCandidate[]): ExcludedGroup[] {
+  return SLOT_EXCLUSION_CODES.map((code) => ({
+    code,
+    label: EXCLUSION_LABELS[code],
+    slots: candidates.filter((c) => c.excluded?.code === code).sort((a, b) => Date.parse(a.start) - Date.parse(b.start)),
+  })).filter((group) => group.slots.length > 0);
+}
+
+/** Why no slot is usable, in words: the reasons that excluded every one, with how many each. */
+export function noSlotReason(candidates: readonly SlotCandidate[]): string {
+  if (candidates.length === 0) return 'No start in the range falls inside the allowed hours and days.';
+  const parts = excludedGroups(candidates).map((g) => `${g.label.toLowerCase()} (${plural(g.slots.length, 'slot', 'slots')})`);
+  return `Every possible slot is excluded: ${parts.join('; ')}.`;
+}
+
+/** "12 of 105 slots checked" (groups for a campaign), or what happens before counting starts. */
+export function progressText(progress: SearchProgress | null, unit: 'slots' | 'groups' = 'slots'): string {
+  if (!progress || progress.total === 0) return 'Getting ready…';
+  if (progress.phase === 'scheduling') return `Choosing nights: ${progress.done} of ${progress.total} steps`;
+  return `${progress.done} of ${progress.total} ${unit} checked`;
+}
+
+/** Whole seconds since the search started, "0 s" upwards. */
+export function elapsedText(progress: SearchProgress | null): string {
+  return `${Math.floor((progress?.elapsedMs ?? 0) / 1000)} s`;
+}
