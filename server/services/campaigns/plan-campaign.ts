@@ -25,8 +25,13 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
   const { db, engine } = deps;
   const startedMs = Date.now();
   const groups = request.groups.map((g) => ({ sites: g.sites, spans: g.spans }));
+  // The finder counts (group, candidate) pairs; a campaign's progress counts groups evaluated, of all.
   const found = await engine.findSlotsForGroups(db, request, groups, {
-    now: deps.now, signal: deps.signal, onProgress: (p) => deps.onProgress({ ...p, phase: 'evaluating' }),
+    now: deps.now, signal: deps.signal,
+    onProgress: (p) => deps.onProgress({
+      phase: p.phase === 'preparing' ? 'preparing' : 'evaluating',
+      done: p.total > 0 ? Math.floor((p.done * groups.length) / p.total) : 0, total: groups.length, elapsedMs: p.elapsedMs,
+    }),
   });
   // The night each start belongs to, as the scheduler counts nights (the candidates carry instants only).
   const nights = new Map(slotTimes(request, NETWORK_TIME_ZONE).map((t) => [t.startMs, t.night]));

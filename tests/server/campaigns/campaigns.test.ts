@@ -3,6 +3,7 @@
 import { campaignBookedSchema, campaignListSchema, campaignSchema, type Campaign } from '../../../shared/slots';
 import { runSlotJob } from '../../../server/jobs/slot-search-handler';
 import { slotEngine } from '../../../server/services/campaigns/slot-engine';
+import type { SlotEngine } from '../../../server/services/campaigns/engine';
 import { freezes } from '../../../db/schema';
 import { setupSlotsApp, type SlotsContext } from '../slots-api/helpers';
 
@@ -200,6 +201,28 @@ describe('a draft', () => {
     expect(stale.status).toBe(409);
     expect(await campaignWindowCount(draft.title)).toBe(2);
   });
+});
+
+test('while planning, the campaign is running and its progress counts groups', async () => {
+  const res = await (await ctx.as('planner'))('post', '/api/campaigns').send(campaignRequest({ title: `${ctx.prefix} Watched audit` }));
+  const id = res.body.id as string;
+  const seen: string[] = [];
+  const watching: SlotEngine = {
+    ...slotEngine,
+    findSlotsForGroups: (db, timing, groups, opts) => slotEngine.findSlotsForGroups(db, timing, groups, {
+      ...opts,
+      onProgress: async (p) => {
+        await opts.onProgress?.(p);
+        const now = await read(id);
+        seen.push(`${now.status}:${now.progress?.total}`);
+        expect(now.progress!.done).toBeLessThanOrEqual(2);
+      },
+    }),
+  };
+  await runSlotJob({ db: ctx.db, engine: watching, log: quiet, now: () => NOW, progressEveryMs: 0 }, { id: 'job', data: { kind: 'campaign', id } });
+  expect(seen.length).toBeGreaterThan(0);
+  expect(new Set(seen)).toEqual(new Set(['running:2']));
+  expect((await read(id)).status).toBe('draft');
 });
 
 test('a discarded draft leaves the calendar and can no longer be booked', async () => {
