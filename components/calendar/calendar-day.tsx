@@ -9,7 +9,7 @@ import { STATUS_MARKS } from './calendar-marks';
 import type { CalendarDayMark } from './calendar-types';
 import { dayLabel } from './day-label';
 import { keyDownProps, type KeyPress } from '@/components/key-props';
-import { FreezeHatch } from './freeze-hatch';
+import { DraftHatch, FreezeHatch } from './freeze-hatch';
 
 /** react-native's Role type has no 'gridcell'; react-native-web passes the role to the DOM as given. */
 const GRIDCELL_ROLE = 'gridcell' as string as Role;
@@ -51,11 +51,19 @@ export function CalendarDay({ day, outside, mark, tabStop, onPress, onKeyDown, c
             style={[
               styles.bar,
               { backgroundColor: period.color, height: BAR_HEIGHT_PX[size] },
+              period.draft && styles.draftBar,
               period.startingDay && styles.barStart,
               period.endingDay && styles.barEnd,
             ]}
           >
-            {period.status ? (
+            {period.draft ? <DraftHatch /> : null}
+            {period.draft ? (
+              <Text style={[styles.draftTitle, { fontSize: BAR_FONT_PX[size], lineHeight: BAR_HEIGHT_PX[size] - 3 }]} numberOfLines={1}
+                testID={period.windowId ? `${testID}-bar-${period.windowId}-mark` : undefined}>
+                <Text style={styles.barMark}>Draft</Text>
+                {period.showTitle && period.title ? ` ${period.title}` : ''}
+              </Text>
+            ) : period.status ? (
               <Text style={[styles.barTitle, { fontSize: BAR_FONT_PX[size], lineHeight: BAR_HEIGHT_PX[size] }]} numberOfLines={1}>
                 <Text style={styles.barMark} testID={period.windowId ? `${testID}-bar-${period.windowId}-mark` : undefined}>
                   {STATUS_MARKS[period.status]}
@@ -131,6 +139,9 @@ const styles = StyleSheet.create({
     textShadowColor: 'rgba(0, 0, 0, 0.45)', textShadowRadius: 2, textShadowOffset: { width: 0, height: 0 },
   },
   barMark: { fontFamily: fonts.bold },
+  // A campaign's window not booked yet: an outline on light hatching, dark text, so it never reads as a booked bar.
+  draftBar: { backgroundColor: colors.surface, borderWidth: 1.5, borderStyle: 'dashed', borderColor: colors.inkMuted },
+  draftTitle: { fontFamily: fonts.semibold, color: colors.ink, paddingHorizontal: 3 },
   barStart: { marginLeft: 3, borderTopLeftRadius: 3, borderBottomLeftRadius: 3 },
   barEnd: { marginRight: 3, borderTopRightRadius: 3, borderBottomRightRadius: 3 },
   more: { fontFamily: fonts.medium, fontSize: 10, lineHeight: 12, color: colors.inkMuted, textAlign: 'center' },

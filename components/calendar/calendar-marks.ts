@@ -64,7 +64,7 @@ function markFor(marks: MarkedDays, day: string): CalendarDayMark {
 
 function placeWindow(marks: MarkedDays, { window, lane, segments }: Placed) {
   const status = window.statusLabel ?? STATUS_LABELS[window.status] ?? window.status;
-  const label = `${window.title} (${status})`;
+  const label = window.campaign ? `${window.title} (${status}: ${window.campaign.title})` : `${window.title} (${status})`;
   for (const segment of segments) {
     const mark = markFor(marks, segment.day);
     mark.windowCount += 1;
@@ -81,7 +81,8 @@ function placeWindow(marks: MarkedDays, { window, lane, segments }: Placed) {
       endingDay: segment.isLast,
       windowId: window.id,
       status: window.status,
-      title: window.title,
+      title: window.campaign ? `${window.campaign.title}: ${window.title}` : window.title,
+      draft: window.campaign ? true : undefined,
       // The title again where a long window wraps onto a new week row, so every row of bars says whose it is.
       showTitle: segment.isFirst || weekdayOf(segment.day) === FIRST_WEEKDAY,
       label,

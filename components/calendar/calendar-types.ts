@@ -10,6 +10,8 @@ export type CalendarWindow = Pick<
   /** a tenant's view: the line shown instead of the elements, and the stage shown instead of the state */
   detail?: string;
   statusLabel?: string;
+  /** a draft campaign's window, not booked yet: drawn outlined with the word "Draft", opening the campaign */
+  campaign?: { id: string; title: string };
 };
 
 export type CalendarFreeze = Pick<Freeze, 'id' | 'title' | 'startsAt' | 'endsAt'>;
@@ -28,6 +30,8 @@ export type CalendarPeriod = {
   showTitle?: boolean;
   /** the window in the day's accessible name: "Rectifier swap (Planned)" */
   label?: string;
+  /** a draft campaign's window: outlined, hatched and labelled "Draft" rather than filled with a status colour */
+  draft?: boolean;
 };
 
 /** What a day cell draws and says: its bars (one per lane), today, the selection and what sits beside the bars. */

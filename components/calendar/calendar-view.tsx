@@ -29,6 +29,8 @@ export type CalendarViewProps = {
   /** false for a tenant user: its list is its notified work, which the staff filters do not apply to */
   showFilters?: boolean;
   onBook: () => void;
+  /** opens the slot finder; shown beside "Book a window" when set */
+  onFindSlot?: () => void;
   /** what a press on a window's agenda row does when there is no `windowHref` */
   onOpenWindow?: (id: string) => void;
   /** where a window's agenda row leads, making it a real link (null: nothing to open) */
@@ -109,7 +111,12 @@ export function CalendarView(props: CalendarViewProps) {
           </Text>
           <Text style={styles.subtitle} testID="calendar-zone">{timesInLabel(timeZone)}</Text>
         </View>
-        {canBook ? <Button label="Book a window" onPress={onBook} testID="calendar-book" /> : null}
+        {canBook ? (
+          <View style={styles.actions}>
+            {props.onFindSlot ? <Button label="Find a slot" variant="quiet" onPress={props.onFindSlot} testID="calendar-find-slot" /> : null}
+            <Button label="Book a window" onPress={onBook} testID="calendar-book" />
+          </View>
+        ) : null}
       </View>
       {wide ? (
         <View style={styles.columns}>
@@ -131,6 +138,7 @@ const styles = StyleSheet.create({
   content: { padding: space.md, gap: space.md, paddingBottom: space.xxxl },
   contentWide: { padding: space.xl, gap: space.lg },
   toolbar: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: space.md, flexWrap: 'wrap' },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   titleBox: { gap: space.xxs, flexShrink: 1 },
   title: { ...type.title, color: colors.ink },
   subtitle: { ...type.caption, color: colors.inkMuted },

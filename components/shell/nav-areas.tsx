@@ -2,7 +2,11 @@
 import type { ComponentType } from 'react';
 import type { Href } from 'expo-router';
 import type { RoleName } from '@/shared/api';
-import { ADMIN_ROLES, AUDIT_READER_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, SIGNOFF_QUEUE_ROLES, TENANT_PORTAL_ROLES } from '@/shared/permissions';
+import {
+  ADMIN_ROLES, AUDIT_READER_ROLES, CAMPAIGN_PLANNER_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, SIGNOFF_QUEUE_ROLES,
+  SLOT_SEARCH_ROLES, TENANT_PORTAL_ROLES,
+} from '@/shared/permissions';
+import { CampaignIcon, SlotIcon } from '@/components/slots/slot-icons';
 import { AuditIcon, CalendarIcon, FreezeIcon, ImportIcon, MapIcon, NetworkIcon, NoticeIcon, OutboxIcon, OverviewIcon, PersonIcon, SignoffIcon, SlicesIcon } from '@/components/icons';
 
 export type NavArea = {
@@ -28,6 +32,16 @@ export const NAV_AREAS: readonly NavArea[] = [
     // A window's own pages are reached from the calendar, so they keep it highlighted.
     matches: (pathname) => pathname.startsWith('/calendar') || pathname.startsWith('/windows'),
     Icon: CalendarIcon,
+  },
+  {
+    // When one window's work hurts least: the people who book windows.
+    key: 'slots', label: 'Find a slot', href: '/slots', matches: (pathname) => pathname.startsWith('/slots'),
+    Icon: SlotIcon, roles: SLOT_SEARCH_ROLES,
+  },
+  {
+    // Many windows scheduled together: planners run them (others who may read one reach it from the calendar).
+    key: 'campaigns', label: 'Campaigns', href: '/campaigns', matches: (pathname) => pathname.startsWith('/campaigns'),
+    Icon: CampaignIcon, roles: CAMPAIGN_PLANNER_ROLES,
   },
   {
     key: 'freezes', label: 'Freezes', href: '/freezes', matches: (pathname) => pathname.startsWith('/freezes'),

@@ -1,6 +1,6 @@
 // Calendar: the visible month's windows (GET /api/windows?from=&to=) and freezes, with the selected day's agenda.
 // A tenant user's calendar holds the work it was notified of, as tenant views, and opens their notices.
-import { useRouter, type Href } from 'expo-router';
+import { useLocalSearchParams, useRouter, type Href } from 'expo-router';
 import { useMeQuery } from '@/hooks/queries/me';
 import { useFreezesQuery } from '@/hooks/queries/freezes';
 import { useTenantWindowsQuery } from '@/hooks/queries/tenant-windows';
@@ -10,16 +10,20 @@ import { CalendarView } from '@/components/calendar/calendar-view';
 import { noticeIdOf, tenantCalendarWindows } from '@/components/calendar/tenant-calendar';
 import { useCalendarState } from '@/components/calendar/use-calendar-state';
 import { listParams } from '@/components/calendar/window-filters';
-import { canBookWindows, isOperator, tenantScopeOf } from '@/shared/permissions';
+import { canBookWindows, canReadCampaigns, canSearchSlots, isOperator, tenantScopeOf } from '@/shared/permissions';
 import { visibleRange } from '@/components/time';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
 import { usePageTitle } from '@/components/page-title';
 import { useElementNames } from '@/components/inventory/use-site-names';
+import { useCampaignsQuery } from '@/hooks/queries/campaigns';
+import { campaignIdOf, draftCalendarWindows } from '@/components/campaigns/campaign-calendar';
 
 export default function CalendarScreen() {
   const router = useRouter();
   const timeZone = useViewerTimeZone();
-  const state = useCalendarState(timeZone);
+  // ?day=YYYY-MM-DD opens on that day (a campaign's "Show on calendar").
+  const { day } = useLocalSearchParams<{ day?: string }>();
+  const state = useCalendarState(timeZone, day && /^\d{4}-\d{2}-\d{2}$/.test(day) ? day : undefined);
   const me = useMeQuery().data;
   const roles = me?.roles ?? [];
   const tenant = me !== undefined && tenantScopeOf(me) !== null;
@@ -28,6 +32,8 @@ export default function CalendarScreen() {
   const tenantWindows = useTenantWindowsQuery(range, tenant);
   const freezes = useFreezesQuery(isOperator(roles));
   const tenants = useTenantChoicesQuery(isOperator(roles));
+  // Draft campaigns show as outlined bars for the people who schedule or read them.
+  const drafts = useCampaignsQuery({ status: 'draft', from: range.from, to: range.to }, canReadCampaigns(roles));
   const windows = tenant ? tenantWindows : staffWindows;
   usePageTitle('Calendar');
   const elementName = useElementNames();
@@ -39,12 +45,16 @@ export default function CalendarScreen() {
     const id = noticeIdOf(views, windowId);
     return id ? { pathname: '/notices/[id]', params: { id } } : null;
   };
-  const windowHref = tenant ? tenantWorkHref : (id: string): Href => ({ pathname: '/windows/[id]', params: { id } });
+  const staffHref = (id: string): Href => {
+    const campaignId = campaignIdOf(id);
+    return campaignId ? { pathname: '/campaigns/[id]', params: { id: campaignId } } : { pathname: '/windows/[id]', params: { id } };
+  };
+  const windowHref = tenant ? tenantWorkHref : staffHref;
   return (
     <CalendarView
       state={state}
       timeZone={timeZone}
-      windows={tenant ? tenantCalendarWindows(views) : staffWindows.data?.windows ?? []}
+      windows={tenant ? tenantCalendarWindows(views) : [...staffWindows.data?.windows ?? [], ...draftCalendarWindows(drafts.data?.campaigns ?? [])]}
       freezes={freezes.data?.freezes ?? []}
       tenants={tenants.data ?? []}
       refreshing={windows.isFetching}
@@ -52,6 +62,7 @@ export default function CalendarScreen() {
       canBook={canBookWindows(roles)}
       showFilters={!tenant}
       onBook={() => router.push('/windows/new')}
+      onFindSlot={canSearchSlots(roles) ? () => router.push('/slots') : undefined}
       windowHref={windowHref}
       elementName={elementName}
     />

@@ -1,7 +1,7 @@
 // Find a slot (engineers, planners, admins): when does one window's work hurt least? The search runs as a job;
 // its id stays in the address so a reload shows the same answer.
 import { useLocalSearchParams, useRouter, type Href } from 'expo-router';
-import { canBookWindows } from '@/shared/permissions';
+import { canSearchSlots } from '@/shared/permissions';
 import { useMeQuery } from '@/hooks/queries/me';
 import { ErrorState, LoadingState } from '@/components/screen-states';
 import { useViewerTimeZone } from '@/components/time/use-viewer-time-zone';
@@ -17,7 +17,7 @@ export default function SlotFinderScreen() {
   usePageTitle('Find a slot');
   if (me.isError) return <ErrorState message={me.error.message} onRetry={() => void me.refetch()} />;
   if (!me.data) return <LoadingState />;
-  if (!canBookWindows(me.data.roles)) return <ErrorState message="Your roles do not include booking windows, so there is no slot to find." />;
+  if (!canSearchSlots(me.data.roles)) return <ErrorState message="Finding slots is for engineers, planners and admins; your roles do not include it." />;
   return (
     <FormPage title="Find a slot">
       <SlotFinder
