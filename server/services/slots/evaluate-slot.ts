@@ -24,11 +24,12 @@ import {
 
 /**
  * The ranking's weights, in points (lower cost ranks first). A slice the quick re-map cannot keep is an outage a
- * tenant feels, so it outweighs everything else: one such slice costs more than 20 slices that move and keep
- * running. A critical slice touched adds on top of being touched (it moves even when it is kept: more at stake).
+ * tenant feels, so it outweighs everything else: one such slice costs as much as 20 touched slices that move
+ * and keep running. A critical slice touched adds on top of being touched (it moves even when it is kept: more at stake).
  * Risk counts per percent of failure chance: a slot where equipment the slices still use is 1 % likely to fail
  * weighs like two more touched slices. Every other window out at the same time leaves less room to recover and is
- * a small penalty; notice days to spare give a small bonus, capped so they only break near-ties.
+ * a small penalty; notice days to spare give a small bonus (at most 1.4 points), capped at a week: more notice than
+ * that helps no tenant, so beyond it an earlier night is as good as a later one and wins the tie.
  */
 export const SLOT_COST_WEIGHTS = {
   /** per slice the quick re-map finds no place for */
@@ -44,7 +45,7 @@ export const SLOT_COST_WEIGHTS = {
   /** taken off per day of notice to spare, up to NOTICE_SPARE_CAP_DAYS */
   noticeSpareDay: 0.2,
 } as const;
-export const NOTICE_SPARE_CAP_DAYS = 14;
+export const NOTICE_SPARE_CAP_DAYS = 7;
 
 /** The quick re-map's limit per run when the caller sets none. */
 export const DEFAULT_REMAP_LIMIT_MS = 300;
