@@ -57,6 +57,7 @@ function subjectOf(r: AuditTrailRow, names: SubjectNames): AuditSubject | null {
       return name ? { kind: 'Slice', name, href: `/slices/${id}` } : gone('Slice');
     }
     case 'import': return { kind: 'Import', name: names.imports.get(id) ?? recordedName(r) ?? 'No longer listed', href: '/imports' };
+    case 'campaign': return { kind: 'Campaign', name: recordedName(r) ?? 'No longer listed', href: `/campaigns/${id}` };
     case 'policy': return { kind: 'Policies', name: 'Booking, notice and sign-off policies', href: '/sign-off/policy' };
     case 'sso-settings': return { kind: 'Settings', name: 'Single sign-on', href: null };
     case 'network': return { kind: 'Network', name: 'The whole network', href: '/network' };

@@ -32,7 +32,8 @@ export async function bookCampaign(deps: { db: Db; now: Date }, id: string, vers
     const newVersion = await updateCampaign(tx, id, { status: 'booked', bookedWindowIds: windowIds, now });
     await insertAuditEntry(tx, {
       actorId: user.id, action: 'campaign.book', entity: 'campaign', entityId: id, at: now,
-      before: { status: 'draft', version: row.version }, after: { status: 'booked', version: newVersion, windows: windowIds.length },
+      before: { status: 'draft', title: row.title, version: row.version },
+      after: { status: 'booked', title: row.title, version: newVersion, windowIds },
     });
     return windowIds;
   });

@@ -57,7 +57,7 @@ export async function patchCampaign(
     await insertAuditEntry(tx, {
       actorId: user.id, action: 'campaign.update', entity: 'campaign', entityId: id, at: deps.now,
       before: { title: row.title, version: row.version },
-      after: { title: patch.title ?? row.title, version, ...(moved.length > 0 ? { movedGroups: moved } : {}) },
+      after: { title: patch.title ?? row.title, version, ...(moved.length > 0 ? { movedWindows: moved.join(', ') } : {}) },
     });
   });
 }
@@ -70,7 +70,7 @@ export async function discardCampaign(deps: { db: Db; now: Date }, id: string, v
     await updateCampaign(tx, id, { status: 'discarded', now: deps.now });
     await insertAuditEntry(tx, {
       actorId: user.id, action: 'campaign.discard', entity: 'campaign', entityId: id, at: deps.now,
-      before: { status: 'draft', title: row.title }, after: { status: 'discarded' },
+      before: { status: 'draft', title: row.title }, after: { status: 'discarded', title: row.title },
     });
   });
 }

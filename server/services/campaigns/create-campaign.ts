@@ -25,7 +25,7 @@ export async function createCampaign(deps: CampaignDeps, input: CampaignCreate, 
     await insertCampaign(tx, { id, title, request: stored, createdBy: user.id, now: deps.now });
     await insertAuditEntry(tx, {
       actorId: user.id, action: 'campaign.create', entity: 'campaign', entityId: id, at: deps.now,
-      before: null, after: { title, status: 'queued', groups: request.groups.length },
+      before: null, after: { title, status: 'queued' },
     });
   });
   await enqueueSlotJob(deps, { kind: 'campaign', id });
