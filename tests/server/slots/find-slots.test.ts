@@ -8,6 +8,7 @@
 // With X down both slices can move to Y. Night 1 lies in a freeze; night 2 has a window that also takes X out;
 // night 3 is less than 10 days away; on night 4 a window reduces Y to a tenth of its capacity (no conflict by
 // the pair rules: nothing shared, nothing split), so the critical slice has nowhere to go; night 5 is clean.
+// Night 6 (outside the main search's range) has a harmless window on B at the same time.
 import { like, sql } from 'drizzle-orm';
 import { createDb, type Db } from '../../../db/client';
 import {
@@ -83,10 +84,12 @@ async function insertScenario(): Promise<void> {
   await db.insert(windows).values([
     { id: id('w-shared'), title: 'Rectifier swap at X', startsAt: new Date('2031-03-10T00:00:00Z'), endsAt: new Date('2031-03-10T08:00:00Z') },
     { id: id('w-reduce'), title: 'Cooling work at Y', startsAt: new Date('2031-03-12T00:00:00Z'), endsAt: new Date('2031-03-12T08:00:00Z') },
+    { id: id('w-b'), title: 'Battery check at B', startsAt: new Date('2031-03-14T00:00:00Z'), endsAt: new Date('2031-03-14T08:00:00Z') },
   ]);
   await db.insert(windowElements).values([
     { windowId: id('w-shared'), elementKind: 'site', elementId: id('X'), effect: 'down', fraction: null },
     { windowId: id('w-reduce'), elementKind: 'site', elementId: id('Y'), effect: 'reduced', fraction: 0.1 },
+    { windowId: id('w-b'), elementKind: 'site', elementId: id('B'), effect: 'down', fraction: null },
   ]);
 }
 
@@ -144,6 +147,19 @@ test('the clean night ranks first; every other night is excluded with its reason
   expect(first.summary).toMatchObject({ usable: 1, excluded: 4 });
   expect(first.touchedSlices).toEqual([id('dispatch'), id('meter')].sort());
   for (const c of first.candidates) expect(c.explanation).not.toMatch(new RegExp(PREFIX));
+});
+
+test('a harmless window at the same time costs a little: the otherwise equal night ranks second', async () => {
+  const wider = await findSlots(db, request({ to: '2031-03-14T12:00:00Z' }), { now: NOW });
+  const usable = wider.candidates.filter((c) => c.rank !== null);
+  expect(usable.map((c) => [c.rank, c.start])).toEqual([[1, startOf(NIGHTS[4])], [2, '2031-03-14T01:00:00.000Z']]);
+  const [clean, shared] = usable;
+  expect(shared).toMatchObject({ excluded: null, conflicts: [], overlapping: [{ id: id('w-b'), title: 'Battery check at B' }], unresolved: 0 });
+  expect(shared.cost).toBeGreaterThan(clean.cost);
+  expect(shared.explanation).toMatch(/the window "Battery check at B" also out/);
+  expect(clean.explanation).not.toMatch(/also out/);
+  // The excluded nights follow the usable ones, by start.
+  expect(wider.candidates.slice(2).map((c) => c.start)).toEqual(NIGHTS.slice(0, 4).map(startOf));
 });
 
 test('a second search on the same network state reuses the quick re-map and gives the same answers', async () => {
