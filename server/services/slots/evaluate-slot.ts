@@ -65,7 +65,11 @@ export type EvaluatedSlot = {
 export type RemapStats = { runs: number; reused: number };
 
 /** Shared by every group of one search: the remap answers computed or reused so far, and the counts. */
-export type SearchRemaps = { memo: Map<string, RemapAnswer>; cache: RemapCache; stats: RemapStats; limitMs: number };
+export type SearchRemaps = {
+  memo: Map<string, RemapAnswer>; cache: RemapCache; stats: RemapStats; limitMs: number;
+  /** called while a re-map runs (each generation), so the search can report progress during a long run */
+  onBusy?: () => void;
+};
 
 type StateFacts = {
   key: string;
@@ -186,6 +190,7 @@ export class GroupEvaluator {
           mode: defaults.mode, seed: defaults.seed, population: defaults.population, knockOn: defaults.knockOn,
           maxKnockOnMoves: defaults.maxKnockOnMoves, timeLimitMs: limitMs, reservations: facts.reservations,
         },
+        onProgress: this.remaps.onBusy,
       });
       answer = { slices: computed.result.slices, affected: computed.result.affected };
       cache.set(facts.key, inv, answer);

@@ -141,7 +141,11 @@ export async function findSlotsForGroups(
   const out: GroupSlots[] = [];
   const memo: SearchRemaps['memo'] = new Map();
   for (const group of groups) {
-    const remaps: SearchRemaps = { memo, cache: processRemapCache, stats: { runs: 0, reused: 0 }, limitMs };
+    const remaps: SearchRemaps = {
+      memo, cache: processRemapCache, stats: { runs: 0, reused: 0 }, limitMs,
+      // A report in the middle of a run is a courtesy: a failure there shows again at the next candidate's report.
+      onBusy: () => { report('evaluating').catch(() => undefined); },
+    };
     const evaluator = new GroupEvaluator(ctx, group, timing.durationHours, remaps);
     const groupStart = elapsed();
     const evaluated: EvaluatedSlot[] = [];
