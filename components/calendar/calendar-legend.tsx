@@ -6,10 +6,13 @@ import type { WindowStatus } from '@/shared/windows';
 import { STATUS_LABELS } from '@/components/windows/lifecycle';
 import { calendarColors, colors, fonts, radii, space, type } from '@/constants/theme';
 import { STATUS_MARKS, statusColor } from './calendar-marks';
-import { FreezeHatch } from './freeze-hatch';
+import { DraftHatch, FreezeHatch } from './freeze-hatch';
 
-/** `statuses`: those of the windows drawn this month; with none, a neutral key says that bars are windows. */
-export function CalendarLegend({ statuses = [] }: { statuses?: readonly WindowStatus[] }) {
+/**
+ * `statuses`: those of the windows drawn this month; with none, a neutral key says that bars are windows.
+ * `drafts`: a draft campaign's window is drawn, so the outlined "Draft" bar is explained.
+ */
+export function CalendarLegend({ statuses = [], drafts = false }: { statuses?: readonly WindowStatus[]; drafts?: boolean }) {
   return (
     <View style={styles.row} testID="calendar-legend">
       {statuses.map((status) => (
@@ -20,6 +23,14 @@ export function CalendarLegend({ statuses = [] }: { statuses?: readonly WindowSt
           <Text style={styles.text}>{STATUS_LABELS[status]}</Text>
         </View>
       ))}
+      {drafts ? (
+        <View style={styles.item} testID="calendar-legend-campaign-draft">
+          <View style={[styles.bar, styles.draftBar]}>
+            <DraftHatch />
+          </View>
+          <Text style={styles.text}>Draft campaign, not booked</Text>
+        </View>
+      ) : null}
       <View style={styles.item}>
         <View style={styles.today} />
         <Text style={styles.text}>Today</Text>
@@ -58,4 +69,5 @@ const styles = StyleSheet.create({
     textShadowColor: 'rgba(0, 0, 0, 0.45)', textShadowRadius: 2, textShadowOffset: { width: 0, height: 0 },
   },
   neutralBar: { backgroundColor: colors.border },
+  draftBar: { backgroundColor: colors.surface, borderWidth: 1.5, borderStyle: 'dashed', borderColor: colors.inkMuted, overflow: 'hidden' },
 });

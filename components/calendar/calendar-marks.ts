@@ -31,8 +31,13 @@ export const STATUS_MARKS: Record<CalendarWindow['status'], string> = {
 /** The statuses of the windows drawn, in lifecycle order of first appearance, for the legend. */
 export function statusesShown(marks: MarkedDays): CalendarWindow['status'][] {
   const seen = new Set<CalendarWindow['status']>();
-  for (const mark of Object.values(marks)) for (const p of mark.periods) if (p.status) seen.add(p.status);
+  for (const mark of Object.values(marks)) for (const p of mark.periods) if (p.status && !p.draft) seen.add(p.status);
   return [...seen];
+}
+
+/** Whether any draft campaign's window is drawn, for the legend. */
+export function draftsShown(marks: MarkedDays): boolean {
+  return Object.values(marks).some((mark) => mark.periods.some((p) => p.draft));
 }
 
 type Placed = { window: CalendarWindow; lane: number; segments: DaySegment[] };

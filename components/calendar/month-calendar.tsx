@@ -7,7 +7,7 @@ import type { MarkedDays } from './calendar-types';
 import { MonthGrid } from './month-grid';
 import { MonthHeader, monthTitle } from './month-header';
 import { CalendarLegend } from './calendar-legend';
-import { statusesShown } from './calendar-marks';
+import { draftsShown, statusesShown } from './calendar-marks';
 
 type Props = {
   /** 'YYYY-MM' */
@@ -53,7 +53,7 @@ export function MonthCalendar({ month, today, selectedDay, marks, onDayPress, on
         onDayPress={onDayPress}
         onMonthChange={onMonthChange}
       />
-      <CalendarLegend statuses={statusesShown(marks)} />
+      <CalendarLegend statuses={statusesShown(marks)} drafts={draftsShown(marks)} />
     </View>
   );
 }

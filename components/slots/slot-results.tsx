@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { Pressable, StyleSheet, Text, View } from 'react-native';
 import type { SlotSearch } from '@/shared/slots';
 import { CriticalCaution } from '@/components/critical-caution';
+import { SEVERITY_SCALE } from '@/components/impact/impact-format';
 import { formatWindowRange } from '@/components/time';
 import { colors, radii, space, type } from '@/constants/theme';
 import { SlotCandidateRow } from './slot-candidate';
@@ -28,7 +29,10 @@ export function SlotResults({ search, timeZone, onBook }: Props) {
         </View>
       ) : (
         <>
-          <Text style={styles.muted}>{SLOT_RISK_MEANING}</Text>
+          <View style={styles.legend} testID="slot-risk-scale">
+            <Text style={styles.muted}>{SLOT_RISK_MEANING}</Text>
+            <Text style={styles.muted}>{SEVERITY_SCALE}</Text>
+          </View>
           {critical ? (
             <CriticalCaution title="Critical slices in these slots" testID="slot-critical-caution"
               lead="Some slots touch slices that carry public-safety, health or utility services." />
@@ -75,6 +79,7 @@ const styles = StyleSheet.create({
   stack: { gap: space.md },
   heading: { ...type.title, color: colors.ink },
   list: { gap: space.md },
+  legend: { gap: space.xxs },
   empty: { gap: space.sm, padding: space.lg, backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border },
   body: { ...type.body, color: colors.ink },
   bodyStrong: { ...type.bodyStrong, color: colors.ink },

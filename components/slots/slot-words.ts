@@ -12,11 +12,11 @@ export const EXCLUSION_LABELS: Record<SlotExclusionCode, string> = {
 
 /** What the risk figure is and which scale its Low/Medium/High comes from, said once above the list. */
 export const SLOT_RISK_MEANING =
-  'Risk = chance that a slice kept in service fails unplanned during the slot, from each site’s and span’s mean time between failures. Low, Medium and High are its level on the plan review’s risk scale.';
+  'Risk = the highest chance that a slice kept in service fails unplanned during the slot, from each site’s and span’s mean time between failures. Low, Medium and High name the most severe slice at risk, on the slice severity scale (Critical counts as High).';
 
-/** "0.4 % (Low on the plan review’s risk scale)" */
+/** "0.40 % (Low on the slice severity scale)" */
 export function riskText(c: Pick<SlotCandidate, 'riskPercent' | 'riskLevel'>): string {
-  return `${formatRiskPercent(c.riskPercent / 100)} (${c.riskLevel} on the plan review’s risk scale)`;
+  return `${formatRiskPercent(c.riskPercent / 100)} (${c.riskLevel} on the slice severity scale)`;
 }
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;

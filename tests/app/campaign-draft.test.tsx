@@ -7,7 +7,7 @@ import { CampaignForm } from '@/components/campaigns/campaign-form';
 import { newGroup, validateCampaignForm, type CampaignFormValues } from '@/components/campaigns/campaign-form-state';
 import { campaignIdOf, draftCalendarWindows } from '@/components/campaigns/campaign-calendar';
 import { gainText, refusalLines, windowsByNight } from '@/components/campaigns/campaign-words';
-import { buildMarkedDays } from '@/components/calendar/calendar-marks';
+import { buildMarkedDays, draftsShown, statusesShown } from '@/components/calendar/calendar-marks';
 import { CalendarDay } from '@/components/calendar/calendar-day';
 import { ApiError } from '@/hooks/api-fetch';
 import { clearQueries, renderWithQueries, routedFetch } from './window-test-kit';
@@ -139,6 +139,9 @@ describe('draft campaigns on the calendar', () => {
     const period = marks['2030-01-10'].periods[0];
     expect(period).toMatchObject({ draft: true, title: 'Upgrade: Group 1' });
     expect(marks['2030-01-10'].windowLabels).toEqual(['Group 1 (Draft campaign, not booked: Upgrade)']);
+    // The legend explains the outlined bar, not a draft window's status colour.
+    expect(draftsShown(marks)).toBe(true);
+    expect(statusesShown(marks)).toEqual([]);
     renderWithQueries(<CalendarDay day="2030-01-10" outside={false} mark={marks['2030-01-10']} tabStop onPress={jest.fn()} onKeyDown={jest.fn()} testID="day" />);
     expect(screen.getByTestId(`day-bar-${drafts[0].id}-mark`, { includeHiddenElements: true })).toHaveTextContent('Draft Upgrade: Group 1');
   });
