@@ -8,7 +8,7 @@ import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 import { currentInventory } from '../inventory/inventory-cache';
 import { nameElements } from './element-names';
 import type { SlotEngine } from './engine';
-import { problemOf, type CampaignRequest, type StoredSchedule } from './stored-schedule';
+import { problemOf, roundCost, type CampaignRequest, type StoredSchedule } from './stored-schedule';
 
 export type PlanCampaignDeps = {
   db: Queryable;
@@ -71,7 +71,7 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
     unscheduledReasons: schedule.unscheduledReasons,
     // Both objectives carry the same penalty for the groups left unscheduled at the end; taking it out of the
     // start's figure puts it beside the windows' sum.
-    startCost: schedule.startCost - (schedule.totalCost - windowsCost),
+    startCost: roundCost(schedule.startCost - (schedule.totalCost - windowsCost)),
     moves: schedule.moves,
     iterations: schedule.iterations,
   };

@@ -53,7 +53,10 @@ export function problemOf(s: StoredSchedule, request: Pick<CampaignRequest, 'max
   };
 }
 
+/** Costs are read to a hundredth of a point; sums of them drop the floating-point dust. */
+export const roundCost = (points: number) => Math.round(points * 100) / 100;
+
 /** Sum of the scheduled windows' costs (points). */
 export function totalCostOf(s: StoredSchedule): number {
-  return s.assignment.reduce<number>((sum, slot, g) => sum + (slot === null ? 0 : s.groups[g].slots[slot].cost), 0);
+  return roundCost(s.assignment.reduce<number>((sum, slot, g) => sum + (slot === null ? 0 : s.groups[g].slots[slot].cost), 0));
 }
