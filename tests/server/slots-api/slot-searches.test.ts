@@ -162,6 +162,18 @@ describe('the job handler', () => {
     expect(dead.error).toBe('The run was tried 2 times and given up; last error: connection reset');
   });
 
+  test('a worker that stops mid-search hands it back to the queue, not failed', async () => {
+    const id = await startSearch();
+    const stopping = { aborted: false };
+    const stopped: SlotEngine = {
+      ...slotEngine,
+      findSlots: (db, req, opts) => slotEngine.findSlots(db, req, { ...opts, onProgress: () => { stopping.aborted = true; } }),
+    };
+    await expect(runSlotJob({ db: ctx.db, engine: stopped, log: quiet, now: () => NOW, stopping }, { id: 'job', data: { kind: 'slots', id } }))
+      .rejects.toThrow('stopped');
+    expect(await read(id)).toMatchObject({ status: 'queued', error: null, progress: null });
+  });
+
   test('a finished search is not worked again', async () => {
     const id = await startSearch();
     await runSlotJob({ db: ctx.db, engine: slotEngine, log: quiet, now: () => NOW }, { id: 'job', data: { kind: 'slots', id } });
