@@ -1,6 +1,9 @@
-// One element group over its candidate slots: what each slot costs and why, or why it is excluded. Work that
-// depends only on the network state (the group's elements plus the other windows out at the same time) is done
-// once per state: impact, conflicts per window, the quick re-map (also shared across searches) and risk.
+// One element group over its candidate slots: what each slot costs and why, or why it is excluded. The slices the
+// work touches are its own impact (as the impact screen and the notices count them); conflicts are worked out once
+// per other window; the quick re-map and the risk after it once per network state (the group's elements plus the
+// other windows out at the same time, whose elements and accepted plans it must leave alone), and the re-map's
+// answer is shared across searches. Only slices the work touches count as unresolved: a slice another window
+// strands on its own is that window's outage, not this slot's.
 import { assessImpact } from '../../../planner/impact/assess-impact';
 import type { Severity } from '../../../planner/impact/severity';
 import { compileWindow } from '../../../planner/model/build-inventory';
@@ -77,6 +80,7 @@ type StateFacts = {
   spec: WindowSpec;
   touched: TouchedSlice[];
   touchedIds: string[];
+  touchedSet: ReadonlySet<string>;
   criticalTouched: number;
   tenants: string[];
   reservations: ReturnType<typeof overlapReservations>;
@@ -144,6 +148,25 @@ export class GroupEvaluator {
     return words;
   }
 
+  private ownFacts: Pick<StateFacts, 'touched' | 'touchedIds' | 'touchedSet' | 'criticalTouched' | 'tenants'> | null = null;
+
+  /**
+   * The slices the work itself touches: its impact without the other windows, as the impact screen and the
+   * tenants' notices count it. Slices another window at the same time squeezes are that window's to announce.
+   */
+  private own(spec: WindowSpec): NonNullable<GroupEvaluator['ownFacts']> {
+    if (this.ownFacts) return this.ownFacts;
+    const inv = this.ctx.inventory;
+    const impact = assessImpact(inv, spec);
+    const touched = impact.affected.map((a) => ({ slice: a.slice, reasons: a.reasons, tenantId: inv.slices[a.sliceIndex].tenant }));
+    this.ownFacts = {
+      touched, touchedIds: touched.map((t) => t.slice), touchedSet: new Set(touched.map((t) => t.slice)),
+      criticalTouched: impact.affected.filter((a) => inv.slices[a.sliceIndex].critical).length,
+      tenants: [...new Set(touched.map((t) => t.tenantId))].sort(),
+    };
+    return this.ownFacts;
+  }
+
   private state(overlapping: ContextWindow[]): StateFacts {
     const key = remapKey({
       revision: this.ctx.revision, sites: this.group.sites, spans: this.group.spans,
@@ -160,14 +183,7 @@ export class GroupEvaluator {
     });
     const reservations = overlapping.length === 0 ? {}
       : overlapReservations(inv, overlapping.map((w) => ({ window: w.spec, slices: w.slices })));
-    const impact = assessImpact(inv, spec, { reservations });
-    const touched = impact.affected.map((a) => ({ slice: a.slice, reasons: a.reasons, tenantId: inv.slices[a.sliceIndex].tenant }));
-    facts = {
-      key, overlapping, spec, touched, touchedIds: touched.map((t) => t.slice),
-      criticalTouched: impact.affected.filter((a) => inv.slices[a.sliceIndex].critical).length,
-      tenants: [...new Set(touched.map((t) => t.tenantId))].sort(),
-      reservations, remap: null, riskWithoutPlan: null,
-    };
+    facts = { key, overlapping, spec, ...this.own(spec), reservations, remap: null, riskWithoutPlan: null };
     this.states.set(key, facts);
     return facts;
   }
@@ -199,7 +215,8 @@ export class GroupEvaluator {
       stats.reused += 1;
     }
     memo.set(facts.key, answer);
-    const shown = new Set([...answer.affected, ...answer.slices.map((s) => s.slice)]);
+    // Risk of the slices the work touches and of those the plan moves to make room for them.
+    const shown = new Set([...facts.touchedIds, ...answer.slices.filter((s) => (s.madeRoomFor?.length ?? 0) > 0).map((s) => s.slice)]);
     const risk = riskFacts(inv, facts.spec, fromSlicePlans(inv, answer.slices), shown);
     facts.remap = { answer, risk };
     return { answer, risk, reused };
@@ -246,11 +263,13 @@ export class GroupEvaluator {
       const run = await this.remap(facts);
       reused = run.reused;
       risk = run.risk;
-      planned = run.answer.slices.map((s) => ({
+      // The plan also re-places slices only the other windows squeeze; those are theirs, not this work's.
+      const ours = run.answer.slices.filter((s) => facts.touchedSet.has(s.slice) || (s.madeRoomFor?.length ?? 0) > 0);
+      planned = ours.map((s) => ({
         slice: s.slice, outcome: s.outcome, madeRoomFor: s.madeRoomFor ?? [],
         tenantId: inv.slices[inv.sliceIndex.get(s.slice) ?? -1]?.tenant ?? '',
       }));
-      unresolvedIds = run.answer.slices.filter((s) => s.outcome === 'unresolved' && (s.madeRoomFor?.length ?? 0) === 0)
+      unresolvedIds = ours.filter((s) => s.outcome === 'unresolved' && facts.touchedSet.has(s.slice))
         .map((s) => s.slice);
       criticalUnresolved = unresolvedIds.filter((id) => inv.slices[inv.sliceIndex.get(id) ?? -1]?.critical);
       if (criticalUnresolved.length > 0) {

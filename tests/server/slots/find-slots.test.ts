@@ -8,7 +8,8 @@
 // With X down both slices can move to Y. Night 1 lies in a freeze; night 2 has a window that also takes X out;
 // night 3 is less than 10 days away; on night 4 a window reduces Y to a tenth of its capacity (no conflict by
 // the pair rules: nothing shared, nothing split), so the critical slice has nowhere to go; night 5 is clean.
-// Night 6 (outside the main search's range) has a harmless window on B at the same time.
+// Night 6 (outside the main search's range) has a window at the same time on B and Z, a leaf beyond B where the
+// critical "Alarm relay" is fixed: that window strands it on its own, so it must not count against X's night.
 import { like, sql } from 'drizzle-orm';
 import { createDb, type Db } from '../../../db/client';
 import {
@@ -59,17 +60,18 @@ async function insertScenario(): Promise<void> {
     { id: id('t-meter'), name: 'Meterco', noticeDays: 10 },
   ]);
   const site = (key: string, cpu: number) => ({ id: id(key), name: `Site ${key}`, kind: 'edge' as const, lat: 50, lon: 1, cpu, mtbfHours: 50_000 });
-  await db.insert(sites).values([site('A', 1), site('X', 8), site('Y', 8), site('B', 1)]);
-  await db.insert(spans).values([['ax', 'A', 'X'], ['xb', 'X', 'B'], ['ay', 'A', 'Y'], ['yb', 'Y', 'B']].map(([k, a, b]) => ({
+  await db.insert(sites).values([site('A', 1), site('X', 8), site('Y', 8), site('B', 1), site('Z', 1)]);
+  await db.insert(spans).values([['ax', 'A', 'X'], ['xb', 'X', 'B'], ['ay', 'A', 'Y'], ['yb', 'Y', 'B'], ['bz', 'B', 'Z']].map(([k, a, b]) => ({
     id: id(k), siteA: id(a), siteB: id(b), capacityGbps: 10, lengthKm: 10, mtbfHours: 20_000,
   })));
   await db.insert(slices).values([
     { id: id('dispatch'), tenantId: id('t-blue'), name: 'Emergency dispatch', sst: 1, priority: 1, critical: true },
     { id: id('meter'), tenantId: id('t-meter'), name: 'Meter readings', sst: 3, priority: 4 },
+    { id: id('relay'), tenantId: id('t-blue'), name: 'Alarm relay', sst: 1, priority: 1, critical: true },
   ]);
   await db.insert(sliceFunctions).values([
     { id: id('f1'), sliceId: id('dispatch'), cpu: 4 }, { id: id('f2'), sliceId: id('dispatch'), cpu: 1 },
-    { id: id('g1'), sliceId: id('meter'), cpu: 2 },
+    { id: id('g1'), sliceId: id('meter'), cpu: 2 }, { id: id('h1'), sliceId: id('relay'), cpu: 0.5, fixed: true },
   ]);
   await db.insert(sliceTies).values([
     { id: id('e1'), sliceId: id('dispatch'), fromFunction: id('f1'), toFunction: id('f2'), bandwidthGbps: 1, maxLatencyMs: 50 },
@@ -77,6 +79,7 @@ async function insertScenario(): Promise<void> {
   await db.insert(placements).values([
     { sliceId: id('dispatch'), revision: 1, sites: { [id('f1')]: id('X'), [id('f2')]: id('A') }, paths: { [id('e1')]: [id('ax')] } },
     { sliceId: id('meter'), revision: 1, sites: { [id('g1')]: id('X') }, paths: {} },
+    { sliceId: id('relay'), revision: 1, sites: { [id('h1')]: id('Z') }, paths: {} },
   ]);
   await db.insert(freezes).values({
     id: id('freeze'), title: 'Spring census freeze', startsAt: new Date('2031-03-08T23:00:00Z'), endsAt: new Date('2031-03-09T08:00:00Z'),
@@ -84,12 +87,13 @@ async function insertScenario(): Promise<void> {
   await db.insert(windows).values([
     { id: id('w-shared'), title: 'Rectifier swap at X', startsAt: new Date('2031-03-10T00:00:00Z'), endsAt: new Date('2031-03-10T08:00:00Z') },
     { id: id('w-reduce'), title: 'Cooling work at Y', startsAt: new Date('2031-03-12T00:00:00Z'), endsAt: new Date('2031-03-12T08:00:00Z') },
-    { id: id('w-b'), title: 'Battery check at B', startsAt: new Date('2031-03-14T00:00:00Z'), endsAt: new Date('2031-03-14T08:00:00Z') },
+    { id: id('w-b'), title: 'Battery check at B and Z', startsAt: new Date('2031-03-14T00:00:00Z'), endsAt: new Date('2031-03-14T08:00:00Z') },
   ]);
   await db.insert(windowElements).values([
     { windowId: id('w-shared'), elementKind: 'site', elementId: id('X'), effect: 'down', fraction: null },
     { windowId: id('w-reduce'), elementKind: 'site', elementId: id('Y'), effect: 'reduced', fraction: 0.1 },
     { windowId: id('w-b'), elementKind: 'site', elementId: id('B'), effect: 'down', fraction: null },
+    { windowId: id('w-b'), elementKind: 'site', elementId: id('Z'), effect: 'down', fraction: null },
   ]);
 }
 
@@ -149,14 +153,16 @@ test('the clean night ranks first; every other night is excluded with its reason
   for (const c of first.candidates) expect(c.explanation).not.toMatch(new RegExp(PREFIX));
 });
 
-test('a harmless window at the same time costs a little: the otherwise equal night ranks second', async () => {
+test('a window at the same time that strands a slice on its own costs a little but does not exclude the night', async () => {
   const wider = await findSlots(db, request({ to: '2031-03-14T12:00:00Z' }), { now: NOW });
   const usable = wider.candidates.filter((c) => c.rank !== null);
   expect(usable.map((c) => [c.rank, c.start])).toEqual([[1, startOf(NIGHTS[4])], [2, '2031-03-14T01:00:00.000Z']]);
   const [clean, shared] = usable;
-  expect(shared).toMatchObject({ excluded: null, conflicts: [], overlapping: [{ id: id('w-b'), title: 'Battery check at B' }], unresolved: 0 });
+  expect(shared).toMatchObject({
+    excluded: null, conflicts: [], overlapping: [{ id: id('w-b'), title: 'Battery check at B and Z' }], unresolved: 0, criticalUnresolved: 0,
+  });
   expect(shared.cost).toBeGreaterThan(clean.cost);
-  expect(shared.explanation).toMatch(/the window "Battery check at B" also out/);
+  expect(shared.explanation).toMatch(/the window "Battery check at B and Z" also out/);
   expect(clean.explanation).not.toMatch(/also out/);
   // The excluded nights follow the usable ones, by start.
   expect(wider.candidates.slice(2).map((c) => c.start)).toEqual(NIGHTS.slice(0, 4).map(startOf));
@@ -188,11 +194,13 @@ test('progress ends with every candidate done; an aborted search stops early', a
 test('several groups share one context; each is ranked on its own', async () => {
   const [x, b] = await findSlotsForGroups(db, request(), [{ sites: [id('X')], spans: [] }, { sites: [id('B')], spans: [] }], { now: NOW });
   expect(x.candidates.map((c) => [c.start, c.excluded?.code ?? null])).toEqual(first.candidates.map((c) => [c.start, c.excluded?.code ?? null]));
-  // B hosts nothing and no slice crosses it; alone it only leaves the dispatch tie over ax without a backup path.
-  // On night 2, while the other window has X out, the slices on X must move for B's work too, and Meterco's
-  // 10 days' notice is not met.
-  expect(b.candidates.filter((c) => c.excluded).map((c) => [c.start, c.excluded!.code]))
-    .toEqual([[startOf(NIGHTS[0]), 'FREEZE'], [startOf(NIGHTS[1]), 'LEAD_TIME']]);
+  // B hosts nothing and no slice crosses it; it only leaves the dispatch tie over ax without a backup path. On
+  // night 2 the other window has X out at the same time: Meter readings must move because of that window, not of
+  // B's work, so Meterco's 10 days' notice is that window's business and the night stays usable.
+  expect(b.candidates.filter((c) => c.excluded).map((c) => [c.start, c.excluded!.code])).toEqual([[startOf(NIGHTS[0]), 'FREEZE']]);
+  expect(b.candidates.find((c) => c.start === startOf(NIGHTS[1]))).toMatchObject({
+    excluded: null, touched: 1, unresolved: 0, conflicts: [], overlapping: [{ id: id('w-shared'), title: 'Rectifier swap at X' }],
+  });
   expect(b.candidates.find((c) => c.start === startOf(NIGHTS[4]))).toMatchObject({
     touched: 1, unresolved: 0, noticeSpareDays: 4.5, // Blue Light Services is owed the policy's 7 days
     counts: { touched: 1, mustMove: 0, protectionLost: 1, unresolved: 0, knockOn: 0 },
