@@ -8,7 +8,7 @@ import { SEVERITY_SCALE } from '@/components/impact/impact-format';
 import { formatWindowRange } from '@/components/time';
 import { colors, radii, space, type } from '@/constants/theme';
 import { SlotCandidateRow } from './slot-candidate';
-import { excludedGroups, noSlotReason, rankedSlots, SLOT_RISK_MEANING } from './slot-words';
+import { excludedGroups, noSlotReason, rankedSlots, SLOT_RISK_MEANING, summaryText } from './slot-words';
 
 type Props = { search: SlotSearch; timeZone: string; onBook: (rank: number) => void };
 
@@ -22,6 +22,7 @@ export function SlotResults({ search, timeZone, onBook }: Props) {
       <Text style={styles.heading} role="heading" aria-level={2}>
         {ranked.length === 0 ? 'No usable slot' : `${ranked.length} usable ${ranked.length === 1 ? 'slot' : 'slots'}, best first`}
       </Text>
+      {search.summary ? <Text style={styles.muted} testID="slot-summary">{summaryText(search.summary)}</Text> : null}
       {ranked.length === 0 ? (
         <View style={styles.empty} testID="slot-results-empty">
           <Text style={styles.body}>{noSlotReason(search.candidates)}</Text>

@@ -1,6 +1,6 @@
 // How the slot finder's figures read: exclusion reasons in words, risk with its scale, notice days to spare,
 // and the excluded slots grouped by reason. Pure, so the list and its tests read the same words.
-import { SLOT_EXCLUSION_CODES, type SearchProgress, type SlotCandidate, type SlotExclusionCode } from '@/shared/slots';
+import { SLOT_EXCLUSION_CODES, type SearchProgress, type SlotCandidate, type SlotExclusionCode, type SlotSearchSummary } from '@/shared/slots';
 import { formatRiskPercent } from '@/components/impact/impact-format';
 
 export const EXCLUSION_LABELS: Record<SlotExclusionCode, string> = {
@@ -65,4 +65,12 @@ export function progressText(progress: SearchProgress | null, unit: 'slots' | 'g
 /** Whole seconds since the search started, "0 s" upwards. */
 export function elapsedText(progress: SearchProgress | null): string {
   return `${Math.floor((progress?.elapsedMs ?? 0) / 1000)} s`;
+}
+
+/** How the search went: slots checked, seconds taken, and how often the quick re-map ran or was reused. */
+export function summaryText(s: SlotSearchSummary): string {
+  const checked = s.usable + s.excluded;
+  const seconds = (s.elapsedMs / 1000).toFixed(1);
+  const reused = s.reusedRuns > 0 ? `, reused for ${plural(s.reusedRuns, 'slot', 'slots')} with the same network state` : '';
+  return `${plural(checked, 'slot', 'slots')} checked in ${seconds} s. The quick re-map ran ${plural(s.remapRuns, 'time', 'times')} (at most ${s.remapLimitMs} ms each)${reused}.`;
 }

@@ -1,6 +1,6 @@
 // The slot finder's rules without a screen: ranked order, excluded slots grouped by reason in words, progress text,
 // the booking form's pre-fill read back from the address, and the timing the form sends.
-import { excludedGroups, noSlotReason, noticeText, progressText, rankedSlots, riskText } from '@/components/slots/slot-words';
+import { excludedGroups, noSlotReason, noticeText, progressText, rankedSlots, riskText, summaryText } from '@/components/slots/slot-words';
 import { bookingHref, prefillFromParams } from '@/components/slots/slot-prefill';
 import { rangeOf, validateTiming, type TimingValues } from '@/components/slots/timing-form-state';
 import { validateSlotForm } from '@/components/slots/slot-form-state';
@@ -39,6 +39,13 @@ describe('ranked and excluded slots', () => {
     expect(noticeText(1)).toBe('1 day to spare for notices');
     expect(noticeText(-2)).toBe('2 days too late for a tenant’s notice');
     expect(noticeText(null)).toBe('No tenant to notify');
+  });
+
+  test('the summary says how often the quick re-map ran and was reused, with units', () => {
+    expect(summaryText({ usable: 100, excluded: 5, remapRuns: 12, reusedRuns: 80, elapsedMs: 4321, remapLimitMs: 300 }))
+      .toBe('105 slots checked in 4.3 s. The quick re-map ran 12 times (at most 300 ms each), reused for 80 slots with the same network state.');
+    expect(summaryText({ usable: 1, excluded: 0, remapRuns: 1, reusedRuns: 0, elapsedMs: 800, remapLimitMs: 300 }))
+      .toBe('1 slot checked in 0.8 s. The quick re-map ran 1 time (at most 300 ms each).');
   });
 
   test('progress reads "N of M slots checked"; before counting it says it is getting ready', () => {

@@ -120,4 +120,5 @@ test('the booking form opened plainly has no note', async () => {
   renderWithQueries(<NewWindowScreen />);
   expect(await screen.findByTestId('window-title')).toBeTruthy();
   expect(screen.queryByTestId('window-prefill-note')).toBeNull();
+  expect(screen.getByTestId('window-find-slot')).toBeTruthy();
 });

@@ -8,7 +8,7 @@ import { BookWindow } from '@/components/windows/book-window';
 import { detailHref, FormPage } from '@/components/windows/form-page';
 import { usePageTitle } from '@/components/page-title';
 import { staffWindowPage } from '@/components/notices/tenant-window-page';
-import { PrefillNote } from '@/components/slots/prefill-note';
+import { FindSlotHint, PrefillNote } from '@/components/slots/prefill-note';
 import { prefillFromParams } from '@/components/slots/slot-prefill';
 
 function NewWindowScreen() {
@@ -24,7 +24,7 @@ function NewWindowScreen() {
   if (!canBookWindows(me.data.roles)) return <ErrorState message="Your roles do not include booking windows." />;
   return (
     <FormPage title="Book a window">
-      {prefill ? <PrefillNote /> : null}
+      {prefill ? <PrefillNote /> : <FindSlotHint onPress={() => router.push('/slots')} />}
       <BookWindow
         me={me.data}
         timeZone={timeZone}
