@@ -120,7 +120,7 @@ export function explain(f: ExplanationFacts): string {
     const critical = f.criticalTouched > 0 ? ` (${f.criticalTouched} critical)` : '';
     parts.push(`Touches ${plural(f.touched, 'slice')}${critical}`);
     parts.push(f.unresolved === 0 ? 'the quick re-map keeps every one' : `the quick re-map cannot keep ${f.unresolved}`);
-    parts.push(`risk ${formatPercent(f.riskPercent)} (${f.riskLevel} on the slice severity scale)`);
+    parts.push(`risk of failure ${formatPercent(f.riskPercent)} (slices up to ${f.riskLevel} severity)`);
   }
   if (f.overlapping.length > 0) {
     parts.push(`${f.overlapping.length === 1 ? 'the window' : 'the windows'} ${listWords(f.overlapping.map((t) => `"${t}"`))} also out`);

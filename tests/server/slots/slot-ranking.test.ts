@@ -82,7 +82,7 @@ test('explanations and reasons carry units and read as one line', () => {
   expect(explain({
     touched: 12, criticalTouched: 1, unresolved: 2, riskPercent: 0.4234, riskLevel: 'Medium',
     overlapping: ['Fibre splice'], noticeSpareDays: 3.46, reused: false,
-  })).toBe('Touches 12 slices (1 critical); the quick re-map cannot keep 2; risk 0.42 % (Medium on the slice severity scale); '
+  })).toBe('Touches 12 slices (1 critical); the quick re-map cannot keep 2; risk of failure 0.42 % (slices up to Medium severity); '
     + 'the window "Fibre splice" also out; 3.4 days of notice to spare.');
   expect(explain({ touched: 0, criticalTouched: 0, unresolved: 0, riskPercent: 0, riskLevel: 'Low', overlapping: [], noticeSpareDays: null, reused: true }))
     .toBe('Touches no slice.');
