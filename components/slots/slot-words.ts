@@ -69,8 +69,9 @@ export function elapsedText(progress: SearchProgress | null): string {
 
 /** How the search went: slots checked, seconds taken, and how often the quick re-map ran or was reused. */
 export function summaryText(s: SlotSearchSummary): string {
-  const checked = s.usable + s.excluded;
-  const seconds = (s.elapsedMs / 1000).toFixed(1);
-  const reused = s.reusedRuns > 0 ? `, reused for ${plural(s.reusedRuns, 'slot', 'slots')} with the same network state` : '';
-  return `${plural(checked, 'slot', 'slots')} checked in ${seconds} s. The quick re-map ran ${plural(s.remapRuns, 'time', 'times')} (at most ${s.remapLimitMs} ms each)${reused}.`;
+  const checked = `${plural(s.usable + s.excluded, 'slot', 'slots')} checked in ${(s.elapsedMs / 1000).toFixed(1)} s.`;
+  const ran = s.remapRuns > 0 ? `ran ${plural(s.remapRuns, 'time', 'times')} (at most ${s.remapLimitMs} ms each)` : null;
+  const reused = s.reusedRuns > 0 ? `reused an earlier run for ${plural(s.reusedRuns, 'slot', 'slots')} on the same network state` : null;
+  const remap = [ran, reused].filter(Boolean).join(' and ');
+  return remap ? `${checked} The quick re-map ${remap}.` : checked;
 }

@@ -43,7 +43,9 @@ describe('ranked and excluded slots', () => {
 
   test('the summary says how often the quick re-map ran and was reused, with units', () => {
     expect(summaryText({ usable: 100, excluded: 5, remapRuns: 12, reusedRuns: 80, elapsedMs: 4321, remapLimitMs: 300 }))
-      .toBe('105 slots checked in 4.3 s. The quick re-map ran 12 times (at most 300 ms each), reused for 80 slots with the same network state.');
+      .toBe('105 slots checked in 4.3 s. The quick re-map ran 12 times (at most 300 ms each) and reused an earlier run for 80 slots on the same network state.');
+    expect(summaryText({ usable: 24, excluded: 21, remapRuns: 0, reusedRuns: 24, elapsedMs: 100, remapLimitMs: 300 }))
+      .toBe('45 slots checked in 0.1 s. The quick re-map reused an earlier run for 24 slots on the same network state.');
     expect(summaryText({ usable: 1, excluded: 0, remapRuns: 1, reusedRuns: 0, elapsedMs: 800, remapLimitMs: 300 }))
       .toBe('1 slot checked in 0.8 s. The quick re-map ran 1 time (at most 300 ms each).');
   });
