@@ -63,7 +63,10 @@ export const slotCandidateSchema = z.object({
   /** 1, 2, … over the usable candidates, best first; null for an excluded one */
   rank: z.number().int().min(1).nullable(),
   excluded: z.object({ code: z.enum(SLOT_EXCLUSION_CODES), reason: z.string() }).nullable(),
-  /** slices the work reaches in this slot (with the other windows out at the same time taken into account) */
+  /**
+   * slices the work itself reaches (its own impact, as the window's impact screen and notices count them); other
+   * windows out at the same time count through conflicts, the re-map's room and the overlap penalty instead
+   */
   touched: z.number().int(),
   /** of those, the quick re-map found no place for (null when it was not run: excluded before it) */
   unresolved: z.number().int().nullable(),
