@@ -18,7 +18,7 @@ export function candidateFigures(c: SlotCandidate): { key: string; label: string
     { key: 'touched', label: TOUCH_COUNT_WORDS.touched.label, value: slices(c.touched) },
     { key: 'unresolved', label: TOUCH_COUNT_WORDS.unresolved.label, value: c.unresolved === null ? 'not checked' : slices(c.unresolved) },
     { key: 'critical', label: 'Critical slices touched', value: slices(c.criticalTouched) },
-    { key: 'risk', label: 'Risk during the slot', value: riskText(c) },
+    { key: 'risk', label: 'Risk of failure during the slot', value: riskText(c) },
     { key: 'notice', label: 'Tenant notice', value: noticeText(c.noticeSpareDays) },
     { key: 'overlap', label: 'Other windows at the same time', value: String(c.overlapping.length) },
   ];

@@ -12,11 +12,11 @@ export const EXCLUSION_LABELS: Record<SlotExclusionCode, string> = {
 
 /** What the risk figure is and which scale its Low/Medium/High comes from, said once above the list. */
 export const SLOT_RISK_MEANING =
-  'Risk = the highest chance that a slice kept in service fails unplanned during the slot, from each site’s and span’s mean time between failures. Low, Medium and High name the most severe slice at risk, on the slice severity scale (Critical counts as High).';
+  'Risk of failure = the highest chance that a slice kept in service fails unplanned during the slot, from each site’s and span’s mean time between failures. Low, Medium and High give the severity of the most important slice at stake, on the slice severity scale below (Critical counts as High), not the size of the chance.';
 
-/** "0.40 % (Low on the slice severity scale)" */
+/** "0.40 % (slices up to Low severity, on the slice severity scale)" */
 export function riskText(c: Pick<SlotCandidate, 'riskPercent' | 'riskLevel'>): string {
-  return `${formatRiskPercent(c.riskPercent / 100)} (${c.riskLevel} on the slice severity scale)`;
+  return `${formatRiskPercent(c.riskPercent / 100)} (slices up to ${c.riskLevel} severity, on the slice severity scale)`;
 }
 
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;

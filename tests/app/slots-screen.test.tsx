@@ -69,7 +69,7 @@ test('usable slots show in rank order with their figures and units; Book opens t
   expect(screen.getByTestId('slot-candidate-1-when-local')).toHaveTextContent('Thu 10 Jan, 02:00 – 06:00 CET');
   expect(screen.getByTestId('slot-candidate-1-when-utc')).toHaveTextContent('Thu 10 Jan, 01:00 – 05:00 UTC');
   expect(screen.getByTestId('slot-candidate-1-touched')).toHaveTextContent('Touched slices4 slices');
-  expect(screen.getByTestId('slot-candidate-1-risk')).toHaveTextContent(/0\.40 % \(Low on the slice severity scale\)$/);
+  expect(screen.getByTestId('slot-candidate-1-risk')).toHaveTextContent(/0\.40 % \(slices up to Low severity, on the slice severity scale\)$/);
   expect(screen.getByTestId('slot-candidate-1-notice')).toHaveTextContent(/6 days to spare for notices$/);
   expect(screen.getByTestId('slot-critical-caution')).toBeTruthy();
   fireEvent.press(screen.getByTestId('slot-book-2'));
