@@ -14,8 +14,9 @@ import fs from 'node:fs';
 import path from 'node:path';
 import type { RoleName } from '../../shared/api';
 import {
-  ADMIN_ROLES, AUDIT_READER_ROLES, CHANGE_PACK_READER_ROLES, holdsAnyRole, INVENTORY_IMPORT_ROLES, OPERATOR_ROLES,
-  PLAN_READER_ROLES, SIGNOFF_QUEUE_ROLES, TENANT_PORTAL_ROLES, WINDOW_BOOKER_ROLES,
+  ADMIN_ROLES, AUDIT_READER_ROLES, CAMPAIGN_PLANNER_ROLES, CAMPAIGN_READER_ROLES, CHANGE_PACK_READER_ROLES, holdsAnyRole,
+  INVENTORY_IMPORT_ROLES, OPERATOR_ROLES, PLAN_READER_ROLES, SIGNOFF_QUEUE_ROLES, SLOT_SEARCH_ROLES, TENANT_PORTAL_ROLES,
+  WINDOW_BOOKER_ROLES,
 } from '../../shared/permissions';
 import { ok, prepareNotifiedWindow, prepareSubmittedWindow, slotAhead } from './helpers/api';
 import { describeFinding, isBlocking, runAxe, summarise, type Finding } from './helpers/axe';
@@ -68,6 +69,9 @@ const SCREENS: Screen[] = [
   // Both forms hold the same fields; their headings tell them apart.
   { name: 'book a window', path: () => '/windows/new', ready: 'role=heading[name="Book a window"]', roles: WINDOW_BOOKER_ROLES },
   { name: 'edit a window', path: (d) => `/windows/${d.windowId}/edit`, ready: 'role=heading[name=/^Edit: /]', roles: WINDOW_BOOKER_ROLES },
+  { name: 'find a slot', path: () => '/slots', ready: id('slot-form'), roles: SLOT_SEARCH_ROLES },
+  { name: 'campaigns', path: () => '/campaigns', ready: 'role=heading[name="Campaigns"]', roles: CAMPAIGN_READER_ROLES },
+  { name: 'new campaign', path: () => '/campaigns/new', ready: id('campaign-form'), roles: CAMPAIGN_PLANNER_ROLES },
   { name: 'slices', path: () => '/slices', ready: id('slices-table') },
   { name: 'slice', path: (d) => `/slices/${d.sliceId}`, ready: id('slice-detail-title') },
   { name: 'network', path: () => '/network', ready: id('sites-table') },
