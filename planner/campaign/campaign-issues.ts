@@ -95,6 +95,6 @@ export function unscheduledReason(state: CampaignState, g: number): string {
     parts.push(`${bySpacing} lie within ${plural(c.minDays, 'day')} of a window touching the same slices (${names(spacing)})`);
   }
   if (byClash > 0) parts.push(`${byClash} overlap a window that must not be out at the same time (${names(clash)})`);
-  if (state.assign[g] !== UNSCHEDULED || parts.length === 0) return 'It could be scheduled; the search ran out of iterations first.';
+  if (state.assign[g] !== UNSCHEDULED || parts.length === 0) return 'It fits one of its starts as the schedule stands; schedule the campaign again.';
   return `None of its ${plural(slots.length, 'usable start')} keeps the campaign's rules: ${parts.join('; ')}.`;
 }

@@ -20,6 +20,8 @@ export interface CompiledCampaign {
   slotsByNight: Map<number, number[]>[];
   /** night strings by id */
   nights: string[];
+  /** per night id: the groups with at least one slot on it */
+  groupsByNight: number[][];
   /** groups sharing a touched slice with each group (empty lists when the spacing rule is off) */
   touchNeighbours: number[][];
   clashNeighbours: number[][];
@@ -119,6 +121,7 @@ export function compileCampaign(p: CampaignProblem): CompiledCampaign {
     cost: p.groups.map((g) => Float64Array.from(g.slots, (s) => s.cost)),
     slotsByNight,
     nights,
+    groupsByNight: nights.map((_, id) => p.groups.flatMap((_g, i) => (slotsByNight[i].has(id) ? [i] : []))),
     touchNeighbours: minDays > 0 ? touchNeighboursOf(p) : p.groups.map(() => []),
     clashNeighbours: clashSets.map((s) => [...s].sort((a, b) => a - b)),
   };

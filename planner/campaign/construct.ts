@@ -1,7 +1,8 @@
 // The constructive start: the most constrained group first (fewest usable slots, then most touched slices), each
 // taking its cheapest slot that keeps every rule with the groups already placed. A group with no such slot waits
-// unscheduled for the local search.
-import type { CampaignState } from './campaign-state';
+// unscheduled for the local search. The same pass closes the search, so that a group left out never has a slot
+// it could take, however the budget ran.
+import { type CampaignState, UNSCHEDULED } from './campaign-state';
 
 /** Groups in the order the constructive start places them. */
 export function constructionOrder(state: CampaignState): number[] {
@@ -25,8 +26,10 @@ export function cheapestLegalSlot(state: CampaignState, g: number, candidates?: 
   return best;
 }
 
+/** Places each unscheduled group, in construction order, on its cheapest legal slot where it has one. */
 export function construct(state: CampaignState): void {
   for (const g of constructionOrder(state)) {
+    if (state.assign[g] !== UNSCHEDULED) continue;
     const s = cheapestLegalSlot(state, g);
     if (s >= 0) state.place(g, s);
   }

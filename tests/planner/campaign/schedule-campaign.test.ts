@@ -95,6 +95,16 @@ describe('scheduleCampaign on problems solved by hand', () => {
     expect(a.totalCost).toBe(bruteForceCampaign(p).cost);
   });
 
+  it('with no search budget the constructive start is the answer', () => {
+    const p = problem([
+      { slots: nightlySlots([1, 5]), touched: ['s1', 's2'] },
+      { slots: [...nightlySlots([1]), ...nightlySlots([2], { startHour: 21, hours: 1 })], touched: ['s3'] },
+    ], 1, 0);
+    const r = scheduleCampaign(p, { maxIterations: 0 });
+    expect(r).toMatchObject({ assignment: [0, null], iterations: 0, moves: 0, totalCost: r.startCost });
+    expect(r.startCost).toBe(1 + UNSCHEDULED_PENALTY);
+  });
+
   it('rejects rules outside their range and clashes naming no group', () => {
     expect(() => scheduleCampaign(problem([], 0, 0))).toThrow(InvalidOptionError);
     expect(() => scheduleCampaign(problem([], 1, -1))).toThrow(InvalidOptionError);
