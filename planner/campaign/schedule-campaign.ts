@@ -32,6 +32,8 @@ export function scheduleCampaign(p: CampaignProblem, opts: ScheduleOptions = {})
   const state = new CampaignState(compileCampaign(p));
   construct(state);
   const startCost = state.objective();
+  const startWindowsCost = windowsCostOf(state);
+  const startUnscheduled = state.assign.filter((s) => s === UNSCHEDULED).length;
   const counters = { iterations: 0, moves: 0 };
   localSearch({ state, rng: createRng(seed), counters, maxIterations: Math.max(0, Math.floor(maxIterations)), onProgress });
   construct(state);
@@ -42,6 +44,8 @@ export function scheduleCampaign(p: CampaignProblem, opts: ScheduleOptions = {})
     totalCost: state.objective(),
     startCost,
     windowsCost: windowsCostOf(state),
+    startWindowsCost,
+    startUnscheduled,
     moves: counters.moves,
     iterations: counters.iterations,
   };

@@ -48,6 +48,9 @@ export interface CampaignSchedule {
   startCost: number;
   /** sum of the scheduled windows' costs (points), without the penalty */
   windowsCost: number;
+  /** the constructive start's windows' costs (points, without the penalty) and its unscheduled groups */
+  startWindowsCost: number;
+  startUnscheduled: number;
   /** local-search steps applied (moves, swaps, insertions with one blocker moved) */
   moves: number;
   /** neighbourhood candidates evaluated, at most maxIterations */

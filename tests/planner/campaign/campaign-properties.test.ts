@@ -1,7 +1,9 @@
 // Properties of every schedule the campaign scheduler produces on random problems; each name states the invariant.
 // The rule checks here are written afresh, not borrowed from the scheduler, so a shared mistake cannot hide.
 import fc from 'fast-check';
-import { campaignCost, campaignIssues, scheduleCampaign, type CampaignProblem, type CampaignSchedule } from '../../../planner/campaign/schedule-campaign';
+import {
+  campaignCost, campaignIssues, scheduleCampaign, UNSCHEDULED_PENALTY, type CampaignProblem, type CampaignSchedule,
+} from '../../../planner/campaign/schedule-campaign';
 import { problemArb, FULL_SIZES } from './campaign-arbitraries';
 import { dayGap } from './campaign-fixtures';
 
@@ -72,6 +74,8 @@ describe('campaign schedules on random problems', () => {
       expect(r.totalCost).toBe(campaignCost(p, r.assignment));
       expect(r.windowsCost).toBeCloseTo(scheduled(p, r).reduce((sum, w) => sum + w.slot.cost, 0), 6);
       expect(r.totalCost).toBeLessThanOrEqual(r.startCost);
+      expect(r.startCost).toBeCloseTo(r.startWindowsCost + UNSCHEDULED_PENALTY * r.startUnscheduled, 6);
+      expect(r.assignment.filter((s) => s === null).length).toBeLessThanOrEqual(r.startUnscheduled);
       expect(r.iterations).toBeLessThanOrEqual(4000);
     }), RUNS);
   });

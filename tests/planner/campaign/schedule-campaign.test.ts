@@ -70,6 +70,7 @@ describe('scheduleCampaign on problems solved by hand', () => {
     ], 1, 0);
     const r = scheduleCampaign(p);
     expect(r.startCost).toBe(1 + UNSCHEDULED_PENALTY);
+    expect(r).toMatchObject({ startWindowsCost: 1, startUnscheduled: 1, windowsCost: 6 });
     expect(r.assignment).toEqual([1, 0]);
     expect(r.totalCost).toBe(6);
     expect(r.moves).toBeGreaterThanOrEqual(1);
