@@ -24,10 +24,15 @@ const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one :
 /** Days to spare before the last day notices can go out; negative means some tenant can no longer be told in time. */
 export function noticeText(spareDays: number | null): string {
   if (spareDays === null) return 'No tenant to notify';
-  const days = Math.floor(spareDays);
-  if (days < 0) return `${plural(-days, 'day', 'days')} too late for a tenant’s notice`;
-  if (days === 0) return 'Notices must go out today';
-  return `${plural(days, 'day', 'days')} to spare for notices`;
+  if (spareDays < 0) return `${daysWords(-spareDays)} too late for a tenant’s notice`;
+  if (spareDays < 1) return 'Notices must go out today';
+  return `${daysWords(spareDays)} to spare for notices`;
+}
+
+/** Days as the slot's explanation line words them: tenths below ten days, whole days above, never rounded up. */
+function daysWords(days: number): string {
+  const shown = days < 10 ? Math.floor(days * 10) / 10 : Math.floor(days);
+  return plural(shown, 'day', 'days');
 }
 
 /** Usable slots in rank order (the server sends them so; sorted again so the list never depends on it). */

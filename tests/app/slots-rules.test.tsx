@@ -35,9 +35,12 @@ describe('ranked and excluded slots', () => {
 
   test('figures carry their units and scale', () => {
     expect(riskText({ riskPercent: 0.4, riskLevel: 'Low' })).toBe('0.40 % (slices up to Low severity, on the slice severity scale)');
-    expect(noticeText(6.5)).toBe('6 days to spare for notices');
+    expect(noticeText(6.57)).toBe('6.5 days to spare for notices');
+    expect(noticeText(12.9)).toBe('12 days to spare for notices');
+    expect(noticeText(0.4)).toBe('Notices must go out today');
     expect(noticeText(1)).toBe('1 day to spare for notices');
     expect(noticeText(-2)).toBe('2 days too late for a tenant’s notice');
+    expect(noticeText(-0.5)).toBe('0.5 days too late for a tenant’s notice');
     expect(noticeText(null)).toBe('No tenant to notify');
   });
 

@@ -296,7 +296,8 @@ export class GroupEvaluator {
         criticalUnresolved: criticalUnresolved?.length ?? null, counts,
         riskPercent: risk.riskPercent, riskLevel: risk.riskLevel,
         overlapping: overlapping.map((w) => ({ id: w.id, title: w.title })), conflicts,
-        noticeSpareDays: noticeSpareDays === null ? null : Math.round(noticeSpareDays * 10) / 10,
+        // Tenths, never rounded up: the explanation line and the screen show the same figure.
+        noticeSpareDays: noticeSpareDays === null ? null : Math.floor(noticeSpareDays * 10) / 10,
         cost: slotCost(figures), reused, explanation,
       },
     };
