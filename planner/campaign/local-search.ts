@@ -2,16 +2,13 @@
 // until none is left — a group moves to a cheaper legal slot, two groups exchange nights, an unscheduled group
 // goes in (directly, or after moving the one group blocking a slot: an ejection chain of depth 1) — then a
 // seeded kick re-places a few random groups and the descent runs again; the best schedule seen is kept.
-import { type Rng, randomInt } from '../random/rng';
+import { randomInt } from '../random/rng';
 import { type CampaignState, UNSCHEDULED } from './campaign-state';
-import { cheapestLegalSlot } from './construct';
+import { EPS, type SearchCtx, shuffled, spent, tick, tryInsert, tryMove, trySwap } from './search-steps';
 import { UNSCHEDULED_PENALTY } from './types';
 
-/** Objective changes smaller than this (points) are rounding, not improvement. */
-const EPS = 1e-7;
 /** A kick re-places between 1 and this many groups. */
 const MAX_KICK_GROUPS = 4;
-const PROGRESS_EVERY = 1000;
 /** Share of kicks that force an unscheduled group in rather than re-place random groups. */
 const FORCED_INSERT_SHARE = 0.5;
 /**
@@ -23,135 +20,6 @@ const ACCEPT_WORSE_BY = UNSCHEDULED_PENALTY / 2;
 const RETURN_TO_BEST_AFTER = 30;
 /** Kicks in a row without a new best after which the search stops early: small campaigns are settled long before. */
 const STALL_KICKS = 2000;
-
-export interface SearchCounters {
-  iterations: number;
-  moves: number;
-}
-
-interface Ctx {
-  state: CampaignState;
-  rng: Rng;
-  counters: SearchCounters;
-  maxIterations: number;
-  onProgress?: (done: number, total: number) => void;
-}
-
-/** Counts one evaluated candidate; false once the budget is spent. */
-function tick(ctx: Ctx, n = 1): boolean {
-  const before = ctx.counters.iterations;
-  ctx.counters.iterations = Math.min(ctx.maxIterations, before + n);
-  if (ctx.onProgress && Math.floor(before / PROGRESS_EVERY) !== Math.floor(ctx.counters.iterations / PROGRESS_EVERY)) {
-    ctx.onProgress(ctx.counters.iterations, ctx.maxIterations);
-  }
-  return before < ctx.maxIterations;
-}
-
-const spent = (ctx: Ctx) => ctx.counters.iterations >= ctx.maxIterations;
-
-function shuffled(rng: Rng, n: number): number[] {
-  const order = Array.from({ length: n }, (_, i) => i);
-  for (let i = n - 1; i > 0; i--) {
-    const j = randomInt(rng, i + 1);
-    [order[i], order[j]] = [order[j], order[i]];
-  }
-  return order;
-}
-
-/** A scheduled group takes its cheapest legal slot when that is cheaper than where it is. */
-function tryMove(ctx: Ctx, g: number): boolean {
-  const { state } = ctx;
-  const cost = state.c.cost[g];
-  const cur = state.assign[g];
-  const cheaper: number[] = [];
-  for (let s = 0; s < cost.length; s++) if (cost[s] < cost[cur] - EPS) cheaper.push(s);
-  if (cheaper.length === 0 || !tick(ctx, cheaper.length)) return false;
-  const s = cheapestLegalSlot(state, g, cheaper);
-  if (s < 0) return false;
-  state.place(g, s);
-  ctx.counters.moves++;
-  return true;
-}
-
-/** g and one other scheduled group exchange nights, each on its cheapest legal slot there, when that is cheaper. */
-function trySwap(ctx: Ctx, g: number): boolean {
-  const { state } = ctx;
-  const { c } = state;
-  for (let h = 0; h < c.groupCount; h++) {
-    const a = state.assign[g];
-    const b = state.assign[h];
-    if (h === g || b === UNSCHEDULED || c.night[g][a] === c.night[h][b]) continue;
-    const onNightOfH = c.slotsByNight[g].get(c.night[h][b]);
-    const onNightOfG = c.slotsByNight[h].get(c.night[g][a]);
-    if (!onNightOfH || !onNightOfG) continue;
-    if (!tick(ctx)) return false;
-    const before = c.cost[g][a] + c.cost[h][b];
-    state.unplace(g);
-    state.unplace(h);
-    const sa = cheapestLegalSlot(state, g, onNightOfH);
-    if (sa >= 0) state.place(g, sa);
-    const sb = sa >= 0 ? cheapestLegalSlot(state, h, onNightOfG) : -1;
-    if (sb >= 0 && c.cost[g][sa] + c.cost[h][sb] < before - EPS) {
-      state.place(h, sb);
-      ctx.counters.moves++;
-      return true;
-    }
-    state.place(g, a);
-    state.place(h, b);
-  }
-  return false;
-}
-
-/** The groups whose moving away alone would free slot s for unscheduled g ([] when no single one would). */
-function soleBlockers(state: CampaignState, g: number, s: number): number[] {
-  const b = state.blockers(g, s);
-  const others = [...new Set([...b.spacing, ...b.clash])];
-  if (others.length > 1) return [];
-  const night = state.c.night[g][s];
-  if (others.length === 1) {
-    const h = others[0];
-    return !b.nightFull || state.c.night[h][state.assign[h]] === night ? [h] : [];
-  }
-  return b.nightFull ? state.groupsOnNight(night, g) : [];
-}
-
-interface Ejection { delta: number; s: number; h: number; to: number }
-
-/** Unscheduled g goes in: on its cheapest legal slot, or on a slot freed by moving (or, if cheaper, dropping) one blocker. */
-function tryInsert(ctx: Ctx, g: number): boolean {
-  const { state } = ctx;
-  const { cost } = state.c;
-  const slots = cost[g].length;
-  if (slots === 0 || !tick(ctx, slots)) return false;
-  const direct = cheapestLegalSlot(state, g);
-  if (direct >= 0) {
-    state.place(g, direct);
-    ctx.counters.moves++;
-    return true;
-  }
-  let best: Ejection | null = null;
-  for (let s = 0; s < slots && !spent(ctx); s++) {
-    for (const h of soleBlockers(state, g, s)) {
-      if (!tick(ctx)) break;
-      const from = state.assign[h];
-      state.unplace(h);
-      if (state.canPlace(g, s)) {
-        state.place(g, s);
-        const to = cheapestLegalSlot(state, h);
-        const delta = cost[g][s] + (to >= 0 ? cost[h][to] : UNSCHEDULED_PENALTY) - cost[h][from] - UNSCHEDULED_PENALTY;
-        if (delta < (best?.delta ?? 0) - EPS) best = { delta, s, h, to };
-        state.unplace(g);
-      }
-      state.place(h, from);
-    }
-  }
-  if (!best) return false;
-  state.unplace(best.h);
-  state.place(g, best.s);
-  if (best.to >= 0) state.place(best.h, best.to);
-  ctx.counters.moves++;
-  return true;
-}
 
 /** Whether g, unscheduled or on a dearer slot, has a slot on `night` that would be an improvement. */
 function wantsNight(state: CampaignState, g: number, night: number): boolean {
@@ -165,7 +33,7 @@ function wantsNight(state: CampaignState, g: number, night: number): boolean {
  * Queues the groups that may have gained a step since `before`: the changed ones, their spacing and clash
  * neighbours, and the groups that would gain from a place coming free on a night a changed group left.
  */
-function queueAffected(ctx: Ctx, before: Int32Array, push: (g: number) => void): void {
+function queueAffected(ctx: SearchCtx, before: Int32Array, push: (g: number) => void): void {
   const { state } = ctx;
   const { c } = state;
   for (let x = 0; x < c.groupCount; x++) {
@@ -184,7 +52,7 @@ function queueAffected(ctx: Ctx, before: Int32Array, push: (g: number) => void):
  * Improving steps until none is left or the budget is spent. Each group in `start` (in a seeded order) is examined;
  * after a step only the groups it may have helped are examined again, so a descent after a kick stays local.
  */
-function descend(ctx: Ctx, start: number[]): void {
+function descend(ctx: SearchCtx, start: number[]): void {
   const { state } = ctx;
   const queued = new Uint8Array(state.c.groupCount);
   const queue: number[] = [];
@@ -207,7 +75,7 @@ function descend(ctx: Ctx, start: number[]): void {
 }
 
 /** Takes 1 to MAX_KICK_GROUPS random groups out and puts each back on a random legal slot. */
-function randomKick(ctx: Ctx): void {
+function randomKick(ctx: SearchCtx): void {
   const { state, rng } = ctx;
   const n = state.c.groupCount;
   const k = 1 + randomInt(rng, Math.min(n, MAX_KICK_GROUPS));
@@ -226,7 +94,7 @@ function randomKick(ctx: Ctx): void {
  * Forces a random unscheduled group onto a random slot of its own, taking out every group in the way; the descent
  * that follows tries to put those back elsewhere. False when no unscheduled group has a slot.
  */
-function forcedInsertKick(ctx: Ctx): boolean {
+function forcedInsertKick(ctx: SearchCtx): boolean {
   const { state, rng } = ctx;
   const waiting = [];
   for (let g = 0; g < state.c.groupCount; g++) if (state.assign[g] === UNSCHEDULED && state.c.cost[g].length > 0) waiting.push(g);
@@ -245,7 +113,7 @@ function forcedInsertKick(ctx: Ctx): boolean {
 }
 
 /** Perturbs the schedule, then searches on from it; only groups the kick may have affected are examined first. */
-function kickAndDescend(ctx: Ctx): void {
+function kickAndDescend(ctx: SearchCtx): void {
   const before = ctx.state.snapshot();
   if (!(ctx.rng() < FORCED_INSERT_SHARE && forcedInsertKick(ctx))) randomKick(ctx);
   const start: number[] = [];
@@ -259,7 +127,7 @@ function lowerBound(state: CampaignState): number {
 }
 
 /** Improves `ctx.state` in place from where it stands; leaves the best schedule found in it. */
-export function localSearch(ctx: Ctx): void {
+export function localSearch(ctx: SearchCtx): void {
   const { state } = ctx;
   if (state.c.groupCount === 0) return;
   const bound = lowerBound(state);
