@@ -1,6 +1,7 @@
 // `npm run bench:campaign [-- --iterations=<n>] [-- --seed=<n>]`: the campaign scheduler on rollout-sized problems —
-// 40 element groups, 21 nights, 2 starts a night, random touched slices and clashes — printing the constructive
-// start's cost, the local search's, the gain, steps applied and wall time; then 8 small campaigns against the
+// 40 element groups, 21 nights, 2 starts a night, random touched slices and clashes, and once the largest campaign
+// the form allows (100 groups, 92 nights, a start every 15 minutes) — printing the constructive start, the local
+// search's result, the gain, steps applied and wall time; then 8 small campaigns (8 groups, 6 nights) against the
 // exhaustive enumeration (planner/campaign/brute-force.ts) to show the search's gap to the proven optimum.
 import { performance } from 'node:perf_hooks';
 import { bruteForceCampaign } from '../planner/campaign/brute-force';
@@ -11,19 +12,22 @@ import { ms, pct, printTable, type Row } from './planner/report';
 const HOUR_MS = 3_600_000;
 /** The two starts of each night, hours after the night's 00:00 UTC (22:00 and 00:30 the next morning). */
 const STARTS_HOURS = [22, 24.5];
+/** The largest campaign the form allows: 100 groups, 92 nights, starts every 15 minutes from 20:00 to 03:45. */
+const EVERY_QUARTER_HOUR = Array.from({ length: 32 }, (_, k) => 20 + k / 4);
 const DURATION_HOURS = 3;
 /** Share of starts the slot finder would have kept (the rest excluded: freezes, conflicts, lead time). */
 const USABLE_SHARE = 0.85;
 
-interface Shape { groups: number; nights: number; slicePool: number; touched: [number, number]; clashes: number; maxPerNight: number; days: number }
+interface Shape { starts?: number[]; groups: number; nights: number; slicePool: number; touched: [number, number]; clashes: number; maxPerNight: number; days: number }
 
 const BIG: Shape[] = [
   { groups: 40, nights: 21, slicePool: 400, touched: [1, 4], clashes: 10, maxPerNight: 3, days: 7 },
   { groups: 40, nights: 21, slicePool: 60, touched: [2, 6], clashes: 15, maxPerNight: 3, days: 7 },
   { groups: 40, nights: 21, slicePool: 60, touched: [2, 6], clashes: 15, maxPerNight: 2, days: 7 },
   { groups: 40, nights: 21, slicePool: 40, touched: [3, 8], clashes: 30, maxPerNight: 4, days: 10 },
+  { starts: EVERY_QUARTER_HOUR, groups: 100, nights: 92, slicePool: 150, touched: [2, 6], clashes: 250, maxPerNight: 2, days: 10 },
 ];
-const SMALL: Shape = { groups: 6, nights: 5, slicePool: 6, touched: [1, 3], clashes: 3, maxPerNight: 2, days: 2 };
+const SMALL: Shape = { groups: 8, nights: 6, slicePool: 6, touched: [1, 3], clashes: 3, maxPerNight: 2, days: 2 };
 
 function nightKey(i: number): string {
   return new Date(Date.UTC(2026, 11, 1 + i)).toISOString().slice(0, 10);
@@ -33,7 +37,7 @@ function randomProblem(shape: Shape, rng: Rng): CampaignProblem {
   const pool = Array.from({ length: shape.slicePool }, (_, i) => `slice-${i}`);
   const groups = Array.from({ length: shape.groups }, () => {
     const base = randomInt(rng, 80);
-    const slots = Array.from({ length: shape.nights }, (_, n) => STARTS_HOURS.map((h) => {
+    const slots = Array.from({ length: shape.nights }, (_, n) => (shape.starts ?? STARTS_HOURS).map((h) => {
       const startMs = Date.UTC(2026, 11, 1 + n) + h * HOUR_MS;
       return { startMs, endMs: startMs + DURATION_HOURS * HOUR_MS, night: nightKey(n), cost: base + randomInt(rng, 120) };
     })).flat().filter(() => rng() < USABLE_SHARE);
@@ -80,7 +84,7 @@ function bigRows(iterations: number, seed: number): Row[] {
     const t0 = performance.now();
     const r = scheduleCampaign(p, { seed, maxIterations: iterations });
     const wallMs = performance.now() - t0;
-    const section = `${shape.groups} groups × ${shape.nights} nights × ${STARTS_HOURS.length} starts, ≤ ${shape.maxPerNight} a night, ${shape.days} days apart`;
+    const section = `${shape.groups} groups × ${shape.nights} nights × ${(shape.starts ?? STARTS_HOURS).length} starts, ≤ ${shape.maxPerNight} a night, ${shape.days} days apart`;
     const outcome = (objective: number) => {
       // bench costs are never negative, so the objective splits into penalties and windows' points
       const unscheduled = Math.floor(objective / UNSCHEDULED_PENALTY);

@@ -21,6 +21,8 @@ export function bruteForceCampaign(p: CampaignProblem): BruteForceResult {
     const costs = p.groups[g].slots.map((s) => s.cost);
     rest[g] = rest[g + 1] + Math.min(UNSCHEDULED_PENALTY, ...costs);
   }
+  // cheapest slots first, so a good schedule is found early and prunes the rest
+  const byCost = p.groups.map((g) => g.slots.map((_, s) => s).sort((a, b) => g.slots[a].cost - g.slots[b].cost));
   let best: Int32Array = state.snapshot();
   let bestCost = Infinity;
   let nodes = 0;
@@ -35,7 +37,7 @@ export function bruteForceCampaign(p: CampaignProblem): BruteForceResult {
       best = state.snapshot();
       return;
     }
-    for (let s = 0; s < p.groups[g].slots.length; s++) {
+    for (const s of byCost[g]) {
       if (!state.canPlace(g, s)) continue;
       state.place(g, s);
       walk(g + 1, cost + p.groups[g].slots[s].cost);

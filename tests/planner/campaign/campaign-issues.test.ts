@@ -29,6 +29,15 @@ describe('campaignIssues', () => {
     expect(campaignIssues(problem(groups, 3, 7), [0, 7, null])).toEqual([]);
   });
 
+  it('counts the spacing in calendar days, across a month and a year end', () => {
+    const at = (night: string) => ({ startMs: Date.parse(`${night}T23:00:00Z`), endMs: Date.parse(`${night}T23:00:00Z`) + 3_600_000, night, cost: 1 });
+    const p = problem([{ slots: [at('2026-12-31')], touched: ['s'] }, { slots: [at('2027-01-06'), at('2027-01-07')], touched: ['s'] }], 2, 7);
+    expect(campaignIssues(p, [0, 0])).toEqual([
+      'Group 1 (Thu 31 Dec 2026) and group 2 (Wed 6 Jan 2027) touch 1 common slice 6 days apart; a slice may be touched at most once in 7 days.',
+    ]);
+    expect(campaignIssues(p, [0, 1])).toEqual([]);
+  });
+
   it('names clashing groups whose windows overlap', () => {
     expect(campaignIssues(problem(groups, 3, 0, [[1, 2]]), [null, 5, 5])).toEqual([
       'Core upgrade and group 3 must not be out at the same time, but their windows overlap (Sun 6 Dec 2026).',
