@@ -1,7 +1,7 @@
 // Every rule a campaign's assignment breaks, in words a planner reads (the draft's manual moves are checked with
 // it), and why an unscheduled group found no slot.
 import { type CampaignState, UNSCHEDULED } from './campaign-state';
-import { checkRules, dayNumber, formatNight, groupLabel, listWords, slotsOverlap } from './compile-campaign';
+import { checkRules, dayNumber, formatNight, groupLabel, LIST_AT_MOST, listWords, slotsOverlap } from './compile-campaign';
 import type { CampaignProblem } from './types';
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
@@ -85,11 +85,11 @@ export function unscheduledReason(state: CampaignState, g: number): string {
     b.spacing.forEach((h) => spacing.add(h));
     b.clash.forEach((h) => clash.add(h));
   }
-  const names = (set: Set<number>) => listWords([...set].sort((a, b) => a - b).map((h) => groupLabel(p, h)));
+  const names = (set: Set<number>) => listWords([...set].sort((a, b) => a - b).map((h) => groupLabel(p, h)), LIST_AT_MOST, 'more groups');
   const parts: string[] = [];
   if (byNight > 0) {
     const nights = [...fullNights].map((n) => c.nights[n]).sort().map(formatNight);
-    parts.push(`${byNight} fall on nights that already hold ${plural(c.maxPerNight, 'window')}, the most allowed (${listWords(nights)})`);
+    parts.push(`${byNight} fall on nights that already hold ${plural(c.maxPerNight, 'window')}, the most allowed (${listWords(nights, LIST_AT_MOST, 'more nights')})`);
   }
   if (bySpacing > 0) {
     parts.push(`${bySpacing} lie within ${plural(c.minDays, 'day')} of a window touching the same slices (${names(spacing)})`);

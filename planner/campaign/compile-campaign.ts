@@ -44,8 +44,12 @@ export function groupLabel(p: CampaignProblem, g: number): string {
   return p.groups[g]?.label ?? `group ${g + 1}`;
 }
 
-/** "a", "a and b", "a, b and c" */
-export function listWords(items: string[]): string {
+/** The most items a reason names before it counts the rest ("… and 7 more nights"). */
+export const LIST_AT_MOST = 5;
+
+/** "a", "a and b", "a, b and c"; past `atMost` items, "a, b, c, d, e and 7 more <noun>". */
+export function listWords(items: string[], atMost = Infinity, noun = 'more'): string {
+  if (items.length > atMost) return `${items.slice(0, atMost).join(', ')} and ${items.length - atMost} ${noun}`;
   return items.length <= 1 ? items.join('') : `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
 }
 

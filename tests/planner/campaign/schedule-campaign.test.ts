@@ -52,6 +52,13 @@ describe('scheduleCampaign on problems solved by hand', () => {
     expect(r.unscheduledReasons[g]).toContain(`within 5 days of a window touching the same slices (${p.groups[1 - g].label})`);
   });
 
+  it('a reason names at most 5 nights and counts the rest', () => {
+    const p = problem([0, 1, 2, 3, 4, 5, 6, 7].map(() => ({ slots: nightlySlots(flat(7)), touched: [] })), 1, 0);
+    const r = scheduleCampaign(p);
+    const g = r.assignment.indexOf(null);
+    expect(r.unscheduledReasons[g]).toContain('(Tue 1 Dec 2026, Wed 2 Dec 2026, Thu 3 Dec 2026, Fri 4 Dec 2026, Sat 5 Dec 2026 and 2 more nights)');
+  });
+
   it('clashing groups never overlap; non-clashing ones may share a night', () => {
     const slots = nightlySlots([1, 9]);
     const p = problem([{ slots, touched: [] }, { slots, touched: [] }, { slots, touched: [] }], 3, 0, [[0, 1]]);
