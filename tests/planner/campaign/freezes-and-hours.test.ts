@@ -20,6 +20,7 @@ const caseArb: fc.Arbitrary<Case> = fc.record({
   fromDay: fc.integer({ min: 0, max: 20 }),
   rangeDays: fc.integer({ min: 3, max: 21 }),
   step: fc.constantFrom(30 as const, 60 as const),
+  weekdays: fc.option(fc.uniqueArray(fc.integer({ min: 1, max: 7 }), { minLength: 1, maxLength: 7 }), { nil: undefined }),
   freezes: fc.array(fc.record({ atHours: fc.integer({ min: 0, max: 21 * 24 }), lengthHours: fc.integer({ min: 1, max: 72 }) }), { maxLength: 4 }),
   groupCount: fc.integer({ min: 3, max: 12 }),
   seed: fc.integer({ min: 0, max: 1_000_000 }),
@@ -30,6 +31,7 @@ const caseArb: fc.Arbitrary<Case> = fc.record({
   const timing: SlotTiming = {
     from: new Date(fromMs).toISOString(), to: new Date(fromMs + c.rangeDays * 24 * HOUR_MS).toISOString(),
     hours: { start: hhmm(c.startHalfHours * 30), end: hhmm(c.endHalfHours * 30) }, durationHours: c.durationHours, stepMinutes: c.step,
+    weekdays: c.weekdays,
   };
   const freezes = c.freezes.map((f) => ({ startMs: fromMs + f.atHours * HOUR_MS, endMs: fromMs + (f.atHours + f.lengthHours) * HOUR_MS }));
   const usable = slotTimes(timing, NETWORK_TIME_ZONE).filter((t) => !freezes.some((f) => t.startMs < f.endMs && f.startMs < t.endMs));
@@ -49,7 +51,7 @@ function minutesIntoNight(instantMs: number, night: string): number {
 }
 
 describe('campaign schedules built from real slot times', () => {
-  it('respects freezes and allowed hours: every window lies inside its night\'s allowed hours and overlaps no freeze', () => {
+  it('respects freezes and allowed hours: every window lies inside its night\'s allowed hours and days and overlaps no freeze', () => {
     let windows = 0;
     fc.assert(fc.property(caseArb, ({ timing, freezes, groups, maxPerNight, days }) => {
       const p = { groups, rules: { maxPerNight, minDaysBetweenTouches: days }, clashes: [] };
@@ -66,6 +68,8 @@ describe('campaign schedules built from real slot times', () => {
         expect(minutesIntoNight(w.endMs, w.night)).toBeLessThanOrEqual(allowedEnd);
         expect(w.endMs - w.startMs).toBe(timing.durationHours * 3_600_000);
         for (const f of freezes) expect(w.startMs < f.endMs && f.startMs < w.endMs).toBe(false);
+        // the allowed period begins on one of the allowed weekdays (ISO: 1 Monday … 7 Sunday)
+        if (timing.weekdays) expect(timing.weekdays).toContain(new Date(`${w.night}T12:00:00Z`).getUTCDay() || 7);
       });
     }), { numRuns: 60, seed: 8_052_026 });
     // the property is about windows: make sure the generator gives it plenty to check
