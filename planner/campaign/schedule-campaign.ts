@@ -4,6 +4,7 @@
 // Method: a constructive start (most constrained group first, cheapest legal slot) and an iterated local search
 // (moves, night swaps, insertions with one blocker moved; seeded kicks), deterministic for a seed.
 // Reference: H. R. Lourenço, O. C. Martin, T. Stützle, "Iterated Local Search", Handbook of Metaheuristics (2003).
+import { InvalidOptionError } from '../errors';
 import { createRng } from '../random/rng';
 import { CampaignState, UNSCHEDULED } from './campaign-state';
 import { unscheduledReason } from './campaign-issues';
@@ -29,13 +30,14 @@ function windowsCostOf(state: CampaignState): number {
 
 export function scheduleCampaign(p: CampaignProblem, opts: ScheduleOptions = {}): CampaignSchedule {
   const { seed, maxIterations, onProgress } = { ...SCHEDULE_DEFAULTS, ...opts };
+  if (!Number.isInteger(maxIterations) || maxIterations < 0) throw new InvalidOptionError('maxIterations must be a whole number, 0 or more');
   const state = new CampaignState(compileCampaign(p));
   construct(state);
   const startCost = state.objective();
   const startWindowsCost = windowsCostOf(state);
   const startUnscheduled = state.assign.filter((s) => s === UNSCHEDULED).length;
   const counters = { iterations: 0, moves: 0 };
-  localSearch({ state, rng: createRng(seed), counters, maxIterations: Math.max(0, Math.floor(maxIterations)), onProgress });
+  localSearch({ state, rng: createRng(seed), counters, maxIterations, onProgress });
   construct(state);
   const assignment = Array.from(state.assign, (s) => (s === UNSCHEDULED ? null : s));
   return {

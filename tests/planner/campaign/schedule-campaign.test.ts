@@ -113,9 +113,11 @@ describe('scheduleCampaign on problems solved by hand', () => {
     expect(r.startCost).toBe(1 + UNSCHEDULED_PENALTY);
   });
 
-  it('rejects rules outside their range and clashes naming no group', () => {
+  it('rejects rules and budgets outside their range and clashes naming no group', () => {
     expect(() => scheduleCampaign(problem([], 0, 0))).toThrow(InvalidOptionError);
     expect(() => scheduleCampaign(problem([], 1, -1))).toThrow(InvalidOptionError);
+    expect(() => scheduleCampaign(problem([], 1, 0), { maxIterations: Number.NaN })).toThrow(InvalidOptionError);
+    expect(() => scheduleCampaign(problem([], 1, 0), { maxIterations: -5 })).toThrow(InvalidOptionError);
     expect(() => scheduleCampaign(problem([{ slots: [], touched: [] }], 1, 0, [[0, 3]]))).toThrow(InvalidOptionError);
     expect(() => scheduleCampaign(problem([{ slots: [{ startMs: 0, endMs: 1, night: '1 Dec', cost: 0 }], touched: [] }], 1, 0)))
       .toThrow(InvalidOptionError);
