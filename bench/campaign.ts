@@ -74,8 +74,8 @@ function lowerBound(p: CampaignProblem): number {
 const points = (x: number) => `${x.toFixed(0)} points`;
 
 function gainWords(moreScheduled: number, cheaper: number): string {
-  const windows = cheaper >= 0 ? `windows ${points(cheaper)} cheaper` : `windows ${points(-cheaper)} dearer, being more`;
-  return `${moreScheduled} more groups scheduled, ${windows}`;
+  const windows = cheaper >= 0 ? `windows ${points(cheaper)} cheaper` : `windows ${points(-cheaper)} more in all, the added ones included`;
+  return `${moreScheduled} more groups scheduled; ${windows}`;
 }
 
 function bigRows(iterations: number, seed: number): Row[] {
