@@ -206,6 +206,8 @@ export const campaignSchema = z.object({
   /** sum of the windows' costs (points); the constructive start's total beside it shows what the local search gained */
   totalCost: z.number().nullable(),
   startCost: z.number().nullable(),
+  /** groups the constructive start placed (the local search may fit in more) */
+  startScheduled: z.number().int().nullable(),
   /** booked windows, in group order, once the campaign is booked */
   bookedWindowIds: z.array(z.string()),
   error: z.string().nullable(),

@@ -31,9 +31,17 @@ export function windowsByNight(windows: readonly CampaignWindow[]): Night[] {
     .map(([night, list]) => ({ night, windows: list.sort((a, b) => Date.parse(a.start) - Date.parse(b.start) || a.group - b.group) }));
 }
 
-/** What the local search gained over the constructive start: "saves 12 points on the first schedule found". */
-export function gainText(c: Pick<Campaign, 'totalCost' | 'startCost'>): string | null {
+/**
+ * What the local search gained over the constructive start: more groups fitted in first (a window more is worth far
+ * more than points saved), otherwise the points saved.
+ */
+export function gainText(c: Pick<Campaign, 'totalCost' | 'startCost' | 'startScheduled' | 'windows'>): string | null {
   if (c.totalCost === null || c.startCost === null) return null;
+  const more = c.startScheduled === null ? 0 : c.windows.length - c.startScheduled;
+  if (more > 0) {
+    return `The search fitted in ${more} more ${more === 1 ? 'window' : 'windows'} than the first schedule found `
+      + `(${c.startScheduled} ${c.startScheduled === 1 ? 'window' : 'windows'}, ${formatPoints(c.startCost)}).`;
+  }
   const gain = c.startCost - c.totalCost;
   if (gain <= 0) return `The first schedule found was already the best (${formatPoints(c.startCost)}).`;
   return `${formatPoints(gain)} less than the first schedule found (${formatPoints(c.startCost)}).`;

@@ -48,7 +48,7 @@ export function campaign(extra: Partial<Campaign> = {}): Campaign {
       stepMinutes: 60, maxPerNight: 1, minDaysBetweenTouches: 7,
     },
     windows: [campaignWindow(0), campaignWindow(1, { start: '2030-01-13T01:00:00.000Z', end: '2030-01-13T05:00:00.000Z', night: '2030-01-13' })],
-    unscheduled: [], totalCost: 21, startCost: 30, bookedWindowIds: [], error: null,
+    unscheduled: [], totalCost: 21, startCost: 30, startScheduled: 2, bookedWindowIds: [], error: null,
     createdBy: { id: 'u-pl', name: 'Pat Planner' }, createdAt: '2030-01-01T10:00:00.000Z', updatedAt: '2030-01-01T10:00:00.000Z',
     ...extra,
   };

@@ -46,6 +46,7 @@ export function campaignView(row: CampaignRow): Campaign {
       : [],
     totalCost: s ? totalCostOf(s) : null,
     startCost: s ? s.startCost : null,
+    startScheduled: s?.startScheduled ?? null,
     bookedWindowIds: Array.isArray(row.bookedWindowIds) ? row.bookedWindowIds : [],
     error: row.error,
     createdBy: row.createdBy ? { id: row.createdBy, name: row.createdByName ?? 'a former user' } : null,

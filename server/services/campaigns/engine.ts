@@ -34,6 +34,9 @@ export interface CampaignSchedule {
   /** the objective (points), unscheduled groups' penalty included; the same for the constructive start */
   totalCost: number;
   startCost: number;
+  /** the constructive start's windows alone (no penalty) and the groups it left unscheduled */
+  startWindowsCost: number;
+  startUnscheduled: number;
   moves: number;
   iterations: number;
 }

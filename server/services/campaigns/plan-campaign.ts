@@ -63,15 +63,12 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
   await deps.onProgress({ phase: 'scheduling', done: 0, total: groups.length, elapsedMs: elapsed() });
   const problem = problemOf({ ...stored, assignment: [], unscheduledReasons: [], startCost: 0, moves: 0, iterations: 0 }, request);
   const schedule = engine.scheduleCampaign(problem, { seed: SCHEDULE_SEED });
-  const windowsCost = schedule.assignment.reduce<number>(
-    (sum, slot, g) => sum + (slot === null ? 0 : stored.groups[g].slots[slot].cost), 0);
   return {
     ...stored,
     assignment: schedule.assignment,
     unscheduledReasons: schedule.unscheduledReasons,
-    // Both objectives carry the same penalty for the groups left unscheduled at the end; taking it out of the
-    // start's figure puts it beside the windows' sum.
-    startCost: roundCost(schedule.startCost - (schedule.totalCost - windowsCost)),
+    startCost: roundCost(schedule.startWindowsCost),
+    startScheduled: groups.length - schedule.startUnscheduled,
     moves: schedule.moves,
     iterations: schedule.iterations,
   };

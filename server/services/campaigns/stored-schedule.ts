@@ -30,11 +30,10 @@ export const storedScheduleSchema = z.object({
   /** index into the group's slots; null when unscheduled */
   assignment: z.array(z.number().nullable()),
   unscheduledReasons: z.array(z.string().nullable()),
-  /**
-   * The constructive start's figure on the same footing as the windows' sum (the scheduler's penalty for groups left
-   * unscheduled by both taken out), so the two read side by side (points).
-   */
+  /** The constructive start's windows' sum (points, no penalty), to read beside the draft's. */
   startCost: z.number(),
+  /** groups the constructive start placed; the local search may fit in more (older drafts: absent) */
+  startScheduled: z.number().int().optional(),
   moves: z.number(),
   iterations: z.number(),
 });
