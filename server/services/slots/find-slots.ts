@@ -13,7 +13,9 @@ import { getPolicies } from '../../queries/windows/policies';
 import { currentInventory } from '../inventory/inventory-cache';
 import { outageOf, pairConflictReasons } from '../windows/pair-conflicts';
 import { SlotRequestError, SlotSearchCancelledError } from './errors';
-import { DEFAULT_REMAP_LIMIT_MS, GroupEvaluator, type EvaluatedSlot, type SearchRemaps } from './evaluate-slot';
+import {
+  DEFAULT_REMAP_LIMIT_MS, GroupEvaluator, scaledRemapLimitMs, type EvaluatedSlot, type SearchRemaps,
+} from './evaluate-slot';
 import { processRemapCache } from './remap-cache';
 import { loadSlotContext } from './slot-context';
 import { conflictReasonWords, listWords, namesFor, namesOf } from './slot-words';
@@ -27,7 +29,7 @@ export interface FindSlotsOptions {
   now: Date;
   onProgress?: SlotProgressFn;
   signal?: { readonly aborted: boolean };
-  /** per quick re-map run; default DEFAULT_REMAP_LIMIT_MS (300 ms) */
+  /** per quick re-map run; default: scaledRemapLimitMs for one group (300 ms – 2 s by size), 300 ms for several */
   remapLimitMs?: number;
 }
 
@@ -137,16 +139,17 @@ export async function findSlotsForGroups(
   };
   await report('preparing', true);
   const ctx = await loadSlotContext(db, slots[0].startMs, slots[slots.length - 1].endMs);
-  const limitMs = opts.remapLimitMs ?? DEFAULT_REMAP_LIMIT_MS;
   const out: GroupSlots[] = [];
   const memo: SearchRemaps['memo'] = new Map();
   for (const group of groups) {
     const remaps: SearchRemaps = {
-      memo, cache: processRemapCache, stats: { runs: 0, reused: 0 }, limitMs,
+      memo, cache: processRemapCache, stats: { runs: 0, reused: 0 }, limitMs: opts.remapLimitMs ?? DEFAULT_REMAP_LIMIT_MS,
       // A report in the middle of a run is a courtesy: a failure there shows again at the next candidate's report.
       onBusy: () => { report('evaluating').catch(() => undefined); },
     };
     const evaluator = new GroupEvaluator(ctx, group, timing.durationHours, remaps);
+    if (opts.remapLimitMs === undefined && groups.length === 1) remaps.limitMs = scaledRemapLimitMs(evaluator.mustMoveCount());
+    const limitMs = remaps.limitMs;
     const groupStart = elapsed();
     const evaluated: EvaluatedSlot[] = [];
     for (const slot of slots) {

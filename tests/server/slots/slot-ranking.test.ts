@@ -2,7 +2,9 @@
 // the words people read (names, units, no ids).
 import fc from 'fast-check';
 import type { Inventory } from '../../../planner/model/types';
-import { NOTICE_SPARE_CAP_DAYS, SLOT_COST_WEIGHTS, slotCost } from '../../../server/services/slots/evaluate-slot';
+import {
+  DEFAULT_REMAP_LIMIT_MS, NOTICE_SPARE_CAP_DAYS, REMAP_LIMIT_CAP_MS, REMAP_MS_PER_SLICE, SLOT_COST_WEIGHTS, scaledRemapLimitMs, slotCost,
+} from '../../../server/services/slots/evaluate-slot';
 import { RemapCache, remapKey, type RemapAnswer } from '../../../server/services/slots/remap-cache';
 import {
   conflictReasonWords, explain, formatDays, leadTimeReason, listWords, namesOf,
@@ -90,4 +92,18 @@ test('explanations and reasons carry units and read as one line', () => {
   expect(formatDays(1)).toBe('1 day');
   expect(formatDays(12.7)).toBe('12 days');
   expect(listWords(['a', 'b', 'c', 'd', 'e', 'f'])).toBe('a, b, c, d and 2 more');
+});
+
+describe('the quick re-map limit of a one-group search', () => {
+  // The figures behind the scale are measured (REMAP_MS_PER_SLICE's comment); the test holds its shape.
+  test('grows with the slices the work must move, between the flat default and the cap', () => {
+    expect(scaledRemapLimitMs(0)).toBe(DEFAULT_REMAP_LIMIT_MS);
+    expect(scaledRemapLimitMs(29)).toBe(DEFAULT_REMAP_LIMIT_MS);
+    expect(scaledRemapLimitMs(100)).toBe(100 * REMAP_MS_PER_SLICE);
+    expect(scaledRemapLimitMs(299)).toBe(REMAP_LIMIT_CAP_MS);
+    fc.assert(fc.property(fc.nat(5000), fc.nat(5000), (a, b) => {
+      const [small, big] = a <= b ? [a, b] : [b, a];
+      return scaledRemapLimitMs(small) <= scaledRemapLimitMs(big) && scaledRemapLimitMs(big) <= REMAP_LIMIT_CAP_MS;
+    }));
+  });
 });
