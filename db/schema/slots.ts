@@ -28,6 +28,8 @@ export const slotSearches = pgTable(
     startedAt: timestamp('started_at', { withTimezone: true }),
     finishedAt: timestamp('finished_at', { withTimezone: true }),
     heartbeatAt: timestamp('heartbeat_at', { withTimezone: true }),
+    /** the pg-boss job working it, stored when a worker takes it: the heartbeat sweep fails that job into a retry */
+    jobId: text('job_id'),
   },
   (t) => [index('slot_searches_created_idx').on(t.createdAt)],
 );
@@ -57,6 +59,8 @@ export const campaigns = pgTable(
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
     heartbeatAt: timestamp('heartbeat_at', { withTimezone: true }),
+    /** as for slot searches: the pg-boss job planning it */
+    jobId: text('job_id'),
   },
   (t) => [index('campaigns_status_idx').on(t.status, t.createdAt)],
 );

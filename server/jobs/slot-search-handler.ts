@@ -1,8 +1,9 @@
 // Works one slot-search job: a slot search (the finder over one element group) or a campaign plan (the finder
-// over every group, then the scheduler). Marks the row running, writes progress about every half second, stores
-// the result. A request error (AppError: elements gone since, no usable slot) is stored as `failed` at once, since
-// retrying cannot help; anything else puts the row back to `queued` and is thrown, so the queue retries it, and a
-// job whose retries are used up reaches the dead-letter handler (slot-dead-letter.ts), which marks it failed.
+// over every group, then the scheduler). Marks the row running with its job id (for the heartbeat sweep,
+// slot-sweeper.ts), writes progress (the heartbeat) about every half second, stores the result. A request error
+// (AppError: elements gone since, no usable slot) is stored as `failed` at once, since retrying cannot help;
+// anything else puts the row back to `queued` and is thrown, so the queue retries it, and a job whose retries are
+// used up reaches the dead-letter handler (slot-dead-letter.ts), which marks it failed.
 import type { Db } from '../../db/client';
 import type { SearchProgress, SlotSearchRequest } from '../../shared/slots';
 import { retryWhileDatabaseUnavailable } from '../db-unavailable';
@@ -92,15 +93,15 @@ async function guarded(
 }
 
 export async function runSlotJob(deps: SlotJobDeps, job: SlotJob): Promise<void> {
-  if (job.data.kind === 'campaign') return runCampaign(deps, job.data.id);
-  return runSearch(deps, job.data.id);
+  if (job.data.kind === 'campaign') return runCampaign(deps, job.data.id, job.id);
+  return runSearch(deps, job.data.id, job.id);
 }
 
-async function runSearch(deps: SlotJobDeps, id: string): Promise<void> {
+async function runSearch(deps: SlotJobDeps, id: string, jobId: string): Promise<void> {
   const { db } = deps;
   const row = await selectSlotSearch(db, id);
   if (!row || (row.status !== 'queued' && row.status !== 'running')) return;
-  const attempt = await markSearchRunning(db, id, new Date(), firstProgress(0));
+  const attempt = await markSearchRunning(db, id, new Date(), firstProgress(0), jobId);
   if (attempt === null) return;
   const ops: RowOps = {
     label: `slot search ${id}`,
@@ -125,12 +126,12 @@ async function runSearch(deps: SlotJobDeps, id: string): Promise<void> {
   });
 }
 
-async function runCampaign(deps: SlotJobDeps, id: string): Promise<void> {
+async function runCampaign(deps: SlotJobDeps, id: string, jobId: string): Promise<void> {
   const { db } = deps;
   const row = await selectCampaign(db, id);
   if (!row || (row.status !== 'queued' && row.status !== 'running')) return;
   const request = row.request as CampaignRequest;
-  const attempt = await markCampaignRunning(db, id, new Date(), firstProgress(request.groups.length));
+  const attempt = await markCampaignRunning(db, id, new Date(), firstProgress(request.groups.length), jobId);
   if (attempt === null) return;
   const ops: RowOps = {
     label: `campaign ${id}`,

@@ -1,6 +1,6 @@
 // Writes and reads of `campaigns` rows: created queued by the route, planned by the slot-search worker (guarded by
 // the attempt like slot searches), then changed, booked or discarded by planners under optimistic locking.
-import { and, desc, eq, inArray, sql } from 'drizzle-orm';
+import { and, desc, eq, inArray, lt, sql } from 'drizzle-orm';
 import type { Queryable, Tx } from '../../../db/client';
 import { campaigns, users } from '../../../db/schema';
 import type { CampaignStatus, SearchProgress } from '../../../shared/slots';
@@ -20,7 +20,7 @@ function selectRows(db: Queryable) {
     id: campaigns.id, title: campaigns.title, createdBy: campaigns.createdBy, request: campaigns.request,
     status: campaigns.status, version: campaigns.version, progress: campaigns.progress, schedule: campaigns.schedule,
     bookedWindowIds: campaigns.bookedWindowIds, error: campaigns.error, attempts: campaigns.attempts,
-    createdAt: campaigns.createdAt, updatedAt: campaigns.updatedAt, heartbeatAt: campaigns.heartbeatAt,
+    createdAt: campaigns.createdAt, updatedAt: campaigns.updatedAt, heartbeatAt: campaigns.heartbeatAt, jobId: campaigns.jobId,
     createdByName: users.name,
   }).from(campaigns).leftJoin(users, eq(users.id, campaigns.createdBy));
 }
@@ -43,10 +43,15 @@ export async function lockCampaign(tx: Tx, id: string): Promise<CampaignRow | nu
   return row ?? null;
 }
 
-/** Takes the planning: `running`, one more attempt. Null when it is no longer queued or running. */
-export async function markCampaignRunning(db: Queryable, id: string, now: Date, progress: SearchProgress): Promise<number | null> {
+/**
+ * Takes the planning for the pg-boss job `jobId`: `running`, one more attempt. Null when it is no longer queued or
+ * running.
+ */
+export async function markCampaignRunning(
+  db: Queryable, id: string, now: Date, progress: SearchProgress, jobId: string,
+): Promise<number | null> {
   const [row] = await db.update(campaigns).set({
-    status: 'running', attempts: sql`${campaigns.attempts} + 1`, heartbeatAt: sql`now()`, progress, error: null, updatedAt: now,
+    status: 'running', attempts: sql`${campaigns.attempts} + 1`, heartbeatAt: sql`now()`, progress, error: null, updatedAt: now, jobId,
   }).where(and(eq(campaigns.id, id), inArray(campaigns.status, ['queued', 'running'])))
     .returning({ attempts: campaigns.attempts });
   return row?.attempts ?? null;
@@ -77,6 +82,13 @@ export async function finishCampaignFailed(db: Queryable, id: string, attempt: n
 
 export async function requeueCampaign(db: Queryable, id: string, attempt: number): Promise<void> {
   await db.update(campaigns).set({ status: 'queued', progress: null }).where(ownedBy(id, attempt));
+}
+
+/** Plannings `running` with a heartbeat older than `staleSeconds` (database clock) go back to `queued`, as for searches. */
+export async function requeueStalledCampaigns(db: Queryable, staleSeconds: number): Promise<{ id: string; jobId: string | null }[]> {
+  return db.update(campaigns).set({ status: 'queued', progress: null })
+    .where(and(eq(campaigns.status, 'running'), lt(campaigns.heartbeatAt, sql`now() - make_interval(secs => ${staleSeconds})`)))
+    .returning({ id: campaigns.id, jobId: campaigns.jobId });
 }
 
 /** Ends a planning that never finished (the queue refused it, or its retries are used up). */
