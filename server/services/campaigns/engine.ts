@@ -4,6 +4,7 @@
 import type { Queryable } from '../../../db/client';
 import type { Inventory } from '../../../planner/model/types';
 import type { SlotTiming } from '../../../shared/slot-times';
+import type { QuickRemapperFactory } from '../slots/quick-remap';
 import type { SearchProgress, SlotCandidate, SlotSearchRequest, SlotSearchSummary } from '../../../shared/slots';
 
 export interface SlotElements { sites: string[]; spans: string[] }
@@ -13,6 +14,8 @@ export interface FindSlotsOptions {
   onProgress?: (p: SearchProgress) => void | Promise<void>;
   signal?: { readonly aborted: boolean };
   remapLimitMs?: number;
+  /** runs the search's quick re-maps (default: on the calling thread; the slot jobs pass a worker thread's) */
+  remapper?: QuickRemapperFactory;
 }
 
 /** One element group evaluated over every candidate time. */

@@ -8,7 +8,6 @@ import { assessImpact } from '../../../planner/impact/assess-impact';
 import type { Severity } from '../../../planner/impact/severity';
 import { compileWindow } from '../../../planner/model/build-inventory';
 import type { Inventory, SlicePlacement, WindowSpec } from '../../../planner/model/types';
-import { computePlan } from '../../../planner/plan/compute-plan';
 import { overlapReservations } from '../../../planner/plan/overlap-reservations';
 import { fromSlicePlans } from '../../../planner/plan/slice-plans';
 import { sliceRisk } from '../../../planner/risk/slice-risk';
@@ -19,6 +18,7 @@ import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 import { mustMove, touchCounts, type PlannedSlice, type TouchedSlice } from '../../../shared/touch-counts';
 import type { ElementRow } from '../../queries/windows/window-rows';
 import { outageOf, pairConflictReasons, type Outage } from '../windows/pair-conflicts';
+import type { QuickRemapper, RemapWindow } from './quick-remap';
 import { remapKey, type RemapAnswer, type RemapCache } from './remap-cache';
 import type { ContextWindow, SlotContext } from './slot-context';
 import {
@@ -82,6 +82,8 @@ export type RemapStats = { runs: number; reused: number };
 /** Shared by every group of one search: the remap answers computed or reused so far, and the counts. */
 export type SearchRemaps = {
   memo: Map<string, RemapAnswer>; cache: RemapCache; stats: RemapStats; limitMs: number;
+  /** runs the re-maps neither the memo nor the cache answers */
+  remapper: QuickRemapper;
   /** called while a re-map runs (each generation), so the search can report progress during a long run */
   onBusy?: () => void;
 };
@@ -89,6 +91,8 @@ export type SearchRemaps = {
 type StateFacts = {
   key: string;
   overlapping: ContextWindow[];
+  /** the group's work as a window (what the remapper gets) and compiled */
+  window: RemapWindow;
   spec: WindowSpec;
   touched: TouchedSlice[];
   touchedIds: string[];
@@ -197,14 +201,14 @@ export class GroupEvaluator {
     let facts = this.states.get(key);
     if (facts) return facts;
     const inv = this.ctx.inventory;
-    const start = new Date(0);
-    const spec = compileWindow({
-      id: GROUP_WINDOW_ID, start: start.toISOString(), end: new Date(this.durationHours * 3_600_000).toISOString(),
+    const window: RemapWindow = {
+      id: GROUP_WINDOW_ID, start: new Date(0).toISOString(), end: new Date(this.durationHours * 3_600_000).toISOString(),
       down: { sites: [...this.group.sites], spans: [...this.group.spans] }, reduced: [],
-    });
+    };
+    const spec = compileWindow(window);
     const reservations = overlapping.length === 0 ? {}
       : overlapReservations(inv, overlapping.map((w) => ({ window: w.spec, slices: w.slices })));
-    facts = { key, overlapping, spec, ...this.own(spec), reservations, remap: null, riskWithoutPlan: null };
+    facts = { key, overlapping, window, spec, ...this.own(spec), reservations, remap: null, riskWithoutPlan: null };
     this.states.set(key, facts);
     return facts;
   }
@@ -221,15 +225,13 @@ export class GroupEvaluator {
     const reused = answer !== null && answer !== undefined;
     if (!answer) {
       const defaults = planSettingsSchema.parse({});
-      const computed = await computePlan(this.ctx.scenario, facts.spec, {
-        inventory: inv,
+      answer = await this.remaps.remapper.remap({
+        window: facts.window, reservations: facts.reservations,
         plan: {
           mode: defaults.mode, seed: defaults.seed, population: defaults.population, knockOn: defaults.knockOn,
-          maxKnockOnMoves: defaults.maxKnockOnMoves, timeLimitMs: limitMs, reservations: facts.reservations,
+          maxKnockOnMoves: defaults.maxKnockOnMoves, timeLimitMs: limitMs,
         },
-        onProgress: this.remaps.onBusy,
-      });
-      answer = { slices: computed.result.slices, affected: computed.result.affected };
+      }, this.remaps.onBusy);
       cache.set(facts.key, inv, answer);
       stats.runs += 1;
     } else {

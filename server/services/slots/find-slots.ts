@@ -16,6 +16,7 @@ import { SlotRequestError, SlotSearchCancelledError } from './errors';
 import {
   DEFAULT_REMAP_LIMIT_MS, GroupEvaluator, scaledRemapLimitMs, type EvaluatedSlot, type SearchRemaps,
 } from './evaluate-slot';
+import { inProcessRemapper, type QuickRemapperFactory } from './quick-remap';
 import { processRemapCache } from './remap-cache';
 import { loadSlotContext } from './slot-context';
 import { conflictReasonWords, listWords, namesFor, namesOf } from './slot-words';
@@ -31,6 +32,11 @@ export interface FindSlotsOptions {
   signal?: { readonly aborted: boolean };
   /** per quick re-map run; default: scaledRemapLimitMs for one group (300 ms – 2 s by size), 300 ms for several */
   remapLimitMs?: number;
+  /**
+   * Makes the search's remapper (closed when the search ends); default: on the calling thread. The slot jobs pass
+   * one backed by a worker thread, so a re-map does not stall the process's event loop.
+   */
+  remapper?: QuickRemapperFactory;
 }
 
 export interface SlotElements { sites: string[]; spans: string[] }
@@ -139,42 +145,49 @@ export async function findSlotsForGroups(
   };
   await report('preparing', true);
   const ctx = await loadSlotContext(db, slots[0].startMs, slots[slots.length - 1].endMs);
-  const out: GroupSlots[] = [];
-  const memo: SearchRemaps['memo'] = new Map();
-  for (const group of groups) {
-    const remaps: SearchRemaps = {
-      memo, cache: processRemapCache, stats: { runs: 0, reused: 0 }, limitMs: opts.remapLimitMs ?? DEFAULT_REMAP_LIMIT_MS,
-      // A report in the middle of a run is a courtesy: a failure there shows again at the next candidate's report.
-      onBusy: () => { report('evaluating').catch(() => undefined); },
-    };
-    const evaluator = new GroupEvaluator(ctx, group, timing.durationHours, remaps);
-    if (opts.remapLimitMs === undefined && groups.length === 1) remaps.limitMs = scaledRemapLimitMs(evaluator.mustMoveCount());
-    const limitMs = remaps.limitMs;
-    const groupStart = elapsed();
-    const evaluated: EvaluatedSlot[] = [];
-    for (const slot of slots) {
-      if (opts.signal?.aborted) throw new SlotSearchCancelledError(done, total);
-      evaluated.push(await evaluator.evaluate(slot, opts.now));
-      done += 1;
-      await report('evaluating');
-      await nextTurn();
+  const remapper = (opts.remapper ?? inProcessRemapper)(ctx.scenario, ctx.inventory);
+  // The remapper may hold a thread: closed however the search ends (done, cancelled or failed).
+  try {
+    const out: GroupSlots[] = [];
+    const memo: SearchRemaps['memo'] = new Map();
+    for (const group of groups) {
+      const remaps: SearchRemaps = {
+        memo, cache: processRemapCache, stats: { runs: 0, reused: 0 }, limitMs: opts.remapLimitMs ?? DEFAULT_REMAP_LIMIT_MS,
+        remapper,
+        // A report in the middle of a run is a courtesy: a failure there shows again at the next candidate's report.
+        onBusy: () => { report('evaluating').catch(() => undefined); },
+      };
+      const evaluator = new GroupEvaluator(ctx, group, timing.durationHours, remaps);
+      if (opts.remapLimitMs === undefined && groups.length === 1) remaps.limitMs = scaledRemapLimitMs(evaluator.mustMoveCount());
+      const limitMs = remaps.limitMs;
+      const groupStart = elapsed();
+      const evaluated: EvaluatedSlot[] = [];
+      for (const slot of slots) {
+        if (opts.signal?.aborted) throw new SlotSearchCancelledError(done, total);
+        evaluated.push(await evaluator.evaluate(slot, opts.now));
+        done += 1;
+        await report('evaluating');
+        await nextTurn();
+      }
+      const candidates = ranked(evaluated);
+      const touched = new Set<string>();
+      for (const e of evaluated) if (!e.candidate.excluded) e.touchedIds.forEach((id) => touched.add(id));
+      const usable = candidates.filter((c) => c.rank !== null).length;
+      out.push({
+        candidates,
+        touchedSlices: [...touched].sort(),
+        summary: {
+          usable, excluded: candidates.length - usable, remapRuns: remaps.stats.runs, reusedRuns: remaps.stats.reused,
+          // one group: the whole search, reading the context included; several: this group's share
+          elapsedMs: groups.length === 1 ? elapsed() : elapsed() - groupStart, remapLimitMs: limitMs,
+        },
+      });
     }
-    const candidates = ranked(evaluated);
-    const touched = new Set<string>();
-    for (const e of evaluated) if (!e.candidate.excluded) e.touchedIds.forEach((id) => touched.add(id));
-    const usable = candidates.filter((c) => c.rank !== null).length;
-    out.push({
-      candidates,
-      touchedSlices: [...touched].sort(),
-      summary: {
-        usable, excluded: candidates.length - usable, remapRuns: remaps.stats.runs, reusedRuns: remaps.stats.reused,
-        // one group: the whole search, reading the context included; several: this group's share
-        elapsedMs: groups.length === 1 ? elapsed() : elapsed() - groupStart, remapLimitMs: limitMs,
-      },
-    });
+    await report('finishing', true);
+    return out;
+  } finally {
+    await remapper.close();
   }
-  await report('finishing', true);
-  return out;
 }
 
 const baseComponentsOf = new WeakMap<Inventory, number>();

@@ -16,6 +16,8 @@ import {
   freezes, placements, sites, sliceFunctions, sliceTies, slices, spans, tenants, windowElements, windows,
 } from '../../../db/schema';
 import { inventoryCacheFor } from '../../../server/services/inventory/inventory-cache';
+import { threadRemapper } from '../../../server/jobs/slot-remap-thread';
+import type { QuickRemapper } from '../../../server/services/slots/quick-remap';
 import { processRemapCache } from '../../../server/services/slots/remap-cache';
 import {
   checkSlotRequest, elementsClash, findSlots, findSlotsForGroups, SlotRequestError, SlotSearchCancelledError,
@@ -176,6 +178,32 @@ test('a second search on the same network state reuses the quick re-map and give
   const strip = (r: GroupSlots) => r.candidates.map(({ reused: _reused, explanation: _e, ...rest }) => rest);
   expect(strip(again)).toEqual(strip(first));
   expect(again.candidates.filter((c) => c.unresolved !== null).every((c) => c.reused)).toBe(true);
+});
+
+test('with a thread remapper the search ranks the same, its re-maps run in the thread, and the thread is closed', async () => {
+  processRemapCache.clear();
+  const made: QuickRemapper[] = [];
+  let remaps = 0;
+  let closed = 0;
+  const threaded = await findSlots(db, request(), {
+    now: NOW,
+    remapper: (scenario, inventory) => {
+      const inner = threadRemapper(scenario, inventory);
+      const spy: QuickRemapper = {
+        remap: (req, onBusy) => { remaps += 1; return inner.remap(req, onBusy); },
+        close: () => { closed += 1; return inner.close(); },
+      };
+      made.push(spy);
+      return spy;
+    },
+  });
+  expect(made).toHaveLength(1);
+  expect(closed).toBe(1);
+  expect(remaps).toBe(threaded.summary.remapRuns);
+  expect(threaded.summary.remapRuns).toBe(first.summary.remapRuns);
+  const strip = (r: GroupSlots) => r.candidates.map(({ explanation: _e, ...rest }) => rest);
+  expect(strip(threaded)).toEqual(strip(first));
+  await expect(made[0].remap({} as never)).rejects.toThrow('the quick re-map thread is closed');
 });
 
 test('progress ends with every candidate done; an aborted search stops early', async () => {
