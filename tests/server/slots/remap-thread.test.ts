@@ -163,3 +163,13 @@ test('the slot jobs\' engine hands every search the thread remapper unless the c
   await engine.findSlots(null as never, null as never, { now, remapper: inProcessRemapper });
   expect(seen).toEqual([threadRemapper, threadRemapper, inProcessRemapper]);
 });
+
+test('a thread that dies rejects the requests it was given with the reason', async () => {
+  // An inventory the thread cannot build (a placement on a site that does not exist) kills it as it starts.
+  const broken = handBuilt();
+  broken.placements[0] = { ...broken.placements[0], sites: { f1: 'nowhere', f2: 'A' } };
+  const thread = threadRemapper(broken, buildInventory(handBuilt()));
+  open.push(thread);
+  const asked = [thread.remap(request(work({ sites: ['X'], spans: [] }))), thread.remap(request(work({ sites: ['A'], spans: [] })))];
+  for (const answer of asked) await expect(answer).rejects.toThrow(/^the quick re-map thread crashed: .*nowhere/);
+});
