@@ -83,6 +83,10 @@ const probes: Probe[] = [
     'GET /api/export/graphml', 'GET /api/outbox', 'GET /api/outbox/:id', 'GET /api/outbox/:id/raw',
     'GET /api/sso', 'PUT /api/sso']
     .map((route) => ({ route, path: () => route.split(' ')[1].replace(/:\w+/, 'sites'), foreign: true })),
+  // Slot searches (engineers, planners, admins) and campaigns (planners; admins and engineers read): staff only.
+  ...['POST /api/slot-searches', 'GET /api/slot-searches/:id', 'POST /api/campaigns', 'GET /api/campaigns',
+    'GET /api/campaigns/:id', 'PATCH /api/campaigns/:id', 'POST /api/campaigns/:id/book', 'DELETE /api/campaigns/:id']
+    .map((route) => ({ route, path: () => route.split(' ')[1].replace(':id', 'cp-someone-elses'), foreign: true })),
   // The audit trail (admins and approvers): a window's rows as CSV, and the filter choices (people, windows, actions).
   { route: 'GET /api/audit', path: () => `/api/audit?window=${ctx.notified}&format=csv`, foreign: true },
   { route: 'GET /api/audit/choices', path: () => '/api/audit/choices', foreign: true },
