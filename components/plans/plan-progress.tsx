@@ -2,6 +2,7 @@
 import { StyleSheet, Text, View } from 'react-native';
 import type { Plan } from '@/shared/plans';
 import { Button } from '@/components/button';
+import { ProgressTrack } from '@/components/progress-track';
 import { elapsedFigure, formatObjective, PHASE_LABELS, progressFraction } from '@/components/plans/plan-format';
 import { colors, radii, space, type } from '@/constants/theme';
 
@@ -10,24 +11,13 @@ type Props = { plan: Plan; canCancel: boolean; cancelling: boolean; cancelError:
 export function PlanProgressView({ plan, canCancel, cancelling, cancelError, onCancel }: Props) {
   const progress = plan.progress;
   const fraction = progress ? progressFraction(progress) : 0;
-  const percent = Math.round(fraction * 100);
   const limitMs = progress?.timeLimitMs ?? plan.settings.timeLimitSeconds * 1000;
   return (
     <View style={styles.box} testID="plan-progress">
       <Text style={styles.heading}>
         {plan.status === 'queued' ? 'Waiting for a worker to pick the run up…' : progress ? PHASE_LABELS[progress.phase] : 'Starting…'}
       </Text>
-      <View
-        style={styles.track}
-        role="progressbar"
-        aria-valuemin={0}
-        aria-valuemax={100}
-        aria-valuenow={percent}
-        aria-label="Search progress against its time limit"
-        testID="plan-progress-bar"
-      >
-        <View style={[styles.fill, { width: `${percent}%` }]} testID="plan-progress-fill" />
-      </View>
+      <ProgressTrack fraction={fraction} label="Search progress against its time limit" testID="plan-progress-bar" fillTestID="plan-progress-fill" />
       <View style={styles.figures}>
         <Figure label="Round" value={progress ? String(progress.generation) : '–'} testID="plan-progress-generation" />
         <Figure label="Time" value={elapsedFigure(progress, limitMs)} testID="plan-progress-elapsed" />
@@ -60,8 +50,6 @@ function Figure({ label, value, testID }: { label: string; value: string; testID
 const styles = StyleSheet.create({
   box: { gap: space.md, padding: space.lg, backgroundColor: colors.surface, borderRadius: radii.lg, borderWidth: 1, borderColor: colors.border },
   heading: { ...type.heading, color: colors.ink },
-  track: { height: 14, borderRadius: radii.pill, backgroundColor: colors.surfaceSunken, overflow: 'hidden' },
-  fill: { height: '100%', backgroundColor: colors.primary, borderRadius: radii.pill },
   figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg },
   figure: { gap: space.xxs, minWidth: 90 },
   figureLabel: { ...type.label, color: colors.inkMuted },
