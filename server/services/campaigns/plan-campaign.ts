@@ -3,7 +3,7 @@
 // choose a slot per group within the campaign's rules. The answer is the draft stored on the campaign's row.
 import type { Queryable } from '../../../db/client';
 import { slotTimes } from '../../../shared/slot-times';
-import type { SearchProgress } from '../../../shared/slots';
+import type { SearchProgress, SlotCandidate, SlotExclusionCode } from '../../../shared/slots';
 import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 import { currentInventory } from '../inventory/inventory-cache';
 import { nameElements } from './element-names';
@@ -66,10 +66,29 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
   return {
     ...stored,
     assignment: schedule.assignment,
-    unscheduledReasons: schedule.unscheduledReasons,
+    // A group the finder left no usable start says why, in the finder's own words; the scheduler knows only that none is left.
+    unscheduledReasons: schedule.unscheduledReasons.map((reason, g) =>
+      (reason !== null && stored.groups[g].slots.length === 0 ? noUsableStartReason(found[g].candidates) : reason)),
     startCost: roundCost(schedule.startWindowsCost),
     startScheduled: groups.length - schedule.startUnscheduled,
     moves: schedule.moves,
     iterations: schedule.iterations,
   };
+}
+
+const EXCLUSION_WORDS: Record<SlotExclusionCode, string> = {
+  FREEZE: 'inside a freeze',
+  CONFLICT: 'in conflict with another window',
+  LEAD_TIME: 'too late to give a tenant its notice',
+  CRITICAL_STRANDED: 'cutting off a critical slice',
+};
+
+/** "No usable start: 40 of 42 cut off a critical slice, 2 inside a freeze. For example: …" (the commonest reason first). */
+export function noUsableStartReason(candidates: readonly SlotCandidate[]): string {
+  const byCode = new Map<SlotExclusionCode, SlotCandidate[]>();
+  for (const c of candidates) if (c.excluded) byCode.set(c.excluded.code, [...(byCode.get(c.excluded.code) ?? []), c]);
+  const ranked = [...byCode.entries()].sort((a, b) => b[1].length - a[1].length);
+  if (ranked.length === 0) return 'It has no usable start in the range.';
+  const counts = ranked.map(([code, list]) => `${list.length} ${EXCLUSION_WORDS[code]}`).join(', ');
+  return `No usable start in the range (${candidates.length} checked): ${counts}. For example: ${ranked[0][1][0].excluded!.reason}`;
 }
