@@ -183,6 +183,8 @@ export const campaignWindowSchema = z.object({
   cost: z.number(),
   touched: z.number().int(),
   unresolved: z.number().int().nullable(),
+  /** critical slices the window touches: the draft shows the caution for them */
+  criticalTouched: z.number().int(),
   explanation: z.string(),
   /** the other usable starts of this group, so the planner can move it (UTC instants, by cost) */
   alternatives: z.array(z.object({ start: z.string(), end: z.string(), night: z.string(), cost: z.number() })),

@@ -4,6 +4,7 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import type { Campaign } from '@/shared/slots';
 import { Button } from '@/components/button';
+import { CriticalCaution } from '@/components/critical-caution';
 import { ZoneNote } from '@/components/time/zoned-when';
 import { colors, radii, space, type } from '@/constants/theme';
 import { CampaignWindowRow } from './campaign-window-row';
@@ -36,6 +37,10 @@ export function CampaignDraft({ campaign: c, timeZone, canEdit, onMove, onBook, 
         {gain ? <Text style={styles.muted}>{gain}</Text> : null}
         <Text style={styles.muted}>Costs are the slot finder’s ranking points: lower hurts less.</Text>
       </View>
+      {c.windows.some((w) => w.criticalTouched > 0) ? (
+        <CriticalCaution title="Critical slices in this campaign" testID="campaign-critical-caution"
+          lead="Some of its windows touch slices that carry public-safety, health or utility services." />
+      ) : null}
       <ZoneNote timeZone={timeZone} testID="campaign-zone-note" />
       {refusal.length > 0 ? (
         <View style={styles.refusal} role="alert" testID="campaign-error">

@@ -152,3 +152,14 @@ describe('draft campaigns on the calendar', () => {
     expect(screen.getByTestId(`day-bar-${drafts[0].id}-mark`, { includeHiddenElements: true })).toHaveTextContent('Draft Upgrade: Group 1');
   });
 });
+
+test('the caution for critical slices shows when a window touches one', () => {
+  renderPage(campaign({ windows: [campaignWindow(0), campaignWindow(1, { criticalTouched: 2 })] }));
+  expect(screen.getByTestId('campaign-critical-caution')).toHaveTextContent(/regulator/);
+});
+
+test('no caution when no window touches a critical slice', () => {
+  renderPage(campaign({ windows: [campaignWindow(0), campaignWindow(1)] }));
+  expect(screen.getByTestId('campaign-draft')).toBeTruthy();
+  expect(screen.queryByTestId('campaign-critical-caution')).toBeNull();
+});

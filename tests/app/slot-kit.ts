@@ -30,7 +30,7 @@ export function search(extra: Partial<SlotSearch> = {}): SlotSearch {
 export function campaignWindow(group: number, extra: Partial<CampaignWindow> = {}): CampaignWindow {
   return {
     group, label: `Group ${group + 1}`, elements: [{ kind: 'site', id: `site-${group}`, name: `Site ${group + 1}` }],
-    start: '2030-01-10T01:00:00.000Z', end: '2030-01-10T05:00:00.000Z', night: '2030-01-10', cost: 10 + group, touched: 3, unresolved: 0,
+    start: '2030-01-10T01:00:00.000Z', end: '2030-01-10T05:00:00.000Z', night: '2030-01-10', cost: 10 + group, touched: 3, unresolved: 0, criticalTouched: 0,
     explanation: 'Quietest night for these sites.', alternatives: [
       { start: '2030-01-11T01:00:00.000Z', end: '2030-01-11T05:00:00.000Z', night: '2030-01-11', cost: 14 },
       { start: '2030-01-12T01:00:00.000Z', end: '2030-01-12T05:00:00.000Z', night: '2030-01-12', cost: 15 },

@@ -22,7 +22,8 @@ function windowsOf(s: StoredSchedule): CampaignWindow[] {
       .map(({ start, end, night, cost }) => ({ start, end, night, cost }));
     out.push({
       group, label: g.label, elements: g.elements, start: slot.start, end: slot.end, night: slot.night, cost: slot.cost,
-      touched: slot.touched, unresolved: slot.unresolved, explanation: slot.explanation, alternatives,
+      touched: slot.touched, unresolved: slot.unresolved, criticalTouched: slot.criticalTouched,
+      explanation: slot.explanation, alternatives,
     });
   });
   return out;

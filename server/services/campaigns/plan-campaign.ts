@@ -54,7 +54,8 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
         const night = nights.get(startMs);
         return night === undefined ? [] : [{
           start: new Date(startMs).toISOString(), end: new Date(Date.parse(c.end)).toISOString(), startMs, endMs: Date.parse(c.end),
-          night, cost: c.cost, touched: c.touched, unresolved: c.unresolved, explanation: c.explanation,
+          night, cost: c.cost, touched: c.touched, unresolved: c.unresolved, criticalTouched: c.criticalTouched,
+          explanation: c.explanation,
         }];
       }),
     })),

@@ -13,6 +13,8 @@ const storedSlotSchema = z.object({
   cost: z.number(),
   touched: z.number(),
   unresolved: z.number().nullable(),
+  /** critical slices the work touches (drafts stored before it was kept: 0) */
+  criticalTouched: z.number().default(0),
   explanation: z.string(),
 });
 export type StoredSlot = z.infer<typeof storedSlotSchema>;
