@@ -28,6 +28,7 @@ import { getUserById, listUsersWithRole } from '../server/queries/auth/users';
 import { inventoryCacheFor } from '../server/services/inventory/inventory-cache';
 import { threadRemapper } from '../server/jobs/slot-remap-thread';
 import { elementsClash, findSlots, type GroupSlots, type SlotElements } from '../server/services/slots/find-slots';
+import { namesOf } from '../server/services/slots/slot-words';
 import { processRemapCache } from '../server/services/slots/remap-cache';
 import { createWindow } from '../server/services/windows/create-window';
 import { FreezeConflictError } from '../server/services/windows/errors';
@@ -194,6 +195,7 @@ type OtherSpan = { id: string; label: string; hops: number };
 function otherSpans(scenario: Scenario, inv: Inventory, work: SlotElements, count: number): OtherSpan[] {
   const hops = hopsFrom(scenario, work.sites[0]);
   const names = new Map(scenario.sites.map((s) => [s.id, s.name]));
+  const words = namesOf(scenario);
   const carried = new Map<string, number>();
   for (const p of scenario.placements) {
     for (const span of new Set(Object.values(p.paths).flat())) carried.set(span, (carried.get(span) ?? 0) + 1);
@@ -211,7 +213,7 @@ function otherSpans(scenario: Scenario, inv: Inventory, work: SlotElements, coun
   const picked: OtherSpan[] = [];
   for (const s of ranked) {
     if (picked.length === count) break;
-    if (bridge(s.id) || elementsClash(inv, work, { sites: [], spans: [s.id] }).length > 0) continue;
+    if (bridge(s.id) || elementsClash(inv, work, { sites: [], spans: [s.id] }, words).length > 0) continue;
     picked.push({ id: s.id, label: `the span between ${names.get(s.a) ?? s.a} and ${names.get(s.b) ?? s.b}`, hops: far(s) });
   }
   return picked;

@@ -5,6 +5,7 @@ import type { Queryable } from '../../../db/client';
 import type { Inventory } from '../../../planner/model/types';
 import type { SlotTiming } from '../../../shared/slot-times';
 import type { QuickRemapperFactory } from '../slots/quick-remap';
+import type { SlotNames } from '../slots/slot-words';
 import type { SearchProgress, SlotCandidate, SlotSearchRequest, SlotSearchSummary } from '../../../shared/slots';
 
 export interface SlotElements { sites: string[]; spans: string[] }
@@ -52,7 +53,7 @@ export interface SlotEngine {
   findSlots(db: Queryable, request: SlotSearchRequest, opts: FindSlotsOptions): Promise<GroupSlots>;
   findSlotsForGroups(db: Queryable, timing: SlotTiming, groups: SlotElements[], opts: FindSlotsOptions): Promise<GroupSlots[]>;
   /** reasons two groups must not be out at the same time; [] if none */
-  elementsClash(inv: Inventory, a: SlotElements, b: SlotElements): string[];
+  elementsClash(inv: Inventory, a: SlotElements, b: SlotElements, names: SlotNames): string[];
   scheduleCampaign(p: CampaignProblem, opts?: { seed?: number; maxIterations?: number; onProgress?: (done: number, total: number) => void }): CampaignSchedule;
   /** every broken rule of an assignment, in words */
   campaignIssues(p: CampaignProblem, assignment: (number | null)[]): string[];

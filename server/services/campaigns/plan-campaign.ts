@@ -6,7 +6,7 @@ import { slotTimes } from '../../../shared/slot-times';
 import type { SearchProgress, SlotCandidate, SlotExclusionCode } from '../../../shared/slots';
 import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 import { currentInventory } from '../inventory/inventory-cache';
-import { nameElements } from './element-names';
+import { namedElements, namesOf } from '../slots/slot-words';
 import type { SlotEngine } from './engine';
 import { problemOf, roundCost, type CampaignRequest, type StoredSchedule } from './stored-schedule';
 
@@ -35,19 +35,19 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
   });
   // The night each start belongs to, as the scheduler counts nights (the candidates carry instants only).
   const nights = new Map(slotTimes(request, NETWORK_TIME_ZONE).map((t) => [t.startMs, t.night]));
-  const names = await nameElements(db, groups);
-  const { inventory } = await currentInventory(db);
+  const { scenario, inventory } = await currentInventory(db);
+  const names = namesOf(scenario);
   const clashes: Array<[number, number]> = [];
   for (let i = 0; i < groups.length; i++) {
     for (let j = i + 1; j < groups.length; j++) {
-      if (engine.elementsClash(inventory, groups[i], groups[j]).length > 0) clashes.push([i, j]);
+      if (engine.elementsClash(inventory, groups[i], groups[j], names).length > 0) clashes.push([i, j]);
     }
   }
   const stored: Omit<StoredSchedule, 'assignment' | 'unscheduledReasons' | 'startCost' | 'moves' | 'iterations'> = {
     clashes,
     groups: request.groups.map((g, i) => ({
       label: g.label,
-      elements: names[i],
+      elements: namedElements(names, groups[i]),
       touched: found[i].touchedSlices,
       slots: found[i].candidates.filter((c) => c.rank !== null && c.excluded === null).flatMap((c) => {
         const startMs = Date.parse(c.start);

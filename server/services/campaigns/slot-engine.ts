@@ -4,6 +4,6 @@ import { checkSlotGroups, checkSlotRequest, elementsClash, findSlots, findSlotsF
 import type { SlotEngine } from './engine';
 
 export const slotEngine: SlotEngine = {
-  checkSlotRequest, checkSlotGroups, findSlots, findSlotsForGroups, elementsClash: (inv, a, b) => elementsClash(inv, a, b),
+  checkSlotRequest, checkSlotGroups, findSlots, findSlotsForGroups, elementsClash,
   scheduleCampaign, campaignIssues,
 };

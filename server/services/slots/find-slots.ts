@@ -19,7 +19,9 @@ import {
 import { inProcessRemapper, type QuickRemapperFactory } from './quick-remap';
 import { processRemapCache } from './remap-cache';
 import { loadSlotContext } from './slot-context';
-import { conflictReasonWords, listWords, namesFor, namesOf } from './slot-words';
+import {
+  conflictReasonWords, listWords, namedElements, namesOf, type NamedElement, type SlotNames,
+} from './slot-words';
 
 export { SlotRequestError, SlotSearchCancelledError } from './errors';
 export { SLOT_COST_WEIGHTS, NOTICE_SPARE_CAP_DAYS, DEFAULT_REMAP_LIMIT_MS } from './evaluate-slot';
@@ -54,7 +56,6 @@ const PROGRESS_EVERY_MS = 250;
 
 const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
 
-type NamedElement = { kind: 'site' | 'span'; id: string; name: string };
 
 /**
  * Problems with a group's elements, in words: ids that are no site or span at all, and ids given as the other kind
@@ -100,10 +101,7 @@ export async function checkSlotGroups(
   }
   if (problems.length > 0) throw new SlotRequestError(problems);
   const names = namesOf(scenario);
-  return groups.map((g) => [
-    ...g.sites.map((id): NamedElement => ({ kind: 'site', id, name: names.site(id) })),
-    ...g.spans.map((id): NamedElement => ({ kind: 'span', id, name: names.span(id) })),
-  ]);
+  return groups.map((g) => namedElements(names, g));
 }
 
 /** Usable candidates by cost (ties by earlier start) with ranks 1, 2, …; then the excluded ones by start. */
@@ -199,10 +197,9 @@ const downRows = (g: SlotElements): ElementRow[] => [
 
 /**
  * Why two groups must not be out at the same time (a shared element, a split of the network only both together
- * cause, a slice only both together cut off), in words a person reads; [] when they may. Slice names come from the
- * last search's context on this inventory, or from `names` when given.
+ * cause, a slice only both together cut off), in words a person reads with `names`; [] when they may.
  */
-export function elementsClash(inv: Inventory, a: SlotElements, b: SlotElements, names = namesFor(inv)): string[] {
+export function elementsClash(inv: Inventory, a: SlotElements, b: SlotElements, names: SlotNames): string[] {
   let base = baseComponentsOf.get(inv);
   if (base === undefined) baseComponentsOf.set(inv, (base = countComponents(inv.network)));
   const [ra, rb] = [downRows(a), downRows(b)];

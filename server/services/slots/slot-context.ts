@@ -16,7 +16,7 @@ import { currentInventory } from '../inventory/inventory-cache';
 import { toSlicePlan } from '../plans/reservations';
 import { outageOf, type Outage } from '../windows/pair-conflicts';
 import { windowSpecOf } from '../windows/window-spec';
-import { namesOf, rememberNames, type SlotNames } from './slot-words';
+import { namesOf, type SlotNames } from './slot-words';
 
 export type ContextWindow = {
   id: string; title: string; startMs: number; endMs: number; version: number; acceptedPlanId: string | null;
@@ -70,7 +70,6 @@ export async function loadSlotContext(db: Queryable, fromMs: number, toMs: numbe
     };
   });
   const names = namesOf(scenario);
-  rememberNames(inventory, names);
   const leadDays = new Map(scenario.tenants.map((t) => [t.id, Math.max(t.noticeDays, policies.noticeLeadDays)]));
   return {
     revision, scenario, inventory, names, freezes, windows, policies, leadDays,

@@ -1,6 +1,5 @@
 // Words of the slot finder: names for sites, spans, slices and tenants (people read names, never ids), the
 // reasons a slot is excluded, the clash reasons between two groups, and each candidate's one-line explanation.
-import type { Inventory } from '../../../planner/model/types';
 import type { Scenario } from '../../../shared/scenario';
 import type { WindowConflict } from '../../../shared/window-impact';
 import { formatRangeIn } from '../notices/notice-times';
@@ -12,42 +11,32 @@ export interface SlotNames {
   tenant: (id: string) => string;
 }
 
-/** Names from the scenario the inventory was compiled from; a span is called by its two ends ("Ring 2–Ring 3"). */
+/**
+ * Names from the scenario the inventory was compiled from; a span is called by its two ends ("Ring 2 – Ring 3"), as
+ * the change-board pack and the sign-off summary call it. Something no longer in the inventory is said so, never by id.
+ */
 export function namesOf(scenario: Pick<Scenario, 'sites' | 'spans' | 'slices' | 'tenants'>): SlotNames {
   const sites = new Map(scenario.sites.map((s) => [s.id, s.name]));
-  const spans = new Map(scenario.spans.map((s) => [s.id, `${sites.get(s.a) ?? s.a}–${sites.get(s.b) ?? s.b}`]));
+  const site = (id: string) => sites.get(id) ?? 'a site no longer in the inventory';
+  const spans = new Map(scenario.spans.map((s) => [s.id, `${site(s.a)} – ${site(s.b)}`]));
   const slices = new Map(scenario.slices.map((s) => [s.id, s.name]));
   const tenants = new Map(scenario.tenants.map((t) => [t.id, t.name]));
   return {
-    site: (id) => sites.get(id) ?? id,
-    span: (id) => spans.get(id) ?? id,
-    slice: (id) => slices.get(id) ?? id,
-    tenant: (id) => tenants.get(id) ?? id,
-  };
-}
-
-const registry = new WeakMap<Inventory, SlotNames>();
-
-/** Remembers the names of a compiled inventory, so clash reasons worded later from the inventory alone can use them. */
-export function rememberNames(inv: Inventory, names: SlotNames): void {
-  registry.set(inv, names);
-}
-
-/** Names known for the inventory; without them, site names from the inventory itself and ids for the rest. */
-export function namesFor(inv: Inventory): SlotNames {
-  const known = registry.get(inv);
-  if (known) return known;
-  const { sites, siteIndex, spans, spanIndex } = inv.network;
-  const site = (id: string) => sites[siteIndex.get(id) ?? -1]?.name ?? id;
-  return {
     site,
-    span: (id) => {
-      const s = spans[spanIndex.get(id) ?? -1];
-      return s ? `${sites[s.a].name}–${sites[s.b].name}` : id;
-    },
-    slice: (id) => id,
-    tenant: (id) => id,
+    span: (id) => spans.get(id) ?? 'a span no longer in the inventory',
+    slice: (id) => slices.get(id) ?? 'a slice no longer in the inventory',
+    tenant: (id) => tenants.get(id) ?? 'a tenant no longer in the inventory',
   };
+}
+
+export type NamedElement = { kind: 'site' | 'span'; id: string; name: string };
+
+/** A group's sites and spans with their names, sites first: what the screens head a search or a campaign window with. */
+export function namedElements(names: SlotNames, group: { sites: readonly string[]; spans: readonly string[] }): NamedElement[] {
+  return [
+    ...group.sites.map((id): NamedElement => ({ kind: 'site', id, name: names.site(id) })),
+    ...group.spans.map((id): NamedElement => ({ kind: 'span', id, name: names.span(id) })),
+  ];
 }
 
 /** "A, B and C"; long lists end with "and N more". */

@@ -24,6 +24,7 @@ import {
   type GroupSlots,
 } from '../../../server/services/slots/find-slots';
 import { currentInventory } from '../../../server/services/inventory/inventory-cache';
+import { namesOf } from '../../../server/services/slots/slot-words';
 import { slotSearchCreateSchema, type SearchProgress, type SlotSearchRequest } from '../../../shared/slots';
 import type pg from 'pg';
 import { useScratchDatabase } from '../helpers/scratch-database';
@@ -247,10 +248,12 @@ test('a request the finder cannot search is refused before it starts, naming the
 });
 
 test('elementsClash says why two groups must not be out together', async () => {
-  const { inventory } = await currentInventory(db);
+  const { scenario, inventory } = await currentInventory(db);
+  const names = namesOf(scenario);
   const x = { sites: [id('X')], spans: [] };
-  expect(elementsClash(inventory, x, { sites: [id('X')], spans: [id('yb')] })).toEqual(['Both take out site Site X.']);
+  expect(elementsClash(inventory, x, { sites: [id('X')], spans: [id('yb')] }, names)).toEqual(['Both take out site Site X.']);
   // X alone or Y alone leaves A and B connected; both together cut them apart.
-  expect(elementsClash(inventory, x, { sites: [id('Y')], spans: [] })).toEqual([expect.stringMatching(/^Together they split the network into \d+ parts\.$/)]);
-  expect(elementsClash(inventory, x, { sites: [id('B')], spans: [] })).toEqual([]);
+  expect(elementsClash(inventory, x, { sites: [id('Y')], spans: [] }, names))
+    .toEqual([expect.stringMatching(/^Together they split the network into \d+ parts\.$/)]);
+  expect(elementsClash(inventory, x, { sites: [id('B')], spans: [] }, names)).toEqual([]);
 });

@@ -73,7 +73,7 @@ const names = namesOf({
 
 test('clash reasons name sites, spans and slices instead of ids', () => {
   expect(conflictReasonWords({ reason: 'shared-element', message: '', ids: ['site:r2', 'span:s23'] }, names))
-    .toBe('both take out site Ring 2 and span Ring 2–Ring 3');
+    .toBe('both take out site Ring 2 and span Ring 2 – Ring 3');
   expect(conflictReasonWords({ reason: 'strands-slice', message: '', ids: ['sl-1'] }, names))
     .toBe('together they cut off the slice "Dispatch voice"');
   expect(conflictReasonWords({ reason: 'joint-split', message: 'Together the windows split the network into 3 parts; apart they would not.', ids: [] }, names))
