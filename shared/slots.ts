@@ -60,6 +60,8 @@ export const slotCandidateSchema = z.object({
   /** UTC instants */
   start: z.string(),
   end: z.string(),
+  /** the local day (YYYY-MM-DD, network zone) the slot's allowed period begins on: its night */
+  night: z.string(),
   /** 1, 2, … over the usable candidates, best first; null for an excluded one */
   rank: z.number().int().min(1).nullable(),
   excluded: z.object({ code: z.enum(SLOT_EXCLUSION_CODES), reason: z.string() }).nullable(),

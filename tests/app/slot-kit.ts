@@ -3,7 +3,7 @@ import type { Campaign, CampaignWindow, SlotCandidate, SlotSearch } from '@/shar
 
 export function candidate(extra: Partial<SlotCandidate> = {}): SlotCandidate {
   return {
-    start: '2030-01-10T01:00:00.000Z', end: '2030-01-10T05:00:00.000Z', rank: 1, excluded: null,
+    start: '2030-01-10T01:00:00.000Z', end: '2030-01-10T05:00:00.000Z', night: '2030-01-10', rank: 1, excluded: null,
     touched: 4, unresolved: 0, criticalTouched: 0, criticalUnresolved: 0,
     counts: { touched: 4, mustMove: 2, protectionLost: 2, unresolved: 0, knockOn: 0 },
     riskPercent: 0.4, riskLevel: 'Low', overlapping: [], conflicts: [], noticeSpareDays: 6, cost: 12, reused: false,
@@ -14,7 +14,9 @@ export function candidate(extra: Partial<SlotCandidate> = {}): SlotCandidate {
 
 export function excluded(code: NonNullable<SlotCandidate['excluded']>['code'], start: string, reason: string): SlotCandidate {
   const end = new Date(Date.parse(start) + 4 * 3_600_000).toISOString();
-  return candidate({ start, end, rank: null, excluded: { code, reason }, unresolved: null, explanation: reason });
+  // The fixtures' slots begin after midnight in the network's zone (UTC−1), so the night is that local day.
+  const night = new Date(Date.parse(start) - 3_600_000).toISOString().slice(0, 10);
+  return candidate({ start, end, night, rank: null, excluded: { code, reason }, unresolved: null, explanation: reason });
 }
 
 export function search(extra: Partial<SlotSearch> = {}): SlotSearch {

@@ -2,9 +2,7 @@
 // context and re-map cache), finds the pairs of groups that must not be out together, and lets the scheduler
 // choose a slot per group within the campaign's rules. The answer is the draft stored on the campaign's row.
 import type { Queryable } from '../../../db/client';
-import { slotTimes } from '../../../shared/slot-times';
 import type { SearchProgress, SlotCandidate, SlotExclusionCode } from '../../../shared/slots';
-import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 import { currentInventory } from '../inventory/inventory-cache';
 import { namedElements, namesOf } from '../slots/slot-words';
 import type { SlotEngine } from './engine';
@@ -33,8 +31,6 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
       done: p.total > 0 ? Math.floor((p.done * groups.length) / p.total) : 0, total: groups.length, elapsedMs: p.elapsedMs,
     }),
   });
-  // The night each start belongs to, as the scheduler counts nights (the candidates carry instants only).
-  const nights = new Map(slotTimes(request, NETWORK_TIME_ZONE).map((t) => [t.startMs, t.night]));
   const { scenario, inventory } = await currentInventory(db);
   const names = namesOf(scenario);
   const clashes: Array<[number, number]> = [];
@@ -49,15 +45,10 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
       label: g.label,
       elements: namedElements(names, groups[i]),
       touched: found[i].touchedSlices,
-      slots: found[i].candidates.filter((c) => c.rank !== null && c.excluded === null).flatMap((c) => {
-        const startMs = Date.parse(c.start);
-        const night = nights.get(startMs);
-        return night === undefined ? [] : [{
-          start: new Date(startMs).toISOString(), end: new Date(Date.parse(c.end)).toISOString(), startMs, endMs: Date.parse(c.end),
-          night, cost: c.cost, touched: c.touched, unresolved: c.unresolved, criticalTouched: c.criticalTouched,
-          explanation: c.explanation,
-        }];
-      }),
+      slots: found[i].candidates.filter((c) => c.rank !== null && c.excluded === null).map((c) => ({
+        start: c.start, end: c.end, startMs: Date.parse(c.start), endMs: Date.parse(c.end), night: c.night,
+        cost: c.cost, touched: c.touched, unresolved: c.unresolved, criticalTouched: c.criticalTouched, explanation: c.explanation,
+      })),
     })),
   };
   const elapsed = () => Date.now() - startedMs;

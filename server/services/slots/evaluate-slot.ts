@@ -314,7 +314,7 @@ export class GroupEvaluator {
       startMs: slot.startMs,
       touchedIds: facts.touchedIds,
       candidate: {
-        start: new Date(slot.startMs).toISOString(), end: new Date(slot.endMs).toISOString(), excluded,
+        start: new Date(slot.startMs).toISOString(), end: new Date(slot.endMs).toISOString(), night: slot.night, excluded,
         touched: figures.touched, unresolved: figures.unresolved, criticalTouched: figures.criticalTouched,
         criticalUnresolved: criticalUnresolved?.length ?? null, counts,
         riskPercent: risk.riskPercent, riskLevel: risk.riskLevel,

@@ -4,7 +4,7 @@ import type { SlotCandidate } from '../../../shared/slots';
 
 function excluded(code: NonNullable<SlotCandidate['excluded']>['code'], reason: string): SlotCandidate {
   return {
-    start: '2031-01-01T01:00:00.000Z', end: '2031-01-01T05:00:00.000Z', rank: null, excluded: { code, reason },
+    start: '2031-01-01T01:00:00.000Z', end: '2031-01-01T05:00:00.000Z', night: '2031-01-01', rank: null, excluded: { code, reason },
     touched: 3, unresolved: null, criticalTouched: 1, criticalUnresolved: null,
     counts: { touched: 3, mustMove: 3, protectionLost: 0, unresolved: null, knockOn: null },
     riskPercent: 0, riskLevel: 'Low', overlapping: [], conflicts: [], noticeSpareDays: 5, cost: 20, reused: false, explanation: '',

@@ -121,6 +121,8 @@ const byNight = (result: GroupSlots) => new Map(result.candidates.map((c) => [c.
 
 test('the clean night ranks first; every other night is excluded with its reason', () => {
   expect(first.candidates.map((c) => c.start).sort()).toEqual(NIGHTS.map(startOf));
+  // Each slot carries its night: the local day its 00:00–04:00 period begins on, as the campaign scheduler counts nights.
+  expect(first.candidates.map((c) => c.night).sort()).toEqual([...NIGHTS]);
   const nights = byNight(first);
   const clean = nights.get(startOf(NIGHTS[4]))!;
   expect(clean).toMatchObject({ rank: 1, excluded: null, touched: 2, unresolved: 0, criticalTouched: 1, criticalUnresolved: 0 });
