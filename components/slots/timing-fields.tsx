@@ -1,13 +1,13 @@
 // The "when" fields shared by the slot finder and the campaign form: hours of work, first and last night (with a
 // month picker), allowed hours (with a time list) in the network's zone, and the weekdays as toggle chips.
 import { useState, type Ref } from 'react';
-import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
+import { Pressable, StyleSheet, Text, View } from 'react-native';
 import { NETWORK_TIME_ZONE } from '@/shared/time-zone';
 import { dayKeyAt } from '@/shared/zone-clock';
 import { DatePicker, TimePicker } from '@/components/date-time-picker';
 import { TextField } from '@/components/text-field';
 import { describeZone } from '@/components/time';
-import { pickerButtonName } from '@/components/windows/time-fields';
+import { PickerInput } from '@/components/picker-input';
 import { parseLooseDate, parseLooseTime } from '@/components/windows/zoned-time';
 import { colors, radii, space, type } from '@/constants/theme';
 import { ALL_WEEKDAYS, WEEKDAY_LABELS, WEEKDAY_NAMES, type TimingErrors, type TimingField, type TimingValues } from './timing-form-state';
@@ -34,26 +34,11 @@ function PickerField({ label, value, onChange, kind, testID, disabled, invalid }
     <View style={styles.pickerField}>
       <Text style={styles.label}>{label}</Text>
       <View style={styles.row}>
-        <TextInput
-          testID={testID}
+        <PickerInput kind={kind} fieldLabel={label} value={value} onChangeText={onChange}
           accessibilityLabel={kind === 'date' ? `${label} (YYYY-MM-DD)` : `${label} (HH:MM, 24-hour)`}
-          aria-invalid={invalid || undefined}
-          value={value}
-          onChangeText={onChange}
           onBlur={() => { const tidy = parse(value); if (tidy && tidy !== value) onChange(tidy); }}
-          placeholder={kind === 'date' ? 'YYYY-MM-DD' : 'HH:MM'}
-          placeholderTextColor={colors.inkFaint}
-          keyboardType="numbers-and-punctuation"
-          autoCapitalize="none"
-          autoCorrect={false}
-          maxLength={32}
-          editable={!disabled}
-          style={[styles.input, { borderColor: invalid ? colors.danger : colors.borderControl }]}
-        />
-        <Pressable role="button" accessibilityLabel={pickerButtonName(kind === 'date' ? 'Date' : 'Time', label)} aria-expanded={open}
-          disabled={disabled} onPress={() => setOpen((o) => !o)} style={[styles.pick, open && styles.pickOpen]} testID={`${testID}-pick`}>
-          <Text style={styles.pickText}>{kind === 'date' ? 'Date' : 'Time'}</Text>
-        </Pressable>
+          invalid={invalid} disabled={disabled} open={open} onToggle={() => setOpen((o) => !o)} maxLength={32}
+          inputStyle={styles.input} testID={testID} pickTestID={`${testID}-pick`} />
       </View>
       {open && kind === 'date' ? (
         <DatePicker value={parse(value)} fallbackDay={dayKeyAt(Date.now(), NETWORK_TIME_ZONE)} testID={`${testID}-picker`}
@@ -135,13 +120,7 @@ const styles = StyleSheet.create({
   label: { ...type.label, color: colors.ink },
   zone: { ...type.caption, color: colors.inkMuted },
   row: { flexDirection: 'row', gap: space.xs, alignItems: 'stretch' },
-  input: {
-    ...type.body, flex: 1, minWidth: 0, color: colors.ink, backgroundColor: colors.surface, borderWidth: 1.5, borderRadius: radii.md,
-    paddingHorizontal: space.sm, paddingVertical: space.sm + 2, minHeight: 44,
-  },
-  pick: { justifyContent: 'center', paddingHorizontal: space.md, minHeight: 44, borderRadius: radii.md, borderWidth: 1, borderColor: colors.border, backgroundColor: colors.surface },
-  pickOpen: { backgroundColor: colors.primarySoft, borderColor: colors.primary },
-  pickText: { ...type.label, color: colors.primary },
+  input: { flex: 1 },
   chips: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   chip: {
     minHeight: 44, minWidth: 52, justifyContent: 'center', alignItems: 'center', paddingHorizontal: space.md,

@@ -2,11 +2,14 @@
 // Typing stays lenient ("20270108 0100", "8 Jan 2027", "1:00") and is tidied to YYYY-MM-DD and HH:MM on leaving
 // the field; keyboards keep "-" and ":" (no numeric keypad).
 import { useState } from 'react';
-import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
+import { StyleSheet, Text, View } from 'react-native';
+import { PickerInput } from '@/components/picker-input';
+
+export { pickerButtonName } from '@/components/picker-input';
 import { DatePicker, TimePicker } from '@/components/date-time-picker';
 import { dayKeyAt } from '@/components/time';
 import { parseLooseDate, parseLooseTime, splitLooseDateTime } from '@/components/windows/zoned-time';
-import { colors, radii, space, type } from '@/constants/theme';
+import { colors, space, type } from '@/constants/theme';
 
 type Props = {
   label: string;
@@ -22,10 +25,6 @@ type Props = {
   disabled?: boolean;
 };
 
-/** A picker button's name: its visible word first (speech users say what they see), then which field it fills. */
-export function pickerButtonName(word: 'Date' | 'Time', fieldLabel: string): string {
-  return `${word} (${fieldLabel}): pick from a ${word === 'Date' ? 'calendar' : 'list'}`;
-}
 
 /** The pair as typed, tidied where it reads as a date and time; left alone where it does not (the check says why). */
 export function tidyDateTime(date: string, time: string): { date: string; time: string } {
@@ -37,7 +36,6 @@ export function tidyDateTime(date: string, time: string): { date: string; time: 
 
 export function TimeFields({ label, date, time, onChange, error, testID, pickerName, timeZone, disabled = false }: Props) {
   const [open, setOpen] = useState<'date' | 'time' | null>(null);
-  const border = { borderColor: error ? colors.danger : colors.borderControl };
   const tidy = () => {
     const next = tidyDateTime(date, time);
     if (next.date !== date || next.time !== time) onChange(next);
@@ -47,46 +45,14 @@ export function TimeFields({ label, date, time, onChange, error, testID, pickerN
     <View style={styles.field}>
       <Text style={styles.label}>{label}</Text>
       <View style={styles.row}>
-        <TextInput
-          testID={`${testID}-date`}
-          accessibilityLabel={`${label} date (YYYY-MM-DD)`}
-          aria-invalid={error ? true : undefined}
-          value={date}
-          onChangeText={(next) => onChange({ date: next, time })}
-          onBlur={tidy}
-          placeholder="YYYY-MM-DD"
-          placeholderTextColor={colors.inkFaint}
-          keyboardType="numbers-and-punctuation"
-          autoCapitalize="none"
-          autoCorrect={false}
-          maxLength={32}
-          editable={!disabled}
-          style={[styles.input, styles.date, border]}
-        />
-        <Pressable role="button" accessibilityLabel={pickerButtonName('Date', label)} aria-expanded={open === 'date'} disabled={disabled}
-          onPress={() => toggle('date')} style={[styles.pick, open === 'date' && styles.pickOpen]} testID={`${testID}-date-pick`}>
-          <Text style={styles.pickText}>Date</Text>
-        </Pressable>
-        <TextInput
-          testID={`${testID}-time`}
-          accessibilityLabel={`${label} time (HH:MM, 24-hour)`}
-          aria-invalid={error ? true : undefined}
-          value={time}
-          onChangeText={(next) => onChange({ date, time: next })}
-          onBlur={tidy}
-          placeholder="HH:MM"
-          placeholderTextColor={colors.inkFaint}
-          keyboardType="numbers-and-punctuation"
-          autoCapitalize="none"
-          autoCorrect={false}
-          maxLength={8}
-          editable={!disabled}
-          style={[styles.input, styles.time, border]}
-        />
-        <Pressable role="button" accessibilityLabel={pickerButtonName('Time', label)} aria-expanded={open === 'time'} disabled={disabled}
-          onPress={() => toggle('time')} style={[styles.pick, open === 'time' && styles.pickOpen]} testID={`${testID}-time-pick`}>
-          <Text style={styles.pickText}>Time</Text>
-        </Pressable>
+        <PickerInput kind="date" fieldLabel={label} accessibilityLabel={`${label} date (YYYY-MM-DD)`} value={date}
+          onChangeText={(next) => onChange({ date: next, time })} onBlur={tidy} invalid={Boolean(error)} disabled={disabled}
+          open={open === 'date'} onToggle={() => toggle('date')} maxLength={32} inputStyle={styles.date}
+          testID={`${testID}-date`} pickTestID={`${testID}-date-pick`} />
+        <PickerInput kind="time" fieldLabel={label} accessibilityLabel={`${label} time (HH:MM, 24-hour)`} value={time}
+          onChangeText={(next) => onChange({ date, time: next })} onBlur={tidy} invalid={Boolean(error)} disabled={disabled}
+          open={open === 'time'} onToggle={() => toggle('time')} maxLength={8} inputStyle={styles.time}
+          testID={`${testID}-time`} pickTestID={`${testID}-time-pick`} />
       </View>
       {open === 'date' ? (
         <DatePicker value={parseLooseDate(date)} fallbackDay={dayKeyAt(Date.now(), timeZone)} testID={`date-picker-${pickerName}`}
@@ -105,14 +71,7 @@ const styles = StyleSheet.create({
   field: { gap: space.xs },
   label: { ...type.label, color: colors.ink },
   row: { flexDirection: 'row', gap: space.xs, alignItems: 'stretch' },
-  input: {
-    ...type.body, color: colors.ink, backgroundColor: colors.surface, borderWidth: 1.5, borderRadius: radii.md,
-    paddingHorizontal: space.sm, paddingVertical: space.sm + 2,
-  },
-  date: { flex: 3, minWidth: 0 },
-  time: { flex: 2, minWidth: 0 },
-  pick: { justifyContent: 'center', paddingHorizontal: space.sm, borderRadius: radii.md, borderWidth: 1, borderColor: colors.border, backgroundColor: colors.surface },
-  pickOpen: { backgroundColor: colors.primarySoft, borderColor: colors.primary },
-  pickText: { ...type.label, color: colors.primary },
+  date: { flex: 3 },
+  time: { flex: 2 },
   error: { ...type.caption, color: colors.danger },
 });
