@@ -1,7 +1,6 @@
 // Job-queue helpers for server tests: pg-boss on the test database in a schema of its own (so parallel test
 // files never take each other's jobs), optionally with the plan worker; or a queue that only records calls.
 import { randomUUID } from 'node:crypto';
-import pg from 'pg';
 import type PgBoss from 'pg-boss';
 import { createDb } from '../../../db/client';
 import type { ServerConfig } from '../../../server/env';
@@ -9,6 +8,7 @@ import { startBoss } from '../../../server/jobs/boss';
 import { createJobQueue } from '../../../server/jobs/boss-queue';
 import { registerPlanWorker, type PlanWorker } from '../../../server/jobs/plan-worker';
 import type { JobQueue, MailJob } from '../../../server/jobs/queue';
+import { dropTestSchema } from './drop-schema';
 
 export type TestJobs = {
   jobs: JobQueue;
@@ -49,21 +49,11 @@ export async function startTestJobs(config: ServerConfig, opts: TestJobsOptions 
       await worker?.stop();
       await boss.stop({ graceful: true, timeout: 2000 });
       await pool.end();
-      await dropSchema(config.databaseUrl, schema);
+      await dropTestSchema(config.databaseUrl, schema);
     })();
     return stopped;
   };
   return { jobs: createJobQueue(boss), boss, schema, worker, stop };
-}
-
-async function dropSchema(url: string, schema: string): Promise<void> {
-  const client = new pg.Client({ connectionString: url });
-  await client.connect();
-  try {
-    await client.query(`drop schema if exists "${schema}" cascade`);
-  } finally {
-    await client.end();
-  }
 }
 
 export type RecordingQueue = JobQueue & {

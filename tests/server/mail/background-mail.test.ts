@@ -7,7 +7,8 @@ import type { Db } from '../../../db/client';
 import { startBackground } from '../../../server/background';
 import { startSinkIfConfigured } from '../../../server/mail/start-sink';
 import { readSinkMessages } from '../../../server/queries/mail/sink-messages';
-import { testConfig } from '../helpers/test-app';
+import { dropTestSchema } from '../helpers/drop-schema';
+import { testConfig, testDatabaseUrl } from '../helpers/test-app';
 import { openMailTestDb, uniqueRecipient } from './mail-test-db';
 import { waitFor } from './test-boss';
 
@@ -19,7 +20,7 @@ beforeAll(async () => {
   ({ db, pool } = await openMailTestDb());
 });
 afterAll(async () => {
-  await pool.query(`drop schema if exists "${schema}" cascade`);
+  await dropTestSchema(testDatabaseUrl(), schema);
   await pool.end();
 });
 

@@ -1,8 +1,8 @@
 // pg-boss in a schema of its own for one mail test (so no other file's worker takes its jobs), with fast retries.
 import { randomUUID } from 'node:crypto';
-import pg from 'pg';
 import PgBoss from 'pg-boss';
 import { QUEUES } from '../../../server/jobs/queue';
+import { dropTestSchema } from '../helpers/drop-schema';
 import { testDatabaseUrl } from '../helpers/test-app';
 
 export type TestBoss = { boss: PgBoss; schema: string; stop(): Promise<void> };
@@ -20,13 +20,7 @@ export async function startMailTestBoss(retryLimit: number): Promise<TestBoss> {
     schema,
     async stop() {
       await boss.stop({ graceful: true, wait: true, timeout: 5000 });
-      const client = new pg.Client({ connectionString: testDatabaseUrl() });
-      await client.connect();
-      try {
-        await client.query(`drop schema if exists "${schema}" cascade`);
-      } finally {
-        await client.end();
-      }
+      await dropTestSchema(testDatabaseUrl(), schema);
     },
   };
 }

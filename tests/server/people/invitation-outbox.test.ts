@@ -5,7 +5,8 @@ import request from 'supertest';
 import { outboxListSchema } from '../../../shared/outbox';
 import { startBackground, type Background } from '../../../server/background';
 import { signInAs } from '../helpers/sign-in';
-import { setupTestApp, testConfig, type TestContext } from '../helpers/test-app';
+import { dropTestSchema } from '../helpers/drop-schema';
+import { setupTestApp, testConfig, testDatabaseUrl, type TestContext } from '../helpers/test-app';
 import { waitFor } from '../mail/test-boss';
 
 let ctx: TestContext;
@@ -20,7 +21,7 @@ beforeAll(async () => {
 }, 60_000);
 afterAll(async () => {
   await background.stop();
-  await ctx.pool.query(`drop schema if exists "${schema}" cascade`);
+  await dropTestSchema(testDatabaseUrl(), schema);
   await ctx.close();
 });
 
