@@ -4,7 +4,7 @@ import { ADMIN_ROLES, OPERATOR_ROLES } from '../../shared/permissions';
 import { policiesPatchSchema, policiesResponseSchema } from '../../shared/policies';
 import { currentUser, requireRole } from '../auth/guards';
 import { insertAuditEntry } from '../queries/audit/audit-log';
-import { getPolicies, upsertPolicies } from '../queries/windows/policies';
+import { getPolicies, lockPolicies, upsertPolicies } from '../queries/windows/policies';
 import { QuorumOrderError } from '../services/signoff/errors';
 import type { RouteDeps } from './deps';
 
@@ -17,6 +17,7 @@ export function policiesRouter({ db, now }: RouteDeps): Router {
     const patch = policiesPatchSchema.parse(req.body);
     const at = now();
     const policies = await db.transaction(async (tx) => {
+      await lockPolicies(tx);
       const before = await getPolicies(tx);
       // Checked on the merged values: a patch may change only one of the two quorums.
       const low = patch.signoffQuorumLow ?? before.signoffQuorumLow;

@@ -4,6 +4,10 @@ import type { Tx } from '../../../db/client';
 import { policies } from '../../../db/schema';
 import { POLICY_DEFAULTS, policiesSchema, type Policies, type PoliciesPatch } from '../../../shared/policies';
 import type { Queryable } from '../../../db/client';
+import { lockForTransaction } from '../locks/advisory-locks';
+
+/** the advisory lock key that lockPolicies takes (exported for tests that look for its waiters) */
+export const POLICIES_LOCK_KEY = 7_611_905;
 
 export async function getPolicies(db: Queryable): Promise<Policies> {
   const keys = Object.keys(POLICY_DEFAULTS);
@@ -13,6 +17,15 @@ export async function getPolicies(db: Queryable): Promise<Policies> {
   const merged = { ...POLICY_DEFAULTS, ...stored };
   const parsed = policiesSchema.safeParse(merged);
   return parsed.success ? parsed.data : POLICY_DEFAULTS;
+}
+
+/**
+ * Serialises policy changes until the transaction ends. Policies that were never set have no row to lock,
+ * so an advisory lock stands for the whole set: two admins' patches cannot both pass a check on the values
+ * each read before the other wrote (e.g. one raises the low-risk quorum while the other lowers the high one).
+ */
+export async function lockPolicies(tx: Tx): Promise<void> {
+  await lockForTransaction(tx, POLICIES_LOCK_KEY);
 }
 
 export async function upsertPolicies(tx: Tx, patch: PoliciesPatch, actorId: string, now: Date): Promise<void> {

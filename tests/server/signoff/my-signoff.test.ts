@@ -1,5 +1,7 @@
 // One approver's side of sign-off: the waiting count behind the tab badge, "Decided by me", and the policy
 // check that a high-risk quorum is never below the low-risk one.
+import { lockPolicies, POLICIES_LOCK_KEY, upsertPolicies } from '../../../server/queries/windows/policies';
+import { waitFor } from '../mail/test-boss';
 import { insertPlannedWindow, setupSignoffApp, type SignoffTestContext } from './helpers';
 
 const NOW = new Date('2027-06-07T09:00:00Z');
@@ -80,5 +82,33 @@ test('a high-risk quorum below the low-risk one is refused naming both values, a
   const equal = await admin('patch', '/api/policies').send({ signoffQuorumLow: 2, signoffQuorumHigh: 2 });
   expect(equal.status).toBe(200);
   expect(equal.body.policies).toMatchObject({ signoffQuorumLow: 2, signoffQuorumHigh: 2 });
+  await admin('patch', '/api/policies').send({ signoffQuorumLow: before.signoffQuorumLow, signoffQuorumHigh: before.signoffQuorumHigh });
+});
+
+test('two quorum changes at once cannot together leave the high-risk quorum below the low-risk one', async () => {
+  const admin = await ctx.as('admin');
+  const before = (await admin('get', '/api/policies')).body.policies;
+  expect(await admin('patch', '/api/policies').send({ signoffQuorumLow: 2, signoffQuorumHigh: 3 })).toHaveProperty('status', 200);
+  // Another admin's change is mid-flight: it holds the policy lock and has raised the low-risk quorum to 3,
+  // not yet committed. This admin's request lowers the high-risk quorum to 2 and must wait for it, then
+  // judge against the committed 3; without the lock it would read the old 2, pass, and leave high < low.
+  let answer: Promise<{ status: number; body: { error?: { code: string } } }> | undefined;
+  await ctx.db.transaction(async (tx) => {
+    await lockPolicies(tx);
+    await upsertPolicies(tx, { signoffQuorumLow: 3 }, ctx.users.admin.id, NOW);
+    const request = admin('patch', '/api/policies').send({ signoffQuorumHigh: 2 });
+    answer = request.then((res) => res);
+    let settled = false;
+    void answer.then(() => { settled = true; });
+    // Waits until the request is queued behind the lock (or has answered already, which the assertions catch).
+    const waiters = async () => (await ctx.pool.query(
+      `select count(*)::int as n from pg_locks where locktype = 'advisory' and not granted and objid = $1
+         and database = (select oid from pg_database where datname = current_database())`, [POLICIES_LOCK_KEY])).rows[0].n as number;
+    await waitFor(waiters, (n) => settled || n > 0);
+  });
+  const res = await answer!;
+  expect(res.status).toBe(400);
+  expect(res.body.error?.code).toBe('QUORUM_ORDER');
+  expect((await admin('get', '/api/policies')).body.policies).toMatchObject({ signoffQuorumLow: 3, signoffQuorumHigh: 3 });
   await admin('patch', '/api/policies').send({ signoffQuorumLow: before.signoffQuorumLow, signoffQuorumHigh: before.signoffQuorumHigh });
 });
