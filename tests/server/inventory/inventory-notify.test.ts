@@ -6,6 +6,7 @@ import { sites } from '../../../db/schema';
 import { selectInventoryRevision } from '../../../server/queries/inventory/inventory-revision';
 import { InventoryCache } from '../../../server/services/inventory/inventory-cache';
 import { setupInventoryApp, type InventoryContext } from './helpers/inventory-app';
+import { eventually } from '../../e2e/helpers/eventually';
 
 let ctx: InventoryContext;
 const opened: { db: Db; close: () => Promise<void> }[] = [];
@@ -28,20 +29,6 @@ async function processCache(): Promise<{ db: Db; cache: InventoryCache }> {
   caches.push(cache);
   await cache.listen(ctx.databaseUrl);
   return { db, cache };
-}
-
-/** Retries the assertion until it holds or `timeoutMs` passes (then fails with its last error). */
-async function eventually(check: () => void | Promise<void>, timeoutMs = 15_000): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  for (;;) {
-    try {
-      await check();
-      return;
-    } catch (err) {
-      if (Date.now() > deadline) throw err;
-    }
-    await new Promise((resolve) => setTimeout(resolve, 20));
-  }
 }
 
 test('a write through one process is built by the other from the notification, before any read there', async () => {
