@@ -1,13 +1,16 @@
-// Searchable list of sites or spans to add to a window; already-picked ones are marked, not offered twice.
+// Searchable list of sites or spans to add to a window; already-picked ones are marked, not offered twice. The search
+// matches ids as well as names (typing an id still finds the element), but results show names only.
 import { useState } from 'react';
 import { ActivityIndicator, Pressable, StyleSheet, Text, View } from 'react-native';
 import { useSitesQuery } from '@/hooks/queries/sites';
 import { useSpansQuery } from '@/hooks/queries/spans';
 import { SearchField } from '@/components/table/search-field';
 import { ChoiceChips } from '@/components/windows/choice-chips';
+import { siteWords, spanWords } from '@/components/windows/element-words';
 import { useDebouncedValue } from '@/components/windows/use-debounced-value';
 import { colors, radii, space, type } from '@/constants/theme';
 
+/** One search result: `id` is what the window stores; people read `label` (the name) and `detail`, never the id. */
 export type ElementOption = { kind: 'site' | 'span'; id: string; label: string; detail: string };
 
 /** Few enough to scan on a phone; people narrow the search rather than scroll. */
@@ -22,15 +25,19 @@ type ResultsProps = { q: string; pickedKeys: ReadonlySet<string>; onPick: (optio
 
 function SiteResults(props: ResultsProps) {
   const sites = useSitesQuery({ q: props.q || undefined, pageSize: SEARCH_PAGE_SIZE, sort: 'name' });
-  const options = sites.data?.items.map((s): ElementOption => ({ kind: 'site', id: s.id, label: s.name, detail: `${s.kind} · ${s.id}` }));
+  const options = sites.data?.items.map((s): ElementOption => {
+    const words = siteWords(s);
+    return { kind: 'site', id: s.id, label: words.name, detail: words.detail };
+  });
   return <Results {...props} options={options} loading={sites.isFetching} error={sites.error?.message} />;
 }
 
 function SpanResults(props: ResultsProps) {
   const spans = useSpansQuery({ q: props.q || undefined, pageSize: SEARCH_PAGE_SIZE });
-  const options = spans.data?.items.map((s): ElementOption => ({
-    kind: 'span', id: s.id, label: `${s.aName} – ${s.bName}`, detail: `${s.id} · ${s.capacityGbps} Gbit/s`,
-  }));
+  const options = spans.data?.items.map((s): ElementOption => {
+    const words = spanWords(s);
+    return { kind: 'span', id: s.id, label: words.name, detail: words.detail };
+  });
   return <Results {...props} options={options} loading={spans.isFetching} error={spans.error?.message} />;
 }
 
@@ -51,7 +58,7 @@ function Results({ q, pickedKeys, onPick, disabled, options, loading, error }: R
       >
         <View style={styles.optionText}>
           <Text style={styles.name}>{option.label}</Text>
-          <Text style={styles.muted}>{option.detail}</Text>
+          <Text style={styles.muted} testID={`window-element-option-${option.id}-detail`}>{option.detail}</Text>
         </View>
         <Text style={styles.action}>{picked ? 'Added' : 'Add'}</Text>
       </Pressable>
@@ -76,7 +83,7 @@ export function ElementSearch({ pickedKeys, onPick, disabled = false }: Props) {
         testID="window-element-kind"
         disabled={disabled}
       />
-      <SearchField value={text} onChange={setText} label={kind === 'site' ? 'Search sites by name or id' : 'Search spans by id or end'} testID="window-element-search" />
+      <SearchField value={text} onChange={setText} label={kind === 'site' ? 'Search sites by name' : 'Search spans by the name of either end'} testID="window-element-search" />
       {kind === 'site' ? <SiteResults {...resultsProps} /> : <SpanResults {...resultsProps} />}
     </View>
   );

@@ -1,8 +1,9 @@
-// The sites and spans a window takes out, each `down` or `reduced` to a share of its capacity, removable.
+// The sites and spans a window takes out, each `down` or `reduced` to a share of its capacity, removable; each by its
+// name and what tells it apart (kind, compute and place; capacity and length), never by its id.
 import { Pressable, StyleSheet, Text, TextInput, View } from 'react-native';
 import { elementKey, type ElementEffect, type PickedElement } from '@/components/windows/window-form-state';
 import { ChoiceChips } from '@/components/windows/choice-chips';
-import { ElementName } from '@/components/windows/element-name';
+import { useElementWords } from '@/components/windows/element-name';
 import { colors, radii, space, type } from '@/constants/theme';
 
 const EFFECT_CHOICES = [
@@ -17,6 +18,58 @@ type Props = {
   disabled?: boolean;
 };
 
+type RowProps = {
+  element: PickedElement;
+  error?: string;
+  disabled: boolean;
+  onPatch: (patch: Partial<PickedElement>) => void;
+  onRemove: () => void;
+};
+
+function PickedRow({ element: e, error, disabled, onPatch, onRemove }: RowProps) {
+  // Picked from the search: its words came with it. Loaded with a saved window: looked up (the label may be an id).
+  const known = e.detail !== undefined && e.label !== e.id ? { name: e.label, detail: e.detail } : undefined;
+  const words = useElementWords(e.kind, e.id, known);
+  return (
+    <View style={styles.row} testID={`window-picked-${e.id}`}>
+      <View style={styles.head}>
+        <View style={styles.headText}>
+          <Text style={styles.name} testID={`window-picked-${e.id}-name`}>{words.name}</Text>
+          {words.detail ? <Text style={styles.muted} testID={`window-picked-${e.id}-detail`}>{words.detail}</Text> : null}
+        </View>
+        <Pressable role="button" accessibilityLabel={`Remove ${words.name}`} disabled={disabled} onPress={onRemove} style={styles.remove}>
+          <Text style={styles.removeText}>Remove</Text>
+        </Pressable>
+      </View>
+      <ChoiceChips
+        label={`What happens to ${words.name}`}
+        choices={EFFECT_CHOICES}
+        value={e.effect}
+        onChange={(value) => value && onPatch({ effect: value as ElementEffect })}
+        testID={`window-effect-${e.id}`}
+        disabled={disabled}
+      />
+      {e.effect === 'reduced' ? (
+        <View style={styles.fraction}>
+          <Text style={styles.label}>Capacity left during the work (%)</Text>
+          <TextInput
+            testID={`window-fraction-${e.id}`}
+            accessibilityLabel={`Capacity left on ${words.name}, in percent`}
+            value={e.percentText}
+            onChangeText={(percentText) => onPatch({ percentText })}
+            inputMode="decimal"
+            placeholder="e.g. 40"
+            placeholderTextColor={colors.inkFaint}
+            editable={!disabled}
+            style={[styles.input, error ? styles.inputError : null]}
+          />
+          {error ? <Text style={styles.error} role="alert">{error}</Text> : null}
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
 export function PickedElements({ elements, onChange, fractionErrors = {}, disabled = false }: Props) {
   const update = (key: string, patch: Partial<PickedElement>) =>
     onChange(elements.map((e) => (elementKey(e) === key ? { ...e, ...patch } : e)));
@@ -25,44 +78,15 @@ export function PickedElements({ elements, onChange, fractionErrors = {}, disabl
     <View style={styles.list} testID="window-picked-elements">
       {elements.map((e) => {
         const key = elementKey(e);
-        const error = fractionErrors[key];
         return (
-          <View key={key} style={styles.row} testID={`window-picked-${e.id}`}>
-            <View style={styles.head}>
-              <View style={styles.headText}>
-                {e.label === e.id ? <ElementName kind={e.kind} id={e.id} style={styles.name} /> : <Text style={styles.name}>{e.label}</Text>}
-                <Text style={styles.muted}>{e.kind === 'site' ? 'Site' : 'Span'} · {e.id}</Text>
-              </View>
-              <Pressable role="button" accessibilityLabel={`Remove ${e.label}`} disabled={disabled} onPress={() => onChange(elements.filter((x) => elementKey(x) !== key))} style={styles.remove}>
-                <Text style={styles.removeText}>Remove</Text>
-              </Pressable>
-            </View>
-            <ChoiceChips
-              label={`What happens to ${e.label}`}
-              choices={EFFECT_CHOICES}
-              value={e.effect}
-              onChange={(value) => value && update(key, { effect: value as ElementEffect })}
-              testID={`window-effect-${e.id}`}
-              disabled={disabled}
-            />
-            {e.effect === 'reduced' ? (
-              <View style={styles.fraction}>
-                <Text style={styles.label}>Capacity left during the work (%)</Text>
-                <TextInput
-                  testID={`window-fraction-${e.id}`}
-                  accessibilityLabel={`Capacity left on ${e.label}, in percent`}
-                  value={e.percentText}
-                  onChangeText={(percentText) => update(key, { percentText })}
-                  inputMode="decimal"
-                  placeholder="e.g. 40"
-                  placeholderTextColor={colors.inkFaint}
-                  editable={!disabled}
-                  style={[styles.input, error ? styles.inputError : null]}
-                />
-                {error ? <Text style={styles.error} role="alert">{error}</Text> : null}
-              </View>
-            ) : null}
-          </View>
+          <PickedRow
+            key={key}
+            element={e}
+            error={fractionErrors[key]}
+            disabled={disabled}
+            onPatch={(patch) => update(key, patch)}
+            onRemove={() => onChange(elements.filter((x) => elementKey(x) !== key))}
+          />
         );
       })}
     </View>

@@ -1,7 +1,7 @@
-// The sites and spans a window takes out, and how (down, or reduced to a share of capacity).
+// The sites and spans a window takes out, and how (down, or reduced to a share of capacity); by name, never by id.
 import { StyleSheet, Text, View } from 'react-native';
 import type { Window } from '@/shared/windows';
-import { ElementName } from '@/components/windows/element-name';
+import { ElementSummary } from '@/components/windows/element-name';
 import { colors, radii, space, type } from '@/constants/theme';
 
 export function effectText(e: { effect: 'down' | 'reduced'; fraction: number | null }): string {
@@ -15,10 +15,8 @@ export function WindowElementsList({ elements }: { elements: Window['elements'] 
     <View style={styles.list} testID="window-elements">
       {elements.map((e) => (
         <View key={`${e.kind}:${e.id}`} style={styles.row}>
-          <Text style={styles.kind}>{e.kind === 'site' ? 'Site' : 'Span'}</Text>
           <View style={styles.names}>
-            <ElementName kind={e.kind} id={e.id} style={styles.id} />
-            <Text style={styles.muted}>{e.id}</Text>
+            <ElementSummary kind={e.kind} id={e.id} style={styles.name} detailStyle={styles.muted} testID={`window-element-${e.id}`} />
           </View>
           <Text style={[styles.effect, e.effect === 'down' ? styles.down : styles.reduced]}>{effectText(e)}</Text>
         </View>
@@ -30,9 +28,8 @@ export function WindowElementsList({ elements }: { elements: Window['elements'] 
 const styles = StyleSheet.create({
   list: { gap: space.xs },
   row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingVertical: space.xs },
-  kind: { ...type.caption, color: colors.inkMuted, width: 36 },
   names: { flex: 1 },
-  id: { ...type.bodyStrong, color: colors.ink },
+  name: { ...type.bodyStrong, color: colors.ink },
   effect: { ...type.label, paddingHorizontal: space.sm, paddingVertical: space.xxs, borderRadius: radii.pill, overflow: 'hidden' },
   down: { color: colors.danger, backgroundColor: colors.dangerSoft },
   reduced: { color: colors.warning, backgroundColor: colors.surfaceSunken },

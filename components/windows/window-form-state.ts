@@ -15,6 +15,9 @@ export type PickedElement = {
   id: string;
   /** What people read: a site's name, a span's end names. */
   label: string;
+  /** What tells it apart from similar ones (kind, compute and place; capacity and length), as the search showed it;
+   *  absent for elements loaded with a saved window, which the form then looks up. */
+  detail?: string;
   effect: ElementEffect;
   /** The remaining capacity as typed, in percent ("40"); only read when `effect` is reduced. */
   percentText: string;

@@ -132,7 +132,7 @@ export function WindowForm(props: Props) {
         <ElementSearch
           pickedKeys={new Set(values.elements.map(elementKey))}
           disabled={busy}
-          onPick={(o) => set({ elements: [...values.elements, { kind: o.kind, id: o.id, label: o.label, effect: 'down', percentText: '' }] })}
+          onPick={(o) => set({ elements: [...values.elements, { kind: o.kind, id: o.id, label: o.label, detail: o.detail, effect: 'down', percentText: '' }] })}
         />
       </View>
       <View ref={anchor('notes')}>
