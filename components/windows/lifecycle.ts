@@ -35,7 +35,7 @@ export const STATUS_SENTENCES: Record<WindowStatus, string> = {
 /** The usual path through the lifecycle, for the step line on the detail screen. */
 export const MAIN_PATH: readonly WindowStatus[] = ['draft', 'assessed', 'planned', 'in-review', 'cleared', 'notified', 'underway', 'done'];
 
-export type WindowActions = { edit: boolean; assess: boolean; withdraw: boolean; viewImpact: boolean };
+export type WindowActions = { edit: boolean; assess: boolean; withdraw: boolean; rollBack: boolean; viewImpact: boolean };
 
 export function windowActions(roles: readonly RoleName[], status: WindowStatus): WindowActions {
   const books = canBookWindows(roles);
@@ -45,6 +45,8 @@ export function windowActions(roles: readonly RoleName[], status: WindowStatus):
     // The server lets anyone who books also assess (engineers check their own bookings).
     assess: books && windowIsAssessable(status),
     withdraw: books && beforeWork,
+    // Only while the work is underway: the server puts every moved slice back and closes the window.
+    rollBack: books && status === 'underway',
     // Tenants see their own slices in the impact too (the server trims it to them).
     viewImpact: status !== 'withdrawn',
   };

@@ -1,4 +1,4 @@
-// The quiet actions on a window beside its next step (by role and state); withdrawing asks once more.
+// The quiet actions on a window beside its next step (by role and state); withdrawing and rolling back ask once more.
 // The one filled button is the next-step bar's; everything here is secondary.
 import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
@@ -12,21 +12,37 @@ type Props = {
   onAssess: () => void;
   onOpenImpact: () => void;
   onWithdraw: () => void;
+  onRollBack: () => void;
   assessing: boolean;
-  withdrawing: boolean;
+  /** a withdrawal or roll-back is being sent */
+  transitioning: boolean;
   impactStored: boolean;
 };
 
 export function WindowActionsBar(props: Props) {
   const { actions } = props;
-  const [confirming, setConfirming] = useState(false);
-  if (confirming) {
+  const [confirming, setConfirming] = useState<'withdraw' | 'roll-back' | null>(null);
+  if (confirming === 'withdraw') {
     return (
       <View style={styles.confirm} testID="window-withdraw-confirm">
         <Text style={styles.body}>Withdraw this window? It stays on record but no longer takes anything out.</Text>
         <View style={styles.row}>
-          <Button label="Withdraw window" onPress={props.onWithdraw} busy={props.withdrawing} testID="window-withdraw-yes" />
-          <Button label="Keep it" variant="quiet" onPress={() => setConfirming(false)} disabled={props.withdrawing} />
+          <Button label="Withdraw window" onPress={props.onWithdraw} busy={props.transitioning} testID="window-withdraw-yes" />
+          <Button label="Keep it" variant="quiet" onPress={() => setConfirming(null)} disabled={props.transitioning} />
+        </View>
+      </View>
+    );
+  }
+  if (confirming === 'roll-back') {
+    return (
+      <View style={styles.confirm} testID="window-roll-back-confirm">
+        <Text style={styles.body}>
+          Roll back the work? Every slice the plan moved goes back to where it was before the window, and the window
+          ends as Rolled back. Do this only once the equipment is back in its state from before the work.
+        </Text>
+        <View style={styles.row}>
+          <Button label="Roll back and restore slices" onPress={props.onRollBack} busy={props.transitioning} testID="window-roll-back-yes" />
+          <Button label="Keep the work going" variant="quiet" onPress={() => setConfirming(null)} disabled={props.transitioning} />
         </View>
       </View>
     );
@@ -41,7 +57,8 @@ export function WindowActionsBar(props: Props) {
         <Button label="Assess again" variant="quiet" onPress={props.onAssess} busy={props.assessing} testID="window-assess" />
       ) : null}
       {actions.edit ? <Button label="Edit" variant="quiet" onPress={props.onEdit} testID="window-edit" /> : null}
-      {actions.withdraw ? <Button label="Withdraw" variant="quiet" onPress={() => setConfirming(true)} testID="window-withdraw" /> : null}
+      {actions.withdraw ? <Button label="Withdraw" variant="quiet" onPress={() => setConfirming('withdraw')} testID="window-withdraw" /> : null}
+      {actions.rollBack ? <Button label="Roll back" variant="quiet" onPress={() => setConfirming('roll-back')} testID="window-roll-back" /> : null}
     </View>
   );
 }

@@ -67,11 +67,12 @@ export function WindowDetail({ window: w, me, timeZone, flash, onEdit, onOpenImp
           actions={windowActions(me.roles, w.status)}
           impactStored={w.impactStored}
           assessing={assess.isPending}
-          withdrawing={transition.isPending}
+          transitioning={transition.isPending}
           onEdit={onEdit}
           onOpenImpact={onOpenImpact}
           onAssess={() => assess.mutate(w.version, { onSuccess: onOpenImpact })}
           onWithdraw={() => transition.mutate({ to: 'withdrawn', version: w.version })}
+          onRollBack={() => transition.mutate({ to: 'rolled-back', version: w.version })}
         />
         {children}
         <Section title="Taken out">

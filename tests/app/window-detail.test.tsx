@@ -18,10 +18,10 @@ const conflicts = {
   }],
 };
 
-function renderDetail(onOpenWindow = jest.fn()) {
+function renderDetail(onOpenWindow = jest.fn(), window: Parameters<typeof windowFixture>[0] = { status: 'draft', conflictCount: 1, impactStored: false }) {
   renderWithQueries(
     <WindowDetail
-      window={windowFixture({ status: 'draft', conflictCount: 1, impactStored: false })}
+      window={windowFixture(window)}
       me={engineer}
       timeZone="Europe/Berlin"
       flash={{}}
@@ -68,4 +68,32 @@ test('withdrawing asks once more, then sends the transition with the loaded vers
   await act(async () => fireEvent.press(screen.getByTestId('window-withdraw-yes')));
   await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1));
   expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ to: 'withdrawn', version: 3 });
+});
+
+test('rolling back underway work asks once more, says what it restores, then sends the transition', async () => {
+  const { calls } = routedFetch([
+    { method: 'GET', path: /^\/api\/windows\/w-1\/conflicts$/, reply: () => ({ status: 200, body: { windowId: 'w-1', conflicts: [] } }) },
+    { method: 'GET', path: /^\/api\/windows\/w-1\/plans$/, reply: () => ({ status: 200, body: { plans: [] } }) },
+    {
+      method: 'POST', path: /^\/api\/windows\/w-1\/transition$/,
+      reply: () => ({ status: 200, body: { window: windowFixture({ status: 'rolled-back', version: 8 }), reverted: false, conflictCount: 0 } }),
+    },
+  ]);
+  renderDetail(jest.fn(), { status: 'underway', version: 7, conflictCount: 0, impactStored: true });
+  // Finishing is the next step; rolling back is the quiet alternative, and withdrawing is no longer offered.
+  expect(screen.getByTestId('next-step-action')).toHaveTextContent('Mark the work finished');
+  expect(screen.queryByTestId('window-withdraw')).toBeNull();
+  fireEvent.press(screen.getByTestId('window-roll-back'));
+  expect(screen.getByTestId('window-roll-back-confirm')).toHaveTextContent(/Every slice the plan moved goes back to where it was before the window/);
+  expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
+  await act(async () => fireEvent.press(screen.getByTestId('window-roll-back-yes')));
+  await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1));
+  expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ to: 'rolled-back', version: 7 });
+});
+
+test('an engineer cannot roll back a window that is not underway', async () => {
+  routedFetch([{ method: 'GET', path: /^\/api\/windows\/w-1\/conflicts$/, reply: () => ({ status: 200, body: { windowId: 'w-1', conflicts: [] } }) }]);
+  renderDetail(jest.fn(), { status: 'notified', conflictCount: 0, impactStored: true });
+  expect(screen.getByTestId('next-step-action')).toHaveTextContent('Start the work');
+  expect(screen.queryByTestId('window-roll-back')).toBeNull();
 });

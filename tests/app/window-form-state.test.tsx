@@ -58,7 +58,10 @@ test('an edit sends the version and only what changed; times and equipment count
 });
 
 test('actions follow role and state', () => {
-  expect(windowActions(['engineer'], 'draft')).toEqual({ edit: true, assess: true, withdraw: true, viewImpact: true });
+  expect(windowActions(['engineer'], 'draft')).toEqual({ edit: true, assess: true, withdraw: true, rollBack: false, viewImpact: true });
+  expect(windowActions(['engineer'], 'underway')).toMatchObject({ withdraw: false, rollBack: true });
+  expect(windowActions(['planner'], 'done')).toMatchObject({ rollBack: false });
+  expect(windowActions(['approver'], 'underway')).toMatchObject({ rollBack: false });
   expect(windowActions(['planner'], 'planned')).toMatchObject({ edit: true, assess: false, withdraw: true });
   expect(windowActions(['approver'], 'draft')).toMatchObject({ edit: false, assess: false, withdraw: false });
   expect(windowActions(['tenant'], 'assessed')).toMatchObject({ edit: false, assess: false, viewImpact: true });
