@@ -72,15 +72,19 @@ export const CONTENT_MAX_WIDTH_PX = 1080;
 export const NARROW_CONTENT_MAX_WIDTH_PX = CONTENT_MAX_WIDTH_PX * 0.6;
 
 // ── Map tokens (components/map) ────────────────────────────────────────────────
-// Our own cartography: pale sand land on still water, spans from cool (idle) to warm (full).
+// Our own cartography: pale sand land on still water, spans and sites from cool (idle) to warm (full).
 export const mapColors = {
   sea: '#E1ECEE',
   land: '#F5F1E6',
   coast: '#C2B89E',
-  /** Span utilisation bands, lowest first; see components/map/colour-scale.ts for the thresholds. */
-  utilisation: ['#C3D3D4', '#6FB3A6', '#2A7F8E', '#D9A23D', '#CC6A2C', '#9E2F3A'],
-  /** Elements without a figure (no capacity known). */
-  noFigure: '#9AA5A8',
+  /**
+   * Span and site utilisation bands, lowest first (components/map/colour-scale.ts has the thresholds). The hue turns
+   * one way round the wheel, slate blue (idle) → teal → green → gold → orange → crimson (over capacity), and every
+   * band reaches 3:1 against sea and land (WCAG 2.1 SC 1.4.11), so even an idle span stands out from the water.
+   */
+  utilisation: ['#6C7BA8', '#2E8796', '#4A8A3E', '#A0760F', '#C25A1F', '#9E2F3A'],
+  /** Elements without a figure (no capacity known): a neutral grey, no hue, so it never reads as a band; 3:1 as well. */
+  noFigure: '#7A7E80',
   siteStroke: '#0C2630',
   label: '#16323C',
   labelHalo: '#F5F1E6',
@@ -88,7 +92,8 @@ export const mapColors = {
   tonePlacement: '#3C3F9C',
   toneWindow: '#B2386F',
   toneAlternative: '#1D8757',
-  selection: '#D99A3D',
+  /** The selected element's ring or casing: deep water, so it is never mistaken for a load band (13:1 on sea). */
+  selection: '#0C2630',
 } as const;
 
 /** Opacity of elements outside a highlight, so the highlighted ones read first. */

@@ -1,4 +1,5 @@
-// The key to the map: utilisation bands (spans and site fill), site shapes by kind, and any highlight tones in use.
+// The key to the map: utilisation bands (spans and site fill) and the grey of elements without a figure, site shapes
+// by kind, and any highlight tones in use.
 import { StyleSheet, Text, View } from 'react-native';
 import Svg, { Line, Path } from 'react-native-svg';
 import { UTILISATION_BANDS } from '@/components/map/colour-scale';
@@ -9,9 +10,9 @@ import { colors, mapColors, space, type } from '@/constants/theme';
 
 type Props = { tones?: readonly HighlightTone[]; compact?: boolean; toneLabels?: Partial<Record<HighlightTone, string>> };
 
-function Swatch({ colour, dashed = false }: { colour: string; dashed?: boolean }) {
+function Swatch({ colour, dashed = false, testID }: { colour: string; dashed?: boolean; testID?: string }) {
   return (
-    <Svg width={22} height={10}>
+    <Svg width={22} height={10} testID={testID}>
       <Line x1={2} y1={5} x2={20} y2={5} stroke={colour} strokeWidth={4} strokeLinecap="round" strokeDasharray={dashed ? [5, 4] : undefined} />
     </Svg>
   );
@@ -24,10 +25,14 @@ export function MapLegend({ tones = [], compact = false, toneLabels }: Props) {
         <Text style={styles.heading}>Used</Text>
         {UTILISATION_BANDS.map((band) => (
           <View key={band.index} style={styles.item}>
-            <Swatch colour={band.colour} />
+            <Swatch colour={band.colour} testID={`map-legend-band-${band.index}`} />
             <Text style={styles.text}>{band.label}</Text>
           </View>
         ))}
+        <View style={styles.item}>
+          <Swatch colour={mapColors.noFigure} testID="map-legend-no-figure" />
+          <Text style={styles.text}>no figure</Text>
+        </View>
       </View>
       {compact ? null : (
         <View style={styles.row}>
