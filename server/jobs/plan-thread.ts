@@ -1,9 +1,9 @@
 // Runs computePlan in a worker thread, so a plan run never blocks the event loop of the process hosting it
 // (the API answers requests while a run computes), and a cancelled run can be stopped at once.
 import { join } from 'node:path';
-import { Worker } from 'node:worker_threads';
 import type { PlanProgress, PlanReview } from '../../shared/plans';
 import type { PlanThreadInput, ThreadError, ThreadMessage } from './plan-thread-protocol';
+import { startTsThread } from './ts-thread';
 
 export const PLAN_COMPUTE_MODULE = join(__dirname, 'plan-compute.ts');
 const WORKER_FILE = join(__dirname, 'plan-thread-worker.ts');
@@ -17,10 +17,8 @@ export interface PlanThread {
 }
 
 /**
- * WARNING: the thread must compile TypeScript itself (as in planner/workers/worker-pool.ts): under jest it
- * does not inherit tsx's loader and on Node 20 `--import tsx` in execArgv is ignored, so an eval bootstrap
- * registers tsx's require hook, loads the compute module and hands its computePlan to the worker file.
- * `computeModule` is an absolute path exporting `computePlan`; tests pass a stand-in.
+ * The thread (started as every server thread is, ts-thread.ts) loads the compute module and hands its computePlan
+ * to the worker file. `computeModule` is an absolute path exporting `computePlan`; tests pass a stand-in.
  */
 export function startPlanThread(
   input: PlanThreadInput,
@@ -28,11 +26,7 @@ export function startPlanThread(
   opts: { computeModule?: string } = {},
 ): PlanThread {
   const computeModule = opts.computeModule ?? PLAN_COMPUTE_MODULE;
-  const bootstrap = `require('tsx/cjs'); const c = require(${JSON.stringify(computeModule)}); `
-    + `require(${JSON.stringify(WORKER_FILE)}).serve(c.computePlan);`;
-  const worker = new Worker(bootstrap, {
-    eval: true, workerData: input, execArgv: process.execArgv.filter((a) => !a.startsWith('--inspect')),
-  });
+  const worker = startTsThread(WORKER_FILE, input, [{ module: computeModule, name: 'computePlan' }]);
   const outcome = new Promise<ThreadOutcome>((resolve) => {
     const crash = (message: string) => resolve({ kind: 'failed', error: { deterministic: false, code: null, message } });
     worker.on('message', (m: ThreadMessage) => {

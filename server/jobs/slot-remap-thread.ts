@@ -3,10 +3,11 @@
 // it gets the scenario once, builds the inventory once, and answers each re-map by message. The thread starts on
 // the first re-map the caches cannot answer, so a search they answer entirely costs no thread.
 import { join } from 'node:path';
-import { Worker } from 'node:worker_threads';
+import type { Worker } from 'node:worker_threads';
 import type { SlotEngine } from '../services/campaigns/engine';
 import type { QuickRemapper, QuickRemapperFactory, RemapRequest } from '../services/slots/quick-remap';
 import type { RemapAnswer } from '../services/slots/remap-cache';
+import { startTsThread } from './ts-thread';
 
 const WORKER_FILE = join(__dirname, 'slot-remap-thread-worker.ts');
 
@@ -18,11 +19,7 @@ export type RemapThreadReply =
 
 type Pending = { resolve: (a: RemapAnswer) => void; reject: (e: Error) => void; onBusy?: () => void };
 
-/**
- * WARNING: as for plan runs (plan-thread.ts), the thread compiles TypeScript itself: under jest it does not inherit
- * tsx's loader and on Node 20 `--import tsx` in execArgv is ignored, so an eval bootstrap registers tsx's require
- * hook before it loads the worker file.
- */
+/** The thread loads TypeScript as every server thread does (ts-thread.ts). */
 export const threadRemapper: QuickRemapperFactory = (scenario): QuickRemapper => {
   const pending = new Map<number, Pending>();
   let nextId = 1;
@@ -36,10 +33,7 @@ export const threadRemapper: QuickRemapperFactory = (scenario): QuickRemapper =>
   };
 
   const start = (): Worker => {
-    const bootstrap = `require('tsx/cjs'); require(${JSON.stringify(WORKER_FILE)}).serve();`;
-    const w = new Worker(bootstrap, {
-      eval: true, workerData: { scenario }, execArgv: process.execArgv.filter((a) => !a.startsWith('--inspect')),
-    });
+    const w = startTsThread(WORKER_FILE, { scenario });
     w.on('message', (m: RemapThreadReply) => {
       const p = pending.get(m.id);
       if (!p) return;
