@@ -5,6 +5,7 @@ import type { Db } from '../db/client';
 import type { ServerConfig } from './env';
 import { createJobQueue } from './jobs/boss-queue';
 import { startBoss } from './jobs/boss';
+import { withCampaignThread } from './jobs/campaign-thread';
 import { registerPlanWorker } from './jobs/plan-worker';
 import { withRemapThreads } from './jobs/slot-remap-thread';
 import { registerSlotWorker } from './jobs/slot-worker';
@@ -33,8 +34,9 @@ async function registerWorkers(boss: PgBoss, deps: BackgroundDeps, sinkPort?: nu
     db: deps.db, log: deps.log,
     heartbeatStaleSeconds: deps.config.planHeartbeatStaleSeconds, expireMarginSeconds: deps.config.planExpireMarginSeconds,
   });
-  // Slot searches' quick re-maps run in a thread per search, so they never stall the API sharing this process.
-  const slots = await registerSlotWorker(boss, { db: deps.db, engine: withRemapThreads(slotEngine), log: deps.log });
+  // Slot searches' quick re-maps run in a thread per search, and a campaign's scheduling in a thread per plan, so
+  // neither stalls the API sharing this process.
+  const slots = await registerSlotWorker(boss, { db: deps.db, engine: withCampaignThread(withRemapThreads(slotEngine)), log: deps.log });
   const stoppers: Stopper[] = [() => plans.stop(), () => slots.stop()];
   // Mail: to the in-process sink's actual port when there is one, else as configured.
   const mail = await registerMailWorker(boss, { db: deps.db, config: deps.config, sinkPort });

@@ -1,6 +1,7 @@
 // What the slot-search worker and the campaign routes ask of the slot finder (server/services/slots/) and the
 // campaign scheduler (planner/campaign/), as a plain port: the worker is given the real ones
-// (server/jobs/slot-engine.ts), and tests may wrap them. Shapes as those modules export them.
+// (server/services/campaigns/slot-engine.ts, with the slot jobs' threads: server/jobs/slot-remap-thread.ts and
+// campaign-thread.ts), and tests may wrap them. Shapes as those modules export them.
 import type { Queryable } from '../../../db/client';
 import type { Inventory } from '../../../planner/model/types';
 import type { SlotTiming } from '../../../shared/slot-times';
@@ -45,6 +46,15 @@ export interface CampaignSchedule {
   iterations: number;
 }
 
+export interface ScheduleCampaignOptions {
+  seed?: number;
+  maxIterations?: number;
+  /** candidates the search evaluated, of its budget; the last call has done == total */
+  onProgress?: (done: number, total: number) => void;
+  /** polled: once aborted, a scheduling still running stops and its promise rejects */
+  signal?: { readonly aborted: boolean };
+}
+
 export interface SlotEngine {
   /** throws a 400 (SLOT_REQUEST_INVALID) for unknown elements or timing without usable slots */
   checkSlotRequest(db: Queryable, request: SlotSearchRequest): Promise<unknown>;
@@ -54,7 +64,8 @@ export interface SlotEngine {
   findSlotsForGroups(db: Queryable, timing: SlotTiming, groups: SlotElements[], opts: FindSlotsOptions): Promise<GroupSlots[]>;
   /** reasons two groups must not be out at the same time; [] if none */
   elementsClash(inv: Inventory, a: SlotElements, b: SlotElements, names: SlotNames): string[];
-  scheduleCampaign(p: CampaignProblem, opts?: { seed?: number; maxIterations?: number; onProgress?: (done: number, total: number) => void }): CampaignSchedule;
+  /** the same seed gives the same schedule */
+  scheduleCampaign(p: CampaignProblem, opts?: ScheduleCampaignOptions): Promise<CampaignSchedule>;
   /** every broken rule of an assignment, in words */
   campaignIssues(p: CampaignProblem, assignment: (number | null)[]): string[];
 }

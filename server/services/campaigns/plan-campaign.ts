@@ -5,7 +5,7 @@ import type { Queryable } from '../../../db/client';
 import type { SearchProgress, SlotCandidate, SlotExclusionCode } from '../../../shared/slots';
 import { currentInventory } from '../inventory/inventory-cache';
 import { namedElements, namesOf } from '../slots/slot-words';
-import type { SlotEngine } from './engine';
+import type { CampaignProblem, CampaignSchedule, SlotEngine } from './engine';
 import { problemOf, roundCost, type CampaignRequest, type StoredSchedule } from './stored-schedule';
 
 export type PlanCampaignDeps = {
@@ -54,7 +54,7 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
   const elapsed = () => Date.now() - startedMs;
   await deps.onProgress({ phase: 'scheduling', done: 0, total: groups.length, elapsedMs: elapsed() });
   const problem = problemOf({ ...stored, assignment: [], unscheduledReasons: [], startCost: 0, moves: 0, iterations: 0 }, request);
-  const schedule = engine.scheduleCampaign(problem, { seed: SCHEDULE_SEED });
+  const schedule = await scheduleWithProgress(deps, problem, elapsed);
   return {
     ...stored,
     assignment: schedule.assignment,
@@ -66,6 +66,23 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
     moves: schedule.moves,
     iterations: schedule.iterations,
   };
+}
+
+/**
+ * The scheduler's steps reach the job's progress in order (the engine reports them as they come, without waiting);
+ * a failed write fails the plan once the scheduling has settled.
+ */
+async function scheduleWithProgress(deps: PlanCampaignDeps, problem: CampaignProblem, elapsed: () => number): Promise<CampaignSchedule> {
+  let writes: Promise<void> = Promise.resolve();
+  const scheduling = deps.engine.scheduleCampaign(problem, {
+    seed: SCHEDULE_SEED, signal: deps.signal,
+    onProgress: (done, total) => {
+      writes = writes.then(async () => { await deps.onProgress({ phase: 'scheduling', done, total, elapsedMs: elapsed() }); });
+    },
+  });
+  const schedule = await scheduling.finally(() => writes.catch(() => undefined));
+  await writes;
+  return schedule;
 }
 
 const EXCLUSION_WORDS: Record<SlotExclusionCode, string> = {

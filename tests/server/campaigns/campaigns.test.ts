@@ -1,7 +1,11 @@
 // Campaigns through the API: who may plan and read them, what a bad request answers, a plan worked by the job
 // handler into a draft, a planner's moves checked against the rules and the version, and booking all or nothing.
-import { campaignBookedSchema, campaignListSchema, campaignSchema, type Campaign } from '../../../shared/slots';
+import {
+  campaignBookedSchema, campaignCreateSchema, campaignListSchema, campaignSchema, type Campaign, type SearchProgress,
+} from '../../../shared/slots';
+import { withCampaignThread } from '../../../server/jobs/campaign-thread';
 import { runSlotJob } from '../../../server/jobs/slot-search-handler';
+import { planCampaign } from '../../../server/services/campaigns/plan-campaign';
 import { slotEngine } from '../../../server/services/campaigns/slot-engine';
 import type { SlotEngine } from '../../../server/services/campaigns/engine';
 import { freezes } from '../../../db/schema';
@@ -226,6 +230,26 @@ test('while planning, the campaign is running and its progress counts groups', a
   expect(seen.length).toBeGreaterThan(0);
   expect(new Set(seen)).toEqual(new Set(['running:2']));
   expect((await read(id)).status).toBe('draft');
+});
+
+test('with the scheduling in a thread, as the slot jobs run it, a plan drafts the same and reports the same steps', async () => {
+  const request = campaignCreateSchema.parse(campaignRequest());
+  const plan = async (engine: SlotEngine) => {
+    const progress: SearchProgress[] = [];
+    const draft = await planCampaign({ db: ctx.db, engine, now: NOW, onProgress: (p) => { progress.push(p); } }, request);
+    return { draft, steps: progress.filter((p) => p.phase === 'scheduling').map(({ done, total }) => [done, total]) };
+  };
+  const here = await plan(slotEngine);
+  const there = await plan(withCampaignThread(slotEngine));
+  expect(there.draft).toEqual(here.draft);
+  expect(there.draft.assignment.filter((s) => s !== null)).toHaveLength(2);
+  expect(there.steps).toEqual(here.steps);
+  // The phase's opening (of the groups), then the search's steps up to its budget.
+  expect(there.steps[0]).toEqual([0, 2]);
+  expect(there.steps.length).toBeGreaterThan(1);
+  const [done, total] = there.steps.at(-1)!;
+  expect(done).toBe(total);
+  expect(total).toBeGreaterThan(2);
 });
 
 test('a discarded draft leaves the calendar and can no longer be booked', async () => {
