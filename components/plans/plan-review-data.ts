@@ -1,4 +1,4 @@
-// Pure helpers behind the review: what the map draws, the chart's points, and whether a plan may be accepted yet.
+// Pure helpers behind the review: what the map draws and whether a plan may be accepted yet.
 import type { PlanReview, PlanSlice } from '@/shared/plans';
 
 export type Elements = { sites: string[]; spans: string[] };
@@ -28,24 +28,6 @@ export function planMapElements(slices: readonly PlanSlice[], selectedSlice: str
     collect(after, slice.moves.map((m) => m.to), slice.reroutes.flatMap((r) => r.to));
   }
   return { before: asElements(before), after: asElements(after) };
-}
-
-export type ChartPoint = { value: number };
-
-/** At most this many points reach the chart: a long run's every generation would only blur the line. */
-export const CHART_MAX_POINTS = 40;
-
-/** Move cost and unresolved weight of the best member over the generations, thinned evenly, last point kept. */
-export function convergenceSeries(trace: PlanReview['trace'], maxPoints = CHART_MAX_POINTS): { moveCost: ChartPoint[]; unresolved: ChartPoint[] } {
-  if (trace.length === 0) return { moveCost: [], unresolved: [] };
-  const step = Math.max(1, Math.ceil(trace.length / maxPoints));
-  const picked = trace.filter((_, i) => i % step === 0);
-  if (picked[picked.length - 1] !== trace[trace.length - 1]) picked.push(trace[trace.length - 1]);
-  // No per-point labels: at phone widths the chart cuts them to a character; the caption gives the range instead.
-  return {
-    moveCost: picked.map((p) => ({ value: p.best.moveCost })),
-    unresolved: picked.map((p) => ({ value: p.best.unresolvedWeight })),
-  };
 }
 
 /** Slices the plan leaves unresolved, which must each be ticked (outage accepted) before accepting. */

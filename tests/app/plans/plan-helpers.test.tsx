@@ -1,15 +1,15 @@
-// Pure helpers of the plan screens: paths read as the sites they pass, what the map draws, the chart's thinning,
-// the form's options, and when a plan may be accepted.
+// Pure helpers of the plan screens: paths read as the sites they pass, what the map draws, the form's options, and
+// when a plan may be accepted.
 import { elementNames, siteChain, slicePartsFrom } from '@/components/plans/use-element-names';
 import { stepText } from '@/components/plans/plan-steps';
 import { REROUTE_COST, sliceWeight } from '@/planner/plan/evaluate-plan';
 import { planSettingsSchema } from '@/shared/plans';
-import { convergenceSeries, formatGap, outagesAllTicked, planMapElements } from '@/components/plans/plan-review-data';
+import { formatGap, outagesAllTicked, planMapElements } from '@/components/plans/plan-review-data';
 import { functionOptionsFrom } from '@/components/plans/use-run-options';
 import {
   EFFORT, effortOf, MOVE_COST_DEFINITION, runTimeWords, settingsSummary, UNPLACED_PRIORITY_DEFINITION,
 } from '@/components/plans/plan-format';
-import { knockOnSlice, networkMap, objective, plan, review, slices } from './plan-fixtures';
+import { knockOnSlice, networkMap, plan, review, slices } from './plan-fixtures';
 
 test('a path reads as the sites it passes in order, whichever way its spans are stored', () => {
   const names = elementNames(networkMap as Parameters<typeof elementNames>[0]);
@@ -39,16 +39,6 @@ test('the map draws knock-on moves too: their old and new paths join the plan’
   expect(all.before.spans).toContain('sp-4');
   expect(all.after.spans).toContain('sp-1');
   expect(planMapElements([...slices, knockOnSlice], 'sl-tele')).toEqual({ before: { sites: [], spans: ['sp-4'] }, after: { sites: [], spans: ['sp-1'] } });
-});
-
-test('the convergence series is thinned to at most the limit and always ends on the last generation', () => {
-  const trace = Array.from({ length: 101 }, (_, g) => ({ generation: g, evaluations: g * 10, feasible: true, best: objective({ moveCost: 200 - g, unresolvedWeight: g < 50 ? 3 : 0 }) }));
-  const series = convergenceSeries(trace, 40);
-  expect(series.moveCost.length).toBeLessThanOrEqual(41);
-  expect(series.moveCost[0].value).toBe(200);
-  expect(series.moveCost[series.moveCost.length - 1].value).toBe(100);
-  expect(series.unresolved[series.unresolved.length - 1].value).toBe(0);
-  expect(convergenceSeries([])).toEqual({ moveCost: [], unresolved: [] });
 });
 
 test('accepting needs every unresolved slice ticked; gaps read as percentages', () => {
