@@ -1,5 +1,6 @@
 // Server configuration, parsed from the environment with zod once at boot.
 import { z } from 'zod';
+import { DEFAULT_WAITING_JOB_LIMITS, type WaitingJobLimits } from '../shared/job-limits';
 
 const DAY_SECONDS = 24 * 60 * 60;
 
@@ -31,6 +32,11 @@ const envSchema = z.object({
   PLAN_EXPIRE_MARGIN_SECONDS: z.coerce.number().int().min(1).default(120),
   /** A running plan whose worker has not written a heartbeat for this long is handed to another worker. */
   PLAN_HEARTBEAT_STALE_SECONDS: z.coerce.number().int().min(5).default(30),
+  /** Unfinished (queued or running) slot searches, campaign plans and move-plan runs one person may have; one more
+   *  is refused with 429 (defaults and why: shared/job-limits.ts). */
+  WAITING_SLOT_SEARCHES_PER_PERSON: z.coerce.number().int().min(1).default(DEFAULT_WAITING_JOB_LIMITS.slotSearches),
+  WAITING_CAMPAIGN_PLANS_PER_PERSON: z.coerce.number().int().min(1).default(DEFAULT_WAITING_JOB_LIMITS.campaignPlans),
+  WAITING_PLAN_RUNS_PER_PERSON: z.coerce.number().int().min(1).default(DEFAULT_WAITING_JOB_LIMITS.planRuns),
   /** How often the queue looks for expired jobs (pg-boss maintenance), in seconds. */
   JOB_MAINTENANCE_SECONDS: z.coerce.number().int().min(1).default(30),
   /** PostgreSQL schema of the job queue's tables; every API process and worker sharing a queue uses the same one. */
@@ -77,6 +83,7 @@ export type ServerConfig = {
   workerInProcess: boolean;
   planExpireMarginSeconds: number;
   planHeartbeatStaleSeconds: number;
+  waitingJobLimits: WaitingJobLimits;
   jobMaintenanceSeconds: number;
   jobSchema: string;
   smtp: { mode: 'sink'; sinkPort: number } | { mode: 'relay'; url: string };
@@ -120,6 +127,11 @@ export function parseEnv(source: Record<string, string | undefined> = process.en
     workerInProcess: env.WORKER_IN_PROCESS === 'true',
     planExpireMarginSeconds: env.PLAN_EXPIRE_MARGIN_SECONDS,
     planHeartbeatStaleSeconds: env.PLAN_HEARTBEAT_STALE_SECONDS,
+    waitingJobLimits: {
+      slotSearches: env.WAITING_SLOT_SEARCHES_PER_PERSON,
+      campaignPlans: env.WAITING_CAMPAIGN_PLANS_PER_PERSON,
+      planRuns: env.WAITING_PLAN_RUNS_PER_PERSON,
+    },
     jobMaintenanceSeconds: env.JOB_MAINTENANCE_SECONDS,
     jobSchema: env.JOB_SCHEMA,
     smtp: env.SMTP_URL === 'sink' ? { mode: 'sink', sinkPort: env.SMTP_SINK_PORT } : { mode: 'relay', url: env.SMTP_URL },

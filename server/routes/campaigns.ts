@@ -41,11 +41,11 @@ const listQuerySchema = z.object({
 });
 const discardSchema = z.object({ version: z.number().int().min(1).optional() });
 
-export function campaignsRouter({ db, now, jobs, engine = slotEngine }: RouteDeps & { engine?: SlotEngine }): Router {
+export function campaignsRouter({ db, now, jobs, config, engine = slotEngine }: RouteDeps & { engine?: SlotEngine }): Router {
   const router = express.Router();
   router.post('/', ...planners, async (req, res) => {
     const input = campaignCreateSchema.parse(req.body ?? {});
-    const id = await createCampaign({ db, jobs, engine, now: now() }, input, currentUser(req));
+    const id = await createCampaign({ db, jobs, engine, limits: config.waitingJobLimits, now: now() }, input, currentUser(req));
     res.status(201).json(createdIdSchema.parse({ id }));
   });
   router.get('/', ...readers, async (req, res) => {

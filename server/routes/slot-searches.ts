@@ -13,11 +13,11 @@ import type { RouteDeps } from './deps';
 const searchers = staffOnlyRoute(...SLOT_SEARCH_ROLES);
 const idOf = (req: Request) => String(req.params.id);
 
-export function slotSearchesRouter({ db, now, jobs, engine = slotEngine }: RouteDeps & { engine?: SlotEngine }): Router {
+export function slotSearchesRouter({ db, now, jobs, config, engine = slotEngine }: RouteDeps & { engine?: SlotEngine }): Router {
   const router = express.Router();
   router.post('/', ...searchers, async (req, res) => {
     const request = slotSearchCreateSchema.parse(req.body ?? {});
-    const id = await startSlotSearch({ db, jobs, engine, now: now() }, request, currentUser(req));
+    const id = await startSlotSearch({ db, jobs, engine, limits: config.waitingJobLimits, now: now() }, request, currentUser(req));
     res.status(201).json(createdIdSchema.parse({ id }));
   });
   router.get('/:id', ...searchers, async (req, res) => {

@@ -3,9 +3,11 @@
 import { randomBytes } from 'node:crypto';
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
+import type { WaitingJobLimits } from '../../../shared/job-limits';
 import type { CampaignCreate } from '../../../shared/slots';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { insertCampaign } from '../../queries/slots/campaign-rows';
+import { checkWaitingJobs } from '../job-limits/check-waiting-jobs';
 import type { SlotSearchQueue } from '../ports';
 import type { SlotEngine } from './engine';
 import { enqueueSlotJob } from './enqueue';
@@ -13,7 +15,7 @@ import type { CampaignRequest } from './stored-schedule';
 
 export const newCampaignId = () => `cp-${randomBytes(9).toString('base64url')}`;
 
-export type CampaignDeps = { db: Db; jobs: Partial<SlotSearchQueue>; engine: SlotEngine; now: Date };
+export type CampaignDeps = { db: Db; jobs: Partial<SlotSearchQueue>; engine: SlotEngine; limits: WaitingJobLimits; now: Date };
 
 export async function createCampaign(deps: CampaignDeps, input: CampaignCreate, user: Me): Promise<string> {
   const { title, ...request } = input;
@@ -22,6 +24,8 @@ export async function createCampaign(deps: CampaignDeps, input: CampaignCreate, 
   const id = newCampaignId();
   const stored: CampaignRequest = request;
   await deps.db.transaction(async (tx) => {
+    // A person over the cap of campaigns being planned gets 429 and nothing is stored.
+    await checkWaitingJobs(tx, deps.limits, 'campaignPlans', user.id);
     await insertCampaign(tx, { id, title, request: stored, createdBy: user.id, now: deps.now });
     await insertAuditEntry(tx, {
       actorId: user.id, action: 'campaign.create', entity: 'campaign', entityId: id, at: deps.now,

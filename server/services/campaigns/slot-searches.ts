@@ -3,8 +3,10 @@
 import { randomBytes } from 'node:crypto';
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
+import type { WaitingJobLimits } from '../../../shared/job-limits';
 import { slotSearchSchema, type SlotSearch, type SlotSearchRequest } from '../../../shared/slots';
 import { insertSlotSearch, selectSlotSearch } from '../../queries/slots/search-rows';
+import { checkWaitingJobs } from '../job-limits/check-waiting-jobs';
 import type { SlotSearchQueue } from '../ports';
 import { nameElements } from './element-names';
 import type { SlotEngine } from './engine';
@@ -13,14 +15,17 @@ import { SlotSearchNotFoundError } from './errors';
 
 export const newSlotSearchId = () => `ss-${randomBytes(9).toString('base64url')}`;
 
-export type SlotSearchDeps = { db: Db; jobs: Partial<SlotSearchQueue>; engine: SlotEngine; now: Date };
+export type SlotSearchDeps = { db: Db; jobs: Partial<SlotSearchQueue>; engine: SlotEngine; limits: WaitingJobLimits; now: Date };
 
-/** Unknown elements or a timing without slots are a 400 here, never a failed job. */
+/** Unknown elements or a timing without slots are a 400 here, never a failed job; a person over the cap gets 429. */
 export async function startSlotSearch(deps: SlotSearchDeps, request: SlotSearchRequest, user: Me): Promise<string> {
   await deps.engine.checkSlotRequest(deps.db, request);
   const id = newSlotSearchId();
   // Committed before the job is sent: a worker that picks the job up at once must find the row.
-  await insertSlotSearch(deps.db, { id, request, createdBy: user.id, now: deps.now });
+  await deps.db.transaction(async (tx) => {
+    await checkWaitingJobs(tx, deps.limits, 'slotSearches', user.id);
+    await insertSlotSearch(tx, { id, request, createdBy: user.id, now: deps.now });
+  });
   await enqueueSlotJob(deps, { kind: 'slots', id });
   return id;
 }

@@ -9,6 +9,7 @@ import type { PlanQueue } from '../ports';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { selectExistingFunctionIds, selectExistingSiteIds } from '../../queries/plans/plan-inputs';
 import { endPlanRun, insertPlanRow, setPlanJobId } from '../../queries/plans/plan-rows';
+import { checkWaitingJobs } from '../job-limits/check-waiting-jobs';
 import { ImpactNotCurrentError, QueueUnavailableError, UnknownPlanInputsError, WindowNotPlannableError } from './errors';
 import { planExpireSeconds } from './expire';
 import { loadWindowFacts } from './plan-view';
@@ -34,6 +35,8 @@ export async function enqueuePlan(deps: EnqueueDeps, windowId: string, settings:
   const id = newPlanId();
   // Committed before the job is sent: a worker that picks the job up at once must find the row.
   await db.transaction(async (tx) => {
+    // A person over the cap of unfinished runs gets 429 and nothing is stored.
+    await checkWaitingJobs(tx, deps.config.waitingJobLimits, 'planRuns', user.id);
     await insertPlanRow(tx, { id, windowId, windowVersion: w.version, settings, createdBy: user.id, now });
     await insertAuditEntry(tx, {
       actorId: user.id, action: 'plan.enqueue', entity: 'plan', entityId: id, at: now,

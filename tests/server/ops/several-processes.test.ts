@@ -75,6 +75,8 @@ beforeAll(async () => {
     ...process.env, DATABASE_URL: database.url, NODE_ENV: 'test', HOST: '127.0.0.1', SMTP_SINK_PORT: '0',
     WEB_DIST: '/nonexistent-web-dist', LOG_FORMAT: 'json', LOG_LEVEL: 'info', OIDC_ISSUER_PORT: 'off',
     PLAN_HEARTBEAT_STALE_SECONDS: String(HEARTBEAT_STALE_SECONDS),
+    // The one demo planner queues all eight runs at once, more than one person may have waiting by default.
+    WAITING_PLAN_RUNS_PER_PERSON: '8',
   };
 }, 120_000);
 

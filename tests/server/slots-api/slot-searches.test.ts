@@ -1,6 +1,7 @@
 // Slot searches through the API: who may search, what a bad request answers, and a search worked by its job
 // handler (queued → running → done, ranked candidates, progress), by the real queue once, and failing readably.
 import { slotSearchSchema, type SlotSearch } from '../../../shared/slots';
+import { finishWaitingJobs } from '../helpers/finish-waiting-jobs';
 import { startTestJobs } from '../helpers/jobs';
 import { signedInRequests } from '../helpers/sign-in';
 import { markDeadSlotJob } from '../../../server/jobs/slot-dead-letter';
@@ -20,6 +21,10 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await ctx.close();
+});
+// Searches here stay queued (the recording queue works none): each test starts under the cap on waiting searches.
+beforeEach(async () => {
+  await finishWaitingJobs(ctx.pool, Object.values(ctx.users).map((u) => u.id));
 });
 
 /** Two nights of 00:00–04:00 (network zone), two-hour slots on the hour: a handful of candidates. */

@@ -7,6 +7,7 @@ import { sweepStalledSlotJobs } from '../../../server/jobs/slot-sweeper';
 import { registerSlotWorker } from '../../../server/jobs/slot-worker';
 import type { SlotSearchJob } from '../../../server/services/ports';
 import { slotEngine } from '../../../server/services/campaigns/slot-engine';
+import { finishWaitingJobs } from '../helpers/finish-waiting-jobs';
 import { startTestJobs, type TestJobs } from '../helpers/jobs';
 import { waitFor } from '../jobs/helpers/demo-db';
 import { setupSlotsApp, type SlotsContext } from './helpers';
@@ -22,6 +23,10 @@ beforeAll(async () => {
 afterAll(async () => {
   for (const j of started) await j.stop();
   await ctx.close();
+});
+// Each test leaves searches and plannings unfinished: the next starts under the cap on waiting jobs.
+beforeEach(async () => {
+  await finishWaitingJobs(ctx.pool, Object.values(ctx.users).map((u) => u.id));
 });
 
 async function queueWith(): Promise<TestJobs> {
