@@ -4,8 +4,9 @@
 // leaves nothing to keep or clean up.
 import { join } from 'node:path';
 import type { Worker } from 'node:worker_threads';
-import type { CampaignProblem, CampaignSchedule, SlotEngine } from '../services/campaigns/engine';
+import type { CampaignSchedule, SlotEngine } from '../services/campaigns/engine';
 import { SCHEDULING_STOPPED, type ScheduleRunOptions } from '../services/campaigns/run-schedule';
+import { packCampaign, transferablesOf, type PackedCampaign } from './campaign-transfer';
 import { startTsThread } from './ts-thread';
 
 const WORKER_FILE = join(__dirname, 'campaign-thread-worker.ts');
@@ -13,7 +14,7 @@ const WORKER_FILE = join(__dirname, 'campaign-thread-worker.ts');
 /** How often (milliseconds) a running call looks at its job's signal besides at each progress message. */
 const SIGNAL_CHECK_EVERY_MS = 50;
 
-export type CampaignThreadInput = { problem: CampaignProblem; options: Omit<ScheduleRunOptions, 'onProgress'> };
+export type CampaignThreadInput = { problem: PackedCampaign; options: Omit<ScheduleRunOptions, 'onProgress'> };
 export type CampaignThreadMessage =
   | { type: 'progress'; done: number; total: number }
   | { type: 'done'; schedule: CampaignSchedule }
@@ -21,14 +22,17 @@ export type CampaignThreadMessage =
 
 /**
  * SlotEngine.scheduleCampaign in a new thread: the same schedule as on the calling thread for the same seed, its
- * progress as messages, its errors as a rejection with their message. A stopped job ends the thread at once; every
- * call settles only once its thread is gone. `watch` sees each thread as it starts (tests look at it).
+ * progress as messages, its errors as a rejection with their message. A stopped job ends the thread at its next
+ * progress report or signal check; every call settles only once its thread is gone. `watch` sees each thread as it
+ * starts (tests look at it).
  */
 export function campaignThreadScheduler(watch?: (thread: Worker) => void): SlotEngine['scheduleCampaign'] {
   return (problem, opts = {}) => {
     const { onProgress, signal, seed, maxIterations } = opts;
     if (signal?.aborted) return Promise.reject(new Error(SCHEDULING_STOPPED));
-    const worker = startTsThread(WORKER_FILE, { problem, options: { seed, maxIterations } } satisfies CampaignThreadInput);
+    const packed = packCampaign(problem);
+    const input: CampaignThreadInput = { problem: packed, options: { seed, maxIterations } };
+    const worker = startTsThread(WORKER_FILE, input, [], transferablesOf(packed));
     watch?.(worker);
     return new Promise<CampaignSchedule>((resolve, reject) => {
       let settled = false;

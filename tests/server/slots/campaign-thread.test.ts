@@ -5,6 +5,7 @@ import type { Worker } from 'node:worker_threads';
 import { scheduleCampaign, type CampaignProblem } from '../../../planner/campaign/schedule-campaign';
 import { createRng, randomInt, type Rng } from '../../../planner/random/rng';
 import { campaignThreadScheduler, threadScheduleCampaign, withCampaignThread } from '../../../server/jobs/campaign-thread';
+import { packCampaign, unpackCampaign } from '../../../server/jobs/campaign-transfer';
 import type { SlotEngine } from '../../../server/services/campaigns/engine';
 import { SCHEDULING_STOPPED } from '../../../server/services/campaigns/run-schedule';
 import { slotEngine } from '../../../server/services/campaigns/slot-engine';
@@ -40,6 +41,20 @@ const rollout = () => randomProblem({ groups: 36, nights: 21, startsHours: [22, 
 const largest = () => randomProblem({
   groups: 100, nights: 92, startsHours: Array.from({ length: 32 }, (_, k) => 20 + k / 4), slicePool: 150, clashes: 250, maxPerNight: 2, days: 10,
 }, createRng(100));
+
+test('a problem packed for the thread unpacks to the same problem, labelled or not, with groups that have no slot', () => {
+  const labelled = rollout();
+  expect(unpackCampaign(packCampaign(labelled))).toEqual(labelled);
+  const bare: CampaignProblem = {
+    ...labelled, groups: labelled.groups.map(({ slots, touched }, g) => ({ slots: g % 5 === 0 ? [] : slots, touched })),
+  };
+  const back = unpackCampaign(packCampaign(bare));
+  expect(back).toEqual(bare);
+  expect(back.groups.every((g) => !('label' in g))).toBe(true);
+  // Costs and instants keep every digit.
+  const odd = { ...bare, groups: [{ slots: [{ startMs: 1_893_456_000_123, endMs: 1_893_466_800_456, night: '2030-01-01', cost: 0.1 + 0.2 }], touched: [] }] };
+  expect(unpackCampaign(packCampaign(odd))).toEqual(odd);
+});
 
 test('the thread schedules as the planner does on the calling thread, and reports progress up to the budget', async () => {
   const p = rollout();
