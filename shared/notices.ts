@@ -2,12 +2,6 @@
 // state, and the tenant portal's list of upcoming work.
 import { z } from 'zod';
 
-/**
- * Tenants have no time-zone column: notices show times in the demo network's zone (UTC−1 all year, no
- * daylight saving; the IANA "Etc/GMT+1" zone has its sign inverted on purpose) and in UTC beside it.
- */
-export const DEFAULT_TENANT_TIME_ZONE = 'Etc/GMT+1';
-
 export const NOTICE_STATUSES = ['blocked', 'queued', 'sent', 'failed'] as const;
 export const noticeStatusSchema = z.enum(NOTICE_STATUSES);
 export type NoticeStatus = z.infer<typeof noticeStatusSchema>;
@@ -112,6 +106,7 @@ export const portalWorkItemSchema = z.object({
   notice: noticeSchema.nullable(),
 });
 export type PortalWorkItem = z.infer<typeof portalWorkItemSchema>;
+/** `timeZone`: the viewer's own zone (their choice, else the network's), the zone the portal lists times in. */
 export const portalWorkSchema = z.object({ timeZone: z.string(), items: z.array(portalWorkItemSchema) });
 export type PortalWork = z.infer<typeof portalWorkSchema>;
 

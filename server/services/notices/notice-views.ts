@@ -1,7 +1,5 @@
 // Read side of notices: one notice for its tenant (or staff), a window's notices for staff, the tenant portal.
-import {
-  DEFAULT_TENANT_TIME_ZONE, noticeContentSchema, type Notice, type NoticeStatusRow, type PortalWork,
-} from '../../../shared/notices';
+import { noticeContentSchema, type Notice, type NoticeStatusRow, type PortalWork } from '../../../shared/notices';
 import { getUsersByIds } from '../../queries/auth/users';
 import {
   selectNotice, selectSentNoticesOfOpenWindows, selectWindowNoticesWithTenant, type NoticeRow,
@@ -56,9 +54,11 @@ export async function windowNoticeRows(db: Queryable, windowId: string): Promise
  * Upcoming work on the tenant's slices that it was notified of (not yet over), each with its notice. Work without a
  * notice that went out to the tenant (none issued yet, or held back for lead time) is not listed: tenants learn of
  * work from its notice. A withdrawn window stays (its cancellation is news), and so does one that moves a slice of
- * the tenant's only to make room (a knock-on move).
+ * the tenant's only to make room (a knock-on move). The list's zone is the viewer's own (their choice, else the
+ * network's), the zone the portal shows its times in; each notice keeps the zone it was written in for the tenant.
  */
-export async function portalWork(db: Queryable, tenantId: string, now: Date): Promise<PortalWork> {
+export async function portalWork(db: Queryable, viewer: { tenantId: string; timeZone: string }, now: Date): Promise<PortalWork> {
+  const { tenantId, timeZone } = viewer;
   const sent = await selectSentNoticesOfOpenWindows(db, tenantId, now);
   const byWindow = new Map((await noticesWithAckNames(db, sent.map((r) => r.notices))).map((n) => [n.windowId, n]));
   const items = sent.map(({ windows: w }) => {
@@ -69,5 +69,5 @@ export async function portalWork(db: Queryable, tenantId: string, now: Date): Pr
     };
   });
   const list = items.sort((a, b) => a.startsAt.localeCompare(b.startsAt) || a.windowId.localeCompare(b.windowId));
-  return { timeZone: DEFAULT_TENANT_TIME_ZONE, items: list };
+  return { timeZone, items: list };
 }

@@ -1,7 +1,8 @@
 // Notices API: lead-time block and admin override, resend after a failure, the tenant portal, acknowledgement,
 // the .ics download, withdrawal through the lifecycle route, and tenant isolation on every notice route.
 import { and, eq } from 'drizzle-orm';
-import { auditLog, notices, windows } from '../../../db/schema';
+import { auditLog, notices, users, windows } from '../../../db/schema';
+import { NETWORK_TIME_ZONE } from '../../../shared/time-zone';
 import { issueNotices } from '../../../server/services/notices/issue-notices';
 import { insertClearedWindow, NOW, setupNoticesApp, type NoticesContext } from './fixture';
 import { parseInvitation } from './ics-check';
@@ -119,12 +120,25 @@ describe('tenant portal', () => {
   it('lists upcoming work on the tenant\'s slices with its notice and the zone', async () => {
     const res = await (await ctx.as('tenant'))('get', '/api/portal/work');
     expect(res.status).toBe(200);
-    expect(res.body.timeZone).toBe('Etc/GMT+1');
+    // A tenant user who chose no zone reads the network's.
+    expect(res.body.timeZone).toBe(NETWORK_TIME_ZONE);
     const item = res.body.items.find((i: { windowId: string }) => i.windowId === windowId);
     expect(item.notice.id).toBe(ownId);
     expect(item.summary).toBe('Planned network maintenance (fibre splice)');
     expect(JSON.stringify(res.body)).not.toContain(otherId);
     expect((await (await ctx.as('planner'))('get', '/api/portal/work')).status).toBe(403);
+  });
+
+  it('lists the work in the zone the signed-in tenant user chose, the zone the portal shows its times in', async () => {
+    await ctx.db.update(users).set({ timeZone: 'Asia/Kolkata' }).where(eq(users.id, ctx.users.tenant.id));
+    try {
+      const res = await (await ctx.as('tenant'))('get', '/api/portal/work');
+      expect(res.status).toBe(200);
+      expect(res.body.timeZone).toBe('Asia/Kolkata');
+      expect(res.body.items.some((i: { windowId: string }) => i.windowId === windowId)).toBe(true);
+    } finally {
+      await ctx.db.update(users).set({ timeZone: null }).where(eq(users.id, ctx.users.tenant.id));
+    }
   });
 
   it('answers 404 on every notice route for another tenant\'s notice, as for a missing one', async () => {
