@@ -60,10 +60,11 @@ export function noSlotReason(candidates: readonly SlotCandidate[]): string {
   return `Every possible slot is excluded: ${parts.join('; ')}.`;
 }
 
-/** "12 of 105 slots checked" (groups for a campaign), or what happens before counting starts. */
+/** "12 of 105 slots checked" (groups for a campaign), "Choosing nights: 40 % …", or what happens before counting starts. */
 export function progressText(progress: SearchProgress | null, unit: 'slots' | 'groups' = 'slots'): string {
   if (!progress || progress.total === 0) return 'Getting ready…';
-  if (progress.phase === 'scheduling') return `Choosing nights: ${progress.done} of ${progress.total} steps`;
+  // The scheduler's own step count (search moves tried) means nothing to a planner; its share of the budget does.
+  if (progress.phase === 'scheduling') return `Choosing nights: ${Math.floor((100 * progress.done) / progress.total)} % of the search done`;
   return `${progress.done} of ${progress.total} ${unit} checked`;
 }
 

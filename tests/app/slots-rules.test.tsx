@@ -57,6 +57,8 @@ describe('ranked and excluded slots', () => {
     expect(progressText({ phase: 'evaluating', done: 12, total: 105, elapsedMs: 2300 })).toBe('12 of 105 slots checked');
     expect(progressText({ phase: 'evaluating', done: 1, total: 4, elapsedMs: 0 }, 'groups')).toBe('1 of 4 groups checked');
     expect(progressText(null)).toBe('Getting ready…');
+    expect(progressText({ phase: 'scheduling', done: 0, total: 40, elapsedMs: 0 }, 'groups')).toBe('Choosing nights: 0 % of the search done');
+    expect(progressText({ phase: 'scheduling', done: 37_500, total: 100_000, elapsedMs: 900 }, 'groups')).toBe('Choosing nights: 37 % of the search done');
   });
 });
 
