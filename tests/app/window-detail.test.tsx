@@ -3,7 +3,7 @@
 import { act, fireEvent, screen, waitFor, within } from '@testing-library/react-native';
 import { WindowDetail } from '@/components/windows/window-detail';
 import { STATUS_SENTENCES } from '@/components/windows/lifecycle';
-import { clearQueries, engineer, renderWithQueries, routedFetch, windowFixture } from './window-test-kit';
+import { clearQueries, engineer, renderWithQueries, routedFetch, siteList, windowFixture } from './window-test-kit';
 
 const mockPush = jest.fn();
 jest.mock('expo-router', () => ({ useRouter: () => ({ push: mockPush }) }));
@@ -35,7 +35,10 @@ function renderDetail(onOpenWindow = jest.fn(), window: Parameters<typeof window
 }
 
 test('shows the times in the viewer zone, the lifecycle sentence, and conflicts that open the other window', async () => {
-  routedFetch([{ method: 'GET', path: /^\/api\/windows\/w-1\/conflicts$/, reply: () => ({ status: 200, body: conflicts }) }]);
+  routedFetch([
+    { method: 'GET', path: /^\/api\/windows\/w-1\/conflicts$/, reply: () => ({ status: 200, body: conflicts }) },
+    { method: 'GET', path: /^\/api\/sites\/cell-pellow-sands$/, reply: () => ({ status: 200, body: { site: siteList.items[0], spans: [], hosted: [], transit: [] } }) },
+  ]);
   const { onOpenWindow } = renderDetail();
   // 21:00–01:00 UTC is 22:00–02:00 in Berlin in January (CET, UTC+1).
   expect(screen.getByTestId('window-when-local')).toHaveTextContent('Thu 10 Jan, 22:00 – Fri 11 Jan, 02:00 CET');
@@ -45,7 +48,9 @@ test('shows the times in the viewer zone, the lifecycle sentence, and conflicts 
 
   const conflict = await screen.findByTestId('window-conflict-w-other');
   expect(within(conflict).getByText('Shares equipment')).toBeTruthy();
-  expect(conflict).toHaveTextContent(/Both windows take out site:cell-pellow-sands/);
+  // The shared element reads by name, never by its id.
+  await waitFor(() => expect(conflict).toHaveTextContent(/Both windows take out site Pellow Sands\./));
+  expect(conflict).not.toHaveTextContent(/cell-pellow-sands/);
   fireEvent.press(conflict);
   expect(onOpenWindow).toHaveBeenCalledWith('w-other');
 });

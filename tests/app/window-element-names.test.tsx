@@ -1,10 +1,11 @@
 // The booking form and the window page name sites and spans the way people know them — a site by its name, kind,
 // compute and place, a span by its two ends, capacity and length — and never show an element's id, even though
-// typing an id in the search still finds the element.
+// typing an id in the search still finds the element. Conflict reasons on the window page name them too.
 import { fireEvent, screen, waitFor, within } from '@testing-library/react-native';
 import { BookWindow } from '@/components/windows/book-window';
 import { EditWindow } from '@/components/windows/edit-window';
 import { WindowElementsList } from '@/components/windows/window-elements-list';
+import { ConflictsList } from '@/components/windows/conflicts-list';
 import { siteWords, spanWords } from '@/components/windows/element-words';
 import { clearQueries, engineer, renderWithQueries, routedFetch, siteList, windowFixture } from './window-test-kit';
 
@@ -23,6 +24,14 @@ const span = {
 const spanList = { items: [span], total: 1, page: 1, pageSize: 12 };
 const site = { ...siteList.items[0], kind: 'cell-site' as const };
 const siteDetail = { site, spans: [], hosted: [], transit: [] };
+
+const sliceDetail = {
+  slice: {
+    id: 'sl-grid', name: 'Grid telemetry', tenantId: 't-1', tenantName: 'Ambry Power', sst: 3, sd: null, priority: 2,
+    critical: true, status: 'active', functionCount: 2, tieCount: 1, cpu: 8, bandwidthGbps: 0.5, revision: 1,
+  },
+  functions: [], ties: [], history: [],
+};
 
 afterEach(clearQueries);
 
@@ -117,4 +126,22 @@ test('the window page lists its elements by name, and one gone from the inventor
   expect(screen.getByTestId(`window-element-${SPAN_ID}-detail`)).toHaveTextContent('Span · 100 Gbit/s · 42.4 km');
   await waitFor(() => expect(screen.getByTestId('window-element-cell-gone')).toHaveTextContent(/A site no longer in the inventory/));
   expectNoIds(screen.getByTestId('window-elements'), [SPAN_ID, 'cell-gone']);
+});
+
+test('conflict reasons name the shared elements and the cut-off slices, never by id', async () => {
+  routedFetch([
+    { method: 'GET', path: /^\/api\/spans\/sp-017$/, reply: () => ({ status: 200, body: { span, slices: [] } }) },
+    { method: 'GET', path: new RegExp(`^/api/sites/${SITE_ID}$`), reply: () => ({ status: 200, body: siteDetail }) },
+    { method: 'GET', path: /^\/api\/slices\/sl-grid$/, reply: () => ({ status: 200, body: sliceDetail }) },
+  ]);
+  const reasons = [
+    { reason: 'shared-element' as const, message: `Both windows take out site:${SITE_ID}, span:${SPAN_ID}.`, ids: [`site:${SITE_ID}`, `span:${SPAN_ID}`] },
+    { reason: 'strands-slice' as const, message: 'Together the windows cut off parts of 1 slice(s): sl-grid.', ids: ['sl-grid'] },
+  ];
+  const other = { id: 'w-2', title: 'Duct repair', startsAt: '2030-01-10T23:00:00.000Z', endsAt: '2030-01-11T03:00:00.000Z', status: 'draft' as const };
+  renderWithQueries(<ConflictsList conflicts={[{ window: other, reasons }]} timeZone={OSLO} onOpenWindow={jest.fn()} />);
+  const conflict = screen.getByTestId('window-conflict-w-2');
+  await waitFor(() => expect(conflict).toHaveTextContent(/Both windows take out site Pellow Sands and span Gullhaven – Orrindale\./));
+  await waitFor(() => expect(conflict).toHaveTextContent(/Together the windows cut off parts of the slice "Grid telemetry"\./));
+  for (const id of [SITE_ID, SPAN_ID, 'sl-grid']) expect(conflict).not.toHaveTextContent(new RegExp(id));
 });
