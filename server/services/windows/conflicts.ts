@@ -9,7 +9,8 @@ import {
 } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
 import { currentInventory } from '../inventory/inventory-cache';
-import { outageOf, pairConflictReasons, strandMessage, type Outage } from './pair-conflicts';
+import { conflictReasonWords, namesOf, type SlotNames } from '../slots/slot-words';
+import { outageOf, pairConflictReasons, type Outage } from './pair-conflicts';
 
 export type ConflictSubject = { id: string; title: string; startsAt: Date; endsAt: Date; status: string; elements: ElementRow[] };
 
@@ -37,7 +38,7 @@ async function scopeConflicts(
       reasons: c.reasons.flatMap((r) => {
         if (r.reason !== 'strands-slice') return [r];
         const ids = r.ids.filter(own);
-        return ids.length > 0 ? [{ ...r, ids, message: strandMessage(ids) }] : [];
+        return ids.length > 0 ? [{ ...r, ids }] : [];
       }),
     })).filter((c) => c.reasons.length > 0);
     byWindow.set(id, scoped);
@@ -54,7 +55,7 @@ export async function conflictsByWindow(
   const others = await overlappingOthers(db, active);
   const pairs = active.flatMap((w) => others.filter((o) => o.id !== w.id && overlaps(w, o)).map((o) => [w, o] as const));
   if (pairs.length === 0) return byWindow;
-  const { inventory: inv } = await currentInventory(db);
+  const { inventory: inv, scenario } = await currentInventory(db);
   const base = countComponents(inv.network);
   const outages = new Map<string, Outage>();
   const outage = (w: ConflictSubject) => {
@@ -70,5 +71,18 @@ export async function conflictsByWindow(
     });
   }
   if (scopeTenant !== null) await scopeConflicts(db, inv, byWindow, scopeTenant);
+  nameReasons(byWindow, namesOf(scenario));
   return byWindow;
+}
+
+/** Every reason's message in names (the ids stay in `ids` for the screens): what any reader of the API sees. */
+function nameReasons(byWindow: Map<string, WindowConflict[]>, names: SlotNames): void {
+  for (const list of byWindow.values()) {
+    for (const c of list) {
+      for (const r of c.reasons) {
+        const words = conflictReasonWords(r, names);
+        r.message = `${words.charAt(0).toUpperCase()}${words.slice(1)}.`;
+      }
+    }
+  }
 }

@@ -59,7 +59,7 @@ function connected(labels: Int32Array, sites: readonly number[]): boolean {
   return sites.every((s) => labels[s] !== -1 && labels[s] === labels[sites[0]]);
 }
 
-export function strandMessage(slices: readonly string[]): string {
+function strandMessage(slices: readonly string[]): string {
   return `Together the windows cut off parts of ${slices.length} slice(s): ${slices.join(', ')}.`;
 }
 

@@ -47,6 +47,8 @@ test('overlapping windows sharing an element conflict, on both windows; a later 
   expect(onA).toHaveLength(1);
   expect(onA[0].window.id).toBe(b.window.id);
   expect(onA[0].reasons).toEqual([expect.objectContaining({ reason: 'shared-element', ids: [`span:${id('r23')}`] })]);
+  // The message names the span by its two ends for any reader of the API; ids stay in `ids` only.
+  expect(onA[0].reasons[0].message).toBe('Both take out span Ring 2 – Ring 3.');
   expect((await conflictsOf(b.window.id)).map((x) => x.window.id)).toEqual([a.window.id]);
   expect(await conflictsOf(c.window.id)).toEqual([]);
   const counts = await listCounts();
@@ -68,6 +70,7 @@ test('each window alone is harmless, together they cut the ring and strand a sli
     // The ring falls into {R3, R4, R5} and {R6, R1, R2}: R1–R4 (own) and R5–R6 (other, rerouted the long way
     // round while r56 alone is out) are both cut off, though neither window alone would do it.
     expect([...list[0].reasons[1].ids].sort()).toEqual([id('other'), id('own')].sort());
+    expect(list[0].reasons[1].message).toMatch(/^Together they cut off the slices "(Own control|Other video)" and "(Own control|Other video)"\.$/);
   }
   // Withdrawing one window clears the conflict on the other.
   await (await ctx.as('engineer'))('post', `/api/windows/${e.window.id}/transition`).send({ to: 'withdrawn', version: 2 });
