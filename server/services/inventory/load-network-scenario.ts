@@ -1,6 +1,4 @@
-// The current inventory as a `slackwater-scenario/1` object (no windows), and compiled for the planner.
-import { buildInventory } from '../../../planner/model/build-inventory';
-import type { Inventory } from '../../../planner/model/types';
+// The current inventory as a `slackwater-scenario/1` object (no windows); the inventory cache compiles it for the planner.
 import {
   outlineSchema, SCENARIO_FORMAT, type Scenario, type ScenarioFunction, type ScenarioSlice, type ScenarioTie,
 } from '../../../shared/scenario';
@@ -100,10 +98,4 @@ export function tablesToScenario(t: ScenarioTables): Scenario {
 /** The current network, tenants, slices and current placements, plus network_meta's name and outline. */
 export async function loadNetworkScenario(db: Queryable): Promise<Scenario> {
   return tablesToScenario(await selectScenarioTables(db));
-}
-
-/** The scenario and its planner compilation (throws the planner's errors on dangling references). */
-export async function loadInventory(db: Queryable): Promise<{ scenario: Scenario; inventory: Inventory }> {
-  const scenario = await loadNetworkScenario(db);
-  return { scenario, inventory: buildInventory(scenario) };
 }

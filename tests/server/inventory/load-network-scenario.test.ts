@@ -1,6 +1,7 @@
 // loadNetworkScenario / loadInventory: the seeded demo comes back as the same scenario (windows aside).
 import { placements } from '../../../db/schema';
-import { loadInventory, loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
+import { loadNetworkScenario } from '../../../server/services/inventory/load-network-scenario';
+import { loadInventory } from '../helpers/load-inventory';
 import { validateScenario } from '../../../shared/scenario-validate';
 import { and, eq } from 'drizzle-orm';
 import { normalised } from './helpers/demo-expectations';

@@ -4,7 +4,7 @@
 import { plans, placements, sliceFunctions, sliceTies, slices } from '../../../db/schema';
 import type { PlanResult } from '../../../planner/model/types';
 import { buildReview } from '../../../planner/review/build-review';
-import { loadInventory } from '../../../server/services/inventory/load-network-scenario';
+import { loadInventory } from '../helpers/load-inventory';
 import { reservationsFor } from '../../../server/services/plans/reservations';
 import { windowSpecOf } from '../../../server/services/windows/window-spec';
 import { loadWindow } from '../../../server/services/windows/window-view';

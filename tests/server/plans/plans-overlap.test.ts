@@ -5,7 +5,7 @@ import type { Inventory, SlicePlacement, WindowSpec } from '../../../planner/mod
 import { addPlacementLoad, placementLoad, windowCapacity } from '../../../planner/model/window-capacity';
 import { fromSlicePlans } from '../../../planner/plan/slice-plans';
 import { verifyPlan } from '../../../planner/verify/verify-plan';
-import { loadInventory } from '../../../server/services/inventory/load-network-scenario';
+import { loadInventory } from '../helpers/load-inventory';
 import { reservationsFor, toSlicePlan } from '../../../server/services/plans/reservations';
 import { windowSpecOf } from '../../../server/services/windows/window-spec';
 import { loadWindow } from '../../../server/services/windows/window-view';
