@@ -1,8 +1,9 @@
 // Reads uploads in worker threads with a time budget and a memory cap, so a hostile file cannot stall the API:
 // the event loop only waits for a message, and a thread over budget is stopped and refused with a code.
 import { join } from 'node:path';
-import { Worker } from 'node:worker_threads';
+import type { Worker } from 'node:worker_threads';
 import { AppError } from '../errors';
+import { startTsThread } from '../jobs/ts-thread';
 import { ImportFileError, ImportTooComplexError } from './errors';
 import type { CheckReply } from './check-thread-protocol';
 import type { UploadRead, UploadReadInput } from './read-upload';
@@ -24,11 +25,7 @@ function rebuild(error: Extract<CheckReply, { ok: false }>['error']): Error {
   return new Error(`reading the upload failed: ${error.message}`);
 }
 
-/**
- * One thread, one upload at a time. WARNING: the thread compiles TypeScript itself, as in
- * planner/workers/worker-pool.ts: on Node 20 `--import tsx` in execArgv is ignored, so an eval bootstrap
- * registers tsx's require hook (this works under tsx, jest and the e2e server alike).
- */
+/** One thread, one upload at a time, under a heap cap (started the way every server thread is: server/jobs/ts-thread.ts). */
 class CheckThread {
   private readonly worker: Worker;
   private settle: ((reply: CheckReply | Error) => void) | null = null;
@@ -37,9 +34,7 @@ class CheckThread {
   dead = false;
 
   constructor(private readonly limits: CheckLimits, private readonly onIdleExpired: (t: CheckThread) => void) {
-    this.worker = new Worker(`require('tsx/cjs'); require(${JSON.stringify(WORKER_FILE)});`, {
-      eval: true,
-      execArgv: process.execArgv.filter((a) => !a.startsWith('--inspect')),
+    this.worker = startTsThread(WORKER_FILE, undefined, {
       resourceLimits: { maxOldGenerationSizeMb: limits.maxOldGenerationSizeMb, maxYoungGenerationSizeMb: 32 },
     });
     this.ready = new Promise<void>((resolve, reject) => {

@@ -32,7 +32,7 @@ export function campaignThreadScheduler(watch?: (thread: Worker) => void): SlotE
     if (signal?.aborted) return Promise.reject(new Error(SCHEDULING_STOPPED));
     const packed = packCampaign(problem);
     const input: CampaignThreadInput = { problem: packed, options: { seed, maxIterations } };
-    const worker = startTsThread(WORKER_FILE, input, [], transferablesOf(packed));
+    const worker = startTsThread(WORKER_FILE, input, { transferList: transferablesOf(packed) });
     watch?.(worker);
     return new Promise<CampaignSchedule>((resolve, reject) => {
       let settled = false;

@@ -26,7 +26,7 @@ export function startPlanThread(
   opts: { computeModule?: string } = {},
 ): PlanThread {
   const computeModule = opts.computeModule ?? PLAN_COMPUTE_MODULE;
-  const worker = startTsThread(WORKER_FILE, input, [{ module: computeModule, name: 'computePlan' }]);
+  const worker = startTsThread(WORKER_FILE, input, { args: [{ module: computeModule, name: 'computePlan' }] });
   const outcome = new Promise<ThreadOutcome>((resolve) => {
     const crash = (message: string) => resolve({ kind: 'failed', error: { deterministic: false, code: null, message } });
     worker.on('message', (m: ThreadMessage) => {
