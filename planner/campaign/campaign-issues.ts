@@ -1,7 +1,9 @@
 // Every rule a campaign's assignment breaks, in words a planner reads (the draft's manual moves are checked with
 // it), and why an unscheduled group found no slot.
 import { type CampaignState, UNSCHEDULED } from './campaign-state';
-import { checkRules, dayNumber, formatNight, groupLabel, LIST_AT_MOST, listWords, slotsOverlap } from './compile-campaign';
+import {
+  checkRules, dayNumber, formatNight, groupLabel, LIST_AT_MOST, listWords, slotsOverlap, touchesTooClose,
+} from './compile-campaign';
 import type { CampaignProblem } from './types';
 
 const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
@@ -44,7 +46,7 @@ export function campaignIssues(p: CampaignProblem, assignment: (number | null)[]
       const a = placed[x];
       const b = placed[y];
       const apart = Math.abs(a.day - b.day);
-      if (D > 0 && apart < D) {
+      if (touchesTooClose(a.day, b.day, D)) {
         const touchedB = new Set(p.groups[b.g].touched);
         const shared = new Set(p.groups[a.g].touched.filter((t) => touchedB.has(t))).size;
         if (shared > 0) {

@@ -1,7 +1,7 @@
 // A schedule being built or searched: each group's slot, the windows per night and the objective, with the rule
 // checks the constructive start and the local search share.
 import type { CompiledCampaign } from './compile-campaign';
-import { slotsOverlap } from './compile-campaign';
+import { slotsOverlap, touchesTooClose } from './compile-campaign';
 import { UNSCHEDULED_PENALTY } from './types';
 
 export const UNSCHEDULED = -1;
@@ -66,7 +66,7 @@ export class CampaignState {
       const day = c.day[g][s];
       for (const h of c.touchNeighbours[g]) {
         const a = assign[h];
-        if (a !== UNSCHEDULED && Math.abs(c.day[h][a] - day) < c.minDays) return false;
+        if (a !== UNSCHEDULED && touchesTooClose(c.day[h][a], day, c.minDays)) return false;
       }
     }
     const slots = c.problem.groups;
@@ -87,7 +87,7 @@ export class CampaignState {
     if (c.minDays > 0) {
       for (const h of c.touchNeighbours[g]) {
         const a = assign[h];
-        if (a !== UNSCHEDULED && Math.abs(c.day[h][a] - c.day[g][s]) < c.minDays) spacing.push(h);
+        if (a !== UNSCHEDULED && touchesTooClose(c.day[h][a], c.day[g][s], c.minDays)) spacing.push(h);
       }
     }
     const groups = c.problem.groups;

@@ -34,6 +34,15 @@ export function dayNumber(night: string): number {
   return Math.round(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])) / MS_PER_DAY);
 }
 
+/**
+ * The spacing rule's one test: two touches of a slice on calendar days `dayA` and `dayB` (day numbers) break "at most
+ * once in `minDays` days" when they lie less than minDays apart; 0 turns the rule off. Windows booked elsewhere are
+ * held to it too (server/services/campaigns/booked-spacing.ts).
+ */
+export function touchesTooClose(dayA: number, dayB: number, minDays: number): boolean {
+  return minDays > 0 && Math.abs(dayA - dayB) < minDays;
+}
+
 /** A night as a person reads it: "Tue 8 Dec 2026". */
 export function formatNight(night: string): string {
   const d = new Date(dayNumber(night) * MS_PER_DAY);
