@@ -1,10 +1,13 @@
 // Plans a campaign: evaluates every element group over the campaign's slots with the slot finder (one shared
 // context and re-map cache), finds the pairs of groups that must not be out together, and lets the scheduler
-// choose a slot per group within the campaign's rules. The answer is the draft stored on the campaign's row.
+// choose a slot per group within the campaign's rules; a start too near a window booked elsewhere that touches the
+// same slices is no option (booked-spacing.ts). The answer is the draft stored on the campaign's row.
 import type { Queryable } from '../../../db/client';
 import type { SearchProgress, SlotCandidate, SlotExclusionCode } from '../../../shared/slots';
 import { currentInventory } from '../inventory/inventory-cache';
-import { namedElements, namesOf } from '../slots/slot-words';
+import { namedElements, namesOf, type SlotNames } from '../slots/slot-words';
+import { bookedSpacingNote, bookedSpacingReason, keepSpacedFromBooked, type SpacedSlots } from './booked-spacing';
+import { loadBookedTouches } from './booked-touches';
 import type { CampaignProblem, CampaignSchedule, SlotEngine } from './engine';
 import { problemOf, roundCost, type CampaignRequest, type StoredSchedule } from './stored-schedule';
 
@@ -39,13 +42,17 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
       if (engine.elementsClash(inventory, groups[i], groups[j], names).length > 0) clashes.push([i, j]);
     }
   }
+  const minDays = request.minDaysBetweenTouches;
+  const usable = found.map((f) => f.candidates.filter((c) => c.rank !== null && c.excluded === null));
+  const booked = await loadBookedTouches(db, inventory, rangeOf(usable.flat()), request.hours, minDays);
+  const spaced = usable.map((slots, i) => keepSpacedFromBooked(slots, found[i].touchedSlices, booked, minDays));
   const stored: Omit<StoredSchedule, 'assignment' | 'unscheduledReasons' | 'startCost' | 'moves' | 'iterations'> = {
     clashes,
     groups: request.groups.map((g, i) => ({
       label: g.label,
       elements: namedElements(names, groups[i]),
       touched: found[i].touchedSlices,
-      slots: found[i].candidates.filter((c) => c.rank !== null && c.excluded === null).map((c) => ({
+      slots: spaced[i].kept.map((c) => ({
         start: c.start, end: c.end, startMs: Date.parse(c.start), endMs: Date.parse(c.end), night: c.night,
         cost: c.cost, touched: c.touched, unresolved: c.unresolved, criticalTouched: c.criticalTouched, explanation: c.explanation,
       })),
@@ -58,14 +65,34 @@ export async function planCampaign(deps: PlanCampaignDeps, request: CampaignRequ
   return {
     ...stored,
     assignment: schedule.assignment,
-    // A group the finder left no usable start says why, in the finder's own words; the scheduler knows only that none is left.
     unscheduledReasons: schedule.unscheduledReasons.map((reason, g) =>
-      (reason !== null && stored.groups[g].slots.length === 0 ? noUsableStartReason(found[g].candidates) : reason)),
+      (reason === null ? null : unscheduledWords(reason, found[g].candidates, spaced[g], minDays, names))),
     startCost: roundCost(schedule.startWindowsCost),
     startScheduled: groups.length - schedule.startUnscheduled,
     moves: schedule.moves,
     iterations: schedule.iterations,
   };
+}
+
+/** The instants the slots span; null when there are none. */
+function rangeOf(slots: readonly SlotCandidate[]): { fromMs: number; toMs: number } | null {
+  if (slots.length === 0) return null;
+  return slots.reduce((r, c) => ({ fromMs: Math.min(r.fromMs, Date.parse(c.start)), toMs: Math.max(r.toMs, Date.parse(c.end)) }),
+    { fromMs: Infinity, toMs: -Infinity });
+}
+
+/**
+ * An unscheduled group's reason. With no option left, the finder's own words, or the booked windows' when they
+ * took out every usable start (the scheduler knows only that none is left); otherwise the scheduler's, plus the
+ * starts booked windows took out.
+ */
+function unscheduledWords(
+  reason: string, candidates: readonly SlotCandidate[], spaced: SpacedSlots<SlotCandidate>, minDays: number, names: SlotNames,
+): string {
+  if (spaced.kept.length === 0) {
+    return spaced.ruledOut > 0 ? bookedSpacingReason(spaced.ruledOut, spaced.blocks, minDays, names) : noUsableStartReason(candidates);
+  }
+  return spaced.ruledOut > 0 ? `${reason} ${bookedSpacingNote(spaced.ruledOut, spaced.blocks, minDays, names)}` : reason;
 }
 
 /**

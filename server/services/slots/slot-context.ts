@@ -50,16 +50,14 @@ const freezeOf = (f: FreezeRow): ContextFreeze => ({
   id: f.id, title: f.title, startMs: f.startsAt.getTime(), endMs: f.endsAt.getTime(), startsAt: f.startsAt, endsAt: f.endsAt,
 });
 
-/** Reads the context for slots inside [fromMs, toMs]. The revision is read first, so the inventory is at least that new. */
-export async function loadSlotContext(db: Queryable, fromMs: number, toMs: number): Promise<SlotContext> {
-  const revision = await selectInventoryRevision(db);
-  const { scenario, inventory } = await currentInventory(db);
-  const [from, to] = [new Date(fromMs), new Date(toMs)];
-  const freezes = (await listFreezes(db, { from, to })).map(freezeOf);
-  const rows = await selectWindowsInRange(db, from, to, ACTIVE_WINDOW_STATUSES);
+/**
+ * Active windows overlapping [fromMs, toMs), with their elements and accepted plans. A campaign's spacing rule reads
+ * them over its slots' range widened by its D days (server/services/campaigns/booked-spacing.ts).
+ */
+export async function loadContextWindows(db: Queryable, inventory: Inventory, fromMs: number, toMs: number): Promise<ContextWindow[]> {
+  const rows = await selectWindowsInRange(db, new Date(fromMs), new Date(toMs), ACTIVE_WINDOW_STATUSES);
   const elements = await selectElementsByWindow(db, rows.map((r) => r.id));
-  const policies = await getPolicies(db);
-  const windows = rows.map((r): ContextWindow => {
+  return rows.map((r): ContextWindow => {
     const els = elements.get(r.id) ?? [];
     return {
       id: r.id, title: r.title, startMs: r.startsAt.getTime(), endMs: r.endsAt.getTime(), version: r.version,
@@ -69,6 +67,16 @@ export async function loadSlotContext(db: Queryable, fromMs: number, toMs: numbe
       slices: r.acceptedPlanId ? storedSlices(r.planResult) : [],
     };
   });
+}
+
+/** Reads the context for slots inside [fromMs, toMs]. The revision is read first, so the inventory is at least that new. */
+export async function loadSlotContext(db: Queryable, fromMs: number, toMs: number): Promise<SlotContext> {
+  const revision = await selectInventoryRevision(db);
+  const { scenario, inventory } = await currentInventory(db);
+  const [from, to] = [new Date(fromMs), new Date(toMs)];
+  const freezes = (await listFreezes(db, { from, to })).map(freezeOf);
+  const windows = await loadContextWindows(db, inventory, fromMs, toMs);
+  const policies = await getPolicies(db);
   const names = namesOf(scenario);
   const leadDays = new Map(scenario.tenants.map((t) => [t.id, Math.max(t.noticeDays, policies.noticeLeadDays)]));
   return {
