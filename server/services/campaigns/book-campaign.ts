@@ -1,14 +1,37 @@
 // Books every window of a draft campaign in one transaction, or none: the row is locked, its version and status
-// checked, and each window booked through the same path as a single booking (freezes, roles, policy). The first
-// window that breaks a rule rolls everything back, and the error names its group.
+// checked, the once-in-D-days rule checked again against windows booked since the draft was planned, and each window
+// booked through the same path as a single booking (freezes, roles, policy). The first window that breaks a rule
+// rolls everything back, and the error names its group.
 import type { Db } from '../../../db/client';
 import type { Me } from '../../../shared/api';
 import { insertAuditEntry } from '../../queries/audit/audit-log';
 import { updateCampaign } from '../../queries/slots/campaign-rows';
 import { AppError } from '../../errors';
+import { dayNumber } from '../../../planner/campaign/compile-campaign';
+import type { Tx } from '../../../db/client';
+import { currentInventory } from '../inventory/inventory-cache';
+import { namesOf } from '../slots/slot-words';
 import { bookWindowIn } from '../windows/create-window';
+import { blocksAt, bookedSharing, bookedSinceReason } from './booked-spacing';
+import { loadBookedTouches } from './booked-touches';
 import { lockDraft } from './change-campaign';
-import { CampaignEmptyError, CampaignGroupBookingError } from './errors';
+import { CampaignEmptyError, CampaignGroupBookingError, CampaignSpacingError } from './errors';
+import type { CampaignRequest, StoredSchedule, StoredSlot } from './stored-schedule';
+
+type Planned = { group: StoredSchedule['groups'][number]; slot: StoredSlot };
+
+/** Refuses the booking when a window booked since planning lies too near a planned night on a shared slice. */
+async function checkSpacingAgain(tx: Tx, planned: readonly Planned[], request: CampaignRequest): Promise<void> {
+  const minDays = request.minDaysBetweenTouches;
+  if (minDays <= 0) return;
+  const { scenario, inventory } = await currentInventory(tx);
+  const range = { fromMs: Math.min(...planned.map((p) => p.slot.startMs)), toMs: Math.max(...planned.map((p) => p.slot.endMs)) };
+  const booked = await loadBookedTouches(tx, inventory, range, request.hours, minDays);
+  for (const { group, slot } of planned) {
+    const blocks = blocksAt(bookedSharing(booked, group.touched), dayNumber(slot.night), minDays);
+    if (blocks.length > 0) throw new CampaignGroupBookingError(group.label, new CampaignSpacingError(bookedSinceReason(blocks, minDays, namesOf(scenario))));
+  }
+}
 
 export async function bookCampaign(deps: { db: Db; now: Date }, id: string, version: number, user: Me): Promise<string[]> {
   const { now } = deps;
@@ -17,6 +40,7 @@ export async function bookCampaign(deps: { db: Db; now: Date }, id: string, vers
     const s = row.schedule;
     const planned = s.assignment.flatMap((index, group) => (index === null ? [] : [{ group: s.groups[group], slot: s.groups[group].slots[index] }]));
     if (planned.length === 0) throw new CampaignEmptyError();
+    await checkSpacingAgain(tx, planned, row.request as CampaignRequest);
     const windowIds: string[] = [];
     for (const { group, slot } of planned) {
       try {

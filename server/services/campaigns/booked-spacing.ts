@@ -94,6 +94,15 @@ export function bookedSpacingReason(usable: number, blocks: readonly BookedBlock
     + `a slice may be touched at most once in ${plural(minDays, 'day')}.`;
 }
 
+/**
+ * Why a draft's window can no longer be booked: a window booked since the draft was planned lies too near its night:
+ * `Its night now falls within 7 days of "Duct repair", which also takes out "Harbour CCTV"; …`.
+ */
+export function bookedSinceReason(blocks: readonly BookedBlock[], minDays: number, names: SlotNames): string {
+  return `Its night now falls within ${plural(minDays, 'day')} of ${blockingWords(blocks, names)}, booked since the draft `
+    + `was planned; a slice may be touched at most once in ${plural(minDays, 'day')}. Plan the campaign again.`;
+}
+
 /** What a scheduler's reason adds when booked windows also ruled out some of the group's starts. */
 export function bookedSpacingNote(ruledOut: number, blocks: readonly BookedBlock[], minDays: number, names: SlotNames): string {
   const subject = ruledOut === 1 ? 'Another start falls' : `Another ${ruledOut} starts fall`;

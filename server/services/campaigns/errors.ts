@@ -36,3 +36,6 @@ export class CampaignGroupBookingError extends AppError {
     this.status = cause.status;
   }
 }
+
+/** A draft window now lies too near a window booked elsewhere that touches the same slices (the once-in-D-days rule). */
+export class CampaignSpacingError extends domainError('CAMPAIGN_SPACING', 409, (reason: string) => reason) {}

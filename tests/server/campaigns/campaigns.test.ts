@@ -11,7 +11,7 @@ import type { SlotEngine } from '../../../server/services/campaigns/engine';
 import { freezes } from '../../../db/schema';
 import { setupSlotsApp, type SlotsContext } from '../slots-api/helpers';
 
-// This file plans and books in May 2029 only (the slot-search tests search March 2029).
+// This file plans and books in May and June 2029 only (the slot-search tests search March 2029).
 const NOW = new Date('2029-02-01T08:00:00Z');
 let ctx: SlotsContext;
 
@@ -262,4 +262,36 @@ test('a discarded draft leaves the calendar and can no longer be booked', async 
   expect(list.campaigns.map((c) => c.id)).not.toContain(draft.id);
   const book = await planner('post', `/api/campaigns/${draft.id}/book`).send({ version: draft.version + 1 });
   expect(book.body.error.code).toBe('CAMPAIGN_NOT_DRAFT');
+});
+
+test('booking checks the once-in-D-days rule again: a window booked since planning on a shared slice refuses it', async () => {
+  // June 2029: one group on span p1 (which "Own control" rides), a slice touched at most once in 7 days.
+  const draft = await plannedDraft({
+    title: `${ctx.prefix} Spacing audit`, groups: [{ label: 'North splice', spans: [ctx.id('p1')] }],
+    from: '2029-06-04T00:00:00Z', to: '2029-06-07T00:00:00Z', minDaysBetweenTouches: 7,
+  });
+  expect(draft.windows).toHaveLength(1);
+  const planner = await ctx.as('planner');
+  // Booked after the draft, two days after its night, on the same span.
+  const later = new Date(Date.parse(draft.windows[0].start) + 2 * 86_400_000);
+  const elsewhere = await planner('post', '/api/windows').send({
+    title: `${ctx.prefix} Late duct repair`, startsAt: later.toISOString(), endsAt: new Date(later.getTime() + 2 * 3_600_000).toISOString(),
+    workType: 'fibre splice', elements: [{ kind: 'span', id: ctx.id('p1'), effect: 'down' }],
+  });
+  expect(elsewhere.status).toBe(201);
+
+  const refused = await planner('post', `/api/campaigns/${draft.id}/book`).send({ version: draft.version });
+  expect(refused.status).toBe(409);
+  expect(refused.body.error.code).toBe('CAMPAIGN_SPACING');
+  expect(refused.body.error.message).toContain('group "North splice"');
+  expect(refused.body.error.message).toContain(`within 7 days of "${ctx.prefix} Late duct repair", which also takes out "Own control"`);
+  expect(refused.body.error.message).not.toContain(ctx.id('S1'));
+  expect(await campaignWindowCount(draft.title)).toBe(0);
+  expect(await read(draft.id)).toMatchObject({ status: 'draft', version: draft.version });
+
+  // Withdrawn, the other window no longer counts and the draft books.
+  const w = elsewhere.body.window as { id: string; version: number };
+  expect((await planner('post', `/api/windows/${w.id}/transition`).send({ to: 'withdrawn', version: w.version })).status).toBe(200);
+  expect((await planner('post', `/api/campaigns/${draft.id}/book`).send({ version: draft.version })).status).toBe(201);
+  expect(await campaignWindowCount(draft.title)).toBe(1);
 });
