@@ -38,6 +38,9 @@ export interface DETracePoint {
   best: Fitness;
 }
 
+/** Why a run ended: its generation budget, its stall limit, or its time limit (this last depends on the machine's speed). */
+export type DEStop = 'generations' | 'stall' | 'time';
+
 export interface DEResult {
   best: Float64Array;
   fitness: Fitness;
@@ -46,6 +49,7 @@ export interface DEResult {
   evaluations: number;
   /** best fitness after the initial population (generation 0) and after each generation */
   trace: DETracePoint[];
+  stoppedBy: DEStop;
 }
 
 /** Throws InvalidOptionError unless F, CR and the counts are in the ranges DE defines. */
@@ -61,7 +65,13 @@ export function runDE(problem: DEProblem, options: DEOptions, rng: Rng, seeds?: 
   checkDEOptions(options);
   const now = options.now ?? Date.now;
   const startMs = now();
-  const timeUp = () => options.timeLimitMs !== undefined && now() - startMs >= options.timeLimitMs;
+  // Any check that finds the time up cuts something short (members, trials or generations): the run ended by time.
+  let timeCut = false;
+  const timeUp = () => {
+    const up = options.timeLimitMs !== undefined && now() - startMs >= options.timeLimitMs;
+    if (up) timeCut = true;
+    return up;
+  };
   const pop = initPopulation(problem, options.population, rng, seeds, timeUp);
   let evaluations = pop.fit.filter((f) => f !== UNEVALUATED).length;
   let best = bestIndex(pop);
@@ -71,9 +81,13 @@ export function runDE(problem: DEProblem, options: DEOptions, rng: Rng, seeds?: 
   let trials: Float64Array[] = [];
   let stall = 0;
   let generation = 0;
+  let stalled = false;
   while (generation < options.generations) {
     if (timeUp()) break;
-    if (options.stallGenerations !== undefined && stall >= options.stallGenerations) break;
+    if (options.stallGenerations !== undefined && stall >= options.stallGenerations) {
+      stalled = true;
+      break;
+    }
     generation += 1;
     trials = makeTrials(pop, problem, rng, options, trials);
     // Time is checked between evaluations too: one generation of a large problem can take seconds. Trials left
@@ -94,5 +108,6 @@ export function runDE(problem: DEProblem, options: DEOptions, rng: Rng, seeds?: 
     trace.push({ generation, evaluations, best: bestFit });
     options.onGeneration?.(generation, bestFit, evaluations);
   }
-  return { best: Float64Array.from(pop.x[best]), fitness: bestFit, generations: generation, evaluations, trace };
+  const stoppedBy: DEStop = timeCut ? 'time' : stalled ? 'stall' : 'generations';
+  return { best: Float64Array.from(pop.x[best]), fitness: bestFit, generations: generation, evaluations, trace, stoppedBy };
 }

@@ -170,4 +170,11 @@ export interface PlanResult {
    * without solving the window a second time.
    */
   greedy?: { objective: Objective; elapsedMs: number };
+  /**
+   * DE modes: why the search ended — its generation budget, its stall limit, or its time limit (at any phase:
+   * seed polish, evolution, final polish). Only a time stop makes the plan depend on the machine's speed and load.
+   */
+  stoppedBy?: 'generations' | 'stall' | 'time';
+  /** DE modes: generations evolved */
+  generations?: number;
 }

@@ -38,6 +38,11 @@ export interface PlanOptions {
   knockOn: boolean;
   /** at most this many knock-on moves per plan */
   maxKnockOnMoves: number;
+  /**
+   * decodes per local search around DE (the seed's, the final one, half that per kick); default: a few passes
+   * over the genome. A caller that wants a run bounded by counts rather than the clock sets it with `generations`.
+   */
+  polishEvaluations?: number;
   reservations?: Reservation;
   pinned?: string[];
   excludedSites?: string[];

@@ -37,6 +37,9 @@ interface Search {
   alone?: PlanResult['search'];
   /** DE modes: the greedy plan's score and the time to get it (see PlanResult.greedy) */
   greedy?: PlanResult['greedy'];
+  /** DE modes: why the search ended and the generations it evolved (see PlanResult.stoppedBy) */
+  stoppedBy?: PlanResult['stoppedBy'];
+  generations?: number;
 }
 
 function toTrace(points: DETracePoint[]): TracePoint[] {
@@ -86,7 +89,10 @@ async function evolve(problem: RemapProblem, decoder: Decoder, o: PlanOptions, s
     const r = runDE(toDEProblem(problem, decoder, { incremental: true }), {
       ...de, now, onGeneration: (g, best, evaluations) => report(g, evaluations, objectiveFromFitness(best)),
     }, createRng(o.seed), seeds);
-    return { next: decoder.decode(r.best).next, trace: toTrace(r.trace), feasible: r.fitness.violation <= 0, genes: r.best };
+    return {
+      next: decoder.decode(r.best).next, trace: toTrace(r.trace), feasible: r.fitness.violation <= 0, genes: r.best,
+      stoppedBy: r.stoppedBy, generations: r.generations,
+    };
   }
   if (!o.parallel || !o.scenario) throw new InvalidOptionError(`mode "${o.mode}" needs options.parallel and options.scenario`);
   const r = await o.parallel.run({
@@ -99,7 +105,11 @@ async function evolve(problem: RemapProblem, decoder: Decoder, o: PlanOptions, s
     onGeneration: (p) => report(p.generation, p.evaluations, objectiveFromFitness(p.best)),
   });
   const decoded = decoder.decode(r.best);
-  return { next: decoded.next, trace: toTrace(r.trace), feasible: decoded.fitness.violation <= 0, genes: r.best };
+  // The runner does not say why it ended: the budget when it evolved every generation, time when its limit had
+  // passed, the stall limit otherwise.
+  const generations = r.trace.at(-1)?.generation ?? 0;
+  const stoppedBy = generations >= o.generations ? 'generations' : now() - startMs >= o.timeLimitMs * (1 - FINAL_POLISH_SHARE) - finishMs(problem, o) ? 'time' : 'stall';
+  return { next: decoded.next, trace: toTrace(r.trace), feasible: decoded.fitness.violation <= 0, genes: r.best, stoppedBy, generations };
 }
 
 /**
@@ -173,11 +183,18 @@ async function search(problem: RemapProblem, o: PlanOptions, startMs: number, no
   }
   // Memetic steps around DE (same in every DE mode, so shared-eval still follows serial exactly): the greedy
   // seed is local-searched first; DE's best is local-searched at the end, then kicked and searched again.
-  const budget = polishBudget(problem);
-  const until = (share: number) => () => now() - startMs >= o.timeLimitMs * share;
-  const seed = localSearch(problem, decoder, greedy.genes, budget, until(SEED_POLISH_SHARE)).genes;
+  const budget = o.polishEvaluations ?? polishBudget(problem);
+  // A polish that finds its time up is cut short: the search then ended by time, whatever stopped DE.
+  let polishCut = false;
+  const until = (limitMs: number) => () => {
+    const up = now() - startMs >= limitMs;
+    if (up) polishCut = true;
+    return up;
+  };
+  const seed = localSearch(problem, decoder, greedy.genes, budget, until(o.timeLimitMs * SEED_POLISH_SHARE)).genes;
   const evolved = await evolve(problem, decoder, o, initialMembers(problem, seed, o), startMs, now);
-  const found = polishFound(problem, decoder, evolved, budget, o, () => now() - startMs >= o.timeLimitMs - finishMs(problem, o));
+  const found = polishFound(problem, decoder, evolved, budget, o, until(o.timeLimitMs - finishMs(problem, o)));
+  if (polishCut) found.stoppedBy = 'time';
   // The product keeps the better of the search's plan and greedy's; `alone` records the search's own figures,
   // so benchmarks and tests judge the search, not the fallback.
   const score = (next: Map<number, SlicePlacement | null>) =>
@@ -226,5 +243,7 @@ export async function planWindow(inv: Inventory, window: WindowSpec, options: Pa
   if (found.exact) result.exact = found.exact;
   if (found.alone) result.search = found.alone;
   if (found.greedy) result.greedy = found.greedy;
+  if (found.stoppedBy) result.stoppedBy = found.stoppedBy;
+  if (found.generations !== undefined) result.generations = found.generations;
   return result;
 }

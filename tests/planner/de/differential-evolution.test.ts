@@ -83,6 +83,21 @@ describe('runDE', () => {
     expect(timed.generations).toBeGreaterThan(0);
   });
 
+  it('says why it stopped: the stall limit, the generation budget or the time limit', () => {
+    const flat = boxProblem(() => 1, 2, 0, 1);
+    const options = { population: 6, F: 0.5, CR: 0.9 };
+    expect(runDE(flat, { ...options, generations: 100, stallGenerations: 5 }, createRng(1)).stoppedBy).toBe('stall');
+    // A generous time limit the run never reaches does not count.
+    let t = 0;
+    const budget = runDE(flat, { ...options, generations: 4, stallGenerations: 5, timeLimitMs: 1e9, now: () => (t += 1) }, createRng(1));
+    expect(budget).toMatchObject({ generations: 4, stoppedBy: 'generations' });
+    t = 0;
+    expect(runDE(flat, { ...options, generations: 100, timeLimitMs: 30, now: () => (t += 2) }, createRng(1)).stoppedBy).toBe('time');
+    // Cut short while evaluating the first population: time as well.
+    t = 0;
+    expect(runDE(flat, { ...options, generations: 100, timeLimitMs: 30, now: () => (t += 10) }, createRng(1))).toMatchObject({ generations: 0, stoppedBy: 'time' });
+  });
+
   it('evaluates the first population within the time limit too, leaving the rest unevaluated', () => {
     let t = 0;
     let evaluated = 0;

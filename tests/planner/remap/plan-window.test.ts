@@ -106,6 +106,27 @@ describe('options and plumbing', () => {
     expect(timed.r.trace.length).toBeLessThan(20);
   });
 
+  it('says why the search stopped, and a run bounded by counts gives the same plan at any clock speed', async () => {
+    const stalled = await plan(tinyScenario(), 'w-span-ab', { generations: 500, stallGenerations: 7 });
+    expect(stalled.r).toMatchObject({ stoppedBy: 'stall', generations: 7 });
+    const counted = (step: number) => {
+      let t = 0;
+      return plan(tinyScenario(), 'w-span-ab', {
+        generations: 6, stallGenerations: 500, polishEvaluations: 30, timeLimitMs: 1e6, now: () => (t += step),
+      });
+    };
+    const [fast, slow] = [await counted(1), await counted(3)];
+    expect(fast.r).toMatchObject({ stoppedBy: 'generations', generations: 6 });
+    expect(slow.r.slices).toEqual(fast.r.slices);
+    expect(slow.r.trace).toEqual(fast.r.trace);
+    // The same run with its clock past the limit at every reading ends by time.
+    let t = 0;
+    const timed = await plan(tinyScenario(), 'w-span-ab', { generations: 500, stallGenerations: 500, timeLimitMs: 50, now: () => (t += 100) });
+    expect(timed.r.stoppedBy).toBe('time');
+    // Greedy does not search: no stop reason.
+    expect((await plan(tinyScenario(), 'w-span-ab', { mode: 'greedy' })).r.stoppedBy).toBeUndefined();
+  });
+
   it('rejects unknown modes and parallel modes without a runner', async () => {
     const inv = buildInventory(tinyScenario());
     const w = compileWindow(tinyScenario().windows![1]);
