@@ -118,6 +118,11 @@ export const slotSearchSummarySchema = z.object({
   elapsedMs: z.number(),
   /** the re-map limit per run, in milliseconds */
   remapLimitMs: z.number(),
+  /**
+   * network states whose re-map the time limit cut short (its slots may rank differently on another run or
+   * machine); 0 in summaries stored before it was counted
+   */
+  remapsCutShort: z.number().int().default(0),
 });
 export type SlotSearchSummary = z.infer<typeof slotSearchSummarySchema>;
 

@@ -73,11 +73,18 @@ export function elapsedText(progress: SearchProgress | null): string {
   return `${Math.floor((progress?.elapsedMs ?? 0) / 1000)} s`;
 }
 
-/** How the search went: slots checked, seconds taken, and how often the quick re-map ran or was reused. */
+/**
+ * How the search went: slots checked, seconds taken, how often the quick re-map ran or was reused, and — only when
+ * it happened — how many re-maps the time cap cut short: their slots may rank differently on another run.
+ */
 export function summaryText(s: SlotSearchSummary): string {
   const checked = `${plural(s.usable + s.excluded, 'slot', 'slots')} checked in ${(s.elapsedMs / 1000).toFixed(1)} s.`;
   const ran = s.remapRuns > 0 ? `ran ${plural(s.remapRuns, 'time', 'times')} (at most ${s.remapLimitMs} ms each)` : null;
   const reused = s.reusedRuns > 0 ? `reused an earlier run for ${plural(s.reusedRuns, 'slot', 'slots')} on the same network state` : null;
   const remap = [ran, reused].filter(Boolean).join(' and ');
-  return remap ? `${checked} The quick re-map ${remap}.` : checked;
+  const cut = s.remapsCutShort > 0
+    ? ` ${s.remapsCutShort === 1 ? '1 re-map' : `${s.remapsCutShort} re-maps`} hit the time cap of ${s.remapLimitMs} ms; `
+      + `${s.remapsCutShort === 1 ? 'its' : 'their'} slots may rank differently on another run.`
+    : '';
+  return `${remap ? `${checked} The quick re-map ${remap}.` : checked}${cut}`;
 }

@@ -4,6 +4,7 @@ import { excludedGroups, noSlotReason, noticeText, progressText, rankedSlots, ri
 import { bookingHref, prefillFromParams } from '@/components/slots/slot-prefill';
 import { rangeOf, validateTiming, type TimingValues } from '@/components/slots/timing-form-state';
 import { validateSlotForm } from '@/components/slots/slot-form-state';
+import { slotSearchSummarySchema } from '@/shared/slots';
 import { candidate, excluded } from './slot-kit';
 
 describe('ranked and excluded slots', () => {
@@ -45,12 +46,27 @@ describe('ranked and excluded slots', () => {
   });
 
   test('the summary says how often the quick re-map ran and was reused, with units', () => {
-    expect(summaryText({ usable: 100, excluded: 5, remapRuns: 12, reusedRuns: 80, elapsedMs: 4321, remapLimitMs: 300 }))
+    expect(summaryText({ usable: 100, excluded: 5, remapRuns: 12, reusedRuns: 80, elapsedMs: 4321, remapLimitMs: 300, remapsCutShort: 0 }))
       .toBe('105 slots checked in 4.3 s. The quick re-map ran 12 times (at most 300 ms each) and reused an earlier run for 80 slots on the same network state.');
-    expect(summaryText({ usable: 24, excluded: 21, remapRuns: 0, reusedRuns: 24, elapsedMs: 100, remapLimitMs: 300 }))
+    expect(summaryText({ usable: 24, excluded: 21, remapRuns: 0, reusedRuns: 24, elapsedMs: 100, remapLimitMs: 300, remapsCutShort: 0 }))
       .toBe('45 slots checked in 0.1 s. The quick re-map reused an earlier run for 24 slots on the same network state.');
-    expect(summaryText({ usable: 1, excluded: 0, remapRuns: 1, reusedRuns: 0, elapsedMs: 800, remapLimitMs: 300 }))
+    expect(summaryText({ usable: 1, excluded: 0, remapRuns: 1, reusedRuns: 0, elapsedMs: 800, remapLimitMs: 300, remapsCutShort: 0 }))
       .toBe('1 slot checked in 0.8 s. The quick re-map ran 1 time (at most 300 ms each).');
+  });
+
+  test('re-maps the time cap cut short are said, with the cap and what it means for the ranking', () => {
+    const base = { usable: 20, excluded: 1, remapRuns: 5, reusedRuns: 16, elapsedMs: 9000, remapLimitMs: 900 };
+    expect(summaryText({ ...base, remapsCutShort: 3 })).toBe('21 slots checked in 9.0 s. The quick re-map ran 5 times '
+      + '(at most 900 ms each) and reused an earlier run for 16 slots on the same network state. 3 re-maps hit the time cap '
+      + 'of 900 ms; their slots may rank differently on another run.');
+    expect(summaryText({ ...base, remapsCutShort: 1 })).toMatch(/ 1 re-map hit the time cap of 900 ms; its slots may rank differently on another run\.$/);
+    expect(summaryText({ ...base, remapsCutShort: 0 })).not.toMatch(/time cap/);
+  });
+
+  test('a summary stored before cut-short re-maps were counted reads as none cut short', () => {
+    const stored = slotSearchSummarySchema.parse({ usable: 2, excluded: 0, remapRuns: 1, reusedRuns: 1, elapsedMs: 500, remapLimitMs: 300 });
+    expect(stored.remapsCutShort).toBe(0);
+    expect(summaryText(stored)).not.toMatch(/time cap/);
   });
 
   test('progress reads "N of M slots checked"; before counting it says it is getting ready', () => {

@@ -105,7 +105,7 @@ export async function checkSlotGroups(
 }
 
 /** Usable candidates by cost (ties by earlier start) with ranks 1, 2, …; then the excluded ones by start. */
-function ranked(evaluated: EvaluatedSlot[]): SlotCandidate[] {
+export function rankSlots(evaluated: EvaluatedSlot[]): SlotCandidate[] {
   const usable = evaluated.filter((e) => !e.candidate.excluded)
     .sort((a, b) => a.candidate.cost - b.candidate.cost || a.startMs - b.startMs);
   const excluded = evaluated.filter((e) => e.candidate.excluded).sort((a, b) => a.startMs - b.startMs);
@@ -150,7 +150,7 @@ export async function findSlotsForGroups(
     const memo: SearchRemaps['memo'] = new Map();
     for (const group of groups) {
       const remaps: SearchRemaps = {
-        memo, cache: processRemapCache, stats: { runs: 0, reused: 0 }, limitMs: opts.remapLimitMs ?? DEFAULT_REMAP_LIMIT_MS,
+        memo, cache: processRemapCache, stats: { runs: 0, reused: 0, cutShort: 0 }, limitMs: opts.remapLimitMs ?? DEFAULT_REMAP_LIMIT_MS,
         remapper,
         // A report in the middle of a run is a courtesy: a failure there shows again at the next candidate's report.
         onBusy: () => { report('evaluating').catch(() => undefined); },
@@ -167,7 +167,7 @@ export async function findSlotsForGroups(
         await report('evaluating');
         await nextTurn();
       }
-      const candidates = ranked(evaluated);
+      const candidates = rankSlots(evaluated);
       const touched = new Set<string>();
       for (const e of evaluated) if (!e.candidate.excluded) e.touchedIds.forEach((id) => touched.add(id));
       const usable = candidates.filter((c) => c.rank !== null).length;
@@ -178,6 +178,7 @@ export async function findSlotsForGroups(
           usable, excluded: candidates.length - usable, remapRuns: remaps.stats.runs, reusedRuns: remaps.stats.reused,
           // one group: the whole search, reading the context included; several: this group's share
           elapsedMs: groups.length === 1 ? elapsed() : elapsed() - groupStart, remapLimitMs: limitMs,
+          remapsCutShort: remaps.stats.cutShort,
         },
       });
     }

@@ -12,9 +12,14 @@ import type { RemapAnswer } from './remap-cache';
 /** The group's work as the planner reads a window (no title: nobody reads it). */
 export type RemapWindow = Pick<ScenarioWindow, 'id' | 'start' | 'end' | 'down' | 'reduced'>;
 
-/** The planner options of a quick re-map: the plan defaults with a short time limit. */
+/**
+ * The planner options of a quick re-map: the plan defaults with a small budget in counts (generations, decodes per
+ * local search), so its answer does not depend on the machine's speed, and a time limit as a safety cap.
+ */
 export type RemapPlan = Pick<PlanSettings, 'mode' | 'seed' | 'population' | 'knockOn' | 'maxKnockOnMoves'> & {
   timeLimitMs: number;
+  generations: number;
+  polishEvaluations: number;
 };
 
 export interface RemapRequest {
@@ -34,14 +39,15 @@ export interface QuickRemapper {
 /** Makes the remapper for one search, on the scenario its context read and the inventory built from it. */
 export type QuickRemapperFactory = (scenario: Scenario, inventory: Inventory) => QuickRemapper;
 
-/** One quick re-map with the planner, on whatever thread calls it. */
+/** One quick re-map with the planner, on whatever thread calls it; `now` is the clock (tests pass their own). */
 export async function quickRemap(
-  scenario: Scenario, inventory: Inventory, req: RemapRequest, onBusy?: () => void,
+  scenario: Scenario, inventory: Inventory, req: RemapRequest, onBusy?: () => void, now?: () => number,
 ): Promise<RemapAnswer> {
   const computed = await computePlan(scenario, compileWindow(req.window), {
-    inventory, plan: { ...req.plan, reservations: req.reservations }, onProgress: onBusy && (() => onBusy()),
+    inventory, plan: { ...req.plan, reservations: req.reservations, ...(now ? { now } : {}) }, onProgress: onBusy && (() => onBusy()),
   });
-  return { slices: computed.result.slices, affected: computed.result.affected };
+  const { slices, affected, stoppedBy, generations } = computed.result;
+  return { slices, affected, ...(stoppedBy ? { stoppedBy } : {}), ...(generations !== undefined ? { generations } : {}) };
 }
 
 /** The default: re-maps on the calling thread (tests and the command line; fast to start, blocks while it runs). */

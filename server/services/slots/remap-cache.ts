@@ -10,6 +10,13 @@ export type RemapAnswer = {
   /** the plan's slices (affected ones and knock-on moves), in the planner's id form */
   slices: SlicePlan[];
   affected: string[];
+  /**
+   * why the re-map's search ended (planner PlanResult.stoppedBy): 'time' when the safety cap cut it short, so the
+   * answer depends on the machine's speed and load; absent when the re-map had nothing to search
+   */
+  stoppedBy?: 'generations' | 'stall' | 'time';
+  /** generations the search evolved */
+  generations?: number;
 };
 
 export type RemapKeyParts = {

@@ -17,7 +17,8 @@ import {
 } from '../../../db/schema';
 import { inventoryCacheFor } from '../../../server/services/inventory/inventory-cache';
 import { threadRemapper } from '../../../server/jobs/slot-remap-thread';
-import type { QuickRemapper } from '../../../server/services/slots/quick-remap';
+import { quickRemap, type QuickRemapper } from '../../../server/services/slots/quick-remap';
+import { summaryText } from '../../../components/slots/slot-words';
 import { processRemapCache } from '../../../server/services/slots/remap-cache';
 import {
   checkSlotRequest, elementsClash, findSlots, findSlotsForGroups, SlotRequestError, SlotSearchCancelledError,
@@ -258,4 +259,26 @@ test('elementsClash says why two groups must not be out together', async () => {
   expect(elementsClash(inventory, x, { sites: [id('Y')], spans: [] }, names))
     .toEqual([expect.stringMatching(/^Together they split the network into \d+ parts\.$/)]);
   expect(elementsClash(inventory, x, { sites: [id('B')], spans: [] }, names)).toEqual([]);
+});
+
+test('re-maps the safety cap stops are counted in the summary, and its words say the ranking may differ', async () => {
+  processRemapCache.clear();
+  // A clock that jumps past any cap at every reading: every re-map ends by time.
+  let t = 0;
+  const capped = await findSlots(db, request(), {
+    now: NOW,
+    remapper: (scenario, inventory) => ({
+      remap: (req, onBusy) => quickRemap(scenario, inventory, req, onBusy, () => (t += 60_000)),
+      close: async () => undefined,
+    }),
+  });
+  processRemapCache.clear();
+  expect(capped.summary.remapRuns).toBeGreaterThan(0);
+  expect(capped.summary.remapsCutShort).toBe(capped.summary.remapRuns);
+  const n = capped.summary.remapsCutShort;
+  expect(summaryText(capped.summary)).toContain(
+    `${n === 1 ? '1 re-map' : `${n} re-maps`} hit the time cap of ${capped.summary.remapLimitMs} ms`);
+  // Without a cut-short re-map the summary says nothing of the cap.
+  expect(first.summary.remapsCutShort).toBe(0);
+  expect(summaryText(first.summary)).not.toMatch(/time cap/);
 });
