@@ -191,7 +191,10 @@ async function search(problem: RemapProblem, o: PlanOptions, startMs: number, no
     if (up) polishCut = true;
     return up;
   };
-  const seed = localSearch(problem, decoder, greedy.genes, budget, until(o.timeLimitMs * SEED_POLISH_SHARE)).genes;
+  // A run bounded by counts (polishEvaluations set) keeps the time limit as a cap on the whole run only: its seed
+  // polish is not also held to a share of it, which a short cap and a busy machine would otherwise cut.
+  const seedLimitMs = o.polishEvaluations === undefined ? o.timeLimitMs * SEED_POLISH_SHARE : o.timeLimitMs - finishMs(problem, o);
+  const seed = localSearch(problem, decoder, greedy.genes, budget, until(seedLimitMs)).genes;
   const evolved = await evolve(problem, decoder, o, initialMembers(problem, seed, o), startMs, now);
   const found = polishFound(problem, decoder, evolved, budget, o, until(o.timeLimitMs - finishMs(problem, o)));
   if (polishCut) found.stoppedBy = 'time';
