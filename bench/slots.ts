@@ -17,8 +17,9 @@
 //   5. the measured searches run their quick re-maps in a worker thread, as the slot jobs do (a thread per search,
 //      started on the first re-map the caches cannot answer, so its start-up counts in the first and busy searches);
 //   6. prints, for each search, wall time against the target (demo ≤ 10 s, generated ≤ 60 s), the progress as it
-//      comes, candidates, usable and excluded by code, quick re-map runs and reused ones; then drops the database,
-//      also when a step fails.
+//      comes, candidates, usable and excluded by code, quick re-map runs and reused ones, and how the runs ended
+//      (stall, generation budget or the time cap), the generations they reached and their wall times; then drops
+//      the database, also when a step fails.
 // Options: --sites N --slices M --seed S, --demo-only, --generated-only.
 import { createDb, type Db } from '../db/client';
 import { buildInventory } from '../planner/model/build-inventory';
@@ -27,6 +28,7 @@ import type { Inventory } from '../planner/model/types';
 import { getUserById, listUsersWithRole } from '../server/queries/auth/users';
 import { inventoryCacheFor } from '../server/services/inventory/inventory-cache';
 import { threadRemapper } from '../server/jobs/slot-remap-thread';
+import type { QuickRemapperFactory } from '../server/services/slots/quick-remap';
 import { elementsClash, findSlots, type GroupSlots, type SlotElements } from '../server/services/slots/find-slots';
 import { namesOf } from '../server/services/slots/slot-words';
 import { processRemapCache } from '../server/services/slots/remap-cache';
@@ -74,12 +76,54 @@ function byCode(r: GroupSlots): string {
   return counts.size === 0 ? 'none' : [...counts].map(([code, n]) => `${code} ${n}`).join(', ');
 }
 
-function report(label: string, r: GroupSlots, wallMs: number, targetMs: number | null): void {
+/** How one quick re-map ended, as the bench saw it from outside the thread. */
+type RunEnd = { stoppedBy: string; generations: number | null; wallMs: number };
+
+/** The slot jobs' thread remapper, with each run's end written down in `runs` (the bench's own record). */
+function recordingRemapper(runs: RunEnd[]): QuickRemapperFactory {
+  return (scenario, inventory) => {
+    const inner = threadRemapper(scenario, inventory);
+    return {
+      async remap(req, onBusy) {
+        const t0 = Date.now();
+        const answer = await inner.remap(req, onBusy);
+        runs.push({ stoppedBy: answer.stoppedBy ?? 'nothing to search', generations: answer.generations ?? null, wallMs: Date.now() - t0 });
+        return answer;
+      },
+      close: () => inner.close(),
+    };
+  };
+}
+
+const percentile = (xs: number[], p: number): number => {
+  const sorted = [...xs].sort((a, b) => a - b);
+  return sorted[Math.min(sorted.length - 1, Math.floor((p / 100) * sorted.length))];
+};
+
+function reportRuns(runs: RunEnd[]): void {
+  if (runs.length === 0) {
+    out('    re-maps: none ran (all answered by the caches)');
+    return;
+  }
+  const count = (by: string) => runs.filter((r) => r.stoppedBy === by).length;
+  const other = runs.length - count('stall') - count('generations') - count('time');
+  const gens = runs.flatMap((r) => (r.generations === null ? [] : [r.generations]));
+  const walls = runs.map((r) => r.wallMs);
+  out(`    re-maps: ${runs.length} run; ${count('stall')} ended by stall, ${count('generations')} by the generation budget, `
+    + `${count('time')} by the time cap${other > 0 ? `, ${other} had nothing to search` : ''}`);
+  if (gens.length > 0) out(`    generations reached: p50 ${percentile(gens, 50)}, p95 ${percentile(gens, 95)}, max ${Math.max(...gens)}`);
+  out(`    re-map wall time: p50 ${percentile(walls, 50)} ms, p95 ${percentile(walls, 95)} ms, max ${Math.max(...walls)} ms`);
+}
+
+function report(label: string, r: GroupSlots, wallMs: number, targetMs: number | null, runs: RunEnd[]): void {
   const s = r.summary;
   const target = targetMs === null ? '' : ` (target ≤ ${targetMs / 1000} s: ${wallMs <= targetMs ? 'met' : 'NOT met'})`;
   out(`  ${label}: wall ${(wallMs / 1000).toFixed(2)} s${target}`);
   out(`    candidates ${r.candidates.length}; usable ${s.usable}; excluded ${s.excluded} (${byCode(r)})`);
-  out(`    quick re-map runs ${s.remapRuns} of ${s.remapLimitMs} ms each; reused ${s.reusedRuns}; slices touched ${r.touchedSlices.length}`);
+  out(`    quick re-map runs ${s.remapRuns} (cap ${s.remapLimitMs} ms each); reused ${s.reusedRuns}; slices touched ${r.touchedSlices.length}`);
+  out(`    summary: ${s.remapsCutShort} of the search's re-maps cut short by the time cap`);
+  reportRuns(runs);
+  runs.length = 0;
   const best = r.candidates[0];
   if (best) out(`    first listed: ${best.start} rank ${best.rank ?? '—'}, cost ${best.cost} points: ${best.explanation}`);
 }
@@ -275,18 +319,20 @@ async function benchNetwork(name: string, demo: boolean, o: Options, targetMs: n
     const progress = (p: SearchProgress) => out(`    progress: ${p.phase} ${p.done}/${p.total} at ${(p.elapsedMs / 1000).toFixed(2)} s`);
 
     out('  quiet calendar (the seeded windows only):');
+    const runs: RunEnd[] = [];
+    const remapper = recordingRemapper(runs);
     let t0 = Date.now();
-    const quiet = await findSlots(db, request, { now: new Date(), onProgress: progress, remapper: threadRemapper });
-    report('first search', quiet, Date.now() - t0, targetMs);
+    const quiet = await findSlots(db, request, { now: new Date(), onProgress: progress, remapper });
+    report('first search', quiet, Date.now() - t0, targetMs, runs);
     t0 = Date.now();
-    const warm = await findSlots(db, request, { now: new Date(), remapper: threadRemapper });
-    report('same search again (warm process)', warm, Date.now() - t0, null);
+    const warm = await findSlots(db, request, { now: new Date(), remapper });
+    report('same search again (warm process)', warm, Date.now() - t0, null, runs);
 
     out('  busy calendar (another window every night):');
     const booked = await bookBusyCalendar(db, scenario, inv, { sites: [site.id], spans: [] }, request);
     t0 = Date.now();
-    const busy = await findSlots(db, request, { now: new Date(), onProgress: progress, remapper: threadRemapper });
-    report('search', busy, Date.now() - t0, targetMs);
+    const busy = await findSlots(db, request, { now: new Date(), onProgress: progress, remapper });
+    report('search', busy, Date.now() - t0, targetMs, runs);
     const clashing = busy.candidates.filter((c) => c.excluded?.code === 'CONFLICT' && c.conflicts.some((x) => booked.has(x.id)));
     const alongside = busy.candidates.filter((c) => c.overlapping.some((w) => booked.has(w.id))).length;
     out(`    ${alongside} of ${busy.candidates.length} candidates overlap one of the other windows; `
