@@ -7,6 +7,7 @@ import { overlapReservations } from '../../../planner/plan/overlap-reservations'
 import { threadRemapper, withRemapThreads } from '../../../server/jobs/slot-remap-thread';
 import type { SlotEngine } from '../../../server/services/campaigns/engine';
 import { inProcessRemapper, type QuickRemapper, type RemapRequest, type RemapWindow } from '../../../server/services/slots/quick-remap';
+import { QUICK_REMAP_GENERATIONS, QUICK_REMAP_POLISH_EVALUATIONS } from '../../../server/services/slots/evaluate-slot';
 import { planSettingsSchema } from '../../../shared/plans';
 import { scenarioSchema, type Scenario } from '../../../shared/scenario';
 
@@ -48,7 +49,10 @@ function request(window: RemapWindow, reservations: RemapRequest['reservations']
   const d = planSettingsSchema.parse({});
   return {
     window, reservations,
-    plan: { mode: d.mode, seed: d.seed, population: d.population, knockOn: d.knockOn, maxKnockOnMoves: d.maxKnockOnMoves, timeLimitMs },
+    plan: {
+      mode: d.mode, seed: d.seed, population: d.population, knockOn: d.knockOn, maxKnockOnMoves: d.maxKnockOnMoves, timeLimitMs,
+      generations: QUICK_REMAP_GENERATIONS, polishEvaluations: QUICK_REMAP_POLISH_EVALUATIONS,
+    },
   };
 }
 

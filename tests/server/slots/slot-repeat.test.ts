@@ -94,7 +94,7 @@ test('the same search on a machine three times slower gives the same ranking, co
   expect(slow.answers.map((a) => a.slices)).toEqual(fast.answers.map((a) => a.slices));
 });
 
-test('a re-map the safety cap stops is counted once per network state, however many slots reuse it', async () => {
+test('every re-map the safety cap stops is counted, once per network state', async () => {
   // Every clock reading jumps past the cap: every re-map ends by time.
   const capped = await search(10_000, 900);
   expect(capped.answers.map((a) => a.stoppedBy)).toEqual(SLOTS.map(() => 'time'));
