@@ -9,6 +9,7 @@ import { packCampaign, unpackCampaign } from '../../../server/jobs/campaign-tran
 import type { SlotEngine } from '../../../server/services/campaigns/engine';
 import { SCHEDULING_STOPPED } from '../../../server/services/campaigns/run-schedule';
 import { slotEngine } from '../../../server/services/campaigns/slot-engine';
+import { turnsWhile } from '../helpers/event-loop-turns';
 
 const HOUR_MS = 3_600_000;
 
@@ -78,22 +79,11 @@ test('the thread schedules as the planner does on the calling thread, and report
  * the search runs. Work on the calling thread reports and answers without the loop turning in between.
  */
 async function turnsWhileSearching(scheduleOn: SlotEngine['scheduleCampaign'], p: CampaignProblem) {
-  let turns = 0;
-  let spinning = true;
   let turnsAtFirstReport: number | null = null;
   let reports = 0;
-  const spin = () => {
-    if (!spinning) return;
-    turns += 1;
-    setImmediate(spin);
-  };
-  setImmediate(spin);
-  try {
-    const schedule = await scheduleOn(p, { seed: 1, onProgress: () => { reports += 1; turnsAtFirstReport ??= turns; } });
-    return { schedule, reports, turns: turns - (turnsAtFirstReport ?? turns) };
-  } finally {
-    spinning = false;
-  }
+  const { turns, value: schedule } = await turnsWhile((turnsNow) =>
+    scheduleOn(p, { seed: 1, onProgress: () => { reports += 1; turnsAtFirstReport ??= turnsNow(); } }));
+  return { schedule, reports, turns: turns - (turnsAtFirstReport ?? turns) };
 }
 
 test('the event loop keeps turning while the largest campaign schedules in the thread; on the calling thread it stalls', async () => {

@@ -10,6 +10,7 @@ import { inProcessRemapper, type QuickRemapper, type RemapRequest, type RemapWin
 import { QUICK_REMAP_GENERATIONS, QUICK_REMAP_POLISH_EVALUATIONS } from '../../../server/services/slots/evaluate-slot';
 import { planSettingsSchema } from '../../../shared/plans';
 import { scenarioSchema, type Scenario } from '../../../shared/scenario';
+import { turnsWhile } from '../helpers/event-loop-turns';
 
 /**
  * The slot finder's hand-built network (tests/server/slots/find-slots.test.ts):
@@ -54,24 +55,6 @@ function request(window: RemapWindow, reservations: RemapRequest['reservations']
       generations: QUICK_REMAP_GENERATIONS, polishEvaluations: QUICK_REMAP_POLISH_EVALUATIONS,
     },
   };
-}
-
-/** Event-loop turns (setImmediate callbacks) that run before `job` settles. */
-async function turnsWhile<T>(job: () => Promise<T>): Promise<{ turns: number; value: T }> {
-  let turns = 0;
-  let spinning = true;
-  const spin = () => {
-    if (!spinning) return;
-    turns += 1;
-    setImmediate(spin);
-  };
-  setImmediate(spin);
-  try {
-    const value = await job();
-    return { turns, value };
-  } finally {
-    spinning = false;
-  }
 }
 
 const open: QuickRemapper[] = [];
