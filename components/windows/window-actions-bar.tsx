@@ -4,9 +4,11 @@ import { useState } from 'react';
 import { StyleSheet, Text, View } from 'react-native';
 import { Button } from '@/components/button';
 import type { WindowActions } from '@/components/windows/lifecycle';
+import { RollBackCaution } from '@/components/windows/roll-back-caution';
 import { colors, radii, space, type } from '@/constants/theme';
 
 type Props = {
+  windowId: string;
   actions: WindowActions;
   onEdit: () => void;
   onAssess: () => void;
@@ -36,6 +38,7 @@ export function WindowActionsBar(props: Props) {
   if (confirming === 'roll-back') {
     return (
       <View style={styles.confirm} testID="window-roll-back-confirm">
+        <RollBackCaution windowId={props.windowId} />
         <Text style={styles.body}>
           Roll back the work? Every slice the plan moved goes back to where it was before the window, and the window
           ends as Rolled back. Do this only once the equipment is back in its state from before the work.

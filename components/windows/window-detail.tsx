@@ -64,6 +64,7 @@ export function WindowDetail({ window: w, me, timeZone, flash, onEdit, onOpenImp
         ) : null}
         <WindowNextStep window={w} me={me} here={{ screen: 'window' }} />
         <WindowActionsBar
+          windowId={w.id}
           actions={windowActions(me.roles, w.status)}
           impactStored={w.impactStored}
           assessing={assess.isPending}

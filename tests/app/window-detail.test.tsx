@@ -3,6 +3,7 @@
 import { act, fireEvent, screen, waitFor, within } from '@testing-library/react-native';
 import { WindowDetail } from '@/components/windows/window-detail';
 import { STATUS_SENTENCES } from '@/components/windows/lifecycle';
+import { CRITICAL_CAUTION_POINTS } from '@/components/critical-caution';
 import { clearQueries, engineer, renderWithQueries, routedFetch, siteList, windowFixture } from './window-test-kit';
 
 const mockPush = jest.fn();
@@ -17,6 +18,18 @@ const conflicts = {
     reasons: [{ reason: 'shared-element', message: 'Both windows take out site:cell-pellow-sands.', ids: ['site:cell-pellow-sands'] }],
   }],
 };
+
+/** A stored impact with the named slices, each critical or not. */
+function impactWith(...slices: [string, boolean][]) {
+  return {
+    windowId: 'w-1', windowVersion: 7, computedAt: '2030-01-01T10:00:00.000Z', touchesCritical: slices.some(([, c]) => c),
+    splits: false, components: 1, overloaded: [], elements: [], currentPaths: [],
+    affected: slices.map(([name, critical], i) => ({
+      slice: `sl-${i}`, name, tenant: { id: 't-1', name: 'Crannock Quay Logistics' }, sst: 1, priority: 2, critical,
+      reasons: ['hosted'], severity: critical ? 'critical' : 'low', failureProbability: 0.001, unprotected: false,
+    })),
+  };
+}
 
 function renderDetail(onOpenWindow = jest.fn(), window: Parameters<typeof windowFixture>[0] = { status: 'draft', conflictCount: 1, impactStored: false }) {
   renderWithQueries(
@@ -79,6 +92,7 @@ test('rolling back underway work asks once more, says what it restores, then sen
   const { calls } = routedFetch([
     { method: 'GET', path: /^\/api\/windows\/w-1\/conflicts$/, reply: () => ({ status: 200, body: { windowId: 'w-1', conflicts: [] } }) },
     { method: 'GET', path: /^\/api\/windows\/w-1\/plans$/, reply: () => ({ status: 200, body: { plans: [] } }) },
+    { method: 'GET', path: /^\/api\/windows\/w-1\/impact$/, reply: () => ({ status: 200, body: impactWith(['Harbour CCTV', false], ['Dispatch voice', true]) }) },
     {
       method: 'POST', path: /^\/api\/windows\/w-1\/transition$/,
       reply: () => ({ status: 200, body: { window: windowFixture({ status: 'rolled-back', version: 8 }), reverted: false, conflictCount: 0 } }),
@@ -90,6 +104,10 @@ test('rolling back underway work asks once more, says what it restores, then sen
   expect(screen.queryByTestId('window-withdraw')).toBeNull();
   fireEvent.press(screen.getByTestId('window-roll-back'));
   expect(screen.getByTestId('window-roll-back-confirm')).toHaveTextContent(/Every slice the plan moved goes back to where it was before the window/);
+  // The window's impact names a critical slice: the usual caution leads the confirmation, naming only that one.
+  const caution = await screen.findByTestId('window-roll-back-critical');
+  expect(caution).toHaveTextContent(/Rolling back moves these critical slices back as well: Dispatch voice\./);
+  for (const point of CRITICAL_CAUTION_POINTS) expect(within(caution).getByText(point)).toBeTruthy();
   expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
   await act(async () => fireEvent.press(screen.getByTestId('window-roll-back-yes')));
   await waitFor(() => expect(calls.filter((c) => c.method === 'POST')).toHaveLength(1));
