@@ -12,7 +12,7 @@ import { idempotencyKeyOf } from '../http/idempotency-key';
 import type { WindowFilter } from '../queries/windows/window-rows';
 import { tenantWindowView, tenantWindowViews } from '../services/notices/tenant-window-views';
 import { assessWindow } from '../services/windows/assess-window';
-import { conflictsByWindow } from '../services/windows/conflicts';
+import { namedConflictsOf } from '../services/windows/conflicts';
 import { bookWindowOnce } from '../services/windows/book-once';
 import { editWindow } from '../services/windows/edit-window';
 import { ImpactNotFoundError, WindowNotFoundError } from '../services/windows/errors';
@@ -105,7 +105,7 @@ export function windowsRouter(deps: RouteDeps): Router {
   });
   router.get('/:id/conflicts', staffOnly, anyRole, async (req, res) => {
     const w = await loadWindow(db, idOf(req), null);
-    const conflicts = (await conflictsByWindow(db, [w], null)).get(w.id) ?? [];
+    const conflicts = await namedConflictsOf(db, w);
     res.json(windowConflictsSchema.parse({ windowId: w.id, conflicts }));
   });
   // Each sub-resource router holds full '/:id/...' paths, so none shadows another or the routes above.

@@ -9,7 +9,7 @@ import {
 } from '../../queries/windows/window-rows';
 import type { Queryable } from '../../../db/client';
 import { currentInventory } from '../inventory/inventory-cache';
-import { conflictReasonWords, namesOf, type SlotNames } from '../slots/slot-words';
+import { conflictReasonWords, namesOf } from '../slots/slot-words';
 import { outageOf, pairConflictReasons, type Outage } from './pair-conflicts';
 
 export type ConflictSubject = { id: string; title: string; startsAt: Date; endsAt: Date; status: string; elements: ElementRow[] };
@@ -55,7 +55,7 @@ export async function conflictsByWindow(
   const others = await overlappingOthers(db, active);
   const pairs = active.flatMap((w) => others.filter((o) => o.id !== w.id && overlaps(w, o)).map((o) => [w, o] as const));
   if (pairs.length === 0) return byWindow;
-  const { inventory: inv, scenario } = await currentInventory(db);
+  const { inventory: inv } = await currentInventory(db);
   const base = countComponents(inv.network);
   const outages = new Map<string, Outage>();
   const outage = (w: ConflictSubject) => {
@@ -71,18 +71,22 @@ export async function conflictsByWindow(
     });
   }
   if (scopeTenant !== null) await scopeConflicts(db, inv, byWindow, scopeTenant);
-  nameReasons(byWindow, namesOf(scenario));
   return byWindow;
 }
 
-/** Every reason's message in names (the ids stay in `ids` for the screens): what any reader of the API sees. */
-function nameReasons(byWindow: Map<string, WindowConflict[]>, names: SlotNames): void {
-  for (const list of byWindow.values()) {
-    for (const c of list) {
-      for (const r of c.reasons) {
-        const words = conflictReasonWords(r, names);
-        r.message = `${words.charAt(0).toUpperCase()}${words.slice(1)}.`;
-      }
-    }
-  }
+/**
+ * One window's conflicts as the conflicts route answers them: each reason's message in names (the ids stay in
+ * `ids` for the screens). Lists and details need only the counts, so only this reader pays for the names.
+ */
+export async function namedConflictsOf(db: Queryable, w: ConflictSubject): Promise<WindowConflict[]> {
+  const list = (await conflictsByWindow(db, [w], null)).get(w.id) ?? [];
+  if (list.length === 0) return list;
+  const names = namesOf((await currentInventory(db)).scenario);
+  return list.map((c) => ({
+    ...c,
+    reasons: c.reasons.map((r) => {
+      const words = conflictReasonWords(r, names);
+      return { ...r, message: `${words.charAt(0).toUpperCase()}${words.slice(1)}.` };
+    }),
+  }));
 }
