@@ -20,11 +20,15 @@ import type { CampaignRequest, StoredSchedule, StoredSlot } from './stored-sched
 
 type Planned = { group: StoredSchedule['groups'][number]; slot: StoredSlot };
 
-/** Refuses the booking when a window booked since planning lies too near a planned night on a shared slice. */
-async function checkSpacingAgain(tx: Tx, planned: readonly Planned[], request: CampaignRequest): Promise<void> {
+/**
+ * Refuses the booking when a window booked since planning lies too near a planned night on a shared slice. The
+ * windows are read in the booking's transaction; the network comes from the server's cached inventory (`db`), since
+ * a transaction would compile it afresh.
+ */
+async function checkSpacingAgain(db: Db, tx: Tx, planned: readonly Planned[], request: CampaignRequest): Promise<void> {
   const minDays = request.minDaysBetweenTouches;
   if (minDays <= 0) return;
-  const { scenario, inventory } = await currentInventory(tx);
+  const { scenario, inventory } = await currentInventory(db);
   const range = { fromMs: Math.min(...planned.map((p) => p.slot.startMs)), toMs: Math.max(...planned.map((p) => p.slot.endMs)) };
   const booked = await loadBookedTouches(tx, inventory, range, request.hours, minDays);
   for (const { group, slot } of planned) {
@@ -40,7 +44,7 @@ export async function bookCampaign(deps: { db: Db; now: Date }, id: string, vers
     const s = row.schedule;
     const planned = s.assignment.flatMap((index, group) => (index === null ? [] : [{ group: s.groups[group], slot: s.groups[group].slots[index] }]));
     if (planned.length === 0) throw new CampaignEmptyError();
-    await checkSpacingAgain(tx, planned, row.request as CampaignRequest);
+    await checkSpacingAgain(deps.db, tx, planned, row.request as CampaignRequest);
     const windowIds: string[] = [];
     for (const { group, slot } of planned) {
       try {
